@@ -1,0 +1,123 @@
+/**
+ * IS 800:2007 (limit state method) as a design-code module.
+ */
+import { isPropertyClass } from "../../catalogue/bolts.js";
+import { IS2062_GRADES } from "../../catalogue/steels.js";
+import type { Joint } from "../../model/joint.js";
+import type { CheckResult } from "../../model/results.js";
+import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
+import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { f, kN } from "../format.js";
+import { PARTIAL_FACTORS } from "./factors.js";
+import { holeDimensions } from "./holes.js";
+import {
+  bearingCheck,
+  blockShearCheck,
+  boltShearCheck,
+  factorWarnings,
+  grossYieldCheck,
+  groupFactors,
+  netSectionCheck,
+  slipCheck,
+} from "./joint-checks.js";
+import { GRADES, plateStrength } from "./materials.js";
+import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule } from "./spacing.js";
+import { Tdg, Tdn } from "./tension-member.js";
+
+function scopeErrors(scenario: Scenario): ScopeError[] {
+  const errors: ScopeError[] = [];
+  const plates: Array<[string, PlateSpec]> = [
+    ["plates.main", scenario.plates.mainA],
+    ["plates.main_b", scenario.plates.mainB],
+    ...scenario.plates.covers.map((c, i): [string, PlateSpec] => [i === 0 ? "plates.cover" : "plates.cover_b", c]),
+  ];
+  for (const [path, spec] of plates) {
+    if (!IS2062_GRADES[spec.grade]) {
+      errors.push({ path: `${path}.grade`, message: `unknown IS 2062 grade "${spec.grade}" (known: ${GRADES.join(", ")})` });
+    }
+  }
+  const bolts = scenario.bolts;
+  if (bolts) {
+    if (!isPropertyClass(bolts.propertyClass)) errors.push({ path: "bolts.class", message: `unknown property class "${bolts.propertyClass}"` });
+    if (bolts.assembly === "friction-grip") {
+      if (bolts.propertyClass !== "8.8" && bolts.propertyClass !== "10.9") {
+        errors.push({ path: "bolts.class", message: `friction-grip bolts must be class 8.8 or 10.9 (IS 800:2007 cl. 10.4; IS 3757), got ${bolts.propertyClass}` });
+      }
+      if (bolts.slipFactor === undefined) errors.push({ path: "bolts.slip_factor", message: "required for friction-grip bolts (IS 800:2007 Table 20)" });
+      else if (bolts.slipFactor > 0.55) errors.push({ path: "bolts.slip_factor", message: `${bolts.slipFactor} exceeds 0.55, the largest μf IS 800:2007 cl. 10.4.3 allows` });
+      if ((bolts.slipAt ?? "service") === "service" && scenario.load.serviceTension_N === undefined) {
+        errors.push({ path: "load.service_tension", message: "required when friction-grip bolts are designed against slip at service (bolts.slip_at: service)" });
+      }
+    }
+  }
+  return errors;
+}
+
+function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
+  const checks: CheckResult[] = [];
+  const gfs = joint.groups.map((g) => groupFactors(joint, g));
+  const friction = scenario.bolts.assembly === "friction-grip";
+  const slipAtUltimate = friction && scenario.bolts.slipAt === "ultimate";
+  for (const gf of gfs) {
+    if (friction) checks.push(slipCheck(joint, scenario, gf));
+    if (!slipAtUltimate) checks.push(boltShearCheck(joint, scenario, gf));
+  }
+  const loaded = joint.plates.filter((p) => p.role !== "packing");
+  if (!slipAtUltimate) {
+    for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c));
+  }
+  for (const plate of loaded) {
+    checks.push(grossYieldCheck(scenario, plate));
+    checks.push(netSectionCheck(joint, scenario, plate));
+    for (const c of plate.connections) {
+      const block = blockShearCheck(joint, scenario, plate, c);
+      if (block) checks.push(block);
+    }
+  }
+  checks.push(...minSpacingRule(joint), ...maxSpacingRules(joint), ...edgeRules(joint, scenario), ...gripRule(joint), ...centroidRule(joint));
+
+  const conventions: string[] = [
+    `bolt net area Anb: ${scenario.options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4 (cl. 10.3.3)" : "ISO 898-1 stress area"}`,
+    `bolt strength: ISO 898-1 ${scenario.options.boltStrength} values`,
+    "net section: the whole plate force on every path (cl. 6.3.1 as written)",
+    "holes drilled (no punching allowance); each bolt of a group carries an equal share",
+  ];
+  if (friction) {
+    conventions.push(
+      slipAtUltimate
+        ? "friction grip, slip at the factored load (γmf 1.25): no bolt shear or bearing (no slip)"
+        : "friction grip, slip at service (γmf 1.10); bolt shear and bearing also checked at the factored load",
+    );
+  }
+  const singleLine = gfs.some((gf) => new Set(gf.holes.map((h) => h.y_mm)).size === 1);
+  if (singleLine) conventions.push("block shear: one gauge line, no block with a tension plane can form; tear-out is the e/3d0 term of kb");
+  return { checks, warnings: factorWarnings(joint, gfs), conventions };
+}
+
+/**
+ * Design tension strength of the unperforated plate: the lesser of cl. 6.2 gross yield and
+ * cl. 6.3.1 rupture with An = Ag.
+ */
+function unperforatedStrength(spec: PlateSpec): { value_N: number; definition: string } {
+  const m = plateStrength(spec);
+  const Ag = spec.width_mm * spec.thickness_mm;
+  const yieldN = Tdg(Ag, m.fy_MPa);
+  const rupture = Tdn(Ag, m.fu_MPa);
+  return {
+    value_N: Math.min(yieldN, rupture),
+    definition:
+      `efficiency = joint design strength / design strength of the unperforated thinner main plate = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) = ` +
+      `min(${f(Ag)} × ${m.fy_MPa}/${PARTIAL_FACTORS.gamma_m0}, 0.9 × ${f(Ag)} × ${m.fu_MPa}/${PARTIAL_FACTORS.gamma_m1}) = ${kN(Math.min(yieldN, rupture))}`,
+  };
+}
+
+export const IS800_2007: DesignCode = {
+  id: "is800-2007",
+  title: "IS 800:2007 General construction in steel — limit state method",
+  grades: GRADES,
+  holeDimensions,
+  plateStrength,
+  scopeErrors,
+  checkJoint,
+  unperforatedStrength,
+};

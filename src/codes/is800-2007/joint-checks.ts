@@ -1,0 +1,317 @@
+/**
+ * IS 800:2007 checks of a splice, run on the joint's hole coordinates.
+ * Each function returns results (data); none prints, none throws for a failed check.
+ */
+import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
+import { blockShapes } from "../../geometry/block-shear.js";
+import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { jointLength_mm } from "../../geometry/lines.js";
+import { leastNetPath } from "../../geometry/net-section.js";
+import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
+import type { StrengthCheck, Warning } from "../../model/results.js";
+import type { CheckableScenario } from "../../model/scenario.js";
+import { f, kN, utilisation } from "../format.js";
+import { kb as kbFactor, Vdpb } from "./bearing.js";
+import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
+import { cl } from "./citation.js";
+import { PARTIAL_FACTORS } from "./factors.js";
+import { bearingHoleFactor, holeFactorKh } from "./holes.js";
+import { F0, Vdsf } from "./slip.js";
+import { Tdb, Tdg, Tdn } from "./tension-member.js";
+
+export interface GroupFactors {
+  group: BoltGroupGeometry;
+  holes: Hole[];
+  lj_mm: number;
+  beta_lj: number;
+  beta_lg: number;
+  beta_pkg: number;
+}
+
+export function groupLabel(joint: Joint, group: BoltGroupGeometry): string {
+  return joint.spliceType === "lap" ? "bolts" : `bolts, side ${group.id}`;
+}
+
+/** Reduction factors of one bolt group, from its hole coordinates (cl. 10.3.3.1–10.3.3.3). */
+export function groupFactors(joint: Joint, group: BoltGroupGeometry): GroupFactors {
+  const d = joint.boltDiameter_mm;
+  const holes = joint.holes.filter((h) => h.group === group.id);
+  const lj = jointLength_mm(holes);
+  const blj = beta_lj(lj, d);
+  return {
+    group,
+    holes,
+    lj_mm: lj,
+    beta_lj: blj,
+    beta_lg: beta_lg(group.grip_mm, d, blj),
+    beta_pkg: beta_pkg(group.packing_mm),
+  };
+}
+
+function strength(
+  partial: Omit<StrengthCheck, "type" | "utilisation" | "pass" | "notes"> & { notes?: string[] },
+): StrengthCheck {
+  const u = utilisation(partial.demand_N, partial.resistance_N);
+  return { type: "strength", ...partial, notes: partial.notes ?? [], utilisation: u, pass: u <= 1 + 1e-9 };
+}
+
+/**
+ * Bolt shear of a bearing-type group: T ≤ n · Vdsb.
+ * IS 800:2007, cl. 10.3.2 and 10.3.3 (with 10.3.3.1–10.3.3.3).
+ */
+export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFactors): StrengthCheck {
+  const { bolts, options } = scenario;
+  const d = bolts.size_mm;
+  const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
+  const Anb = boltNetArea_mm2(d, options.boltNetArea);
+  const Asb = shankArea_mm2(d);
+  const planes = gf.group.shearPlanes;
+  const nn = bolts.threadsInShearPlanes ? planes : 0;
+  const ns = planes - nn;
+  const perBolt = Vdsb({ fub_MPa: mat.fub_MPa, nn, ns, Anb_mm2: Anb, Asb_mm2: Asb, beta_lj: gf.beta_lj, beta_lg: gf.beta_lg, beta_pkg: gf.beta_pkg });
+  const n = gf.holes.length;
+  const T = scenario.load.factoredTension_N;
+  const notes = [
+    `fub = ${mat.fub_MPa} MPa (${mat.source})`,
+    `Anb = ${f(Anb)} mm² (${options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4" : "ISO 898-1 stress area"}), Asb = π d²/4 = ${f(Asb)} mm²`,
+    `lj = ${f(gf.lj_mm)} mm ${gf.lj_mm > 15 * d ? `> 15d = ${f(15 * d)} mm: βlj = 1.075 − 0.005 × ${f(gf.lj_mm)}/${d} = ${f(gf.beta_lj, 3)} (limits 0.75–1.0)` : `≤ 15d = ${f(15 * d)} mm: βlj = 1.0`}`,
+    `lg = ${f(gf.group.grip_mm)} mm ${gf.group.grip_mm > 5 * d ? `> 5d: βlg = min(8/(3 + lg/d), βlj) = ${f(gf.beta_lg, 3)}` : `≤ 5d = ${f(5 * d)} mm: βlg = 1.0`}`,
+    gf.group.packing_mm > 6
+      ? `packing ${f(gf.group.packing_mm)} mm > 6 mm: βpkg = 1 − 0.0125 × ${f(gf.group.packing_mm)} = ${f(gf.beta_pkg, 3)}`
+      : `packing ${f(gf.group.packing_mm)} mm ≤ 6 mm: βpkg = 1.0`,
+  ];
+  return strength({
+    id: `bolt-shear:${gf.group.id}`,
+    kind: "bolt-shear",
+    title: "Bolt shear",
+    component: groupLabel(joint, gf.group),
+    citation: cl("10.3.3"),
+    formula: "T ≤ n·Vdsb;  Vdsb = fub/√3 · (nn·Anb + ns·Asb) · βlj·βlg·βpkg / γmb",
+    substituted:
+      `Vdsb = ${mat.fub_MPa}/√3 × (${nn} × ${f(Anb)} + ${ns} × ${f(Asb)}) × ${f(gf.beta_lj, 3)} × ${f(gf.beta_lg, 3)} × ${f(gf.beta_pkg, 3)} / ${PARTIAL_FACTORS.gamma_mb}` +
+      ` = ${kN(perBolt, 2)};  n·Vdsb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
+    limitState: "ULS",
+    demand_N: T,
+    resistance_N: n * perBolt,
+    loadRatio: 1,
+    notes,
+  });
+}
+
+/** kb of one plate for one group, from coordinates; with the e and p that set it. */
+export function bearingFactor(holes: readonly Hole[], connection: PlateConnection, fub_MPa: number, fu_MPa: number) {
+  let e = Infinity;
+  let p = Infinity;
+  let d0 = 0;
+  for (const h of holes) {
+    d0 = Math.max(d0, h.along_mm);
+    const u = connection.towardEnd * (connection.endX_mm - h.x_mm);
+    // The hole directly ahead of h (toward the end) within its own tear-out strip.
+    let ahead = -Infinity;
+    for (const k of holes) {
+      if (k === h) continue;
+      const uk = connection.towardEnd * (connection.endX_mm - k.x_mm);
+      if (uk < u - 1e-9 && Math.abs(k.y_mm - h.y_mm) < h.across_mm) ahead = Math.max(ahead, uk);
+    }
+    if (ahead === -Infinity) e = Math.min(e, u);
+    else p = Math.min(p, u - ahead);
+  }
+  return { e_mm: e, p_mm: p, d0_mm: d0, kb: kbFactor(e, p, d0, fub_MPa, fu_MPa) };
+}
+
+/**
+ * Bearing of one group's bolts on one plate: plate force ≤ n · Vdpb.
+ * IS 800:2007, cl. 10.3.4. Each plate bears with its own kb (its own end distance and pitch toward its
+ * own end); the cover plates of a double-cover splice are checked one by one against their share.
+ */
+export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck {
+  const { bolts, options } = scenario;
+  const d = bolts.size_mm;
+  const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
+  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const b = bearingFactor(holes, connection, mat.fub_MPa, plate.fu_MPa);
+  const holeFactor = bearingHoleFactor(bolts.hole);
+  const t = plate.spec.thickness_mm;
+  const perBolt = Vdpb(b.kb, d, t, plate.fu_MPa, holeFactor);
+  const n = holes.length;
+  const T = scenario.load.factoredTension_N;
+  const eTerm = Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
+  const pTerm = Number.isFinite(b.p_mm)
+    ? `p/3d0 − 0.25 = ${f(b.p_mm)}/(3 × ${f(b.d0_mm)}) − 0.25 = ${f(b.p_mm / (3 * b.d0_mm) - 0.25, 3)}`
+    : "p: no bolt behind another";
+  const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  return strength({
+    id: `bearing:${plate.id}:${connection.group}`,
+    kind: "bolt-bearing",
+    title: "Bolt bearing",
+    component: `${plate.label}${sideText}`,
+    citation: cl("10.3.4"),
+    formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
+    substituted:
+      `kb = min(${eTerm}, ${pTerm}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
+      `Vdpb = 2.5 × ${f(b.kb, 3)} × ${d} × ${f(t)} × ${plate.fu_MPa}${holeFactor !== 1 ? ` × ${holeFactor}` : ""} / ${PARTIAL_FACTORS.gamma_mb} = ${kN(perBolt, 2)};  ` +
+      `n·Vdpb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}` +
+      (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
+    limitState: "ULS",
+    demand_N: T * plate.forceShare,
+    resistance_N: n * perBolt,
+    loadRatio: plate.forceShare,
+    notes: holeFactor !== 1 ? [`bearing reduced by ${holeFactor} for ${bolts.hole} holes (cl. 10.3.4)`] : [],
+  });
+}
+
+/**
+ * Slip resistance of a friction-grip group: load ≤ n · Vdsf.
+ * IS 800:2007, cl. 10.4.3. At service (γmf 1.10) against the service tension, or at ultimate (γmf 1.25)
+ * against the factored tension.
+ */
+export function slipCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFactors): StrengthCheck {
+  const { bolts, options, load } = scenario;
+  const d = bolts.size_mm;
+  const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
+  const Anb = boltNetArea_mm2(d, options.boltNetArea);
+  const proof = F0(Anb, mat.fub_MPa);
+  const mu = bolts.slipFactor ?? 0;
+  const ne = gf.group.shearPlanes;
+  const Kh = holeFactorKh(bolts.hole, bolts.slotDirection);
+  const slipAt = bolts.slipAt ?? "service";
+  const perBolt = Vdsf(mu, ne, Kh, proof, slipAt, gf.beta_lj);
+  const gamma = slipAt === "service" ? PARTIAL_FACTORS.gamma_mf_service : PARTIAL_FACTORS.gamma_mf_ultimate;
+  const n = gf.holes.length;
+  const demand = slipAt === "service" ? (load.serviceTension_N ?? load.factoredTension_N) : load.factoredTension_N;
+  return strength({
+    id: `slip:${gf.group.id}`,
+    kind: "slip",
+    title: slipAt === "service" ? "Slip resistance at service load" : "Slip resistance at factored load",
+    component: groupLabel(joint, gf.group),
+    citation: cl("10.4.3", { table: "Table 20 (μf)" }),
+    formula: "F ≤ n·Vdsf;  Vdsf = μf·ne·Kh·F0·βlj / γmf;  F0 = 0.7·fub·Anb",
+    substituted:
+      `F0 = 0.7 × ${mat.fub_MPa} × ${f(Anb)} = ${kN(proof, 2)};  Vdsf = ${f(mu, 2)} × ${ne} × ${Kh} × ${kN(proof, 2)} × ${f(gf.beta_lj, 3)} / ${gamma} = ${kN(perBolt, 2)};  ` +
+      `n·Vdsf = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
+    limitState: slipAt === "service" ? "SLS" : "ULS",
+    demand_N: demand,
+    resistance_N: n * perBolt,
+    loadRatio: slipAt === "service" ? demand / load.factoredTension_N : 1,
+    notes: slipAt === "service" ? ["service tension from load.service_tension"] : [],
+  });
+}
+
+/**
+ * Gross-section yield of a plate, F ≤ Tdg = Ag·fy/γm0.
+ * IS 800:2007, cl. 6.2.
+ */
+export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
+  const { width_mm: b, thickness_mm: t } = plate.spec;
+  const Ag = b * t;
+  const R = Tdg(Ag, plate.fy_MPa);
+  return strength({
+    id: `gross-yield:${plate.id}`,
+    kind: "gross-yield",
+    title: "Gross-section yield",
+    component: plate.label,
+    citation: cl("6.2"),
+    formula: "F ≤ Tdg = Ag·fy / γm0",
+    substituted: `Tdg = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${PARTIAL_FACTORS.gamma_m0} = ${kN(R)}` + shareText(plate),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * plate.forceShare,
+    resistance_N: R,
+    loadRatio: plate.forceShare,
+    notes: [plate.materialNote],
+  });
+}
+
+function shareText(plate: PlatePiece): string {
+  return plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T (covers share by area)` : "";
+}
+
+/**
+ * Net-section rupture of a plate over the least net path (straight or zig-zag), F ≤ Tdn = 0.9·An·fu/γm1.
+ * IS 800:2007, cl. 6.3.1. The whole plate force on every path (the clause as written).
+ */
+export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
+  const { width_mm: b, thickness_mm: t } = plate.spec;
+  const path = leastNetPath(holesOfPlate(joint, plate), b);
+  const An = path.netWidth_mm * t;
+  const R = Tdn(An, plate.fu_MPa);
+  const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+  return strength({
+    id: `net-section:${plate.id}`,
+    kind: "net-section",
+    title: "Net-section rupture",
+    component: plate.label,
+    citation: cl("6.3.1"),
+    formula: "F ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t, least over all paths",
+    substituted:
+      `least path ${pathText}: An = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(An)} mm²;  ` +
+      `Tdn = 0.9 × ${f(An)} × ${plate.fu_MPa} / ${PARTIAL_FACTORS.gamma_m1} = ${kN(R)}` +
+      shareText(plate),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * plate.forceShare,
+    resistance_N: R,
+    loadRatio: plate.forceShare,
+    notes: [`path searched over every straight and zig-zag route through ${holesOfPlate(joint, plate).length} holes`],
+  });
+}
+
+/**
+ * Block shear of a plate for one bolt group: the governing shape of all that can form.
+ * IS 800:2007, cl. 6.4.1. A block holding k of the group's n bolts takes k/n of the plate's force.
+ * Returns null when the pattern has a single gauge line (no block with a tension plane can form; the
+ * tear-out of that line is the e/3d0 term of kb in bearing).
+ */
+export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const shapes = blockShapes(holes, connection, plate.spec.width_mm);
+  if (shapes.length === 0) return null;
+  const t = plate.spec.thickness_mm;
+  let best: { capacity: number; ratio: number; shape: (typeof shapes)[number]; r: ReturnType<typeof Tdb> } | null = null;
+  for (const shape of shapes) {
+    const r = Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
+    const ratio = (plate.forceShare * shape.boltsInBlock) / holes.length;
+    const capacity = r.Tdb_N / ratio;
+    if (!best || capacity < best.capacity - 1e-9) best = { capacity, ratio, shape, r };
+  }
+  if (!best) return null;
+  const s = best.shape;
+  const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  return strength({
+    id: `block-shear:${plate.id}:${connection.group}`,
+    kind: "block-shear",
+    title: "Block shear",
+    component: `${plate.label}${sideText}`,
+    citation: cl("6.4.1"),
+    formula: "F·k/n ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)",
+    substituted:
+      `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Avg = ${f(s.shearGross_mm)} × ${f(t)} = ${f(s.shearGross_mm * t)}, ` +
+      `Avn = ${f(s.shearNet_mm)} × ${f(t)} = ${f(s.shearNet_mm * t)}, Atg = ${f(s.tensionGross_mm)} × ${f(t)} = ${f(s.tensionGross_mm * t)}, ` +
+      `Atn = ${f(s.tensionNet_mm)} × ${f(t)} = ${f(s.tensionNet_mm * t)} mm²;  Tdb1 = ${kN(best.r.Tdb1_N)}, Tdb2 = ${kN(best.r.Tdb2_N)}, Tdb = ${kN(best.r.Tdb_N)}`,
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * best.ratio,
+    resistance_N: best.r.Tdb_N,
+    loadRatio: best.ratio,
+    notes: [`governing of ${shapes.length} block shapes`],
+  });
+}
+
+/** Warnings about the joint's reductions (long joint, packing, eccentric single-shear splices). */
+export function factorWarnings(joint: Joint, gfs: GroupFactors[]): Warning[] {
+  const warnings: Warning[] = [];
+  for (const gf of gfs) {
+    if (gf.beta_lj <= 0.75 + 1e-9 && gf.lj_mm > 15 * joint.boltDiameter_mm) {
+      warnings.push({ id: "long-joint-floor", message: `${groupLabel(joint, gf.group)}: long joint at the βlj floor of 0.75 (lj = ${f(gf.lj_mm)} mm); more bolts along add little` });
+    } else if (gf.beta_lj < 1) {
+      warnings.push({ id: "long-joint", message: `${groupLabel(joint, gf.group)}: long joint, βlj = ${f(gf.beta_lj, 3)} (cl. 10.3.3.1)` });
+    }
+    if (gf.group.packing_mm > 6) {
+      warnings.push({ id: "packing-over-6mm", message: `${groupLabel(joint, gf.group)}: packing ${f(gf.group.packing_mm)} mm > 6 mm, βpkg = ${f(gf.beta_pkg, 3)} applied (cl. 10.3.3.3)` });
+    }
+  }
+  if (joint.spliceType === "lap" || joint.spliceType === "butt-single-cover") {
+    warnings.push({
+      id: "eccentric-single-shear",
+      message: `${joint.spliceType === "lap" ? "lap splice" : "single-cover butt splice"}: the load path is eccentric through the plate thickness; the plates bend at the joint ends — not covered by the checks`,
+    });
+  }
+  return warnings;
+}

@@ -1,0 +1,280 @@
+/**
+ * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
+ * checks measured on the hole coordinates. Each result prints the governing value and its limit.
+ */
+import { distance, gaugeLines, transverseLines } from "../../geometry/lines.js";
+import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
+import type { RuleCheck } from "../../model/results.js";
+import type { CheckableScenario } from "../../model/scenario.js";
+import type { Citation } from "../../model/results.js";
+import { f } from "../format.js";
+import { cl } from "./citation.js";
+import { epsilon } from "./materials.js";
+
+function rule(
+  r: Omit<RuleCheck, "type" | "utilisation" | "pass" | "notes"> & { notes?: string[] },
+): RuleCheck {
+  const u = r.bound === "max" ? r.value_mm / r.limit_mm : r.value_mm > 0 ? r.limit_mm / r.value_mm : Infinity;
+  const pass = r.bound === "max" ? r.value_mm <= r.limit_mm + 1e-9 : r.value_mm >= r.limit_mm - 1e-9;
+  return { type: "rule", ...r, notes: r.notes ?? [], utilisation: u, pass };
+}
+
+/** Plates (not packing) through which a hole passes. */
+function platesThrough(joint: Joint, hole: Hole): PlatePiece[] {
+  return joint.plates.filter((p) => p.role !== "packing" && p.connections.some((c) => c.group === hole.group));
+}
+
+/** Thickness of the thinner plate that two holes both pass through (the t of cl. 10.2.3). */
+function pairThickness(joint: Joint, a: Hole, b: Hole): number {
+  const shared = platesThrough(joint, a).filter((p) => platesThrough(joint, b).includes(p));
+  return Math.min(...shared.map((p) => p.spec.thickness_mm));
+}
+
+/** Plates at either face of some bolt group's stack: the "outside" plates of cl. 10.2.3.3 and 10.2.4.3. */
+function outsidePlates(joint: Joint): PlatePiece[] {
+  const ids = new Set<string>();
+  for (const g of joint.groups) {
+    const ends = [g.stack[0], g.stack[g.stack.length - 1]];
+    for (const id of ends) if (id && id !== "packing") ids.add(id);
+  }
+  return joint.plates.filter((p) => ids.has(p.id));
+}
+
+function holePlates(joint: Joint): PlatePiece[] {
+  return joint.plates.filter((p) => p.role !== "packing");
+}
+
+function platesHoles(joint: Joint, plate: PlatePiece): Hole[] {
+  const groups = new Set(plate.connections.map((c) => c.group));
+  return joint.holes.filter((h) => groups.has(h.group));
+}
+
+/**
+ * Whether a plate's fasteners are staggered at equal intervals (cl. 10.2.3.4): consecutive transverse
+ * lines share no gauge line and are equally spaced. Returns the gauge (least distance between adjacent
+ * gauge lines) too.
+ */
+export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_mm: number } {
+  const ys = gaugeLines(holes).map((l) => l.at_mm);
+  let gauge = Infinity;
+  for (let i = 1; i < ys.length; i++) gauge = Math.min(gauge, ys[i]! - ys[i - 1]!);
+  const lines = transverseLines(holes);
+  if (lines.length < 2) return { staggered: false, gauge_mm: gauge };
+  const spacing = lines[1]!.at_mm - lines[0]!.at_mm;
+  for (let i = 1; i < lines.length; i++) {
+    const prev = new Set(lines[i - 1]!.holes.map((h) => h.y_mm));
+    if (lines[i]!.holes.some((h) => prev.has(h.y_mm))) return { staggered: false, gauge_mm: gauge };
+    if (Math.abs(lines[i]!.at_mm - lines[i - 1]!.at_mm - spacing) > 1e-6) return { staggered: false, gauge_mm: gauge };
+  }
+  return { staggered: true, gauge_mm: gauge };
+}
+
+interface Worst {
+  value: number;
+  limit: number;
+  where: string;
+  detail: string;
+}
+
+function keepWorst(current: Worst | null, next: Worst, bound: "min" | "max"): Worst {
+  if (!current) return next;
+  const ratio = (w: Worst) => (bound === "max" ? w.value / w.limit : w.limit / w.value);
+  return ratio(next) > ratio(current) + 1e-12 ? next : current;
+}
+
+function worstRule(
+  id: string,
+  kind: RuleCheck["kind"],
+  title: string,
+  citation: Citation,
+  formula: string,
+  bound: "min" | "max",
+  worst: Worst | null,
+): RuleCheck[] {
+  if (!worst) return [];
+  return [
+    rule({
+      id,
+      kind,
+      title,
+      component: worst.where,
+      citation,
+      formula,
+      substituted: worst.detail,
+      value_mm: worst.value,
+      limit_mm: worst.limit,
+      bound,
+    }),
+  ];
+}
+
+/** Minimum spacing between fastener centres, 2.5 d. IS 800:2007, cl. 10.2.2. */
+export function minSpacingRule(joint: Joint): RuleCheck[] {
+  const d = joint.boltDiameter_mm;
+  let worst: Worst | null = null;
+  const seen = new Set<string>();
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    for (let i = 0; i < holes.length; i++) {
+      for (let j = i + 1; j < holes.length; j++) {
+        const a = holes[i]!;
+        const b = holes[j]!;
+        const key = `${a.id}|${b.id}`;
+        if (seen.has(key)) continue;
+        seen.add(key);
+        const s = distance(a, b);
+        worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
+      }
+    }
+  }
+  return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
+}
+
+/**
+ * Maximum spacing. IS 800:2007, cl. 10.2.3.1–10.2.3.4:
+ *  - any two adjacent fasteners (here: adjacent gauge lines across the force) ≤ min(32 t, 300 mm);
+ *  - pitch along the force in tension members ≤ min(16 t, 200 mm);
+ *  - on a line next to an edge of an outside plate ≤ min(100 + 4 t, 200 mm);
+ *  - staggered at equal intervals with gauge ≤ 75 mm: the last two limits × 1.5, not above min(32 t, 300).
+ */
+export function maxSpacingRules(joint: Joint): RuleCheck[] {
+  let across: Worst | null = null;
+  let pitch: Worst | null = null;
+  let edgeLine: Worst | null = null;
+  const outside = outsidePlates(joint);
+  const seen = new Set<string>();
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    const lines = gaugeLines(holes);
+    const stagger = staggerOf(holes.filter((h) => h.group === (plate.connections[0]?.group ?? h.group)));
+    const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
+    // Across: adjacent gauge lines, per group.
+    for (const group of new Set(holes.map((h) => h.group))) {
+      const gl = gaugeLines(holes.filter((h) => h.group === group));
+      for (let i = 1; i < gl.length; i++) {
+        const a = gl[i - 1]!.holes[0]!;
+        const b = gl[i]!.holes[0]!;
+        const t = pairThickness(joint, a, b);
+        const limit = Math.min(32 * t, 300);
+        const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
+        across = keepWorst(across, { value: g, limit, where: plate.label, detail: `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` }, "max");
+      }
+    }
+    // Along: consecutive holes on each gauge line.
+    const isOutside = outside.includes(plate);
+    lines.forEach((line, index) => {
+      const edge = index === 0 || index === lines.length - 1;
+      for (let k = 1; k < line.holes.length; k++) {
+        const a = line.holes[k - 1]!;
+        const b = line.holes[k]!;
+        const key = `${a.id}|${b.id}`;
+        const s = b.x_mm - a.x_mm;
+        const t = pairThickness(joint, a, b);
+        const cap = Math.min(32 * t, 300);
+        if (!seen.has(key)) {
+          seen.add(key);
+          const base = Math.min(16 * t, 200);
+          const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
+          const limit = Math.min(base * r, cap);
+          pitch = keepWorst(pitch, { value: s, limit, where: plate.label, detail: `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` }, "max");
+        }
+        if (edge && isOutside) {
+          const tp = plate.spec.thickness_mm;
+          const base = Math.min(100 + 4 * tp, 200);
+          const r = a.group === b.group ? relax : 1.0;
+          const limit = Math.min(base * r, Math.min(32 * tp, 300));
+          edgeLine = keepWorst(edgeLine, { value: s, limit, where: plate.label, detail: `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` }, "max");
+        }
+      }
+    });
+  }
+  return [
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", across),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", { equation: "with 10.2.3.4 for staggered" }), "p ≤ min(16 t, 200 mm)", "max", pitch),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", { equation: "with 10.2.3.4 for staggered" }), "p ≤ min(100 + 4 t, 200 mm)", "max", edgeLine),
+  ];
+}
+
+function minDistanceFactor(plate: PlatePiece): { factor: number; text: string } {
+  const rough = plate.spec.edges === "sheared" || plate.spec.edges === "hand-flame-cut";
+  return rough ? { factor: 1.7, text: `1.7 d0 (${plate.spec.edges} edge)` } : { factor: 1.5, text: `1.5 d0 (${plate.spec.edges} edge)` };
+}
+
+/**
+ * Minimum end and edge distances: 1.5 d0 (rolled, machine flame cut, sawn, planed edges) or 1.7 d0
+ * (sheared or hand flame cut). IS 800:2007, cl. 10.2.4.2, with d0 from Table 19.
+ * Maximum edge distance: 12 t ε (t of the thinner outer plate), or 40 + 4 t where exposed to corrosion.
+ * IS 800:2007, cl. 10.2.4.3 — applied here to side edges and to plate ends.
+ */
+export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+  let minEnd: Worst | null = null;
+  let minEdge: Worst | null = null;
+  let maxEdge: Worst | null = null;
+  const outside = outsidePlates(joint);
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    if (holes.length === 0) continue;
+    const { factor, text } = minDistanceFactor(plate);
+    const half = plate.spec.width_mm / 2;
+    const groups = new Set(plate.connections.map((c) => c.group));
+    const outerT = Math.min(...outside.filter((p) => p.connections.some((c) => groups.has(c.group))).map((p) => p.spec.thickness_mm));
+    const eps = epsilon(plate.fy_MPa);
+    const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
+    const maxText = scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
+    for (const h of holes) {
+      const edge = half - Math.abs(h.y_mm);
+      const limit = factor * h.across_mm;
+      minEdge = keepWorst(minEdge, { value: edge, limit, where: plate.label, detail: `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` }, "min");
+    }
+    const ys = holes.map((h) => h.y_mm);
+    for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
+      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+    }
+    for (const c of plate.connections) {
+      const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, u: c.towardEnd * (c.endX_mm - h.x_mm) }));
+      for (const { h, u } of us) {
+        const limit = factor * h.along_mm;
+        minEnd = keepWorst(minEnd, { value: u, limit, where: plate.label, detail: `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` }, "min");
+      }
+      const nearest = Math.min(...us.map((x) => x.u));
+      maxEdge = keepWorst(maxEdge, { value: nearest, limit: maxLimit, where: plate.label, detail: `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+    }
+  }
+  return [
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("10.2.4.2", { table: "Table 19" }), "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("10.2.4.2", { table: "Table 19" }), "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation", "min", minEdge),
+    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("10.2.4.3"), scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
+  ];
+}
+
+/** Grip length not above 8 d. IS 800:2007, cl. 10.3.3.2. */
+export function gripRule(joint: Joint): RuleCheck[] {
+  const d = joint.boltDiameter_mm;
+  let worst: Worst | null = null;
+  for (const g of joint.groups) {
+    worst = keepWorst(worst, { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` }, "max");
+  }
+  return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
+}
+
+/**
+ * The bolt group's centroid on the plate axis. Every check here assumes a concentric group; an eccentric
+ * group is reported as failing rather than accepted silently.
+ */
+export function centroidRule(joint: Joint): RuleCheck[] {
+  let worst: Worst | null = null;
+  for (const g of joint.groups) {
+    const holes = joint.holes.filter((h) => h.group === g.id);
+    const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
+    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: `centroid offset from the plate axis ${f(Math.abs(yc), 2)} mm vs 0.5 mm` }, "max");
+  }
+  return worstRule(
+    "group-centroid",
+    "group-centroid",
+    "Bolt group on the plate axis",
+    { standard: "general", clause: "concentric bolt group, assumed by every check of cl. 6 and 10.3" },
+    "|y centroid| ≤ 0.5 mm",
+    "max",
+    worst,
+  );
+}

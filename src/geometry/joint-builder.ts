@@ -1,0 +1,191 @@
+/**
+ * Build the joint geometry from a scenario: plates with their extents and every hole as a coordinate.
+ *
+ * Lap splice: plate B runs from its end at x = 0 to the right (pulled toward +x); plate A comes from the
+ * left and ends at x = L (pulled toward −x). One bolt group "J" passes through both.
+ *
+ * Butt splice: the butt gap is centred on x = 0. Main plate B starts at x = +gap/2 and continues right;
+ * main plate A ends at x = −gap/2. Group B's holes sit at x = gap/2 + x_local, group A mirrors them.
+ * The cover(s) run from −Lc/2 to +Lc/2. Packing (if any) lies under the thinner main plate, between it
+ * and cover A.
+ */
+import type { CheckableScenario, HoleType, PlateSpec, SlotDirection } from "../model/scenario.js";
+import type { BoltGroupGeometry, Hole, Joint, PlateId, PlatePiece } from "../model/joint.js";
+import { describePattern, loadedEndDistance, patternHoles } from "./patterns.js";
+
+export interface HoleDimensions {
+  across_mm: number;
+  along_mm: number;
+}
+
+/** What geometry needs from the design code: hole sizes and plate strengths. */
+export interface GeometryCode {
+  holeDimensions(d_mm: number, hole: HoleType, slot: SlotDirection | undefined): HoleDimensions;
+  plateStrength(spec: PlateSpec): { fy_MPa: number; fu_MPa: number; note: string };
+}
+
+export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joint {
+  const { layout, bolts, splice, plates } = scenario;
+  const holeDims = code.holeDimensions(bolts.size_mm, bolts.hole, bolts.slotDirection);
+  const butt = splice.type !== "lap";
+  const local = patternHoles(layout, loadedEndDistance(layout, butt));
+  const farEnd = layout.endDistance_mm;
+  const xMaxLocal = Math.max(...local.map((h) => h.x_mm));
+  const patternText = describePattern(layout, local.length);
+
+  const piece = (
+    id: PlateId,
+    role: PlatePiece["role"],
+    label: string,
+    spec: PlateSpec,
+    extent: Pick<PlatePiece, "x0_mm" | "x1_mm" | "continues">,
+    forceShare: number,
+    connections: PlatePiece["connections"],
+    stackIndex: number,
+  ): PlatePiece => {
+    const m = code.plateStrength(spec);
+    return {
+      id,
+      role,
+      label,
+      spec,
+      fy_MPa: m.fy_MPa,
+      fu_MPa: m.fu_MPa,
+      materialNote: m.note,
+      ...extent,
+      forceShare,
+      connections,
+      stackIndex,
+    };
+  };
+
+  const makeHole = (group: Hole["group"], index: number, x: number, y: number): Hole => ({
+    id: `${group}${index + 1}`,
+    group,
+    x_mm: x,
+    y_mm: y,
+    across_mm: holeDims.across_mm,
+    along_mm: holeDims.along_mm,
+  });
+
+  if (!butt) {
+    const L = xMaxLocal + farEnd;
+    const holes = local.map((h, i) => makeHole("J", i, h.x_mm, h.y_mm));
+    const pieces: PlatePiece[] = [
+      piece("mainA", "main", "main plate A", plates.mainA, { x0_mm: 0, x1_mm: L, continues: "left" }, 1,
+        [{ group: "J", endX_mm: L, towardEnd: 1 }], 0),
+      piece("mainB", "main", "main plate B", plates.mainB, { x0_mm: 0, x1_mm: L, continues: "right" }, 1,
+        [{ group: "J", endX_mm: 0, towardEnd: -1 }], 1),
+    ];
+    const group: BoltGroupGeometry = {
+      id: "J",
+      holeIds: holes.map((h) => h.id),
+      shearPlanes: 1,
+      stack: ["mainA", "mainB"],
+      grip_mm: plates.mainA.thickness_mm + plates.mainB.thickness_mm,
+      packing_mm: 0,
+    };
+    return {
+      spliceType: splice.type,
+      boltDiameter_mm: bolts.size_mm,
+      plates: pieces,
+      holes,
+      groups: [group],
+      buttGap_mm: 0,
+      spliceLength_mm: L,
+      patternText,
+    };
+  }
+
+  const halfGap = splice.buttGap_mm / 2;
+  const halfCover = halfGap + xMaxLocal + farEnd;
+  const holesB = local.map((h, i) => makeHole("B", i, halfGap + h.x_mm, h.y_mm));
+  const holesA = local.map((h, i) => makeHole("A", i, -(halfGap + h.x_mm), h.y_mm));
+  const doubleCover = splice.type === "butt-double-cover";
+  const coverSpecs = plates.covers;
+  const coverArea = coverSpecs.map((c) => c.width_mm * c.thickness_mm);
+  const totalCoverArea = coverArea.reduce((a, b) => a + b, 0);
+
+  const tA = plates.mainA.thickness_mm;
+  const tB = plates.mainB.thickness_mm;
+  const packing = scenario.packing_mm;
+  const packedSide: "A" | "B" | null = packing > 0 ? (tA <= tB ? "A" : "B") : null;
+
+  // Stack, top to bottom: cover A, packing (if any), main plates, cover B (double cover only).
+  const pieces: PlatePiece[] = [];
+  let stack = 0;
+  const coverExtent = { x0_mm: -halfCover, x1_mm: halfCover, continues: "none" as const };
+  const coverConnections: PlatePiece["connections"] = [
+    { group: "A", endX_mm: -halfCover, towardEnd: -1 },
+    { group: "B", endX_mm: halfCover, towardEnd: 1 },
+  ];
+  const coverA = coverSpecs[0];
+  if (!coverA) throw new RangeError("a butt splice needs a cover plate");
+  pieces.push(
+    piece("coverA", "cover", doubleCover ? "cover plate A" : "cover plate", coverA, coverExtent,
+      (coverArea[0] ?? 0) / totalCoverArea, coverConnections, stack++),
+  );
+  if (packedSide) {
+    const extent =
+      packedSide === "B"
+        ? { x0_mm: halfGap, x1_mm: halfCover, continues: "none" as const }
+        : { x0_mm: -halfCover, x1_mm: -halfGap, continues: "none" as const };
+    const packedMain = packedSide === "A" ? plates.mainA : plates.mainB;
+    pieces.push(
+      piece("packing", "packing", "packing", { ...packedMain, thickness_mm: packing }, extent, 0, [], stack++),
+    );
+  }
+  const mainStack = stack++;
+  pieces.push(
+    piece("mainA", "main", "main plate A", plates.mainA, { x0_mm: -halfCover, x1_mm: -halfGap, continues: "left" }, 1,
+      [{ group: "A", endX_mm: -halfGap, towardEnd: 1 }], mainStack),
+    piece("mainB", "main", "main plate B", plates.mainB, { x0_mm: halfGap, x1_mm: halfCover, continues: "right" }, 1,
+      [{ group: "B", endX_mm: halfGap, towardEnd: -1 }], mainStack),
+  );
+  if (doubleCover) {
+    const coverB = coverSpecs[1] ?? coverA;
+    pieces.push(
+      piece("coverB", "cover", "cover plate B", coverB, coverExtent, (coverArea[1] ?? 0) / totalCoverArea,
+        coverConnections, stack++),
+    );
+  }
+
+  const coverThickness = coverSpecs.reduce((a, c) => a + c.thickness_mm, 0);
+  const groupFor = (id: "A" | "B", holes: Hole[]): BoltGroupGeometry => {
+    const pack = packedSide === id ? packing : 0;
+    const mainId: PlateId = id === "A" ? "mainA" : "mainB";
+    const stackIds: PlateId[] = ["coverA"];
+    if (pack > 0) stackIds.push("packing");
+    stackIds.push(mainId);
+    if (doubleCover) stackIds.push("coverB");
+    return {
+      id,
+      holeIds: holes.map((h) => h.id),
+      shearPlanes: doubleCover ? 2 : 1,
+      stack: stackIds,
+      grip_mm: coverThickness + pack + (id === "A" ? tA : tB),
+      packing_mm: pack,
+    };
+  };
+
+  return {
+    spliceType: splice.type,
+    boltDiameter_mm: bolts.size_mm,
+    plates: pieces,
+    holes: [...holesA, ...holesB],
+    groups: [groupFor("A", holesA), groupFor("B", holesB)],
+    buttGap_mm: splice.buttGap_mm,
+    spliceLength_mm: 2 * halfCover,
+    patternText,
+  };
+}
+
+/** Holes that pass through a plate: every hole of every group the plate connects to, or the packing's side. */
+export function holesOfPlate(joint: Joint, plate: PlatePiece): Hole[] {
+  if (plate.role === "packing") {
+    const group = joint.groups.find((g) => g.packing_mm > 0);
+    return group ? joint.holes.filter((h) => h.group === group.id) : [];
+  }
+  const groups = new Set(plate.connections.map((c) => c.group));
+  return joint.holes.filter((h) => groups.has(h.group));
+}

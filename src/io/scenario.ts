@@ -1,0 +1,260 @@
+/**
+ * YAML text → typed Scenario (core units), or an InputError naming the field path and the reason.
+ * No file system here: the CLI reads the file and hands over its text.
+ */
+import { parseDocument } from "yaml";
+import { findCode, codeIds } from "../codes/registry.js";
+import type { DesignCode } from "../codes/types.js";
+import { isBoltSize, isPropertyClass, BOLT_SIZES_MM, PROPERTY_CLASSES, type PropertyClass } from "../catalogue/bolts.js";
+import { buildJoint } from "../geometry/joint-builder.js";
+import { geometryErrors } from "../geometry/validate.js";
+import type { BoltSpec, CheckableScenario, EdgePreparation, HoleType, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
+import { scenarioSchema, type ScenarioFile } from "./schema.js";
+
+/** Bad input: the field path and the reason. Printed as one line, exit code 2. */
+export class InputError extends Error {
+  constructor(
+    readonly path: string,
+    readonly reason: string,
+  ) {
+    super(path ? `${path}: ${reason}` : reason);
+  }
+}
+
+/** Largest scenario file accepted, bytes. */
+export const MAX_FILE_BYTES = 1_000_000;
+
+/** Parse YAML text into a plain value, rejecting syntax errors, duplicate keys and alias bombs. */
+export function parseYaml(text: string): unknown {
+  if (text.length > MAX_FILE_BYTES) throw new InputError("", `file is larger than ${MAX_FILE_BYTES} bytes`);
+  const doc = parseDocument(text, { uniqueKeys: true, prettyErrors: false, strict: true });
+  const err = doc.errors[0];
+  if (err) {
+    const line = err.linePos?.[0];
+    const where = line ? `line ${line.line}, column ${line.col}` : "YAML";
+    throw new InputError(where, `YAML syntax error: ${err.message.split("\n")[0]}`);
+  }
+  try {
+    return doc.toJS({ maxAliasCount: 100 });
+  } catch (e) {
+    throw new InputError("", `YAML could not be read: ${e instanceof Error ? e.message.split("\n")[0] : String(e)}`);
+  }
+}
+
+function issuePath(path: ReadonlyArray<PropertyKey>): string {
+  return path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");
+}
+
+/** Turn a plain value into a validated file object, or throw the first problem as an InputError. */
+export function validateFile(value: unknown): ScenarioFile {
+  if (value === null || typeof value !== "object" || Array.isArray(value)) {
+    throw new InputError("", "the scenario must be a YAML mapping of fields (name, code, splice, plates, load, ...)");
+  }
+  const result = scenarioSchema.safeParse(value);
+  if (result.success) return result.data;
+  const issue = result.error.issues[0]!;
+  const path = issuePath(issue.path);
+  let reason = issue.message;
+  if (issue.code === "invalid_type" && /received undefined/.test(issue.message)) reason = "required";
+  if (issue.code === "unrecognized_keys") {
+    const keys = (issue as { keys?: string[] }).keys ?? [];
+    throw new InputError(path ? `${path}.${keys[0] ?? ""}` : keys[0] ?? "", `unknown field (not part of the scenario format)`);
+  }
+  throw new InputError(path, reason);
+}
+
+function plateSpec(p: { width: number; thickness: number; grade: string; edges: string }): PlateSpec {
+  return { width_mm: p.width, thickness_mm: p.thickness, grade: p.grade, edges: p.edges as EdgePreparation };
+}
+
+function boltSpec(b: NonNullable<ScenarioFile["bolts"]>): BoltSpec {
+  if (!isBoltSize(b.size)) throw new InputError("bolts.size", `M${b.size} is not in the catalogue (known: ${BOLT_SIZES_MM.map((d) => `M${d}`).join(", ")})`);
+  if (!isPropertyClass(b.class)) throw new InputError("bolts.class", `unknown property class "${b.class}" (known: ${PROPERTY_CLASSES.join(", ")})`);
+  if (b.type === "bearing" && (b.slip_factor !== undefined || b.slip_at !== undefined)) {
+    throw new InputError(b.slip_factor !== undefined ? "bolts.slip_factor" : "bolts.slip_at", "applies to friction-grip bolts only (bolts.type: friction-grip)");
+  }
+  if ((b.hole === "short-slot" || b.hole === "long-slot") && !b.slot_direction) {
+    throw new InputError("bolts.slot_direction", "required for slotted holes: along or across the force");
+  }
+  const spec: BoltSpec = {
+    size_mm: b.size,
+    propertyClass: b.class as PropertyClass,
+    assembly: b.type as BoltSpec["assembly"],
+    threadsInShearPlanes: b.threads_in_shear_planes,
+    hole: b.hole as HoleType,
+  };
+  if (b.slip_factor !== undefined) spec.slipFactor = b.slip_factor;
+  if (b.type === "friction-grip") spec.slipAt = b.slip_at ?? "service";
+  if (b.slot_direction) spec.slotDirection = b.slot_direction;
+  return spec;
+}
+
+function need<T>(value: T | undefined, path: string, why: string): T {
+  if (value === undefined) throw new InputError(path, `required ${why}`);
+  return value;
+}
+
+function layoutSpec(l: NonNullable<ScenarioFile["layout"]>, width_mm: number, butt: boolean): LayoutSpec {
+  const endDistance = need(l.end_distance, "layout.end_distance", `for a ${l.pattern} layout`);
+  const atButt = l.end_distance_at_butt ?? endDistance;
+  if (!butt && l.end_distance_at_butt !== undefined) throw new InputError("layout.end_distance_at_butt", "applies to butt splices only");
+  if (l.pattern === "holes") {
+    for (const k of ["across", "along", "across_per_line", "pitch", "gauge", "end_distance_at_butt", "edge_distance"] as const) {
+      if (l[k] !== undefined) throw new InputError(`layout.${k}`, "not used with pattern: holes (give hole coordinates instead)");
+    }
+    const holes = need(l.holes, "layout.holes", "for pattern: holes");
+    return { kind: "holes", holes: holes.map((h) => ({ x_mm: h.x, y_mm: h.y })), endDistance_mm: endDistance };
+  }
+  if (l.holes !== undefined) throw new InputError("layout.holes", `not used with pattern: ${l.pattern}`);
+  const pitch = l.pitch;
+  if (l.pattern === "tapered") {
+    if (l.across !== undefined || l.along !== undefined) throw new InputError(l.across !== undefined ? "layout.across" : "layout.along", "a tapered layout takes across_per_line instead");
+    const perLine = need(l.across_per_line, "layout.across_per_line", "for a tapered layout");
+    const widest = Math.max(...perLine);
+    const gauge = resolveGauge(l.gauge, l.edge_distance, widest, width_mm);
+    return { kind: "tapered", acrossPerLine: perLine, pitch_mm: perLine.length > 1 ? need(pitch, "layout.pitch", "with more than one transverse line") : pitch ?? 0, gauge_mm: gauge, endDistance_mm: endDistance, endDistanceAtButt_mm: atButt };
+  }
+  if (l.across_per_line !== undefined) throw new InputError("layout.across_per_line", `used with pattern: tapered only`);
+  const across = need(l.across, "layout.across", `(bolts across the width on each transverse line)`);
+  const along = need(l.along, "layout.along", `(transverse lines along the force${butt ? ", per side of the butt" : ""})`);
+  if (l.pattern === "staggered") {
+    if (across < 2) throw new InputError("layout.across", "a staggered pattern needs at least 2 bolts on its first transverse line");
+    if (along < 2) throw new InputError("layout.along", "a staggered pattern needs at least 2 transverse lines");
+    const gaugeLines = 2 * across - 1;
+    const gauge = resolveGauge(l.gauge, l.edge_distance, gaugeLines, width_mm);
+    return { kind: "staggered", across, along, pitch_mm: need(pitch, "layout.pitch", "(stagger pitch between transverse lines)"), gauge_mm: gauge, endDistance_mm: endDistance, endDistanceAtButt_mm: atButt };
+  }
+  const gauge = resolveGauge(l.gauge, l.edge_distance, across, width_mm);
+  return {
+    kind: "grid",
+    across,
+    along,
+    pitch_mm: along > 1 ? need(pitch, "layout.pitch", "with more than one transverse line") : pitch ?? 0,
+    gauge_mm: gauge,
+    endDistance_mm: endDistance,
+    endDistanceAtButt_mm: atButt,
+  };
+}
+
+/**
+ * Gauge from the gauge or the edge distance: the group sits on the plate axis, so
+ * width = 2·edge + (gauge lines − 1)·gauge. If both are given they must agree.
+ */
+function resolveGauge(gauge: number | undefined, edge: number | undefined, gaugeLines: number, width_mm: number): number {
+  if (gaugeLines === 1) {
+    if (gauge !== undefined) throw new InputError("layout.gauge", "not used with one bolt across (the bolt sits on the plate axis)");
+    if (edge !== undefined && Math.abs(2 * edge - width_mm) > 0.5) {
+      throw new InputError("layout.edge_distance", `${edge} mm does not match one bolt on the axis of a ${width_mm} mm plate (edge distance ${width_mm / 2} mm)`);
+    }
+    return 0;
+  }
+  if (gauge === undefined && edge === undefined) throw new InputError("layout.gauge", "required (or give layout.edge_distance)");
+  if (gauge === undefined) {
+    const g = (width_mm - 2 * edge!) / (gaugeLines - 1);
+    if (!(g > 0)) throw new InputError("layout.edge_distance", `${edge} mm leaves no room for ${gaugeLines} gauge lines across a ${width_mm} mm plate`);
+    return g;
+  }
+  if (edge !== undefined) {
+    const implied = (width_mm - (gaugeLines - 1) * gauge) / 2;
+    if (Math.abs(implied - edge) > 0.5) {
+      throw new InputError("layout.edge_distance", `${edge} mm disagrees with the gauge: ${gaugeLines} gauge lines at ${gauge} mm on a ${width_mm} mm plate leave ${implied} mm each side`);
+    }
+  }
+  return gauge;
+}
+
+/** Validated file → Scenario in core units (without bolts/layout check). */
+export function toScenario(file: ScenarioFile): { scenario: Scenario; code: DesignCode } {
+  const code = findCode(file.code);
+  if (!code) throw new InputError("code", `unknown design code "${file.code}" (known: ${codeIds().join(", ")})`);
+  const type = file.splice.type;
+  const butt = type !== "lap";
+  const mainA = plateSpec(file.plates.main);
+  const mainB = plateSpec(file.plates.main_b ?? file.plates.main);
+  const covers: PlateSpec[] = [];
+  if (butt) {
+    const cover = plateSpec(need(file.plates.cover, "plates.cover", `for a ${type} splice`));
+    covers.push(cover);
+    if (type === "butt-double-cover") covers.push(file.plates.cover_b ? plateSpec(file.plates.cover_b) : cover);
+    else if (file.plates.cover_b) throw new InputError("plates.cover_b", "a second cover plate applies to butt-double-cover splices only");
+  } else {
+    if (file.plates.cover) throw new InputError("plates.cover", "a lap splice has no cover plate (use splice.type: butt-single-cover or butt-double-cover)");
+    if (file.plates.cover_b) throw new InputError("plates.cover_b", "a lap splice has no cover plate");
+    if (file.splice.butt_gap !== undefined) throw new InputError("splice.butt_gap", "applies to butt splices only");
+  }
+  let packing = 0;
+  if (butt) {
+    const diff = Math.abs(mainA.thickness_mm - mainB.thickness_mm);
+    packing = file.packing === undefined || file.packing === "auto" ? diff : file.packing;
+  } else if (file.packing !== undefined && file.packing !== "auto" && file.packing > 0) {
+    throw new InputError("packing", "applies to butt splices only (the plates of a lap splice bear on each other)");
+  }
+  const scenario: Scenario = {
+    name: file.name,
+    code: code.id,
+    splice: { type, buttGap_mm: butt ? file.splice.butt_gap ?? 10 : 0 },
+    plates: { mainA, mainB, covers },
+    packing_mm: packing,
+    load: { factoredTension_N: file.load.factored_tension },
+    options: {
+      exposedToCorrosion: file.options.exposed_to_corrosion,
+      boltNetArea: file.options.bolt_net_area,
+      boltStrength: file.options.bolt_strength,
+      netSectionLoad: file.options.net_section_load,
+    },
+  };
+  if (file.project !== undefined) scenario.project = file.project;
+  if (file.load.service_tension !== undefined) {
+    if (file.load.service_tension > file.load.factored_tension) throw new InputError("load.service_tension", "exceeds the factored tension");
+    scenario.load.serviceTension_N = file.load.service_tension;
+  }
+  if (file.bolts) scenario.bolts = boltSpec(file.bolts);
+  if (file.layout) {
+    if (!file.bolts) throw new InputError("bolts", "required when a layout is given");
+    const narrowest = Math.min(mainA.width_mm, mainB.width_mm, ...covers.map((c) => c.width_mm));
+    scenario.layout = layoutSpec(file.layout, narrowest, butt);
+  }
+  if (file.search) {
+    const s = file.search;
+    const spec: NonNullable<Scenario["search"]> = {};
+    if (s.sizes) {
+      s.sizes.forEach((d, i) => {
+        if (!isBoltSize(d)) throw new InputError(`search.sizes[${i}]`, `M${d} is not in the catalogue`);
+      });
+      spec.sizes_mm = s.sizes;
+    }
+    if (s.classes) {
+      s.classes.forEach((c, i) => {
+        if (!isPropertyClass(c)) throw new InputError(`search.classes[${i}]`, `unknown property class "${c}"`);
+      });
+      spec.classes = s.classes as PropertyClass[];
+    }
+    if (s.step !== undefined) spec.step_mm = s.step;
+    if (s.max_splice_length !== undefined) spec.maxSpliceLength_mm = s.max_splice_length;
+    if (s.max_across !== undefined) spec.maxAcross = s.max_across;
+    if (s.gauge !== undefined) spec.fixedGauge_mm = s.gauge;
+    if (s.cover_thicknesses !== undefined) {
+      if (!butt) throw new InputError("search.cover_thicknesses", "applies to butt splices only");
+      spec.coverThicknesses_mm = s.cover_thicknesses;
+    }
+    scenario.search = spec;
+  }
+  const scope = code.scopeErrors(scenario)[0];
+  if (scope) throw new InputError(scope.path, scope.message);
+  return { scenario, code };
+}
+
+/** Parse and validate a scenario's text completely. */
+export function parseScenario(text: string): { scenario: Scenario; code: DesignCode } {
+  return toScenario(validateFile(parseYaml(text)));
+}
+
+/** The scenario as `check` needs it: bolts and layout present, and a geometry that fits the plates. */
+export function requireCheckable(scenario: Scenario, code: DesignCode): CheckableScenario {
+  if (!scenario.bolts) throw new InputError("bolts", "required for check (a scenario without bolts and layout is for search)");
+  if (!scenario.layout) throw new InputError("layout", "required for check (a scenario without a layout is for search)");
+  const checkable = scenario as CheckableScenario;
+  const problem = geometryErrors(buildJoint(checkable, code))[0];
+  if (problem) throw new InputError(problem.path, problem.message);
+  return checkable;
+}

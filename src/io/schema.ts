@@ -1,0 +1,148 @@
+/**
+ * The scenario file's schema (zod), with unit conversion at the boundary.
+ * A bare number means the documented unit of the field (mm, kN, MPa); strings such as "12 mm",
+ * "450 kN", "0.75 in", "100 kip" are converted. Fields are snake_case in the file.
+ */
+import { z } from "zod";
+import { parseQuantity, type Quantity, UnitError } from "../units/units.js";
+import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
+
+/** Largest values accepted, to stop absurd input before it reaches the core. */
+export const LIMITS = {
+  length_mm: 20_000,
+  thickness_mm: 200,
+  width_mm: 5_000,
+  force_kN: 1_000_000,
+  boltsAcross: 50,
+  linesAlong: 100,
+  holes: 2_000,
+} as const;
+
+function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean; max?: number } = {}) {
+  return z.unknown().transform((value, ctx): number => {
+    let v: number;
+    try {
+      v = parseQuantity(value, q);
+    } catch (e) {
+      ctx.addIssue({ code: "custom", message: e instanceof UnitError ? e.message : String(e) });
+      return z.NEVER;
+    }
+    if (!Number.isFinite(v)) {
+      ctx.addIssue({ code: "custom", message: "must be a finite number" });
+      return z.NEVER;
+    }
+    if (opts.positive && !(v > 0)) {
+      ctx.addIssue({ code: "custom", message: `must be greater than zero, got ${String(value)}` });
+      return z.NEVER;
+    }
+    if (opts.nonNegative && v < 0) {
+      ctx.addIssue({ code: "custom", message: `must not be negative, got ${String(value)}` });
+      return z.NEVER;
+    }
+    if (opts.max !== undefined && v > opts.max) {
+      ctx.addIssue({ code: "custom", message: `${String(value)} is beyond the largest accepted value (${opts.max} in core units)` });
+      return z.NEVER;
+    }
+    return v;
+  });
+}
+
+const length = (max: number = LIMITS.length_mm) => quantity("length", { positive: true, max });
+const lengthOrZero = (max: number = LIMITS.length_mm) => quantity("length", { nonNegative: true, max });
+const force = () => quantity("force", { positive: true, max: LIMITS.force_kN * 1000 });
+
+const count = (max: number) => z.number().int("must be a whole number").min(1, "must be at least 1").max(max, `must be at most ${max}`);
+
+const plate = z.strictObject({
+  width: length(LIMITS.width_mm),
+  thickness: length(LIMITS.thickness_mm),
+  grade: z.string().min(1),
+  edges: z.enum(EDGE_PREPARATIONS as [string, ...string[]]).default("rolled"),
+});
+
+/** Bolt size: "M20" or 20. */
+const boltSize = z.union([z.number(), z.string()]).transform((v, ctx): number => {
+  const text = String(v).trim();
+  const m = /^M?(\d+(?:\.\d+)?)$/i.exec(text);
+  if (!m) {
+    ctx.addIssue({ code: "custom", message: `"${text}" is not a metric bolt size such as M20` });
+    return z.NEVER;
+  }
+  return Number(m[1]);
+});
+
+/** Property class "8.8" (a YAML number 8.8 is accepted too). */
+const propertyClass = z.union([z.number(), z.string()]).transform((v) => (typeof v === "number" ? v.toFixed(1) : v.trim()));
+
+const bolts = z.strictObject({
+  size: boltSize,
+  class: propertyClass,
+  type: z.enum(["bearing", "friction-grip"]).default("bearing"),
+  slip_factor: z.number().gt(0, "must be greater than zero").optional(),
+  slip_at: z.enum(["service", "ultimate"]).optional(),
+  threads_in_shear_planes: z.boolean().default(true),
+  hole: z.enum(HOLE_TYPES as [string, ...string[]]).default("standard"),
+  slot_direction: z.enum(["along", "across"]).optional(),
+});
+
+const holePoint = z.union([
+  z.strictObject({ x: lengthOrZero(), y: quantity("length", { max: LIMITS.width_mm }) }),
+  z.tuple([lengthOrZero(), quantity("length", { max: LIMITS.width_mm })]).transform(([x, y]) => ({ x, y })),
+]);
+
+const layout = z.strictObject({
+  pattern: z.enum(["grid", "staggered", "tapered", "holes"]),
+  across: count(LIMITS.boltsAcross).optional(),
+  along: count(LIMITS.linesAlong).optional(),
+  across_per_line: z.array(count(LIMITS.boltsAcross)).min(1).max(LIMITS.linesAlong).optional(),
+  pitch: length().optional(),
+  gauge: length().optional(),
+  end_distance: length().optional(),
+  end_distance_at_butt: length().optional(),
+  edge_distance: length().optional(),
+  holes: z.array(holePoint).min(1).max(LIMITS.holes).optional(),
+});
+
+const search = z.strictObject({
+  sizes: z.array(boltSize).min(1).optional(),
+  classes: z.array(propertyClass).min(1).optional(),
+  step: length(1000).optional(),
+  max_splice_length: length().optional(),
+  max_across: count(LIMITS.boltsAcross).optional(),
+  gauge: length().optional(),
+  cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).optional(),
+});
+
+const options = z.strictObject({
+  exposed_to_corrosion: z.boolean().default(false),
+  bolt_net_area: z.enum(["0.78-gross", "iso-stress-area"]).default("0.78-gross"),
+  bolt_strength: z.enum(["minimum", "nominal"]).default("minimum"),
+  net_section_load: z.enum(["full", "transferred"]).default("full"),
+});
+
+export const scenarioSchema = z.strictObject({
+  name: z.string().min(1, "must not be empty"),
+  project: z.string().optional(),
+  code: z.string().min(1),
+  splice: z.strictObject({
+    type: z.enum(["lap", "butt-single-cover", "butt-double-cover"]),
+    butt_gap: lengthOrZero(1000).optional(),
+  }),
+  plates: z.strictObject({
+    main: plate,
+    main_b: plate.optional(),
+    cover: plate.optional(),
+    cover_b: plate.optional(),
+  }),
+  packing: z.union([z.literal("auto"), lengthOrZero(LIMITS.thickness_mm)]).optional(),
+  load: z.strictObject({
+    factored_tension: force(),
+    service_tension: force().optional(),
+  }),
+  bolts: bolts.optional(),
+  layout: layout.optional(),
+  search: search.optional(),
+  options: options.default({ exposed_to_corrosion: false, bolt_net_area: "0.78-gross", bolt_strength: "minimum", net_section_load: "full" }),
+});
+
+export type ScenarioFile = z.infer<typeof scenarioSchema>;

@@ -1,0 +1,96 @@
+/**
+ * Check results: data, never text printed by the core.
+ */
+
+/** A structured citation. Never free text. */
+export interface Citation {
+  standard: string;
+  clause: string;
+  table?: string;
+  equation?: string;
+}
+
+export type CheckKind =
+  | "bolt-shear"
+  | "bolt-bearing"
+  | "slip"
+  | "net-section"
+  | "gross-yield"
+  | "block-shear"
+  | "grip-length"
+  | "min-spacing"
+  | "max-spacing"
+  | "max-pitch"
+  | "max-edge-line-pitch"
+  | "min-end-distance"
+  | "min-edge-distance"
+  | "max-edge-distance"
+  | "group-centroid";
+
+/**
+ * Strength checks compare forces (N) and scale with the joint tension; rules compare lengths (mm).
+ * For a strength check, loadRatio = demand / joint tension, so the joint tension at which the check
+ * reaches utilisation 1 is resistance / loadRatio.
+ */
+export interface StrengthCheck {
+  type: "strength";
+  id: string;
+  kind: CheckKind;
+  title: string;
+  component: string;
+  citation: Citation;
+  formula: string;
+  substituted: string;
+  limitState: "ULS" | "SLS";
+  demand_N: number;
+  resistance_N: number;
+  loadRatio: number;
+  utilisation: number;
+  pass: boolean;
+  notes: string[];
+}
+
+export interface RuleCheck {
+  type: "rule";
+  id: string;
+  kind: CheckKind;
+  title: string;
+  component: string;
+  citation: Citation;
+  formula: string;
+  substituted: string;
+  /** The measured value and the limit, mm; bound says which way the limit binds. */
+  value_mm: number;
+  limit_mm: number;
+  bound: "min" | "max";
+  utilisation: number;
+  pass: boolean;
+  notes: string[];
+}
+
+export type CheckResult = StrengthCheck | RuleCheck;
+
+export interface Warning {
+  id: string;
+  message: string;
+}
+
+export interface CheckReport {
+  code: string;
+  codeTitle: string;
+  checks: CheckResult[];
+  /** Least joint tension any ULS strength check allows, N. */
+  jointStrength_N: number;
+  /** The ULS strength check that sets jointStrength. */
+  governing: string;
+  /** Joint strength ÷ design tension strength of the unperforated thinner main plate. */
+  efficiency: number;
+  efficiencyDefinition: string;
+  unperforatedStrength_N: number;
+  /** Highest utilisation of any check. */
+  maxUtilisation: number;
+  pass: boolean;
+  warnings: Warning[];
+  /** Statements of conventions used (net area of bolts, net-section load treatment...). */
+  conventions: string[];
+}

@@ -1,0 +1,145 @@
+/**
+ * The typed scenario, in core units (N, mm, MPa). Produced by src/io from a YAML file; the core never sees YAML.
+ */
+import type { NetAreaConvention, BoltStrengthBasis, PropertyClass } from "../catalogue/bolts.js";
+
+export type SpliceType = "lap" | "butt-single-cover" | "butt-double-cover";
+
+/**
+ * Edge preparation of a plate edge. IS 800:2007 cl. 10.2.4.2 sets 1.5 d0 for rolled, machine flame cut,
+ * sawn and planed edges, and 1.7 d0 for sheared or hand flame cut edges.
+ */
+export type EdgePreparation = "rolled" | "machine-flame-cut" | "sawn" | "planed" | "sheared" | "hand-flame-cut";
+export const EDGE_PREPARATIONS: readonly EdgePreparation[] = [
+  "rolled",
+  "machine-flame-cut",
+  "sawn",
+  "planed",
+  "sheared",
+  "hand-flame-cut",
+];
+
+export interface PlateSpec {
+  width_mm: number;
+  thickness_mm: number;
+  grade: string;
+  edges: EdgePreparation;
+}
+
+export type HoleType = "standard" | "oversize" | "short-slot" | "long-slot";
+export const HOLE_TYPES: readonly HoleType[] = ["standard", "oversize", "short-slot", "long-slot"];
+
+/** Direction of the long axis of a slotted hole relative to the force. */
+export type SlotDirection = "along" | "across";
+
+export type BoltAssembly = "bearing" | "friction-grip";
+
+export interface BoltSpec {
+  size_mm: number;
+  propertyClass: PropertyClass;
+  assembly: BoltAssembly;
+  /** Slip factor μf (friction-grip only), IS 800:2007 Table 20. */
+  slipFactor?: number;
+  /** Friction-grip joints: design against slip at the service or at the factored load (γmf 1.10 / 1.25). */
+  slipAt?: "service" | "ultimate";
+  /** Threads intercept every shear plane (true) or none (false). */
+  threadsInShearPlanes: boolean;
+  hole: HoleType;
+  slotDirection?: SlotDirection;
+}
+
+/** A bolt pattern. Counts are named for what they count: "across" the width, "along" the force. */
+export type LayoutSpec =
+  | {
+      kind: "grid";
+      /** Bolts across the width on each transverse line. */
+      across: number;
+      /** Transverse lines along the force (per side of the butt for butt splices). */
+      along: number;
+      pitch_mm: number;
+      gauge_mm: number;
+      endDistance_mm: number;
+      /** Butt splices: end distance of the main plate at the butt (defaults to endDistance). */
+      endDistanceAtButt_mm: number;
+    }
+  | {
+      kind: "staggered";
+      /** Bolts on the first (and every odd) transverse line; even lines carry one fewer, set midway between. */
+      across: number;
+      along: number;
+      /** Stagger pitch s: distance along the force between consecutive transverse lines. */
+      pitch_mm: number;
+      /** Gauge g: distance across the force between adjacent gauge lines. */
+      gauge_mm: number;
+      endDistance_mm: number;
+      endDistanceAtButt_mm: number;
+    }
+  | {
+      kind: "tapered";
+      /** Bolts on each transverse line, first line nearest the plate end; each line symmetric about the axis. */
+      acrossPerLine: number[];
+      pitch_mm: number;
+      gauge_mm: number;
+      endDistance_mm: number;
+      endDistanceAtButt_mm: number;
+    }
+  | {
+      kind: "holes";
+      /**
+       * Hole centres of one bolt group: x along the force, measured from the loaded plate's end
+       * (lap: from the end of plate B; butt: from the butt end of main plate B, mirrored for side A),
+       * y across, measured from the plate axis.
+       */
+      holes: Array<{ x_mm: number; y_mm: number }>;
+      /** Distance from the last hole line to the far end (lap: end of plate A; butt: end of the cover). */
+      endDistance_mm: number;
+    };
+
+export interface SearchSpec {
+  sizes_mm?: number[];
+  classes?: PropertyClass[];
+  step_mm?: number;
+  maxSpliceLength_mm?: number;
+  maxAcross?: number;
+  fixedGauge_mm?: number;
+  coverThicknesses_mm?: number[];
+}
+
+export interface CheckOptions {
+  /** IS 800:2007 cl. 10.2.4.3: exposed to corrosive influences (limits edge distance to 40 + 4t). */
+  exposedToCorrosion: boolean;
+  boltNetArea: NetAreaConvention;
+  boltStrength: BoltStrengthBasis;
+  /**
+   * Net-section demand. "full": every path carries the whole plate force (cl. 6.3.1 as written).
+   * "transferred": a path carries only what its plate has not yet passed to bolts ahead of it.
+   */
+  netSectionLoad: "full" | "transferred";
+}
+
+export interface Scenario {
+  name: string;
+  code: string;
+  splice: { type: SpliceType; buttGap_mm: number };
+  plates: {
+    mainA: PlateSpec;
+    mainB: PlateSpec;
+    /** Cover plates (butt splices): one for single-cover, two (coverA one face, coverB the other) for double. */
+    covers: PlateSpec[];
+  };
+  /** Packing thickness under the thinner main plate (butt splices), mm. */
+  packing_mm: number;
+  load: { factoredTension_N: number; serviceTension_N?: number };
+  bolts?: BoltSpec;
+  layout?: LayoutSpec;
+  search?: SearchSpec;
+  options: CheckOptions;
+  /** Free text the engineer wants carried into the output (project, member mark). */
+  project?: string;
+}
+
+/** A scenario ready for `check`: bolts and layout present. */
+export interface CheckableScenario extends Scenario {
+  bolts: BoltSpec;
+  layout: LayoutSpec;
+}

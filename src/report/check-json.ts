@@ -1,0 +1,64 @@
+/**
+ * The check report as a plain JSON-ready object (units in field names: kN, mm). Pure.
+ */
+import type { Joint } from "../model/joint.js";
+import type { CheckReport } from "../model/results.js";
+import type { CheckableScenario } from "../model/scenario.js";
+
+export const CAUTION =
+  "splicewright is an aid to design. Its results must be verified by a qualified engineer against the governing edition of the design code, its national annex and local regulations. Bolt installation, corrosion and fatigue are outside the checks unless stated.";
+
+const round = (v: number, digits = 3): number | null => (Number.isFinite(v) ? Number(v.toFixed(digits)) : null);
+
+export function citationText(c: { standard: string; clause: string; table?: string; equation?: string }): string {
+  const extra = [c.table, c.equation].filter(Boolean).join(", ");
+  if (c.standard === "general") return c.clause;
+  return `${c.standard} cl. ${c.clause}${extra ? ` (${extra})` : ""}`;
+}
+
+export function checkReportJson(scenario: CheckableScenario, joint: Joint, report: CheckReport) {
+  return {
+    scenario: scenario.name,
+    ...(scenario.project !== undefined ? { project: scenario.project } : {}),
+    code: report.code,
+    codeTitle: report.codeTitle,
+    spliceType: joint.spliceType,
+    pattern: joint.patternText,
+    bolt: {
+      size: `M${scenario.bolts.size_mm}`,
+      class: scenario.bolts.propertyClass,
+      assembly: scenario.bolts.assembly,
+      count: joint.holes.length,
+    },
+    spliceLength_mm: round(joint.spliceLength_mm, 1),
+    pass: report.pass,
+    jointStrength_kN: round(report.jointStrength_N / 1000, 2),
+    factoredTension_kN: round(scenario.load.factoredTension_N / 1000, 2),
+    governing: report.governing,
+    efficiency: round(report.efficiency, 4),
+    efficiencyDefinition: report.efficiencyDefinition,
+    maxUtilisation: round(report.maxUtilisation, 4),
+    checks: report.checks.map((c) => ({
+      id: c.id,
+      kind: c.kind,
+      title: c.title,
+      component: c.component,
+      clause: citationText(c.citation),
+      citation: c.citation,
+      formula: c.formula,
+      substituted: c.substituted,
+      limitState: c.type === "strength" ? c.limitState : "rule",
+      demand_kN: c.type === "strength" ? round(c.demand_N / 1000, 2) : null,
+      resistance_kN: c.type === "strength" ? round(c.resistance_N / 1000, 2) : null,
+      value_mm: c.type === "rule" ? round(c.value_mm, 2) : null,
+      limit_mm: c.type === "rule" ? round(c.limit_mm, 2) : null,
+      utilisation: round(c.utilisation, 4),
+      pass: c.pass,
+      notes: c.notes,
+    })),
+    warnings: report.warnings,
+    conventions: report.conventions,
+    holes: joint.holes.map((h) => ({ id: h.id, group: h.group, x_mm: round(h.x_mm, 2), y_mm: round(h.y_mm, 2), across_mm: h.across_mm, along_mm: h.along_mm })),
+    caution: CAUTION,
+  };
+}

@@ -1,0 +1,32 @@
+/** Run the built CLI (dist/, built by `npm test`'s pretest) as a user would. */
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { dirname, join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+
+export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "..", "..");
+export const BIN = join(ROOT, "bin", "splicewright.js");
+
+export interface CliResult {
+  code: number;
+  stdout: string;
+  stderr: string;
+}
+
+export function cli(args: string[], cwd: string = ROOT): CliResult {
+  const r = spawnSync(process.execPath, [BIN, ...args], { cwd, encoding: "utf8" });
+  return { code: r.status ?? -1, stdout: r.stdout, stderr: r.stderr };
+}
+
+/** Write YAML text to a fresh temporary folder and return its path. */
+export function tempScenario(text: string, name = "scenario.yaml"): string {
+  const dir = mkdtempSync(join(tmpdir(), "splicewright-test-"));
+  const file = join(dir, name);
+  writeFileSync(file, text);
+  return file;
+}
+
+export function scenarioPath(name: string): string {
+  return join(ROOT, "scenarios", name);
+}
