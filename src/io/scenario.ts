@@ -27,12 +27,13 @@ export const MAX_FILE_BYTES = 1_000_000;
 /** Parse YAML text into a plain value, rejecting syntax errors, duplicate keys and alias bombs. */
 export function parseYaml(text: string): unknown {
   if (text.length > MAX_FILE_BYTES) throw new InputError("", `file is larger than ${MAX_FILE_BYTES} bytes`);
-  const doc = parseDocument(text, { uniqueKeys: true, prettyErrors: false, strict: true });
+  const doc = parseDocument(text, { uniqueKeys: true, prettyErrors: true, strict: true });
   const err = doc.errors[0];
   if (err) {
     const line = err.linePos?.[0];
     const where = line ? `line ${line.line}, column ${line.col}` : "YAML";
-    throw new InputError(where, `YAML syntax error: ${err.message.split("\n")[0]}`);
+    const reason = err.message.split("\n")[0]!.replace(/ at line \d+, column \d+:?$/, "");
+    throw new InputError(where, `YAML syntax error: ${reason}`);
   }
   try {
     return doc.toJS({ maxAliasCount: 100 });
