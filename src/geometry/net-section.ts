@@ -30,43 +30,70 @@ function legCost(a: Hole, b: Hole): number {
   return g + (s * s) / (4 * g);
 }
 
+/** Limits on the paths searched: which holes a path may use, and tags it must collect. */
+export interface PathFilter {
+  /** Holes a path may pass through (default: all). */
+  allowed?: (h: Hole) => boolean;
+  /** Bit tags of a hole; a path collects the OR of its holes' tags (default 0). */
+  tag?: (h: Hole) => number;
+  /** Tags a path must have collected to count (default 0: any path, the hole-free one included). */
+  required?: number;
+}
+
 /**
- * The path of least net width across a plate of width b centred on y = 0.
- * `holes` are the plate's holes; an optional filter limits which holes a path may pass through.
+ * The path of least net width across a plate of width b centred on y = 0, over every path through
+ * the plate's holes; optionally only paths through allowed holes that collect the required tags.
+ * Returns null when no path meets the filter.
  */
-export function leastNetPath(holes: readonly Hole[], width_mm: number): NetPath {
+export function leastNetPath(holes: readonly Hole[], width_mm: number): NetPath;
+export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: PathFilter): NetPath | null;
+export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: PathFilter = {}): NetPath | null {
   const half = width_mm / 2;
-  const sorted = [...holes].sort((a, b) => a.y_mm - b.y_mm || a.x_mm - b.x_mm);
+  const allowed = filter.allowed;
+  const sorted = (allowed ? holes.filter(allowed) : [...holes]).sort((a, b) => a.y_mm - b.y_mm || a.x_mm - b.x_mm);
+  const tagOf = filter.tag ?? (() => 0);
+  const required = filter.required ?? 0;
+  const masks = required === 0 && !filter.tag ? 1 : 4;
   const n = sorted.length;
-  const best = new Float64Array(n);
-  const previous = new Int32Array(n).fill(-1);
+  // best[j * masks + m]: least partial width from the lower edge to hole j having collected tags m.
+  const best = new Float64Array(n * masks).fill(Infinity);
+  const previous = new Int32Array(n * masks).fill(-1);
+  const tags = sorted.map((h) => (masks === 1 ? 0 : tagOf(h) & 3));
   for (let j = 0; j < n; j++) {
     const hj = sorted[j]!;
-    let cost = hj.y_mm + half; // straight leg from the lower edge
-    let from = -1;
+    const tj = tags[j]!;
+    const fromEdge = hj.y_mm + half - hj.across_mm;
+    if (fromEdge < best[j * masks + tj]!) best[j * masks + tj] = fromEdge;
     for (let i = 0; i < j; i++) {
       const hi = sorted[i]!;
       if (hj.y_mm - hi.y_mm <= LINE_TOLERANCE_MM) continue; // same gauge line: no leg
-      const c = best[i]! + legCost(hi, hj);
-      if (c < cost - 1e-12) {
-        cost = c;
-        from = i;
+      const leg = legCost(hi, hj) - hj.across_mm;
+      for (let m = 0; m < masks; m++) {
+        const c = best[i * masks + m]!;
+        if (c === Infinity) continue;
+        const to = j * masks + (m | tj);
+        if (c + leg < best[to]! - 1e-12) {
+          best[to] = c + leg;
+          previous[to] = i * masks + m;
+        }
       }
     }
-    best[j] = cost - hj.across_mm;
-    previous[j] = from;
   }
-  let bestWidth = width_mm;
+  let bestWidth = required === 0 ? width_mm : Infinity;
   let last = -1;
   for (let j = 0; j < n; j++) {
-    const w = best[j]! + (half - sorted[j]!.y_mm);
-    if (w < bestWidth - 1e-12) {
-      bestWidth = w;
-      last = j;
+    for (let m = 0; m < masks; m++) {
+      if ((m & required) !== required) continue;
+      const w = best[j * masks + m]! + (half - sorted[j]!.y_mm);
+      if (w < bestWidth - 1e-12) {
+        bestWidth = w;
+        last = j * masks + m;
+      }
     }
   }
+  if (bestWidth === Infinity) return null;
   const path: Hole[] = [];
-  for (let k = last; k >= 0; k = previous[k]!) path.unshift(sorted[k]!);
+  for (let k = last; k >= 0; k = previous[k]!) path.unshift(sorted[Math.floor(k / masks)]!);
   return describePath(path, width_mm);
 }
 

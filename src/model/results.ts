@@ -94,3 +94,29 @@ export interface CheckReport {
   /** Statements of conventions used (net area of bolts, net-section load treatment...). */
   conventions: string[];
 }
+
+/**
+ * A result whose substituted-values text and notes are written on first read, from the same numbers.
+ * A search runs thousands of checks and shows a few; the figures are identical either way.
+ * (Getters live on the prototype: read them by name, as the report writers do.)
+ */
+class LazyText {
+  #substituted: (() => string) | string;
+  #notes: (() => string[]) | string[];
+  constructor(substituted: () => string, notes: () => string[]) {
+    this.#substituted = substituted;
+    this.#notes = notes;
+  }
+  get substituted(): string {
+    if (typeof this.#substituted === "function") this.#substituted = this.#substituted();
+    return this.#substituted;
+  }
+  get notes(): string[] {
+    if (typeof this.#notes === "function") this.#notes = this.#notes();
+    return this.#notes;
+  }
+}
+
+export function withLazyText<T extends object>(numbers: T, substituted: () => string, notes: () => string[]): T & { substituted: string; notes: string[] } {
+  return Object.assign(new LazyText(substituted, notes), numbers);
+}

@@ -79,7 +79,9 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   const conventions: string[] = [
     `bolt net area Anb: ${scenario.options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4 (cl. 10.3.3)" : "ISO 898-1 stress area"}`,
     `bolt strength: ISO 898-1 ${scenario.options.boltStrength} values`,
-    "net section: the whole plate force on every path (cl. 6.3.1 as written)",
+    scenario.options.netSectionLoad === "transferred"
+      ? "net section: load already transferred — each path carries only the load its plate has not yet passed to bolts ahead of it (a scenario switch; cl. 6.3.1 is silent)"
+      : "net section: the whole plate force on every path (cl. 6.3.1 as written)",
     "holes drilled (no punching allowance); each bolt of a group carries an equal share",
   ];
   if (friction) {

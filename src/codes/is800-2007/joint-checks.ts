@@ -6,9 +6,9 @@ import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bo
 import { blockShapes } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
-import { leastNetPath } from "../../geometry/net-section.js";
+import { leastNetPath, type NetPath } from "../../geometry/net-section.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
-import type { StrengthCheck, Warning } from "../../model/results.js";
+import { withLazyText, type StrengthCheck, type Warning } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f, kN, utilisation } from "../format.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
@@ -48,11 +48,16 @@ export function groupFactors(joint: Joint, group: BoltGroupGeometry): GroupFacto
   };
 }
 
+/**
+ * A strength check result. The substituted-values text and the notes are written only when read
+ * (a search runs thousands of checks and prints a few), from the same numbers.
+ */
 function strength(
-  partial: Omit<StrengthCheck, "type" | "utilisation" | "pass" | "notes"> & { notes?: string[] },
+  partial: Omit<StrengthCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string; notes?: () => string[] },
 ): StrengthCheck {
-  const u = utilisation(partial.demand_N, partial.resistance_N);
-  return { type: "strength", ...partial, notes: partial.notes ?? [], utilisation: u, pass: u <= 1 + 1e-9 };
+  const { substituted, notes, ...numbers } = partial;
+  const u = utilisation(numbers.demand_N, numbers.resistance_N);
+  return withLazyText({ type: "strength", ...numbers, utilisation: u, pass: u <= 1 + 1e-9 }, substituted, notes ?? (() => []));
 }
 
 /**
@@ -71,7 +76,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
   const perBolt = Vdsb({ fub_MPa: mat.fub_MPa, nn, ns, Anb_mm2: Anb, Asb_mm2: Asb, beta_lj: gf.beta_lj, beta_lg: gf.beta_lg, beta_pkg: gf.beta_pkg });
   const n = gf.holes.length;
   const T = scenario.load.factoredTension_N;
-  const notes = [
+  const notes = () => [
     `fub = ${mat.fub_MPa} MPa (${mat.source})`,
     `Anb = ${f(Anb)} mm² (${options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4" : "ISO 898-1 stress area"}), Asb = π d²/4 = ${f(Asb)} mm²`,
     `lj = ${f(gf.lj_mm)} mm ${gf.lj_mm > 15 * d ? `> 15d = ${f(15 * d)} mm: βlj = 1.075 − 0.005 × ${f(gf.lj_mm)}/${d} = ${f(gf.beta_lj, 3)} (limits 0.75–1.0)` : `≤ 15d = ${f(15 * d)} mm: βlj = 1.0`}`,
@@ -87,7 +92,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
     component: groupLabel(joint, gf.group),
     citation: cl("10.3.3"),
     formula: "T ≤ n·Vdsb;  Vdsb = fub/√3 · (nn·Anb + ns·Asb) · βlj·βlg·βpkg / γmb",
-    substituted:
+    substituted: () =>
       `Vdsb = ${mat.fub_MPa}/√3 × (${nn} × ${f(Anb)} + ${ns} × ${f(Asb)}) × ${f(gf.beta_lj, 3)} × ${f(gf.beta_lg, 3)} × ${f(gf.beta_pkg, 3)} / ${PARTIAL_FACTORS.gamma_mb}` +
       ` = ${kN(perBolt, 2)};  n·Vdsb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
     limitState: "ULS",
@@ -147,7 +152,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     component: `${plate.label}${sideText}`,
     citation: cl("10.3.4"),
     formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
-    substituted:
+    substituted: () =>
       `kb = min(${eTerm}, ${pTerm}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
       `Vdpb = 2.5 × ${f(b.kb, 3)} × ${d} × ${f(t)} × ${plate.fu_MPa}${holeFactor !== 1 ? ` × ${holeFactor}` : ""} / ${PARTIAL_FACTORS.gamma_mb} = ${kN(perBolt, 2)};  ` +
       `n·Vdpb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}` +
@@ -156,7 +161,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     demand_N: T * plate.forceShare,
     resistance_N: n * perBolt,
     loadRatio: plate.forceShare,
-    notes: holeFactor !== 1 ? [`bearing reduced by ${holeFactor} for ${bolts.hole} holes (cl. 10.3.4)`] : [],
+    notes: () => holeFactor !== 1 ? [`bearing reduced by ${holeFactor} for ${bolts.hole} holes (cl. 10.3.4)`] : [],
   });
 }
 
@@ -186,14 +191,14 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFa
     component: groupLabel(joint, gf.group),
     citation: cl("10.4.3", { table: "Table 20 (μf)" }),
     formula: "F ≤ n·Vdsf;  Vdsf = μf·ne·Kh·F0·βlj / γmf;  F0 = 0.7·fub·Anb",
-    substituted:
+    substituted: () =>
       `F0 = 0.7 × ${mat.fub_MPa} × ${f(Anb)} = ${kN(proof, 2)};  Vdsf = ${f(mu, 2)} × ${ne} × ${Kh} × ${kN(proof, 2)} × ${f(gf.beta_lj, 3)} / ${gamma} = ${kN(perBolt, 2)};  ` +
       `n·Vdsf = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
     limitState: slipAt === "service" ? "SLS" : "ULS",
     demand_N: demand,
     resistance_N: n * perBolt,
     loadRatio: slipAt === "service" ? demand / load.factoredTension_N : 1,
-    notes: slipAt === "service" ? ["service tension from load.service_tension"] : [],
+    notes: () => slipAt === "service" ? ["service tension from load.service_tension"] : [],
   });
 }
 
@@ -212,12 +217,12 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
     component: plate.label,
     citation: cl("6.2"),
     formula: "F ≤ Tdg = Ag·fy / γm0",
-    substituted: `Tdg = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${PARTIAL_FACTORS.gamma_m0} = ${kN(R)}` + shareText(plate),
+    substituted: () => `Tdg = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${PARTIAL_FACTORS.gamma_m0} = ${kN(R)}` + shareText(plate),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * plate.forceShare,
     resistance_N: R,
     loadRatio: plate.forceShare,
-    notes: [plate.materialNote],
+    notes: () => [plate.materialNote],
   });
 }
 
@@ -227,13 +232,18 @@ function shareText(plate: PlatePiece): string {
 
 /**
  * Net-section rupture of a plate over the least net path (straight or zig-zag), F ≤ Tdn = 0.9·An·fu/γm1.
- * IS 800:2007, cl. 6.3.1. The whole plate force on every path (the clause as written).
+ * IS 800:2007, cl. 6.3.1. With options.net_section_load "full", the whole plate force on every path
+ * (the clause as written); with "transferred", each path carries only what the plate has not yet passed
+ * to bolts ahead of it (see governingNetPath), and the governing path has the highest demand/resistance.
  */
 export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
   const { width_mm: b, thickness_mm: t } = plate.spec;
-  const path = leastNetPath(holesOfPlate(joint, plate), b);
+  const holes = holesOfPlate(joint, plate);
+  const transferred = scenario.options.netSectionLoad === "transferred";
+  const { path, fraction } = transferred ? governingNetPath(joint, plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
   const An = path.netWidth_mm * t;
   const R = Tdn(An, plate.fu_MPa);
+  const ratio = plate.forceShare * fraction;
   const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
   return strength({
     id: `net-section:${plate.id}`,
@@ -241,17 +251,56 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
     title: "Net-section rupture",
     component: plate.label,
     citation: cl("6.3.1"),
-    formula: "F ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t, least over all paths",
-    substituted:
-      `least path ${pathText}: An = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(An)} mm²;  ` +
+    formula: transferred
+      ? "F·k/n ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t; k = bolts not yet passed; highest F·k/n / Tdn over all paths"
+      : "F ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t, least over all paths",
+    substituted: () =>
+      `${transferred ? "governing" : "least"} path ${pathText}: An = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(An)} mm²;  ` +
       `Tdn = 0.9 × ${f(An)} × ${plate.fu_MPa} / ${PARTIAL_FACTORS.gamma_m1} = ${kN(R)}` +
+      (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
       shareText(plate),
     limitState: "ULS",
-    demand_N: scenario.load.factoredTension_N * plate.forceShare,
+    demand_N: scenario.load.factoredTension_N * ratio,
     resistance_N: R,
-    loadRatio: plate.forceShare,
-    notes: [`path searched over every straight and zig-zag route through ${holesOfPlate(joint, plate).length} holes`],
+    loadRatio: ratio,
+    notes: () => [
+      `path searched over every straight and zig-zag route through ${holes.length} holes`,
+      ...(transferred ? ["net-section load: transferred (each path carries the load its plate has not yet passed to bolts ahead of it)"] : []),
+    ],
   });
+}
+
+/**
+ * The governing net path when load already handed to bolts is discounted.
+ * A hole's level k/n counts the bolts of its group at or nearer the plate end the group bears toward
+ * (the load comes from the far side); a path carries its plate force times the highest level among
+ * its holes (its most loaded line). For each level, the least path whose holes stay at or below that
+ * level and reach it; the governing one has the highest level/width. In a cover plate a path that
+ * mixes holes of both groups crosses the butt and carries the whole cover force.
+ */
+export function governingNetPath(joint: Joint, plate: PlatePiece, holes: readonly Hole[]): { path: NetPath; fraction: number } {
+  const width = plate.spec.width_mm;
+  const level = new Map<Hole, number>();
+  for (const c of plate.connections) {
+    const own = holes.filter((h) => h.group === c.group);
+    const u = (h: Hole) => c.towardEnd * (c.endX_mm - h.x_mm);
+    for (const h of own) level.set(h, own.filter((k) => u(k) <= u(h) + 1e-9).length / own.length);
+  }
+  let best: { path: NetPath; fraction: number } = { path: leastNetPath([], width), fraction: 1 };
+  const consider = (path: NetPath | null, fraction: number) => {
+    if (path && fraction / path.netWidth_mm > best.fraction / best.path.netWidth_mm + 1e-15) best = { path, fraction };
+  };
+  for (const c of plate.connections) {
+    const own = holes.filter((h) => h.group === c.group);
+    for (const lv of [...new Set(own.map((h) => level.get(h)!))]) {
+      consider(leastNetPath(own, width, { allowed: (h) => level.get(h)! <= lv + 1e-12, tag: (h) => (Math.abs(level.get(h)! - lv) <= 1e-12 ? 1 : 0), required: 1 }), lv);
+    }
+  }
+  if (plate.connections.length === 2) {
+    const [a, b] = plate.connections;
+    consider(leastNetPath(holes, width, { tag: (h) => (h.group === a!.group ? 1 : h.group === b!.group ? 2 : 0), required: 3 }), 1);
+  }
+  return best;
 }
 
 /**
@@ -282,7 +331,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     component: `${plate.label}${sideText}`,
     citation: cl("6.4.1"),
     formula: "F·k/n ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)",
-    substituted:
+    substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Avg = ${f(s.shearGross_mm)} × ${f(t)} = ${f(s.shearGross_mm * t)}, ` +
       `Avn = ${f(s.shearNet_mm)} × ${f(t)} = ${f(s.shearNet_mm * t)}, Atg = ${f(s.tensionGross_mm)} × ${f(t)} = ${f(s.tensionGross_mm * t)}, ` +
       `Atn = ${f(s.tensionNet_mm)} × ${f(t)} = ${f(s.tensionNet_mm * t)} mm²;  Tdb1 = ${kN(best.r.Tdb1_N)}, Tdb2 = ${kN(best.r.Tdb2_N)}, Tdb = ${kN(best.r.Tdb_N)}`,
@@ -290,7 +339,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     demand_N: scenario.load.factoredTension_N * best.ratio,
     resistance_N: best.r.Tdb_N,
     loadRatio: best.ratio,
-    notes: [`governing of ${shapes.length} block shapes`],
+    notes: () => [`governing of ${shapes.length} block shapes`],
   });
 }
 

@@ -4,19 +4,18 @@
  */
 import { distance, gaugeLines, transverseLines } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
-import type { RuleCheck } from "../../model/results.js";
+import { withLazyText, type RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import type { Citation } from "../../model/results.js";
 import { f } from "../format.js";
 import { cl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
-function rule(
-  r: Omit<RuleCheck, "type" | "utilisation" | "pass" | "notes"> & { notes?: string[] },
-): RuleCheck {
+function rule(r: Omit<RuleCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string }): RuleCheck {
+  const { substituted, ...numbers } = r;
   const u = r.bound === "max" ? r.value_mm / r.limit_mm : r.value_mm > 0 ? r.limit_mm / r.value_mm : Infinity;
   const pass = r.bound === "max" ? r.value_mm <= r.limit_mm + 1e-9 : r.value_mm >= r.limit_mm - 1e-9;
-  return { type: "rule", ...r, notes: r.notes ?? [], utilisation: u, pass };
+  return withLazyText({ type: "rule" as const, ...numbers, utilisation: u, pass }, substituted, () => []);
 }
 
 /** Plates (not packing) through which a hole passes. */
@@ -73,7 +72,8 @@ interface Worst {
   value: number;
   limit: number;
   where: string;
-  detail: string;
+  /** Text of the substituted values, built only for the governing case. */
+  detail: () => string;
 }
 
 function keepWorst(current: Worst | null, next: Worst, bound: "min" | "max"): Worst {
@@ -123,7 +123,7 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
         if (seen.has(key)) continue;
         seen.add(key);
         const s = distance(a, b);
-        worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
+        worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
       }
     }
   }
@@ -157,7 +157,7 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
         const t = pairThickness(joint, a, b);
         const limit = Math.min(32 * t, 300);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        across = keepWorst(across, { value: g, limit, where: plate.label, detail: `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` }, "max");
+        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` }, "max");
       }
     }
     // Along: consecutive holes on each gauge line.
@@ -176,14 +176,14 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
           const base = Math.min(16 * t, 200);
           const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
           const limit = Math.min(base * r, cap);
-          pitch = keepWorst(pitch, { value: s, limit, where: plate.label, detail: `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` }, "max");
+          pitch = keepWorst(pitch, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` }, "max");
         }
         if (edge && isOutside) {
           const tp = plate.spec.thickness_mm;
           const base = Math.min(100 + 4 * tp, 200);
           const r = a.group === b.group ? relax : 1.0;
           const limit = Math.min(base * r, Math.min(32 * tp, 300));
-          edgeLine = keepWorst(edgeLine, { value: s, limit, where: plate.label, detail: `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` }, "max");
+          edgeLine = keepWorst(edgeLine, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` }, "max");
         }
       }
     });
@@ -224,20 +224,20 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
-      minEdge = keepWorst(minEdge, { value: edge, limit, where: plate.label, detail: `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` }, "min");
+      minEdge = keepWorst(minEdge, { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` }, "min");
     }
     const ys = holes.map((h) => h.y_mm);
     for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
-      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
     }
     for (const c of plate.connections) {
       const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, u: c.towardEnd * (c.endX_mm - h.x_mm) }));
       for (const { h, u } of us) {
         const limit = factor * h.along_mm;
-        minEnd = keepWorst(minEnd, { value: u, limit, where: plate.label, detail: `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` }, "min");
+        minEnd = keepWorst(minEnd, { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` }, "min");
       }
       const nearest = Math.min(...us.map((x) => x.u));
-      maxEdge = keepWorst(maxEdge, { value: nearest, limit: maxLimit, where: plate.label, detail: `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+      maxEdge = keepWorst(maxEdge, { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
     }
   }
   return [
@@ -252,7 +252,7 @@ export function gripRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   for (const g of joint.groups) {
-    worst = keepWorst(worst, { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` }, "max");
+    worst = keepWorst(worst, { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` }, "max");
   }
   return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
 }
@@ -266,7 +266,7 @@ export function centroidRule(joint: Joint): RuleCheck[] {
   for (const g of joint.groups) {
     const holes = joint.holes.filter((h) => h.group === g.id);
     const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
-    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: `centroid offset from the plate axis ${f(Math.abs(yc), 2)} mm vs 0.5 mm` }, "max");
+    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${f(Math.abs(yc), 2)} mm vs 0.5 mm` }, "max");
   }
   return worstRule(
     "group-centroid",
