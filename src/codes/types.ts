@@ -19,6 +19,42 @@ export interface CodeChecks {
   conventions: string[];
 }
 
+/** The declared search-space limits the code sets for one bolt size and pattern, mm. */
+export interface SearchLimits {
+  pitchMin_mm: number;
+  pitchMax_mm: number;
+  gaugeMin_mm: number;
+  gaugeMax_mm: number;
+  endMin_mm: number;
+  /** Largest end distance searched (a stated bound, not a rule). */
+  endMax_mm: number;
+  edgeMin_mm: number;
+  edgeMax_mm: number;
+  /** The limits in words, with their clauses, for the output. */
+  statement: string;
+}
+
+/** A layout family as the strength bound sees it: counts per transverse line and known dimensions. */
+export interface LayoutShape {
+  pattern: "grid" | "staggered" | "tapered";
+  /** Bolts on each transverse line of one group, line 0 nearest the end of main plate B. */
+  countsPerLine: number[];
+  /** Undefined: not yet chosen (the bound takes the most favourable value). */
+  pitch_mm?: number;
+  endDistance_mm?: number;
+  endDistanceAtButt_mm?: number;
+}
+
+/**
+ * An upper bound on the checker's joint strength for every layout of a shape (admissible: never
+ * below what the checker would find), and whether the service-load checks can pass at all.
+ */
+export interface StrengthBound {
+  jointStrength_N: number;
+  check: string;
+  serviceOk: boolean;
+}
+
 export interface DesignCode extends GeometryCode {
   id: string;
   title: string;
@@ -32,4 +68,10 @@ export interface DesignCode extends GeometryCode {
    * Design tension strength of an unperforated plate under this code, the denominator of efficiency.
    */
   unperforatedStrength(spec: PlateSpec): { value_N: number; definition: string };
+  /** Search-space limits for a bolt size and pattern. */
+  searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutShape["pattern"]): SearchLimits;
+  /** Admissible upper bound of the joint strength of a layout shape (see DEVELOPERS.md). */
+  strengthBound(scenario: CheckableScenario, shape: LayoutShape): StrengthBound;
+  /** Property classes the code allows for an assembly (friction grip: 8.8 and 10.9 under IS 800). */
+  classesFor(assembly: "bearing" | "friction-grip"): readonly string[];
 }

@@ -23,6 +23,8 @@ import {
 import { GRADES, plateStrength } from "./materials.js";
 import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule } from "./spacing.js";
 import { Tdg, Tdn } from "./tension-member.js";
+import { searchLimits, strengthBound } from "./search-bounds.js";
+import { PROPERTY_CLASSES } from "../../catalogue/bolts.js";
 
 function scopeErrors(scenario: Scenario): ScopeError[] {
   const errors: ScopeError[] = [];
@@ -122,4 +124,7 @@ export const IS800_2007: DesignCode = {
   scopeErrors,
   checkJoint,
   unperforatedStrength,
+  searchLimits,
+  strengthBound,
+  classesFor: (assembly) => (assembly === "friction-grip" ? ["8.8", "10.9"] : PROPERTY_CLASSES),
 };
