@@ -28,6 +28,8 @@ export interface SearchLimits {
   endMin_mm: number;
   /** Largest end distance searched (a stated bound, not a rule). */
   endMax_mm: number;
+  /** Largest end distance at the butt searched (butt splices). */
+  endAtButtMax_mm: number;
   edgeMin_mm: number;
   edgeMax_mm: number;
   /** The limits in words, with their clauses, for the output. */
@@ -53,6 +55,12 @@ export interface StrengthBound {
   jointStrength_N: number;
   check: string;
   serviceOk: boolean;
+  /**
+   * Upper bound of what one bolt can carry in the bolt-group checks (shear, bearing, slip at the
+   * factored load), expressed as joint tension per bolt: no layout of n bolts carries more than
+   * n times this.
+   */
+  perBolt_N: number;
 }
 
 export interface DesignCode extends GeometryCode {
@@ -72,6 +80,8 @@ export interface DesignCode extends GeometryCode {
   searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutShape["pattern"]): SearchLimits;
   /** Admissible upper bound of the joint strength of a layout shape (see DEVELOPERS.md). */
   strengthBound(scenario: CheckableScenario, shape: LayoutShape): StrengthBound;
+  /** Design rupture strength of net section per mm of net width, N/mm (IS 800: 0.9·t·fu/γm1). */
+  netStrengthPerWidth(spec: PlateSpec): number;
   /** Property classes the code allows for an assembly (friction grip: 8.8 and 10.9 under IS 800). */
   classesFor(assembly: "bearing" | "friction-grip"): readonly string[];
 }

@@ -2,7 +2,6 @@
  * YAML text → typed Scenario (core units), or an InputError naming the field path and the reason.
  * No file system here: the CLI reads the file and hands over its text.
  */
-import { parseDocument } from "yaml";
 import { findCode, codeIds } from "../codes/registry.js";
 import type { DesignCode } from "../codes/types.js";
 import { isBoltSize, isPropertyClass, BOLT_SIZES_MM, PROPERTY_CLASSES, type PropertyClass } from "../catalogue/bolts.js";
@@ -10,37 +9,10 @@ import { buildJoint } from "../geometry/joint-builder.js";
 import { geometryErrors } from "../geometry/validate.js";
 import type { BoltSpec, CheckableScenario, EdgePreparation, HoleType, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
 import { scenarioSchema, type ScenarioFile } from "./schema.js";
+import { InputError, MAX_FILE_BYTES, parseYaml } from "./yaml.js";
+import { validateCosts } from "./costs.js";
 
-/** Bad input: the field path and the reason. Printed as one line, exit code 2. */
-export class InputError extends Error {
-  constructor(
-    readonly path: string,
-    readonly reason: string,
-  ) {
-    super(path ? `${path}: ${reason}` : reason);
-  }
-}
-
-/** Largest scenario file accepted, bytes. */
-export const MAX_FILE_BYTES = 1_000_000;
-
-/** Parse YAML text into a plain value, rejecting syntax errors, duplicate keys and alias bombs. */
-export function parseYaml(text: string): unknown {
-  if (text.length > MAX_FILE_BYTES) throw new InputError("", `file is larger than ${MAX_FILE_BYTES} bytes`);
-  const doc = parseDocument(text, { uniqueKeys: true, prettyErrors: true, strict: true });
-  const err = doc.errors[0];
-  if (err) {
-    const line = err.linePos?.[0];
-    const where = line ? `line ${line.line}, column ${line.col}` : "YAML";
-    const reason = err.message.split("\n")[0]!.replace(/ at line \d+, column \d+:?$/, "");
-    throw new InputError(where, `YAML syntax error: ${reason}`);
-  }
-  try {
-    return doc.toJS({ maxAliasCount: 100 });
-  } catch (e) {
-    throw new InputError("", `YAML could not be read: ${e instanceof Error ? e.message.split("\n")[0] : String(e)}`);
-  }
-}
+export { InputError, MAX_FILE_BYTES, parseYaml };
 
 function issuePath(path: ReadonlyArray<PropertyKey>): string {
   return path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");
@@ -205,6 +177,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     },
   };
   if (file.project !== undefined) scenario.project = file.project;
+  if (file.costs !== undefined) scenario.costs = validateCosts(file.costs, "costs");
   if (file.load.service_tension !== undefined) {
     if (file.load.service_tension > file.load.factored_tension) throw new InputError("load.service_tension", "exceeds the factored tension");
     scenario.load.serviceTension_N = file.load.service_tension;
@@ -231,6 +204,8 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
       spec.classes = s.classes as PropertyClass[];
     }
     if (s.step !== undefined) spec.step_mm = s.step;
+    if (s.patterns !== undefined) spec.patterns = [...new Set(s.patterns)];
+    if (s.max_along !== undefined) spec.maxAlong = s.max_along;
     if (s.max_splice_length !== undefined) spec.maxSpliceLength_mm = s.max_splice_length;
     if (s.max_across !== undefined) spec.maxAcross = s.max_across;
     if (s.gauge !== undefined) spec.fixedGauge_mm = s.gauge;

@@ -104,6 +104,8 @@ const layout = z.strictObject({
 });
 
 const search = z.strictObject({
+  patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).optional(),
+  max_along: count(LIMITS.linesAlong).optional(),
   sizes: z.array(boltSize).min(1).optional(),
   classes: z.array(propertyClass).min(1).optional(),
   step: length(1000).optional(),
@@ -142,6 +144,7 @@ export const scenarioSchema = z.strictObject({
   bolts: bolts.optional(),
   layout: layout.optional(),
   search: search.optional(),
+  costs: z.unknown().optional(),
   options: options.default({ exposed_to_corrosion: false, bolt_net_area: "0.78-gross", bolt_strength: "minimum", net_section_load: "full" }),
 });
 

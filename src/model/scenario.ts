@@ -96,6 +96,8 @@ export type LayoutSpec =
     };
 
 export interface SearchSpec {
+  patterns?: Array<"grid" | "staggered" | "tapered">;
+  maxAlong?: number;
   sizes_mm?: number[];
   classes?: PropertyClass[];
   step_mm?: number;
@@ -134,6 +136,8 @@ export interface Scenario {
   layout?: LayoutSpec;
   search?: SearchSpec;
   options: CheckOptions;
+  /** The scenario's own cost entries (validated by src/io/costs.ts), applied over the catalogue. */
+  costs?: unknown;
   /** Free text the engineer wants carried into the output (project, member mark). */
   project?: string;
 }

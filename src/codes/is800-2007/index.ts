@@ -126,5 +126,6 @@ export const IS800_2007: DesignCode = {
   unperforatedStrength,
   searchLimits,
   strengthBound,
+  netStrengthPerWidth: (spec) => Tdn(spec.thickness_mm, plateStrength(spec).fu_MPa),
   classesFor: (assembly) => (assembly === "friction-grip" ? ["8.8", "10.9"] : PROPERTY_CLASSES),
 };

@@ -41,11 +41,18 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
   const outside = outsidePlates(scenario);
   const tOut = Math.min(...outside.map((p) => p.thickness_mm));
   const fyMax = Math.max(...plates.map((p) => plateStrength(p).fy_MPa));
-  const along = Math.min(16 * tMin, 200);
+  const along = Math.min(16 * tMin, 200, 100 + 4 * tOut);
   const across = Math.min(32 * tMin, 300);
   const factor = plates.some(roughEdge) ? 1.7 : 1.5;
   const maxEdge = scenario.options.exposedToCorrosion ? 40 + 4 * tOut : 12 * tOut * epsilon(fyMax);
   const staggered = pattern === "staggered";
+  // Butt splices: the pitch across the butt in the cover plates, 2·e(butt) + gap, is a pitch along a
+  // gauge line of the covers (cl. 10.2.3.2, and 10.2.3.3 for an outside cover), never relaxed for stagger.
+  const covers = scenario.plates.covers;
+  const endAtButtMax =
+    covers.length > 0
+      ? (Math.min(200, ...covers.map((c) => 16 * c.thickness_mm), ...covers.filter((c) => outside.includes(c)).map((c) => 100 + 4 * c.thickness_mm)) - scenario.splice.buttGap_mm) / 2
+      : Infinity;
   return {
     pitchMin_mm: staggered ? 1.25 * d_mm : 2.5 * d_mm,
     pitchMax_mm: staggered ? Math.min(1.5 * along, across) / 2 : along,
@@ -53,11 +60,12 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     gaugeMax_mm: across,
     endMin_mm: factor * d0,
     endMax_mm: Math.min(Math.max(factor * d0, 3 * d0), maxEdge),
+    endAtButtMax_mm: Math.min(Math.max(factor * d0, 3 * d0), maxEdge, endAtButtMax),
     edgeMin_mm: factor * d0,
     edgeMax_mm: maxEdge,
     statement:
-      `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200), 32t, 300)/2" : "min(16t, 200)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
-      `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances searched up to 3d0 (kb's e-term reaches 1)`,
+      `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200, 100 + 4t), 32t, 300)/2" : "min(16t, 200, 100 + 4t)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
+      `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances searched up to 3d0 (kb's e-term reaches 1)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}`,
   };
 }
 
@@ -78,7 +86,10 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
   const planes = splice.type === "butt-double-cover" ? 2 : 1;
   const lj = shape.pitch_mm === undefined ? 0 : (m - 1) * shape.pitch_mm;
   const blj = beta_lj(lj, d);
-  const best: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true };
+  const best: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity };
+  const perBolt = (capacity: number) => {
+    best.perBolt_N = Math.min(best.perBolt_N, capacity / n);
+  };
   const keep = (capacity: number, check: string) => {
     if (capacity < best.jointStrength_N) {
       best.jointStrength_N = capacity;
@@ -99,10 +110,14 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     if (!slipAtUltimate) {
       const v = Vdsb({ fub_MPa: mat.fub_MPa, nn, ns: planes - nn, Anb_mm2: Anb, Asb_mm2: shankArea_mm2(d), beta_lj: blj, beta_lg: beta_lg(grip, d, blj), beta_pkg: beta_pkg(packs[i] ?? 0) });
       keep(n * v, "bolt-shear");
+      perBolt(n * v);
     }
     if (friction) {
       const v = Vdsf(bolts.slipFactor ?? 0, planes, holeFactorKh(bolts.hole, bolts.slotDirection), F0(Anb, mat.fub_MPa), bolts.slipAt ?? "service", blj);
-      if (bolts.slipAt === "ultimate") keep(n * v, "slip");
+      if (bolts.slipAt === "ultimate") {
+        keep(n * v, "slip");
+        perBolt(n * v);
+      }
       else if (n * v < (load.serviceTension_N ?? load.factoredTension_N)) best.serviceOk = false;
     }
   });
@@ -137,7 +152,9 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
         const p_eff = shape.pattern === "staggered" ? 2 * shape.pitch_mm : shape.pitch_mm;
         kbUpper = kbFactor(p.end, p_eff, hole.along_mm, mat.fub_MPa, st.fu_MPa);
       }
-      keep((n * Vdpb(kbUpper, d, t, st.fu_MPa, bearingHoleFactor(bolts.hole))) / p.share, "bolt-bearing");
+      const bearing = (n * Vdpb(kbUpper, d, t, st.fu_MPa, bearingHoleFactor(bolts.hole))) / p.share;
+      keep(bearing, "bolt-bearing");
+      perBolt(bearing);
     }
   }
   return best;

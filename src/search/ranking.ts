@@ -1,0 +1,71 @@
+/**
+ * Ranking of layouts. Keys compare lexicographically: numbers first, then a fixed text order.
+ *   cost:       cost, bolts, −efficiency, then the fixed order
+ *   bolts:      bolts, cost, −efficiency, then the fixed order
+ *   efficiency: −efficiency, bolts, cost, then the fixed order
+ *   length:     splice length, bolts, −efficiency, cost, then the fixed order
+ * The fixed order: size, class, pattern, counts, pitch, gauge, end distance, end distance at the butt,
+ * cover thickness.
+ */
+export type RankBy = "cost" | "bolts" | "efficiency" | "length";
+export const RANK_BY: readonly RankBy[] = ["cost", "bolts", "efficiency", "length"];
+
+export interface Key {
+  numbers: number[];
+  text: string;
+}
+
+export interface Measures {
+  cost: number;
+  bolts: number;
+  efficiency: number;
+  length_mm: number;
+}
+
+/** Keys are rounded so that the same value computed two ways compares equal. */
+const r = (v: number) => (Number.isFinite(v) ? Math.round(v * 1e6) / 1e6 : v);
+
+export function rankKey(rankBy: RankBy, m: Measures, text: string): Key {
+  const numbers =
+    rankBy === "cost"
+      ? [m.cost, m.bolts, -m.efficiency]
+      : rankBy === "bolts"
+        ? [m.bolts, m.cost, -m.efficiency]
+        : rankBy === "efficiency"
+          ? [-m.efficiency, m.bolts, m.cost]
+          : [m.length_mm, m.bolts, -m.efficiency, m.cost];
+  return { numbers: numbers.map(r), text };
+}
+
+/**
+ * A lower bound of every key below a search node: known leading measures, then −∞.
+ * `known` holds what the node fixes (each a lower bound of its descendants' values).
+ */
+export function lowerKey(rankBy: RankBy, known: { cost?: number; bolts?: number; efficiencyUpper?: number; length_mm?: number }): Key {
+  const lo = -Infinity;
+  const c = known.cost ?? lo;
+  const b = known.bolts ?? lo;
+  const e = known.efficiencyUpper === undefined ? lo : -known.efficiencyUpper;
+  const l = known.length_mm ?? lo;
+  const numbers =
+    rankBy === "cost" ? [c, lo, lo] : rankBy === "bolts" ? [b, known.bolts === undefined ? lo : c, lo] : rankBy === "efficiency" ? [e, lo, lo] : [l, lo, lo, lo];
+  return { numbers: numbers.map(r), text: "" };
+}
+
+export function compareKeys(a: Key, b: Key): number {
+  const n = Math.max(a.numbers.length, b.numbers.length);
+  for (let i = 0; i < n; i++) {
+    const x = a.numbers[i] ?? -Infinity;
+    const y = b.numbers[i] ?? -Infinity;
+    if (x < y) return -1;
+    if (x > y) return 1;
+  }
+  return a.text < b.text ? -1 : a.text > b.text ? 1 : 0;
+}
+
+const pad = (v: number | undefined) => (v === undefined ? "-" : v.toFixed(1).padStart(8, "0"));
+
+/** The fixed order of the remaining fields, as text that sorts the same way. */
+export function fixedOrderText(f: { size_mm: number; propertyClass: string; pattern: string; counts: number[]; pitch_mm: number; gauge_mm: number; end_mm: number; endAtButt_mm: number | undefined; coverThickness_mm: number | undefined }): string {
+  return [pad(f.size_mm), f.propertyClass.padStart(4, "0"), f.pattern, f.counts.map((c) => String(c).padStart(2, "0")).join("-"), pad(f.pitch_mm), pad(f.gauge_mm), pad(f.end_mm), pad(f.endAtButt_mm), pad(f.coverThickness_mm)].join("|");
+}

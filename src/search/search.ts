@@ -1,0 +1,429 @@
+/**
+ * Layout search: the best layouts over the declared space, proven by best-first enumeration.
+ *
+ * Every node of the search carries a lower bound of the ranking key of everything below it; nodes
+ * are taken from a heap in key order, so a layout is reported only when nothing not yet examined can
+ * rank above it. Candidates are skipped only by admissible bounds (DEVELOPERS.md, "Search"); every
+ * layout reported has passed the full checker (engine/check.ts) on its hole coordinates.
+ */
+import type { CostBreakdown, CostTable } from "../catalogue/costs.js";
+import { spliceCost } from "../catalogue/costs.js";
+import type { DesignCode, LayoutShape } from "../codes/types.js";
+import { checkScenario } from "../engine/check.js";
+import { buildJoint } from "../geometry/joint-builder.js";
+import type { Joint } from "../model/joint.js";
+import type { CheckKind, CheckReport } from "../model/results.js";
+import type { CheckableScenario, LayoutSpec, Scenario } from "../model/scenario.js";
+import { MinHeap } from "./heap.js";
+import { compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
+import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, type Family, type SearchSpace } from "./space.js";
+import { nextTaperedCounts, type TaperedProblem } from "./tapered-ip.js";
+
+export interface Candidate {
+  family: Family;
+  layout: LayoutSpec;
+  scenario: CheckableScenario;
+  joint: Joint;
+  report: CheckReport;
+  cost: CostBreakdown;
+  counts: number[];
+  key: Key;
+  /** How a tapered count vector was chosen. */
+  chosenBy?: "ip" | "enumeration";
+}
+
+export interface SearchStats {
+  families: number;
+  familiesSkippedByBound: number;
+  nodes: number;
+  candidatesSkippedByBound: number;
+  fullChecks: number;
+  integerProgrammes: number;
+  enumerationFallbacks: number;
+  elapsed_ms?: number;
+}
+
+export interface SearchOutcome {
+  space: SearchSpace;
+  spaceText: string[];
+  results: Candidate[];
+  stats: SearchStats;
+  /** Why nothing complies, when results is empty. */
+  noResultReason?: string;
+}
+
+export interface SearchOptions {
+  top: number;
+  rankBy: RankBy;
+}
+
+/**
+ * Checks whose result cannot change with the gauge, per pattern (proof in DEVELOPERS.md, "Search").
+ * Used two ways over a sweep of gauges: a failure of one of them fails every gauge; a passing layout
+ * governed by one of them cannot be beaten on efficiency by another gauge.
+ */
+const GAUGE_FREE: Record<"grid" | "staggered" | "tapered", ReadonlySet<CheckKind>> = {
+  grid: new Set<CheckKind>(["bolt-shear", "bolt-bearing", "slip", "gross-yield", "grip-length", "min-end-distance", "max-pitch", "max-edge-line-pitch", "net-section", "group-centroid"]),
+  staggered: new Set<CheckKind>(["bolt-shear", "bolt-bearing", "slip", "gross-yield", "grip-length", "min-end-distance", "max-pitch", "max-edge-line-pitch", "group-centroid"]),
+  tapered: new Set<CheckKind>(["bolt-shear", "slip", "gross-yield", "grip-length", "min-end-distance", "max-pitch", "max-edge-line-pitch", "group-centroid"]),
+};
+
+/**
+ * Sweep gauges in ascending order (the fixed tie order) through the full checker, pushing each passing
+ * layout. Stops at a failure no gauge can mend, or at a pass whose governing check no gauge can raise.
+ */
+function sweepGauges(ctx: SearchContext, f: Family, gauges: readonly number[], layoutAt: (g: number) => LayoutSpec, counts: number[], rankBy: RankBy, stats: SearchStats, found: (c: Candidate) => void, rejected: (r: CheckReport) => void): void {
+  const gaugeFree = GAUGE_FREE[f.pattern];
+  for (const g of gauges) {
+    const { candidate, report } = evaluate(ctx, f, layoutAt(g), counts, rankBy, stats);
+    if (candidate) {
+      found(candidate);
+      const governing = report.checks.find((c) => c.id === report.governing);
+      if (governing && gaugeFree.has(governing.kind)) return;
+    } else {
+      rejected(report);
+      if (report.checks.some((c) => !c.pass && gaugeFree.has(c.kind))) return;
+    }
+  }
+}
+
+/** Cost and splice length are linear in pitch and end distances within a family: fitted from joints. */
+interface LinearModel {
+  c0: number;
+  cp: number;
+  ce: number;
+  ceb: number;
+  l0: number;
+  lp: number;
+  le: number;
+  leb: number;
+}
+
+type Node =
+  | { kind: "family"; key: Key; f: Family }
+  | { kind: "dims"; key: Key; f: Family; ip: number; ie: number; ieb: number }
+  | { kind: "tapered"; key: Key; f: Family; ip: number; ie: number; ieb: number; gauges: number[]; N: number; problem: TaperedProblem; tried: number[][] }
+  | { kind: "result"; key: Key; c: Candidate };
+
+export interface SearchContext {
+  scenario: Scenario;
+  code: DesignCode;
+  costs: CostTable;
+}
+
+function narrowest(s: Scenario): number {
+  return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
+}
+
+/** Evaluate one layout through the full checker; null when it fails. */
+export function evaluate(ctx: SearchContext, f: Family, layout: LayoutSpec, counts: number[], rankBy: RankBy, stats: SearchStats): { candidate: Candidate | null; report: CheckReport } {
+  const scenario = scenarioOf(f, layout);
+  stats.fullChecks++;
+  const { joint, report } = checkScenario(scenario, ctx.code);
+  if (!report.pass) return { candidate: null, report };
+  const cost = spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly);
+  const pitch = layout.kind === "holes" ? 0 : layout.pitch_mm;
+  const gauge = layout.kind === "holes" ? 0 : layout.gauge_mm;
+  const end = layout.endDistance_mm;
+  const endAtButt = layout.kind === "holes" || ctx.scenario.splice.type === "lap" ? undefined : layout.endDistanceAtButt_mm;
+  const text = fixedOrderText({ size_mm: f.size_mm, propertyClass: f.propertyClass, pattern: f.pattern, counts, pitch_mm: pitch, gauge_mm: gauge, end_mm: end, endAtButt_mm: endAtButt, coverThickness_mm: f.coverThickness_mm });
+  const key = rankKey(rankBy, { cost: cost.total, bolts: joint.holes.length, efficiency: report.efficiency, length_mm: joint.spliceLength_mm }, text);
+  return { candidate: { family: f, layout, scenario, joint, report, cost, counts, key }, report };
+}
+
+/** The identity of a layout apart from its gauge: results keep the best gauge of each. */
+export function identityOf(c: Candidate): string {
+  const parts = c.key.text.split("|");
+  parts.splice(5, 1); // drop the gauge field of the fixed order
+  return parts.join("|");
+}
+
+function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel | null {
+  const p0 = f.pitches_mm[0] ?? 0;
+  const e0 = f.ends_mm[0];
+  if (e0 === undefined) return null;
+  const eb0 = f.endsAtButt_mm[0];
+  const g = f.gauges_mm[0] ?? 0;
+  const at = (p: number, e: number, eb: number | undefined) => {
+    const layout = layoutOf(f, p, g, e, eb, counts);
+    const joint = buildJoint(scenarioOf(f, layout), ctx.code); // geometry only: the joint the checker builds
+    return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
+  };
+  const base = at(p0, e0, eb0);
+  const dp = at(p0 + 1, e0, eb0);
+  const de = at(p0, e0 + 1, eb0);
+  const deb = eb0 === undefined ? base : at(p0, e0, eb0 + 1);
+  return {
+    c0: base.cost - (dp.cost - base.cost) * p0 - (de.cost - base.cost) * e0 - (deb.cost - base.cost) * (eb0 ?? 0),
+    cp: dp.cost - base.cost,
+    ce: de.cost - base.cost,
+    ceb: deb.cost - base.cost,
+    l0: base.length - (dp.length - base.length) * p0 - (de.length - base.length) * e0 - (deb.length - base.length) * (eb0 ?? 0),
+    lp: dp.length - base.length,
+    le: de.length - base.length,
+    leb: deb.length - base.length,
+  };
+}
+
+
+
+/** Best `top` layouts over the declared space, ranked by `rankBy`, proven by best-first search. */
+export function searchLayouts(ctx: SearchContext, options: SearchOptions): SearchOutcome {
+  const { scenario, code } = ctx;
+  const space = resolveSpace(scenario, code, ctx.costs);
+  const fams = families(scenario, code, ctx.costs, space);
+  const T = scenario.load.factoredTension_N;
+  const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
+  const heap = new MinHeap<Node>((a, b) => compareKeys(a.key, b.key) < 0);
+  const models = new Map<Family, LinearModel | null>();
+  const problems = new Map<Family, TaperedProblem>();
+  const boundReasons = new Map<string, number>();
+  const rankBy = options.rankBy;
+  const width = narrowest(scenario);
+  const transferred = scenario.options.netSectionLoad === "transferred";
+
+  const unperforated = Math.min(
+    code.unperforatedStrength(scenario.plates.mainA).value_N,
+    code.unperforatedStrength(scenario.plates.mainB).value_N,
+  );
+
+  const shapeOf = (f: Family, counts: number[], p?: number, e?: number, eb?: number): LayoutShape => {
+    const shape: LayoutShape = { pattern: f.pattern, countsPerLine: counts };
+    if (p !== undefined && f.lines > 1) shape.pitch_mm = p;
+    const eMax = f.ends_mm[f.ends_mm.length - 1];
+    const ebMax = f.endsAtButt_mm[f.endsAtButt_mm.length - 1];
+    const end = e ?? eMax;
+    const endB = eb ?? ebMax ?? end;
+    if (end !== undefined) shape.endDistance_mm = end;
+    if (endB !== undefined) shape.endDistanceAtButt_mm = endB;
+    return shape;
+  };
+
+  const model = (f: Family, counts: number[]) => {
+    if (!models.has(f)) models.set(f, fitLinear(ctx, f, counts));
+    return models.get(f)!;
+  };
+  const costAt = (m: LinearModel, p: number, e: number, eb: number | undefined) => m.c0 + m.cp * p + m.ce * e + m.ceb * (eb ?? 0);
+  const lengthAt = (m: LinearModel, p: number, e: number, eb: number | undefined) => m.l0 + m.lp * p + m.le * e + m.leb * (eb ?? 0);
+
+  /** Tapered lower bound on the bolt count from the per-bolt capacity (dimensions most favourable). */
+  const taperedNmin = (f: Family, p?: number, e?: number, eb?: number): number => {
+    const b = code.strengthBound(f.base as CheckableScenario, shapeOf(f, Array(f.lines).fill(1), p, e, eb));
+    return Math.max(f.lines, Math.ceil(T / b.perBolt_N - 1e-9));
+  };
+
+  // Seed: one node per family, keyed by its cheapest dimensions; families a bound rules out are skipped.
+  for (const f of fams) {
+    if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
+    const counts = f.countsPerLine ?? Array(f.lines).fill(1);
+    const bound = f.countsPerLine ? code.strengthBound(f.base as CheckableScenario, shapeOf(f, counts)) : null;
+    if (bound && (bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk)) {
+      stats.familiesSkippedByBound++;
+      boundReasons.set(bound.check, (boundReasons.get(bound.check) ?? 0) + 1);
+      continue;
+    }
+    // Seed key: the family's bolts and holes (plate mass left out: a lower bound of every member).
+    const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedNmin(f);
+    // Efficiency never exceeds 1: the joint strength is at most the thinner plate's gross yield and its
+    // net rupture, each at most the unperforated strength. Grid and staggered families have a tighter bound.
+    const efficiencyUpper = bound ? Math.min(1, bound.jointStrength_N / unperforated) : 1;
+    heap.push({
+      kind: "family",
+      f,
+      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCost(ctx, f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
+    });
+  }
+
+  const results: Candidate[] = [];
+  const seen = new Set<string>();
+  const maxLength = space.maxSpliceLength_mm ?? Infinity;
+
+  const pushDims = (f: Family, ip: number, ie: number, ieb: number, efficiencyUpper: number) => {
+    const p = f.pitches_mm[ip];
+    const e = f.ends_mm[ie];
+    const eb = f.endsAtButt_mm[ieb];
+    if (p === undefined || e === undefined || (ieb > 0 && eb === undefined)) return;
+    const counts = f.countsPerLine ?? Array(f.lines).fill(1);
+    const m = model(f, counts)!;
+    const length = lengthAt(m, p, e, eb);
+    if (length > maxLength + 1e-9) return; // longer in every successor too
+    const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedNmin(f);
+    const cost = costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * perBoltCost(ctx, f));
+    heap.push({ kind: "dims", f, ip, ie, ieb, key: lowerKey(rankBy, { cost, bolts: totalBolts(f, N), efficiencyUpper, length_mm: length }) });
+  };
+
+  let lastRejection: { check: string; value: string } | null = null;
+  const found = (c: Candidate) => heap.push({ kind: "result", key: c.key, c });
+  const rejected = (report: CheckReport) => {
+    const first = report.checks.find((c) => !c.pass);
+    if (first) {
+      lastRejection = {
+        check: `${first.title} (${first.component})`,
+        value: first.type === "strength" ? `${(first.demand_N / 1000).toFixed(1)} kN > ${(first.resistance_N / 1000).toFixed(1)} kN` : `${first.value_mm.toFixed(1)} mm against a limit of ${first.limit_mm.toFixed(1)} mm`,
+      };
+    }
+  };
+
+  while (heap.size > 0 && results.length < options.top) {
+    const node = heap.pop()!;
+    stats.nodes++;
+    if (node.kind === "result") {
+      const id = identityOf(node.c);
+      if (seen.has(id)) continue;
+      seen.add(id);
+      results.push(node.c);
+      continue;
+    }
+    if (node.kind === "family") {
+      const effUpper = -(node.key.numbers[0] ?? 0);
+      if (model(node.f, node.f.countsPerLine ?? Array(node.f.lines).fill(1))) pushDims(node.f, 0, 0, 0, rankBy === "efficiency" ? effUpper : Infinity);
+      continue;
+    }
+    const f = node.f;
+    const effUpper = rankBy === "efficiency" ? -(node.key.numbers[0] ?? 0) : Infinity;
+    if (node.kind === "dims") {
+      // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing.
+      pushDims(f, node.ip + 1, node.ie, node.ieb, effUpper);
+      if (node.ip === 0) pushDims(f, 0, node.ie + 1, node.ieb, effUpper);
+      if (node.ip === 0 && node.ie === 0) pushDims(f, 0, 0, node.ieb + 1, effUpper);
+      const p = f.pitches_mm[node.ip]!;
+      const e = f.ends_mm[node.ie]!;
+      const eb = f.endsAtButt_mm[node.ieb];
+      if (f.countsPerLine) {
+        const bound = code.strengthBound(f.base as CheckableScenario, shapeOf(f, f.countsPerLine, p, e, eb));
+        if (bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk) {
+          stats.candidatesSkippedByBound++;
+          continue;
+        }
+        sweepGauges(ctx, f, f.gauges_mm, (g) => layoutOf(f, p, g, e, eb), f.countsPerLine, rankBy, stats, found, rejected);
+      } else {
+        // Tapered: one count-vector generator for these dimensions; each vector is tried at every gauge
+        // that fits its widest line.
+        const N0 = taperedNmin(f, p, e, eb);
+        const gauges = taperedGauges(f, width, space);
+        const gMin = gauges[0];
+        if (gMin === undefined) continue;
+        const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
+        if (kcap < 2) continue;
+        let problem = problems.get(f);
+        if (!problem || problem.kmax[0] !== kcap) {
+          problem = taperedProblem(ctx, f, kcap, transferred);
+          problems.set(f, problem);
+        }
+        const m = model(f, Array(f.lines).fill(1))!;
+        heap.push({
+          kind: "tapered",
+          f,
+          ip: node.ip,
+          ie: node.ie,
+          ieb: node.ieb,
+          gauges,
+          N: N0,
+          problem,
+          tried: Array.from({ length: kcap }, (_, i) => Array(f.lines).fill(i + 1)),
+          key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
+        });
+      }
+      continue;
+    }
+    // Tapered generator: next vector with N bolts, or move to N + 1.
+    const p = f.pitches_mm[node.ip]!;
+    const e = f.ends_mm[node.ie]!;
+    const eb = f.endsAtButt_mm[node.ieb];
+    const maxN = node.problem.kmax.reduce((a, b) => a + b, 0);
+    stats.integerProgrammes++;
+    const answer = nextTaperedCounts(node.problem, node.N, node.tried);
+    const m = model(f, Array(f.lines).fill(1))!;
+    if (!answer) {
+      if (node.N + 1 <= maxN) {
+        const N = node.N + 1;
+        heap.push({ ...node, N, key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }) });
+      }
+      continue;
+    }
+    if (answer.by === "enumeration") stats.enumerationFallbacks++;
+    const tried = [...node.tried, answer.counts];
+    heap.push({ ...node, tried });
+    const vectorBound = code.strengthBound(f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
+    if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
+      stats.candidatesSkippedByBound++;
+      continue;
+    }
+    const widest = Math.max(...answer.counts);
+    const fitting = node.gauges.filter((g) => width - (widest - 1) * g >= 2 * f.limits.edgeMin_mm - 1e-9);
+    sweepGauges(ctx, f, fitting, (g) => layoutOf(f, p, g, e, eb, answer.counts), answer.counts, rankBy, stats, (c) => {
+      c.chosenBy = answer.by;
+      found(c);
+    }, rejected);
+  }
+
+  const outcome: SearchOutcome = { space, spaceText: describeSpace(space, fams, scenario), results, stats };
+  if (results.length === 0) outcome.noResultReason = explainNothing(ctx, unperforated, boundReasons, lastRejection, space);
+  return outcome;
+}
+
+/**
+ * Least added cost of one more bolt on each side of the joint (tapered lower bounds): its assemblies,
+ * friction-grip tightening, and the holes it makes in the plates it passes (at least the two plates
+ * it joins).
+ */
+function perBoltCost(ctx: SearchContext, f: Family): number {
+  const price = ctx.costs.boltAssembly[`M${f.size_mm}`]?.[f.propertyClass] ?? 0;
+  const sides = f.base.splice.type === "lap" ? 1 : 2;
+  return sides * (price + (f.base.bolts.assembly === "friction-grip" ? ctx.costs.frictionGripExtra : 0) + 2 * ctx.costs.hole);
+}
+
+function sidesOf(f: Family): number {
+  return f.base.splice.type === "lap" ? 1 : 2;
+}
+
+/** Bolts in the whole joint for n per group. */
+function totalBolts(f: Family, perGroup: number): number {
+  return f.base.splice.type === "lap" ? perGroup : 2 * perGroup;
+}
+
+function taperedGauges(f: Family, width: number, space: SearchSpace): number[] {
+  if (space.fixedGauge_mm !== undefined) return [space.fixedGauge_mm];
+  const out: number[] = [];
+  const step = space.step_mm;
+  const lo = Math.ceil(f.limits.gaugeMin_mm / step - 1e-9) * step;
+  for (let g = lo; g <= Math.min(f.limits.gaugeMax_mm, width - 2 * f.limits.edgeMin_mm) + 1e-9; g += step) out.push(Math.round(g * 1e6) / 1e6);
+  return out;
+}
+
+function taperedProblem(ctx: SearchContext, f: Family, kmax: number, transferred: boolean): TaperedProblem {
+  const s = f.base as CheckableScenario;
+  const hole = ctx.code.holeDimensions(f.size_mm, s.bolts.hole, s.bolts.slotDirection);
+  const lines = f.lines;
+  const nearer = (i: number, towardLow: boolean) => Array.from({ length: lines }, (_, l) => l).filter((l) => (towardLow ? l <= i : l >= i));
+  const rows: TaperedProblem["rows"] = [];
+  const add = (spec: typeof s.plates.mainA, share: number, towardLow: boolean) => {
+    rows.push({ share, perWidth_N_per_mm: ctx.code.netStrengthPerWidth(spec), width_mm: spec.width_mm, atOrNearer: Array.from({ length: lines }, (_, i) => nearer(i, towardLow)) });
+  };
+  // Lines are numbered from main plate B's end (local x). Main plates and lap plate B bear toward line 0;
+  // cover plates and lap plate A bear toward the last line.
+  if (s.splice.type === "lap") {
+    add(s.plates.mainB, 1, true);
+    add(s.plates.mainA, 1, false);
+  } else {
+    add(s.plates.mainA, 1, true);
+    add(s.plates.mainB, 1, true);
+    const areas = s.plates.covers.map((c) => c.width_mm * c.thickness_mm);
+    const total = areas.reduce((a, b) => a + b, 0);
+    s.plates.covers.forEach((c, i) => add(c, (areas[i] ?? 0) / total, false));
+  }
+  return { lines, kmax: Array(lines).fill(kmax), holeAcross_mm: hole.across_mm, tension_N: s.load.factoredTension_N, transferred, rows };
+}
+
+
+function explainNothing(ctx: SearchContext, unperforated: number, reasons: Map<string, number>, last: { check: string; value: string } | null, space: SearchSpace): string {
+  const T = ctx.scenario.load.factoredTension_N;
+  if (T > unperforated) {
+    return `the factored tension ${(T / 1000).toFixed(1)} kN exceeds the design strength of the unperforated main plate, ${(unperforated / 1000).toFixed(1)} kN: no bolt layout can carry it`;
+  }
+  const top = [...reasons.entries()].sort((a, b) => b[1] - a[1])[0];
+  const parts: string[] = [];
+  if (top) parts.push(`${top[1]} families ruled out by the ${top[0]} bound`);
+  if (last) parts.push(`the last candidates failed ${last.check}: ${last.value}`);
+  return `no layout in the declared space passes every check (${parts.join("; ") || "no candidate in the space"}); widen the space (sizes ${space.sizes_mm.map((d) => `M${d}`).join(", ")}, classes ${space.classes.join(", ")}, at most ${space.maxAlong} lines)`;
+}

@@ -1,0 +1,222 @@
+/**
+ * The declared search space: every choice the search makes, with its range, from the scenario's
+ * search section, the cost catalogue and the design code's own limits. The output states it in full.
+ */
+import { boltPrice, type CostTable } from "../catalogue/costs.js";
+import type { PropertyClass } from "../catalogue/bolts.js";
+import type { DesignCode, SearchLimits } from "../codes/types.js";
+import type { BoltAssembly, BoltSpec, CheckableScenario, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
+
+export type SearchPattern = "grid" | "staggered" | "tapered";
+export const SEARCH_PATTERNS: readonly SearchPattern[] = ["grid", "staggered", "tapered"];
+
+/** Defaults of the declared space where the scenario is silent. */
+export const SEARCH_DEFAULTS = {
+  step_mm: 5,
+  maxAlong: 12,
+} as const;
+
+export interface SearchSpace {
+  sizes_mm: number[];
+  classes: PropertyClass[];
+  assembly: BoltAssembly;
+  patterns: SearchPattern[];
+  step_mm: number;
+  /** Most transverse lines along the force (per side of the butt). */
+  maxAlong: number;
+  maxAcross?: number;
+  maxSpliceLength_mm?: number;
+  fixedGauge_mm?: number;
+  /** Cover plate thicknesses tried (butt splices); the scenario's own cover thickness if none listed. */
+  coverThicknesses_mm: number[];
+}
+
+/** One family: a bolt, a pattern with its counts, a cover thickness. Dimensions vary within it. */
+export interface Family {
+  index: number;
+  size_mm: number;
+  propertyClass: PropertyClass;
+  pattern: SearchPattern;
+  /** Bolts on each transverse line (grid and staggered); for tapered, chosen later (lines only). */
+  countsPerLine: number[] | null;
+  lines: number;
+  /** Grid and staggered: the across count as the layout spec takes it. */
+  across: number;
+  coverThickness_mm: number | undefined;
+  limits: SearchLimits;
+  pitches_mm: number[];
+  ends_mm: number[];
+  /** Butt splices: end distances at the butt; lap splices: [undefined]. */
+  endsAtButt_mm: Array<number | undefined>;
+  /** Gauges for the family's number of gauge lines (tapered: computed per counts). */
+  gauges_mm: number[];
+  /** The scenario with this family's bolt and cover thickness, layout to be filled. */
+  base: Scenario & { bolts: BoltSpec };
+}
+
+const up = (v: number, step: number) => Math.ceil(v / step - 1e-9) * step;
+const down = (v: number, step: number) => Math.floor(v / step + 1e-9) * step;
+
+/** Values v0, v0 + step, … up to v1 on the step grid (empty when v1 < v0). */
+export function stepRange(from_mm: number, to_mm: number, step_mm: number): number[] {
+  const out: number[] = [];
+  const a = up(from_mm, step_mm);
+  const b = down(to_mm, step_mm);
+  for (let v = a; v <= b + 1e-9; v += step_mm) out.push(Math.round(v * 1e6) / 1e6);
+  return out;
+}
+
+function narrowestWidth(s: Scenario): number {
+  return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
+}
+
+/** Gauges for G gauge lines on the narrowest plate: edge distance within [edgeMin, edgeMax]. */
+export function gaugesFor(G: number, width_mm: number, limits: SearchLimits, space: SearchSpace): number[] {
+  if (G <= 1) return [0];
+  if (space.fixedGauge_mm !== undefined) return [space.fixedGauge_mm];
+  const byEdgeMin = (width_mm - 2 * limits.edgeMin_mm) / (G - 1);
+  const byEdgeMax = (width_mm - 2 * limits.edgeMax_mm) / (G - 1);
+  return stepRange(Math.max(limits.gaugeMin_mm, byEdgeMax), Math.min(limits.gaugeMax_mm, byEdgeMin), space.step_mm);
+}
+
+/** Resolve the declared space of a scenario. */
+export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTable): SearchSpace {
+  const s = scenario.search ?? {};
+  const assembly = scenario.bolts?.assembly ?? "bearing";
+  const allowed = code.classesFor(assembly) as readonly string[];
+  const priced = (d: number, c: PropertyClass) => boltPrice(costs, d, c) !== undefined;
+  const catalogueSizes = [...new Set(Object.keys(costs.boltAssembly).map((k) => Number(k.replace(/^M/, ""))))].sort((a, b) => a - b);
+  const sizes = s.sizes_mm ?? catalogueSizes;
+  const classes = (s.classes ?? (["4.6", "5.6", "8.8", "10.9"] as PropertyClass[])).filter((c) => allowed.includes(c));
+  const space: SearchSpace = {
+    sizes_mm: sizes.filter((d) => classes.some((c) => priced(d, c))),
+    classes,
+    assembly,
+    patterns: s.patterns ?? [...SEARCH_PATTERNS],
+    step_mm: s.step_mm ?? SEARCH_DEFAULTS.step_mm,
+    maxAlong: s.maxAlong ?? SEARCH_DEFAULTS.maxAlong,
+    coverThicknesses_mm: scenario.splice.type === "lap" ? [] : s.coverThicknesses_mm ?? [scenario.plates.covers[0]!.thickness_mm],
+  };
+  if (s.maxAcross !== undefined) space.maxAcross = s.maxAcross;
+  if (s.maxSpliceLength_mm !== undefined) space.maxSpliceLength_mm = s.maxSpliceLength_mm;
+  if (s.fixedGauge_mm !== undefined) space.fixedGauge_mm = s.fixedGauge_mm;
+  return space;
+}
+
+function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: BoltAssembly): BoltSpec {
+  const given = scenario.bolts;
+  const spec: BoltSpec = {
+    size_mm: d,
+    propertyClass: c,
+    assembly,
+    threadsInShearPlanes: given?.threadsInShearPlanes ?? true,
+    hole: given?.hole ?? "standard",
+  };
+  if (given?.slotDirection) spec.slotDirection = given.slotDirection;
+  if (assembly === "friction-grip") {
+    if (given?.slipFactor !== undefined) spec.slipFactor = given.slipFactor;
+    spec.slipAt = given?.slipAt ?? "service";
+  }
+  return spec;
+}
+
+function withCover(scenario: Scenario, t: number | undefined): Scenario {
+  if (t === undefined) return scenario;
+  const covers: PlateSpec[] = scenario.plates.covers.map((c) => ({ ...c, thickness_mm: t }));
+  return { ...scenario, plates: { ...scenario.plates, covers } };
+}
+
+/** Counts per line of a staggered pattern: a, a − 1, a, … */
+export function staggeredCounts(across: number, lines: number): number[] {
+  return Array.from({ length: lines }, (_, i) => (i % 2 === 0 ? across : across - 1));
+}
+
+/** Every family of the declared space, in a fixed order. */
+export function families(scenario: Scenario, code: DesignCode, costs: CostTable, space: SearchSpace): Family[] {
+  const out: Family[] = [];
+  const width = narrowestWidth(scenario);
+  const butt = scenario.splice.type !== "lap";
+  const covers: Array<number | undefined> = butt ? space.coverThicknesses_mm : [undefined];
+  for (const d of space.sizes_mm) {
+    for (const c of space.classes) {
+      if (boltPrice(costs, d, c) === undefined) continue;
+      for (const coverT of covers) {
+        const base = { ...withCover(scenario, coverT), bolts: boltSpecFor(scenario, d, c, space.assembly) };
+        for (const pattern of space.patterns) {
+          const limits = code.searchLimits(base, d, pattern);
+          const pitches = stepRange(limits.pitchMin_mm, limits.pitchMax_mm, space.step_mm);
+          const ends = stepRange(limits.endMin_mm, Math.max(limits.endMax_mm, up(limits.endMin_mm, space.step_mm)), space.step_mm);
+          const endsAtButt: Array<number | undefined> = butt ? stepRange(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), space.step_mm) : [undefined];
+          const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
+          const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
+          const push = (counts: number[] | null, lines: number, across: number, G: number) => {
+            const gauges = pattern === "tapered" ? [] : gaugesFor(G, width, limits, space);
+            if ((pattern !== "tapered" && gauges.length === 0) || endsAtButt.length === 0) return;
+            out.push({
+              index: out.length,
+              size_mm: d,
+              propertyClass: c,
+              pattern,
+              countsPerLine: counts,
+              lines,
+              across,
+              coverThickness_mm: coverT,
+              limits,
+              pitches_mm: lines > 1 ? pitches : [0],
+              ends_mm: ends,
+              endsAtButt_mm: endsAtButt,
+              gauges_mm: gauges,
+              base,
+            });
+          };
+          for (let m = 1; m <= space.maxAlong; m++) {
+            if (pattern === "grid") {
+              for (let a = 1; a <= maxAcross; a++) push(Array(m).fill(a), m, a, a);
+            } else if (pattern === "staggered") {
+              if (m < 2) continue;
+              for (let a = 2; a <= maxAcross; a++) push(staggeredCounts(a, m), m, a, 2 * a - 1);
+            } else if (m >= 2 && maxAcross >= 2) {
+              push(null, m, 0, 0);
+            }
+          }
+        }
+      }
+    }
+  }
+  return out;
+}
+
+/** The layout spec of a family at given dimensions. */
+export function layoutOf(f: Family, pitch: number, gauge: number, end: number, endAtButt: number | undefined, counts?: number[]): LayoutSpec {
+  const eb = endAtButt ?? end;
+  if (f.pattern === "grid") return { kind: "grid", across: f.across, along: f.lines, pitch_mm: pitch, gauge_mm: gauge, endDistance_mm: end, endDistanceAtButt_mm: eb };
+  if (f.pattern === "staggered") return { kind: "staggered", across: f.across, along: f.lines, pitch_mm: pitch, gauge_mm: gauge, endDistance_mm: end, endDistanceAtButt_mm: eb };
+  return { kind: "tapered", acrossPerLine: counts ?? [], pitch_mm: pitch, gauge_mm: gauge, endDistance_mm: end, endDistanceAtButt_mm: eb };
+}
+
+export function scenarioOf(f: Family, layout: LayoutSpec): CheckableScenario {
+  return { ...f.base, layout };
+}
+
+export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scenario): string[] {
+  const lines = [
+    `bolt sizes: ${space.sizes_mm.map((d) => `M${d}`).join(", ")}`,
+    `property classes: ${space.classes.join(", ")} (${space.assembly === "bearing" ? "bearing type" : "friction grip"})`,
+    `patterns: ${space.patterns.join(", ")} (tapered: each transverse line its own count, symmetric about the plate axis)`,
+    `bolts across: 1 up to what the narrowest plate fits with the minimum gauge and edge distance${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
+    `transverse lines along the force: 1 … ${space.maxAlong}${scenario.splice.type !== "lap" ? " per side of the butt" : ""}`,
+    `dimensions on a ${space.step_mm} mm step; edge distances equal both sides (the group on the plate axis), so the edge distance follows from the gauge`,
+    space.fixedGauge_mm !== undefined ? `gauge fixed at ${space.fixedGauge_mm} mm` : "gauge: every step value whose edge distance lies within the code's limits",
+  ];
+  if (scenario.splice.type !== "lap") lines.push(`cover plate thickness: ${space.coverThicknesses_mm.join(", ")} mm`);
+  if (space.maxSpliceLength_mm !== undefined) lines.push(`splice length at most ${space.maxSpliceLength_mm} mm`);
+  const seen = new Set<string>();
+  for (const f of fams) {
+    const key = `${f.size_mm}|${f.pattern}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const span = (v: number[]) => (v.length ? `${v[0]}…${v[v.length - 1]}` : "none");
+    lines.push(`M${f.size_mm} ${f.pattern}: pitch ${span(f.pitches_mm)} mm, end distance ${span(f.ends_mm)} mm — ${f.limits.statement}`);
+  }
+  return lines;
+}
