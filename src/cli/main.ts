@@ -3,7 +3,17 @@
  * Exit codes: 0 all checks pass, 1 a check fails or nothing complies, 2 bad input, 3 internal error.
  */
 import { readFileSync, statSync } from "node:fs";
-import { Command, CommanderError } from "commander";
+import { fileURLToPath } from "node:url";
+import { Command, CommanderError, Option } from "commander";
+import type { CostTable } from "../catalogue/costs.js";
+import { applyCosts, parseCostTable, type CostFile } from "../io/costs.js";
+import { savedScenarioText } from "../io/save-scenario.js";
+import { parseYaml } from "../io/yaml.js";
+import { searchJson } from "../report/search-json.js";
+import { RANK_BY, type RankBy } from "../search/ranking.js";
+import { searchLayouts } from "../search/search.js";
+import { writeFileSafely } from "./files.js";
+import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
@@ -31,6 +41,24 @@ function loadCheckable(file: string) {
   return { scenario: requireCheckable(scenario, code), code };
 }
 
+/** The bundled cost catalogue (illustrative prices), next to the package. */
+export const BUNDLED_COSTS = fileURLToPath(new URL("../../catalogue/costs.yaml", import.meta.url));
+
+/** The cost table for a scenario: the bundled catalogue or --costs, with the scenario's own entries over it. */
+export function loadCosts(costsFile: string | undefined, scenarioCosts: unknown): CostTable {
+  const file = costsFile ?? BUNDLED_COSTS;
+  let table = parseCostTable(readScenarioText(file), costsFile ? file : "catalogue/costs.yaml");
+  if (scenarioCosts !== undefined) table = applyCosts(table, scenarioCosts as CostFile);
+  return table;
+}
+
+function positiveInt(name: string) {
+  return (v: string) => {
+    if (!/^\d+$/.test(v) || Number(v) < 1) throw new InputError(`--${name}`, `must be a whole number of 1 or more, got "${v}"`);
+    return Number(v);
+  };
+}
+
 interface Io {
   out: (text: string) => void;
   err: (text: string) => void;
@@ -56,6 +84,36 @@ async function run(argv: string[], io: Io): Promise<number> {
       const { joint, report } = checkScenario(scenario, code);
       io.out(opts.json ? JSON.stringify(checkReportJson(scenario, joint, report), null, 2) : formatSheet(scenario, joint, report));
       exit = exitCodeOf(report);
+    });
+
+  program
+    .command("search")
+    .description("find the best bolt layouts over the scenario's declared search space, proven optimal")
+    .argument("<scenario>", "scenario file (YAML); bolts and layout are not needed")
+    .option("--top <n>", "how many layouts to show", positiveInt("top"), 10)
+    .addOption(new Option("--rank-by <what>", "rank by").choices([...RANK_BY]).default("cost"))
+    .option("--costs <file>", "cost catalogue (YAML) instead of the bundled illustrative one")
+    .option("--save <file>", "write the chosen layout (rank 1, or --rank) as a scenario that check accepts")
+    .option("--rank <n>", "which result --save writes", positiveInt("rank"), 1)
+    .option("--force", "let --save overwrite an existing file")
+    .option("--json", "print the results as JSON")
+    .action((file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; json?: boolean }) => {
+      const text = readScenarioText(file);
+      const { scenario, code } = parseScenario(text);
+      const costs = loadCosts(opts.costs, scenario.costs);
+      const t0 = performance.now();
+      const outcome = searchLayouts({ scenario, code, costs }, { top: Math.max(opts.top, opts.save ? opts.rank : 1), rankBy: opts.rankBy });
+      const elapsed = performance.now() - t0;
+      outcome.stats.elapsed_ms = Number(elapsed.toFixed(1));
+      if (opts.save) {
+        const chosen = outcome.results[opts.rank - 1];
+        if (chosen) writeFileSafely(opts.save, savedScenarioText(parseYaml(text) as Record<string, unknown>, chosen, opts.rank), opts.force ?? false);
+        else if (outcome.results.length > 0) throw new InputError("--rank", `there are only ${outcome.results.length} results`);
+      }
+      const shown = { ...outcome, results: outcome.results.slice(0, opts.top) };
+      io.out(opts.json ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency), null, 2) : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed));
+      if (opts.save && outcome.results[opts.rank - 1]) io.err(`saved result ${opts.rank} to ${opts.save}`);
+      exit = outcome.results.length > 0 ? 0 : 1;
     });
 
   try {

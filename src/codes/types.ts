@@ -61,6 +61,8 @@ export interface StrengthBound {
    * n times this.
    */
   perBolt_N: number;
+  /** The least of the plate checks alone (gross yield, net section) in the bound, N. */
+  plates_N: number;
 }
 
 export interface DesignCode extends GeometryCode {

@@ -39,7 +39,8 @@ export function rankKey(rankBy: RankBy, m: Measures, text: string): Key {
 
 /**
  * A lower bound of every key below a search node: known leading measures, then −∞.
- * `known` holds what the node fixes (each a lower bound of its descendants' values).
+ * `known` holds lower bounds of its descendants' values (efficiencyUpper an upper bound). The bolt
+ * count of a node is a lower bound of its descendants', and where it is exact the cost follows it.
  */
 export function lowerKey(rankBy: RankBy, known: { cost?: number; bolts?: number; efficiencyUpper?: number; length_mm?: number }): Key {
   const lo = -Infinity;
@@ -48,7 +49,7 @@ export function lowerKey(rankBy: RankBy, known: { cost?: number; bolts?: number;
   const e = known.efficiencyUpper === undefined ? lo : -known.efficiencyUpper;
   const l = known.length_mm ?? lo;
   const numbers =
-    rankBy === "cost" ? [c, lo, lo] : rankBy === "bolts" ? [b, known.bolts === undefined ? lo : c, lo] : rankBy === "efficiency" ? [e, lo, lo] : [l, lo, lo, lo];
+    rankBy === "cost" ? [c, lo, lo] : rankBy === "bolts" ? [b, known.bolts === undefined ? lo : c, lo] : rankBy === "efficiency" ? [e, b, known.bolts === undefined ? lo : c] : [l, lo, lo, lo];
   return { numbers: numbers.map(r), text: "" };
 }
 

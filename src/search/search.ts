@@ -17,7 +17,7 @@ import type { CheckableScenario, LayoutSpec, Scenario } from "../model/scenario.
 import { MinHeap } from "./heap.js";
 import { compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, type Family, type SearchSpace } from "./space.js";
-import { nextTaperedCounts, type TaperedProblem } from "./tapered-ip.js";
+import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 
 export interface Candidate {
   family: Family;
@@ -102,7 +102,7 @@ interface LinearModel {
 type Node =
   | { kind: "family"; key: Key; f: Family }
   | { kind: "dims"; key: Key; f: Family; ip: number; ie: number; ieb: number }
-  | { kind: "tapered"; key: Key; f: Family; ip: number; ie: number; ieb: number; gauges: number[]; N: number; problem: TaperedProblem; tried: number[][] }
+  | { kind: "tapered"; key: Key; f: Family; ip: number; ie: number; ieb: number; gauges: number[]; stream: TaperedStream; index: number }
   | { kind: "result"; key: Key; c: Candidate };
 
 export interface SearchContext {
@@ -176,7 +176,19 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
   const heap = new MinHeap<Node>((a, b) => compareKeys(a.key, b.key) < 0);
   const models = new Map<Family, LinearModel | null>();
-  const problems = new Map<Family, TaperedProblem>();
+  const streams = new Map<Family, TaperedStream>();
+  /**
+   * The programme's constraints do not depend on pitch or end distances, so one stream of count vectors
+   * per family serves every dimension of it.
+   */
+  const streamFor = (f: Family, kcap: number): TaperedStream => {
+    let stream = streams.get(f);
+    if (!stream) {
+      stream = new TaperedStream(taperedProblem(ctx, f, kcap, transferred), taperedNmin(f), stats);
+      streams.set(f, stream);
+    }
+    return stream;
+  };
   const boundReasons = new Map<string, number>();
   const rankBy = options.rankBy;
   const width = narrowest(scenario);
@@ -206,6 +218,16 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const costAt = (m: LinearModel, p: number, e: number, eb: number | undefined) => m.c0 + m.cp * p + m.ce * e + m.ceb * (eb ?? 0);
   const lengthAt = (m: LinearModel, p: number, e: number, eb: number | undefined) => m.l0 + m.lp * p + m.le * e + m.leb * (eb ?? 0);
 
+  /**
+   * Tapered families: the plate checks bound the strength whatever the counts — the fully loaded line
+   * carries at least 1 hole (transferred) or the widest line at least 2 (full load: two distinct counts).
+   */
+  const taperedPlateBound = (f: Family): number => {
+    const counts = Array(f.lines).fill(1);
+    if (!transferred) counts[0] = 2;
+    return code.strengthBound(f.base as CheckableScenario, shapeOf(f, counts)).plates_N;
+  };
+
   /** Tapered lower bound on the bolt count from the per-bolt capacity (dimensions most favourable). */
   const taperedNmin = (f: Family, p?: number, e?: number, eb?: number): number => {
     const b = code.strengthBound(f.base as CheckableScenario, shapeOf(f, Array(f.lines).fill(1), p, e, eb));
@@ -226,7 +248,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedNmin(f);
     // Efficiency never exceeds 1: the joint strength is at most the thinner plate's gross yield and its
     // net rupture, each at most the unperforated strength. Grid and staggered families have a tighter bound.
-    const efficiencyUpper = bound ? Math.min(1, bound.jointStrength_N / unperforated) : 1;
+    const efficiencyUpper = Math.min(1, (bound ? bound.jointStrength_N : taperedPlateBound(f)) / unperforated);
     heap.push({
       kind: "family",
       f,
@@ -305,11 +327,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
         if (gMin === undefined) continue;
         const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
         if (kcap < 2) continue;
-        let problem = problems.get(f);
-        if (!problem || problem.kmax[0] !== kcap) {
-          problem = taperedProblem(ctx, f, kcap, transferred);
-          problems.set(f, problem);
-        }
+        const stream = streamFor(f, kcap);
         const m = model(f, Array(f.lines).fill(1))!;
         heap.push({
           kind: "tapered",
@@ -318,32 +336,27 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
           ie: node.ie,
           ieb: node.ieb,
           gauges,
-          N: N0,
-          problem,
-          tried: Array.from({ length: kcap }, (_, i) => Array(f.lines).fill(i + 1)),
+          stream,
+          index: 0,
           key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
         });
       }
       continue;
     }
-    // Tapered generator: next vector with N bolts, or move to N + 1.
+    // Tapered generator: the family's next count vector (bolt totals never fall along the stream).
     const p = f.pitches_mm[node.ip]!;
     const e = f.ends_mm[node.ie]!;
     const eb = f.endsAtButt_mm[node.ieb];
-    const maxN = node.problem.kmax.reduce((a, b) => a + b, 0);
-    stats.integerProgrammes++;
-    const answer = nextTaperedCounts(node.problem, node.N, node.tried);
+    const answer = node.stream.at(node.index);
+    if (!answer) continue;
+    const N = answer.counts.reduce((a, b) => a + b, 0);
     const m = model(f, Array(f.lines).fill(1))!;
-    if (!answer) {
-      if (node.N + 1 <= maxN) {
-        const N = node.N + 1;
-        heap.push({ ...node, N, key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }) });
-      }
+    const vectorKey = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
+    if (compareKeys(vectorKey, node.key) > 0) {
+      heap.push({ ...node, key: vectorKey }); // this vector has more bolts: wait for its turn
       continue;
     }
-    if (answer.by === "enumeration") stats.enumerationFallbacks++;
-    const tried = [...node.tried, answer.counts];
-    heap.push({ ...node, tried });
+    heap.push({ ...node, index: node.index + 1, key: vectorKey });
     const vectorBound = code.strengthBound(f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
@@ -360,6 +373,42 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const outcome: SearchOutcome = { space, spaceText: describeSpace(space, fams, scenario), results, stats };
   if (results.length === 0) outcome.noResultReason = explainNothing(ctx, unperforated, boundReasons, lastRejection, space);
   return outcome;
+}
+
+/**
+ * The count vectors of one tapered family in order of bolt total, each found by the integer programme
+ * (or its enumeration fallback) with every earlier vector excluded by a no-good cut; kept for reuse.
+ */
+class TaperedStream {
+  private readonly vectors: TaperedAnswer[] = [];
+  private readonly tried: number[][];
+  private N: number;
+  private readonly maxN: number;
+  constructor(
+    private readonly problem: TaperedProblem,
+    N0: number,
+    private readonly stats: SearchStats,
+  ) {
+    // Uniform vectors are grid layouts: excluded from the start.
+    this.tried = Array.from({ length: problem.kmax[0] ?? 0 }, (_, i) => Array(problem.lines).fill(i + 1));
+    this.N = N0;
+    this.maxN = problem.kmax.reduce((a, b) => a + b, 0);
+  }
+
+  at(i: number): TaperedAnswer | null {
+    while (this.vectors.length <= i && this.N <= this.maxN) {
+      this.stats.integerProgrammes++;
+      const answer = nextTaperedCounts(this.problem, this.N, this.tried);
+      if (answer) {
+        if (answer.by === "enumeration") this.stats.enumerationFallbacks++;
+        this.vectors.push(answer);
+        this.tried.push(answer.counts);
+      } else {
+        this.N++;
+      }
+    }
+    return this.vectors[i] ?? null;
+  }
 }
 
 /**

@@ -202,7 +202,7 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
   const lines = [
     `bolt sizes: ${space.sizes_mm.map((d) => `M${d}`).join(", ")}`,
     `property classes: ${space.classes.join(", ")} (${space.assembly === "bearing" ? "bearing type" : "friction grip"})`,
-    `patterns: ${space.patterns.join(", ")} (tapered: each transverse line its own count, symmetric about the plate axis)`,
+    `patterns: ${space.patterns.join(", ")}${space.patterns.includes("tapered") ? " (tapered: each transverse line its own count, symmetric about the plate axis, all counts odd or all even and never rising away from the butt — lap: from plate B's end)" : ""}`,
     `bolts across: 1 up to what the narrowest plate fits with the minimum gauge and edge distance${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
     `transverse lines along the force: 1 … ${space.maxAlong}${scenario.splice.type !== "lap" ? " per side of the butt" : ""}`,
     `dimensions on a ${space.step_mm} mm step; edge distances equal both sides (the group on the plate axis), so the edge distance follows from the gauge`,
@@ -210,13 +210,23 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
   ];
   if (scenario.splice.type !== "lap") lines.push(`cover plate thickness: ${space.coverThicknesses_mm.join(", ")} mm`);
   if (space.maxSpliceLength_mm !== undefined) lines.push(`splice length at most ${space.maxSpliceLength_mm} mm`);
-  const seen = new Set<string>();
+  // Ranges per pattern and size, from the code's limits (one line per pattern).
+  const byPattern = new Map<string, { statement: string; ranges: string[]; seen: Set<number> }>();
   for (const f of fams) {
-    const key = `${f.size_mm}|${f.pattern}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    const span = (v: number[]) => (v.length ? `${v[0]}…${v[v.length - 1]}` : "none");
-    lines.push(`M${f.size_mm} ${f.pattern}: pitch ${span(f.pitches_mm)} mm, end distance ${span(f.ends_mm)} mm — ${f.limits.statement}`);
+    let entry = byPattern.get(f.pattern);
+    if (!entry) {
+      entry = { statement: f.limits.statement, ranges: [], seen: new Set() };
+      byPattern.set(f.pattern, entry);
+    }
+    if (entry.seen.has(f.size_mm)) continue;
+    entry.seen.add(f.size_mm);
+    const span = (v: Array<number | undefined>) => (v.length && v[0] !== undefined ? `${v[0]}–${v[v.length - 1]}` : "—");
+    const pitches = stepRange(f.limits.pitchMin_mm, f.limits.pitchMax_mm, space.step_mm);
+    entry.ranges.push(`M${f.size_mm}: pitch ${span(pitches)}, end ${span(f.ends_mm)}${scenario.splice.type !== "lap" ? `, at butt ${span(f.endsAtButt_mm)}` : ""}`);
+  }
+  for (const [pattern, entry] of byPattern) {
+    lines.push(`${pattern}: ${entry.statement}`);
+    lines.push(`${pattern} ranges (mm): ${entry.ranges.join("; ")}`);
   }
   return lines;
 }

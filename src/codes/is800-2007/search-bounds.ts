@@ -86,7 +86,10 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
   const planes = splice.type === "butt-double-cover" ? 2 : 1;
   const lj = shape.pitch_mm === undefined ? 0 : (m - 1) * shape.pitch_mm;
   const blj = beta_lj(lj, d);
-  const best: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity };
+  const best: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity, plates_N: Infinity };
+  const plateTerm = (capacity: number) => {
+    best.plates_N = Math.min(best.plates_N, capacity);
+  };
   const perBolt = (capacity: number) => {
     best.perBolt_N = Math.min(best.perBolt_N, capacity / n);
   };
@@ -142,8 +145,11 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     const st = plateStrength(p.spec);
     const t = p.spec.thickness_mm;
     keep(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share, "gross-yield");
+    plateTerm(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share);
     const holesOnLine = options.netSectionLoad === "transferred" ? (shape.countsPerLine[p.fullLine] ?? widest) : widest;
-    keep(Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share, "net-section");
+    const net = Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share;
+    keep(net, "net-section");
+    plateTerm(net);
     if (!slipAtUltimate && p.end !== undefined) {
       // Holes on the line at the plate end have no hole ahead: their e-term is always in kb.
       let kbUpper = Math.min(p.end / (3 * hole.along_mm), mat.fub_MPa / st.fu_MPa, 1.0);

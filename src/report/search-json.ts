@@ -1,0 +1,91 @@
+/**
+ * Search results as plain rows (units in field names). Pure.
+ */
+import type { Candidate, SearchOutcome } from "../search/search.js";
+import type { RankBy } from "../search/ranking.js";
+import { CAUTION } from "./check-json.js";
+
+export interface ResultRow {
+  rank: number;
+  bolt: string;
+  size_mm: number;
+  class: string;
+  assembly: string;
+  pattern: string;
+  /** "3 across × 4 along", per side of the butt for butt splices. */
+  counts: string;
+  acrossPerLine: number[];
+  along: number;
+  pitch_mm: number | null;
+  gauge_mm: number | null;
+  endDistance_mm: number;
+  endDistanceAtButt_mm: number | null;
+  edgeDistance_mm: number;
+  coverThickness_mm: number | null;
+  bolts: number;
+  spliceLength_mm: number;
+  jointStrength_kN: number;
+  efficiency: number;
+  utilisation: number;
+  cost: number;
+  governing: string;
+  tapered_counts_by?: string;
+}
+
+const r = (v: number, d = 2) => Number(v.toFixed(d));
+
+export function countsText(c: Candidate): string {
+  const counts = c.counts;
+  const along = counts.length;
+  if (c.family.pattern === "grid") return `${counts[0]} across × ${along} along`;
+  if (c.family.pattern === "staggered") return `${counts[0]}/${(counts[0] ?? 1) - 1} across × ${along} along`;
+  return `${counts.join("-")} across × ${along} along`;
+}
+
+export function resultRow(c: Candidate, rank: number): ResultRow {
+  const l = c.layout;
+  const ys = c.joint.holes.map((h) => Math.abs(h.y_mm));
+  const narrow = Math.min(...c.joint.plates.filter((p) => p.role !== "packing").map((p) => p.spec.width_mm));
+  const butt = c.joint.spliceType !== "lap";
+  const row: ResultRow = {
+    rank,
+    bolt: `M${c.family.size_mm} ${c.family.propertyClass}`,
+    size_mm: c.family.size_mm,
+    class: c.family.propertyClass,
+    assembly: c.family.base.bolts.assembly,
+    pattern: c.family.pattern,
+    counts: countsText(c),
+    acrossPerLine: c.counts,
+    along: c.counts.length,
+    pitch_mm: l.kind !== "holes" && c.counts.length > 1 ? l.pitch_mm : null,
+    gauge_mm: l.kind !== "holes" && Math.max(...c.counts) > 1 ? l.gauge_mm : null,
+    endDistance_mm: l.endDistance_mm,
+    endDistanceAtButt_mm: butt && l.kind !== "holes" ? l.endDistanceAtButt_mm : null,
+    edgeDistance_mm: r(narrow / 2 - Math.max(...ys), 1),
+    coverThickness_mm: c.family.coverThickness_mm ?? null,
+    bolts: c.joint.holes.length,
+    spliceLength_mm: r(c.joint.spliceLength_mm, 1),
+    jointStrength_kN: r(c.report.jointStrength_N / 1000),
+    efficiency: r(c.report.efficiency, 4),
+    utilisation: r(c.report.maxUtilisation, 4),
+    cost: r(c.cost.total),
+    governing: c.report.governing,
+  };
+  if (c.chosenBy) row.tapered_counts_by = c.chosenBy === "ip" ? "integer programme" : "enumeration (solver fallback)";
+  return row;
+}
+
+export function searchJson(name: string, outcome: SearchOutcome, rankBy: RankBy, currency: string) {
+  return {
+    scenario: name,
+    rankBy,
+    proven: true,
+    provenStatement: "optimal over the declared search space: every candidate that could rank above the last row shown was checked or excluded by an admissible bound",
+    searchSpace: outcome.spaceText,
+    currency,
+    results: outcome.results.map((c, i) => resultRow(c, i + 1)),
+    ...(outcome.noResultReason ? { noResult: outcome.noResultReason } : {}),
+    stats: outcome.stats,
+    caution: CAUTION,
+  };
+}

@@ -1,0 +1,86 @@
+/**
+ * Brute-force reference for the search: every candidate of the declared space through the full checker,
+ * no bound, no lattice, no integer programme. Used by the optimality tests and the bench only.
+ */
+import { compareKeys, type RankBy } from "./ranking.js";
+import { evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
+import { families, layoutOf, resolveSpace, type Family } from "./space.js";
+
+/** Every tapered count vector of the declared shape: one parity, never rising from line 0, not uniform. */
+export function taperedVectors(lines: number, kmax: number): number[][] {
+  const out: number[][] = [];
+  const walk = (prefix: number[]) => {
+    if (prefix.length === lines) {
+      if (new Set(prefix).size > 1) out.push([...prefix]);
+      return;
+    }
+    const last = prefix[prefix.length - 1];
+    for (let k = 1; k <= (last ?? kmax); k++) {
+      if (last !== undefined && k % 2 !== last % 2) continue;
+      prefix.push(k);
+      walk(prefix);
+      prefix.pop();
+    }
+  };
+  walk([]);
+  return out;
+}
+
+function narrowest(ctx: SearchContext): number {
+  const s = ctx.scenario;
+  return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
+}
+
+function taperedGaugeList(f: Family, width: number, step: number, fixed: number | undefined): number[] {
+  if (fixed !== undefined) return [fixed];
+  const out: number[] = [];
+  const lo = Math.ceil(f.limits.gaugeMin_mm / step - 1e-9) * step;
+  for (let g = lo; g <= Math.min(f.limits.gaugeMax_mm, width - 2 * f.limits.edgeMin_mm) + 1e-9; g += step) out.push(Math.round(g * 1e6) / 1e6);
+  return out;
+}
+
+export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankBy): { results: Candidate[]; checks: number } {
+  const space = resolveSpace(ctx.scenario, ctx.code, ctx.costs);
+  const fams = families(ctx.scenario, ctx.code, ctx.costs, space);
+  const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
+  const width = narrowest(ctx);
+  const passing: Candidate[] = [];
+  const maxLength = space.maxSpliceLength_mm ?? Infinity;
+  const keep = (c: Candidate | null) => {
+    if (c && c.joint.spliceLength_mm <= maxLength + 1e-9) passing.push(c);
+  };
+  for (const f of fams) {
+    for (const p of f.pitches_mm) {
+      for (const e of f.ends_mm) {
+        for (const eb of f.endsAtButt_mm) {
+          if (f.countsPerLine) {
+            for (const g of f.gauges_mm) keep(evaluate(ctx, f, layoutOf(f, p, g, e, eb), f.countsPerLine, rankBy, stats).candidate);
+          } else {
+            const gauges = taperedGaugeList(f, width, space.step_mm, space.fixedGauge_mm);
+            const gMin = gauges[0];
+            if (gMin === undefined) continue;
+            const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
+            for (const counts of taperedVectors(f.lines, kcap)) {
+              const widest = Math.max(...counts);
+              for (const g of gauges) {
+                if (width - (widest - 1) * g < 2 * f.limits.edgeMin_mm - 1e-9) continue;
+                keep(evaluate(ctx, f, layoutOf(f, p, g, e, eb, counts), counts, rankBy, stats).candidate);
+              }
+            }
+          }
+        }
+      }
+    }
+  }
+  passing.sort((a, b) => compareKeys(a.key, b.key));
+  const seen = new Set<string>();
+  const results: Candidate[] = [];
+  for (const c of passing) {
+    const id = identityOf(c);
+    if (seen.has(id)) continue;
+    seen.add(id);
+    results.push(c);
+    if (results.length === top) break;
+  }
+  return { results, checks: stats.fullChecks };
+}
