@@ -206,6 +206,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     if (s.step !== undefined) spec.step_mm = s.step;
     if (s.patterns !== undefined) spec.patterns = [...new Set(s.patterns)];
     if (s.max_along !== undefined) spec.maxAlong = s.max_along;
+    if (s.min_bolts !== undefined) spec.minBolts = s.min_bolts;
     if (s.max_splice_length !== undefined) spec.maxSpliceLength_mm = s.max_splice_length;
     if (s.max_across !== undefined) spec.maxAcross = s.max_across;
     if (s.gauge !== undefined) spec.fixedGauge_mm = s.gauge;

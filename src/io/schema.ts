@@ -106,6 +106,7 @@ const layout = z.strictObject({
 const search = z.strictObject({
   patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).optional(),
   max_along: count(LIMITS.linesAlong).optional(),
+  min_bolts: count(LIMITS.holes).optional(),
   sizes: z.array(boltSize).min(1).optional(),
   classes: z.array(propertyClass).min(1).optional(),
   step: length(1000).optional(),

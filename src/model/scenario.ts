@@ -98,6 +98,7 @@ export type LayoutSpec =
 export interface SearchSpec {
   patterns?: Array<"grid" | "staggered" | "tapered">;
   maxAlong?: number;
+  minBolts?: number;
   sizes_mm?: number[];
   classes?: PropertyClass[];
   step_mm?: number;

@@ -61,6 +61,7 @@ export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankB
             if (gMin === undefined) continue;
             const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
             for (const counts of taperedVectors(f.lines, kcap)) {
+              if (counts.reduce((a, b) => a + b, 0) < space.minBolts) continue;
               const widest = Math.max(...counts);
               for (const g of gauges) {
                 if (width - (widest - 1) * g < 2 * f.limits.edgeMin_mm - 1e-9) continue;

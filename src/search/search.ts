@@ -89,6 +89,8 @@ function sweepGauges(ctx: SearchContext, f: Family, gauges: readonly number[], l
 
 /** Cost and splice length are linear in pitch and end distances within a family: fitted from joints. */
 interface LinearModel {
+  /** Exact added cost of one more bolt in each group (tapered families). */
+  cb: number;
   c0: number;
   cp: number;
   ce: number;
@@ -144,6 +146,10 @@ function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel
   if (e0 === undefined) return null;
   const eb0 = f.endsAtButt_mm[0];
   const g = f.gauges_mm[0] ?? 0;
+  const atCounts = (c: number[]) => {
+    const joint = buildJoint(scenarioOf(f, layoutOf(f, p0, g, e0, eb0, c)), ctx.code);
+    return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
+  };
   const at = (p: number, e: number, eb: number | undefined) => {
     const layout = layoutOf(f, p, g, e, eb, counts);
     const joint = buildJoint(scenarioOf(f, layout), ctx.code); // geometry only: the joint the checker builds
@@ -153,7 +159,9 @@ function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel
   const dp = at(p0 + 1, e0, eb0);
   const de = at(p0, e0 + 1, eb0);
   const deb = eb0 === undefined ? base : at(p0, e0, eb0 + 1);
+  const oneMore = f.countsPerLine ? base : atCounts([counts[0]! + 1, ...counts.slice(1)]);
   return {
+    cb: oneMore.cost - base.cost,
     c0: base.cost - (dp.cost - base.cost) * p0 - (de.cost - base.cost) * e0 - (deb.cost - base.cost) * (eb0 ?? 0),
     cp: dp.cost - base.cost,
     ce: de.cost - base.cost,
@@ -199,6 +207,12 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     code.unperforatedStrength(scenario.plates.mainB).value_N,
   );
 
+  // No layout can carry more than the unperforated main plate (every joint strength is at most its gross
+  // yield and its net rupture, each at most the unperforated strength): say so at once.
+  if (T > unperforated * (1 + 1e-9)) {
+    return { space, spaceText: describeSpace(space, fams, scenario), results: [], stats, noResultReason: explainNothing(ctx, unperforated, new Map(), null, space) };
+  }
+
   const shapeOf = (f: Family, counts: number[], p?: number, e?: number, eb?: number): LayoutShape => {
     const shape: LayoutShape = { pattern: f.pattern, countsPerLine: counts };
     if (p !== undefined && f.lines > 1) shape.pitch_mm = p;
@@ -229,9 +243,14 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   };
 
   /** Tapered lower bound on the bolt count from the per-bolt capacity (dimensions most favourable). */
+  const familyNmin = new Map<Family, number>();
   const taperedNmin = (f: Family, p?: number, e?: number, eb?: number): number => {
+    const known = p === undefined ? familyNmin.get(f) : undefined;
+    if (known !== undefined) return known;
     const b = code.strengthBound(f.base as CheckableScenario, shapeOf(f, Array(f.lines).fill(1), p, e, eb));
-    return Math.max(f.lines, Math.ceil(T / b.perBolt_N - 1e-9));
+    const N = Math.max(f.lines, space.minBolts, Math.ceil(T / b.perBolt_N - 1e-9));
+    if (p === undefined) familyNmin.set(f, N);
+    return N;
   };
 
   // Seed: one node per family, keyed by its cheapest dimensions; families a bound rules out are skipped.
@@ -239,9 +258,11 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
     const counts = f.countsPerLine ?? Array(f.lines).fill(1);
     const bound = f.countsPerLine ? code.strengthBound(f.base as CheckableScenario, shapeOf(f, counts)) : null;
-    if (bound && (bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk)) {
+    const infeasible = bound ? bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk : taperedPlateBound(f) < T * (1 - 1e-9);
+    if (infeasible) {
       stats.familiesSkippedByBound++;
-      boundReasons.set(bound.check, (boundReasons.get(bound.check) ?? 0) + 1);
+      const check = bound ? bound.check : "plate (gross yield or net section)";
+      boundReasons.set(check, (boundReasons.get(check) ?? 0) + 1);
       continue;
     }
     // Seed key: the family's bolts and holes (plate mass left out: a lower bound of every member).
@@ -270,7 +291,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const length = lengthAt(m, p, e, eb);
     if (length > maxLength + 1e-9) return; // longer in every successor too
     const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedNmin(f);
-    const cost = costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * perBoltCost(ctx, f));
+    const cost = costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * m.cb);
     heap.push({ kind: "dims", f, ip, ie, ieb, key: lowerKey(rankBy, { cost, bolts: totalBolts(f, N), efficiencyUpper, length_mm: length }) });
   };
 
@@ -338,7 +359,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
           gauges,
           stream,
           index: 0,
-          key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
+          key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * m.cb, bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
         });
       }
       continue;
@@ -351,7 +372,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     if (!answer) continue;
     const N = answer.counts.reduce((a, b) => a + b, 0);
     const m = model(f, Array(f.lines).fill(1))!;
-    const vectorKey = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * perBoltCost(ctx, f), bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
+    const vectorKey = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * m.cb, bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
     if (compareKeys(vectorKey, node.key) > 0) {
       heap.push({ ...node, key: vectorKey }); // this vector has more bolts: wait for its turn
       continue;

@@ -14,6 +14,8 @@ export const SEARCH_PATTERNS: readonly SearchPattern[] = ["grid", "staggered", "
 export const SEARCH_DEFAULTS = {
   step_mm: 5,
   maxAlong: 12,
+  /** At least two bolts in each group (common practice: a single bolt has no redundancy). */
+  minBolts: 2,
 } as const;
 
 export interface SearchSpace {
@@ -24,6 +26,8 @@ export interface SearchSpace {
   step_mm: number;
   /** Most transverse lines along the force (per side of the butt). */
   maxAlong: number;
+  /** Fewest bolts in each bolt group (per side of the butt). */
+  minBolts: number;
   maxAcross?: number;
   maxSpliceLength_mm?: number;
   fixedGauge_mm?: number;
@@ -95,6 +99,7 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
     patterns: s.patterns ?? [...SEARCH_PATTERNS],
     step_mm: s.step_mm ?? SEARCH_DEFAULTS.step_mm,
     maxAlong: s.maxAlong ?? SEARCH_DEFAULTS.maxAlong,
+    minBolts: s.minBolts ?? SEARCH_DEFAULTS.minBolts,
     coverThicknesses_mm: scenario.splice.type === "lap" ? [] : s.coverThicknesses_mm ?? [scenario.plates.covers[0]!.thickness_mm],
   };
   if (s.maxAcross !== undefined) space.maxAcross = s.maxAcross;
@@ -150,6 +155,7 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
           const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
           const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
           const push = (counts: number[] | null, lines: number, across: number, G: number) => {
+            if (counts && counts.reduce((a, b) => a + b, 0) < space.minBolts) return;
             const gauges = pattern === "tapered" ? [] : gaugesFor(G, width, limits, space);
             if ((pattern !== "tapered" && gauges.length === 0) || endsAtButt.length === 0) return;
             out.push({
@@ -205,6 +211,7 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
     `patterns: ${space.patterns.join(", ")}${space.patterns.includes("tapered") ? " (tapered: each transverse line its own count, symmetric about the plate axis, all counts odd or all even and never rising away from the butt — lap: from plate B's end)" : ""}`,
     `bolts across: 1 up to what the narrowest plate fits with the minimum gauge and edge distance${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
     `transverse lines along the force: 1 … ${space.maxAlong}${scenario.splice.type !== "lap" ? " per side of the butt" : ""}`,
+    `at least ${space.minBolts} bolts${scenario.splice.type !== "lap" ? " each side of the butt" : ""} (common practice)`,
     `dimensions on a ${space.step_mm} mm step; edge distances equal both sides (the group on the plate axis), so the edge distance follows from the gauge`,
     space.fixedGauge_mm !== undefined ? `gauge fixed at ${space.fixedGauge_mm} mm` : "gauge: every step value whose edge distance lies within the code's limits",
   ];

@@ -1,0 +1,78 @@
+#!/usr/bin/env node
+// splicewright benchmark (not a test): speed of the checker and of the proven search.
+// Run with `npm run bench` (builds first). Prints figures; asserts nothing.
+import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import { dirname, join } from "node:path";
+import { parseScenario, requireCheckable } from "../dist/io/scenario.js";
+import { parseCostTable } from "../dist/io/costs.js";
+import { checkScenario } from "../dist/engine/check.js";
+import { searchLayouts } from "../dist/search/search.js";
+import { bruteForceLayouts } from "../dist/search/brute-force.js";
+
+const root = join(dirname(fileURLToPath(import.meta.url)), "..");
+const costs = parseCostTable(readFileSync(join(root, "catalogue/costs.yaml"), "utf8"), "catalogue");
+const load = (name) => parseScenario(readFileSync(join(root, "scenarios", name), "utf8"));
+const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const time = (fn) => {
+  const t0 = performance.now();
+  const value = fn();
+  return { ms: performance.now() - t0, value };
+};
+
+console.log(`splicewright bench — node ${process.version}, ${new Date().toISOString()}`);
+console.log("");
+console.log("1. Exact checks per second (full IS 800:2007 check of one layout, formula text written on demand)");
+for (const name of ["footbridge-tie.yaml", "mezzanine-hanger.yaml", "truss-chord-staggered.yaml"]) {
+  const { scenario, code } = load(name);
+  const s = requireCheckable(scenario, code);
+  for (let i = 0; i < 300; i++) checkScenario(s, code);
+  const n = 3000;
+  const { ms } = time(() => {
+    for (let i = 0; i < n; i++) checkScenario(s, code);
+  });
+  console.log(`   ${name.padEnd(30)} ${(n / (ms / 1000)).toFixed(0).padStart(7)} checks/s  (${((ms / n) * 1000).toFixed(0)} µs each)`);
+}
+
+console.log("");
+console.log("2. Time to the proven optimum over each demo's full declared space (rank by cost, best 10)");
+console.log("   first run includes JIT warm-up; median of 5 further runs; Node start-up excluded");
+for (const name of ["footbridge-tie-search.yaml", "footbridge-tie.yaml", "mezzanine-hanger.yaml", "truss-chord-staggered.yaml"]) {
+  const { scenario, code } = load(name);
+  const ctx = { scenario, code, costs };
+  const first = time(() => searchLayouts(ctx, { top: 10, rankBy: "cost" }));
+  const runs = Array.from({ length: 5 }, () => time(() => searchLayouts(ctx, { top: 10, rankBy: "cost" })).ms);
+  const out = first.value;
+  const best = out.results[0];
+  const sizes = out.space.sizes_mm.length;
+  const classes = out.space.classes.length;
+  console.log(
+    `   ${name.padEnd(30)} ${sizes} sizes × ${classes} classes, ${out.space.step_mm} mm step: first ${first.ms.toFixed(0)} ms, median ${median(runs).toFixed(0)} ms; ` +
+      `${out.stats.families} families, ${out.stats.fullChecks} full checks, ${out.stats.integerProgrammes} IPs; best: ${best ? `M${best.family.size_mm} ${best.family.propertyClass} ${best.family.pattern} ${best.counts.join("-")}, cost ${best.cost.total.toFixed(1)}` : "none"}`,
+  );
+}
+
+console.log("");
+console.log("3. Reduced space (2 sizes × 2 classes, 10 mm step, ≤ 3 lines): search against brute force in the same run");
+const reduced = (name, sizes, classes) => {
+  const { scenario, code } = load(name);
+  scenario.search = { ...(scenario.search ?? {}), sizes_mm: sizes, classes, step_mm: 10, maxAlong: 3 };
+  return { scenario, code, costs };
+};
+let totalFast = 0;
+let totalBrute = 0;
+for (const [name, sizes, classes] of [
+  ["footbridge-tie-search.yaml", [20, 22], ["8.8", "10.9"]],
+  ["mezzanine-hanger.yaml", [16, 20], ["4.6", "8.8"]],
+  ["truss-chord-staggered.yaml", [20, 24], ["8.8", "10.9"]],
+]) {
+  const ctx = reduced(name, sizes, classes);
+  searchLayouts(ctx, { top: 10, rankBy: "cost" });
+  const fast = time(() => searchLayouts(ctx, { top: 10, rankBy: "cost" }));
+  const brute = time(() => bruteForceLayouts(ctx, 10, "cost"));
+  const same = JSON.stringify(fast.value.results.map((c) => c.key)) === JSON.stringify(brute.value.results.map((c) => c.key));
+  totalFast += fast.ms;
+  totalBrute += brute.ms;
+  console.log(`   ${name.padEnd(30)} search ${fast.ms.toFixed(1)} ms (${fast.value.stats.fullChecks} checks), brute force ${brute.ms.toFixed(0)} ms (${brute.value.checks} checks): ${(brute.ms / fast.ms).toFixed(0)}× faster, same top 10: ${same ? "yes" : "NO"}`);
+}
+console.log(`   overall: ${(totalBrute / totalFast).toFixed(0)}× faster than brute force`);

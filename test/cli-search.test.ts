@@ -1,0 +1,101 @@
+/**
+ * `splicewright search` as a user runs it: the ranked table, JSON, --save round trip through `check`,
+ * "nothing complies" with its reason, and bad options.
+ */
+import { readFileSync } from "node:fs";
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { cli, scenarioPath, tempScenario } from "./helpers/cli.js";
+
+const demo = scenarioPath("footbridge-tie-search.yaml");
+
+describe("splicewright search", () => {
+  const json = JSON.parse(cli(["search", demo, "--json"]).stdout);
+
+  it("shows the best 10 by cost with the declared space and the proof statement", () => {
+    const r = cli(["search", demo]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain("Search space (declared):");
+    expect(r.stdout).toContain("Best 10 by cost");
+    expect(r.stdout).toMatch(/Proven: nothing in the declared space ranks above/);
+    expect(r.stdout).toContain("qualified engineer");
+  });
+
+  it("JSON rows carry size, class, pattern, counts, dimensions, bolts, length, strength, efficiency, utilisation, cost", () => {
+    expect(json.results).toHaveLength(10);
+    expect(json.proven).toBe(true);
+    for (const row of json.results) {
+      for (const k of ["bolt", "pattern", "counts", "endDistance_mm", "edgeDistance_mm", "bolts", "spliceLength_mm", "jointStrength_kN", "efficiency", "utilisation", "cost"]) expect(row).toHaveProperty(k);
+      expect(row.jointStrength_kN).toBeGreaterThanOrEqual(620);
+      expect(row.utilisation).toBeLessThanOrEqual(1);
+    }
+    const costs = json.results.map((r: { cost: number }) => r.cost);
+    expect([...costs].sort((a, b) => a - b)).toEqual(costs);
+  });
+
+  it.each([1, 2, 5])("--save --rank %i writes a scenario that check passes with the same strength", (rank) => {
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-save-"));
+    const file = join(dir, "chosen.yaml");
+    const s = cli(["search", demo, "--save", file, "--rank", String(rank), "--top", "5", "--json"]);
+    expect(s.code).toBe(0);
+    const row = JSON.parse(s.stdout).results[rank - 1];
+    const c = cli(["check", file, "--json"]);
+    expect(c.code).toBe(0);
+    const report = JSON.parse(c.stdout);
+    expect(report.pass).toBe(true);
+    expect(report.jointStrength_kN).toBeCloseTo(row.jointStrength_kN, 2);
+    expect(report.efficiency).toBeCloseTo(row.efficiency, 3);
+    expect(report.bolt.count).toBe(row.bolts);
+  });
+
+  it("--save refuses to overwrite without --force and leaves the file as it was", () => {
+    const file = tempScenario("keep me\n", "existing.yaml");
+    const r = cli(["search", demo, "--save", file, "--top", "1"]);
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim()).toMatch(/already exists \(use --force to overwrite\)/);
+    expect(readFileSync(file, "utf8")).toBe("keep me\n");
+    expect(cli(["search", demo, "--save", file, "--top", "1", "--force"]).code).toBe(0);
+    expect(readFileSync(file, "utf8")).toContain("layout:");
+  });
+
+  it("--rank-by bolts orders by bolt count", () => {
+    const r = JSON.parse(cli(["search", demo, "--rank-by", "bolts", "--top", "5", "--json"]).stdout);
+    const bolts = r.results.map((x: { bolts: number }) => x.bolts);
+    expect([...bolts].sort((a, b) => a - b)).toEqual(bolts);
+  });
+
+  it("nothing complies: the load beyond the unperforated plate → exit 1 and the reason", () => {
+    const text = readFileSync(demo, "utf8").replace("factored_tension: 620 kN", "factored_tension: 900 kN");
+    const r = cli(["search", tempScenario(text)]);
+    expect(r.code).toBe(1);
+    // Unperforated 220 × 16 E250: min(3520 × 250/1.1, 0.9 × 3520 × 410/1.25) = 800.0 kN (IS 800:2007 cl. 6.2, 6.3.1)
+    expect(r.stdout).toMatch(/exceeds the design strength of the unperforated main plate, 800\.0 kN/);
+  });
+
+  it("nothing complies within a small space: the rule that eliminated the last candidates is named", () => {
+    const text = readFileSync(demo, "utf8")
+      .replace("sizes: [M16, M20, M22, M24, M27, M30]", "sizes: [M16]")
+      .replace('classes: ["4.6", "5.6", "8.8", "10.9"]', 'classes: ["4.6"]')
+      .replace("max_along: 8", "max_along: 2");
+    const r = cli(["search", tempScenario(text)]);
+    expect(r.code).toBe(1);
+    expect(r.stdout).toMatch(/No compliant layout: no layout in the declared space passes every check \(/);
+  });
+
+  it("bad options exit 2 with one line", () => {
+    const r = cli(["search", demo, "--rank-by", "beauty"]);
+    expect(r.code).toBe(2);
+    expect(cli(["search", demo, "--top", "0"]).code).toBe(2);
+  });
+
+  it("works on a scenario that already has a layout (search ignores it) and on every bundled demo", () => {
+    for (const f of ["footbridge-tie.yaml", "mezzanine-hanger.yaml", "truss-chord-staggered.yaml"]) {
+      const r = cli(["search", scenarioPath(f), "--top", "3", "--json"]);
+      expect(r.code, f).toBe(0);
+      expect(JSON.parse(r.stdout).results.length).toBe(3);
+    }
+  });
+});
+
