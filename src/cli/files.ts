@@ -19,3 +19,21 @@ export function writeFileSafely(path: string, content: string | Uint8Array, forc
     throw new InputError(path, `cannot write the file: ${e instanceof Error ? e.message : String(e)}`);
   }
 }
+
+/**
+ * Write several files as one: refuse before writing anything if one exists (without --force), then
+ * write each through a temporary name; on a failure remove what this call wrote.
+ */
+export function writeFilesSafely(files: Array<{ path: string; content: string }>, force: boolean): void {
+  if (!force) for (const f of files) if (existsSync(f.path)) throw new InputError(f.path, "already exists (use --force to overwrite)");
+  const written: string[] = [];
+  try {
+    for (const f of files) {
+      writeFileSafely(f.path, f.content, true);
+      written.push(f.path);
+    }
+  } catch (e) {
+    for (const p of written) rmSync(p, { force: true });
+    throw e;
+  }
+}

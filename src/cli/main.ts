@@ -12,7 +12,10 @@ import { parseYaml } from "../io/yaml.js";
 import { searchJson } from "../report/search-json.js";
 import { RANK_BY, type RankBy } from "../search/ranking.js";
 import { searchLayouts } from "../search/search.js";
-import { writeFileSafely } from "./files.js";
+import { writeFileSafely, writeFilesSafely } from "./files.js";
+import { EXPORT_FORMATS, exportFiles, type ExportFormat } from "../export/index.js";
+import { basename, extname, join } from "node:path";
+import type { CheckableScenario } from "../model/scenario.js";
 import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
@@ -57,6 +60,24 @@ function positiveInt(name: string) {
     if (!/^\d+$/.test(v) || Number(v) < 1) throw new InputError(`--${name}`, `must be a whole number of 1 or more, got "${v}"`);
     return Number(v);
   };
+}
+
+function parseFormats(text: string): ExportFormat[] {
+  if (text.trim() === "all") return [...EXPORT_FORMATS];
+  const out: ExportFormat[] = [];
+  for (const part of text.split(",").map((s) => s.trim()).filter(Boolean)) {
+    if (!(EXPORT_FORMATS as readonly string[]).includes(part)) throw new InputError("--format", `unknown format "${part}" (known: ${EXPORT_FORMATS.join(", ")}, all)`);
+    if (!out.includes(part as ExportFormat)) out.push(part as ExportFormat);
+  }
+  if (out.length === 0) throw new InputError("--format", "give at least one format");
+  return out;
+}
+
+/** Today's date (ISO), or the one SOURCE_DATE_EPOCH names (reproducible output, common practice). */
+function today(): string {
+  const epoch = process.env.SOURCE_DATE_EPOCH;
+  const d = epoch && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
+  return d.toISOString().slice(0, 10);
 }
 
 interface Io {
@@ -114,6 +135,39 @@ async function run(argv: string[], io: Io): Promise<number> {
       io.out(opts.json ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency), null, 2) : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed));
       if (opts.save && outcome.results[opts.rank - 1]) io.err(`saved result ${opts.rank} to ${opts.save}`);
       exit = outcome.results.length > 0 ? 0 : 1;
+    });
+
+  program
+    .command("export")
+    .description("write the drawing (SVG, DXF), hole schedule and bill of materials (CSV) or JSON for a layout")
+    .argument("<scenario>", "scenario file (YAML)")
+    .requiredOption("--format <formats>", `one or more of ${EXPORT_FORMATS.join(", ")} (comma-separated), or all`)
+    .requiredOption("--out <dir>", "folder to write into (created if missing)")
+    .option("--rank <n>", "export the n-th layout of the search instead of the scenario's own layout", positiveInt("rank"))
+    .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
+    .option("--force", "overwrite existing files")
+    .action((file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean }) => {
+      const formats = parseFormats(opts.format);
+      const text = readScenarioText(file);
+      const { scenario, code } = parseScenario(text);
+      let checkable: CheckableScenario;
+      if (opts.rank !== undefined) {
+        const outcome = searchLayouts({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, { top: opts.rank, rankBy: "cost" });
+        const chosen = outcome.results[opts.rank - 1];
+        if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
+        checkable = chosen.scenario;
+      } else {
+        checkable = requireCheckable(scenario, code);
+      }
+      const { joint, report } = checkScenario(checkable, code);
+      const base = basename(file, extname(file)) + (opts.rank !== undefined ? `-rank${opts.rank}` : "");
+      const { files, bom } = exportFiles({ scenario: checkable, joint, report, date: today(), base }, formats);
+      writeFilesSafely(files.map((f) => ({ path: join(opts.out, f.name), content: f.content })), opts.force ?? false);
+      for (const f of files) io.out(`wrote ${join(opts.out, f.name)}`);
+      for (const n of bom.notes) io.err(`note: ${n}`);
+      if (!report.pass) io.err(`the layout fails ${report.checks.filter((c) => !c.pass).length} check(s): see \`splicewright check ${file}\``);
+      if (!bom.ok) io.err("the bill of materials has no valid bolt length for every group (see the notes)");
+      exit = report.pass && bom.ok ? 0 : 1;
     });
 
   try {

@@ -1,0 +1,109 @@
+/**
+ * The drawing as an ASCII DXF in model space at full size, written with @tarikjabiri/dxf (a maintained
+ * DXF writer). Units declared in the header ($INSUNITS: millimetres). Layers: OUTLINES, HIDDEN, HOLES,
+ * CENTRE, DIMENSIONS, TEXT, SECTION. Dimensions are drawn as lines, arrowheads and text, which every
+ * CAD program displays without regenerating dimension blocks. Pure: returns the DXF text.
+ */
+import { DxfWriter, point3d, Units, Colors } from "@tarikjabiri/dxf";
+import type { Joint } from "../model/joint.js";
+import type { CheckReport } from "../model/results.js";
+import type { CheckableScenario } from "../model/scenario.js";
+import type { BillOfMaterials } from "./bolt-list.js";
+import { buildDrawing, formatLength, type Layer, type Point } from "./drawing.js";
+
+export const DXF_LAYERS: Record<Layer, string> = {
+  outlines: "OUTLINES",
+  hidden: "HIDDEN",
+  holes: "HOLES",
+  centre: "CENTRE",
+  dimensions: "DIMENSIONS",
+  text: "TEXT",
+  section: "SECTION",
+};
+
+export interface DxfInput {
+  scenario: CheckableScenario;
+  joint: Joint;
+  report: CheckReport;
+  bom: BillOfMaterials;
+  date: string;
+  /** Drawing scale the text heights are sized for (text 3.5 mm at 1:scale). */
+  scale: number;
+}
+
+export function renderDxf(input: DxfInput): string {
+  const k = input.scale;
+  const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText: `T = ${(input.scenario.load.factoredTension_N / 1000).toFixed(0)} kN` });
+  const dxf = new DxfWriter();
+  dxf.setUnits(Units.Millimeters);
+  dxf.addLType("DASHED", "Dashed __ __ __", [3 * k, -1.5 * k]);
+  dxf.addLType("CENTER", "Center ____ _ ____ _", [9 * k, -1.5 * k, 1 * k, -1.5 * k]);
+  dxf.addLayer(DXF_LAYERS.outlines, Colors.White, "Continuous");
+  dxf.addLayer(DXF_LAYERS.hidden, Colors.White, "DASHED");
+  dxf.addLayer(DXF_LAYERS.holes, Colors.Cyan, "Continuous");
+  dxf.addLayer(DXF_LAYERS.centre, Colors.Red, "CENTER");
+  dxf.addLayer(DXF_LAYERS.dimensions, Colors.Green, "Continuous");
+  dxf.addLayer(DXF_LAYERS.text, Colors.White, "Continuous");
+  dxf.addLayer(DXF_LAYERS.section, Colors.Yellow, "Continuous");
+  const p3 = (p: Point) => point3d(p[0], p[1], 0);
+  const text = 3.5 * k;
+  for (const prim of drawing.primitives) {
+    switch (prim.kind) {
+      case "line":
+        dxf.addLine(p3(prim.a), p3(prim.b), { layerName: DXF_LAYERS[prim.layer] });
+        break;
+      case "poly":
+        dxf.addLWPolyline(prim.points.map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName: DXF_LAYERS[prim.layer], flags: prim.closed ? 1 : 0 });
+        break;
+      case "circle":
+        dxf.addCircle(p3(prim.c), prim.r, { layerName: DXF_LAYERS[prim.layer] });
+        break;
+      case "text":
+        dxf.addText(p3(prim.at), prim.height, prim.text, { layerName: DXF_LAYERS[prim.layer] });
+        break;
+      case "arrow": {
+        dxf.addLine(p3(prim.from), p3(prim.to), { layerName: DXF_LAYERS[prim.layer] });
+        dxf.addLWPolyline(head(prim.to, prim.from, 3 * k).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName: DXF_LAYERS[prim.layer], flags: 1 });
+        break;
+      }
+      case "dim": {
+        const layerName = DXF_LAYERS.dimensions;
+        const along = prim.direction === "x";
+        const a: Point = along ? [prim.from[0], prim.at] : [prim.at, prim.from[1]];
+        const b: Point = along ? [prim.to[0], prim.at] : [prim.at, prim.to[1]];
+        dxf.addLine(p3(prim.from), p3(a), { layerName });
+        dxf.addLine(p3(prim.to), p3(b), { layerName });
+        dxf.addLine(p3(a), p3(b), { layerName });
+        const arrow = Math.min(2.5 * k, Math.hypot(b[0] - a[0], b[1] - a[1]) / 3);
+        for (const [tip, from] of [[a, b], [b, a]] as Array<[Point, Point]>) {
+          dxf.addLWPolyline(head(tip, from, arrow).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName, flags: 1 });
+        }
+        const mid: Point = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
+        dxf.addText(p3(along ? [mid[0], mid[1] + 1 * k] : [mid[0] - 1 * k, mid[1]]), 2.5 * k, formatLength(prim.value), { layerName, rotation: along ? 0 : 90 });
+        break;
+      }
+    }
+  }
+  // Title information in model space, under the drawing.
+  const b = input.scenario.bolts;
+  const lines = [
+    `splicewright - bolted tension splice: ${input.scenario.name}`,
+    `${input.report.codeTitle}`,
+    `${input.joint.holes.length} x M${b.size_mm} class ${b.propertyClass} ${b.assembly}; joint strength ${(input.report.jointStrength_N / 1000).toFixed(1)} kN; utilisation ${input.report.maxUtilisation.toFixed(2)}; ${input.report.pass ? "PASS" : "FAIL"}`,
+    `drawn for 1:${k}; dimensions in mm; ${input.date}. To be verified by a qualified engineer.`,
+  ];
+  lines.forEach((t, i) => dxf.addText(point3d(drawing.min[0], drawing.min[1] - (8 + 6 * i) * k, 0), text, t, { layerName: DXF_LAYERS.text }));
+  return dxf.stringify();
+}
+
+function head(tip: Point, from: Point, len: number): Point[] {
+  const dx = tip[0] - from[0];
+  const dy = tip[1] - from[1];
+  const L = Math.hypot(dx, dy) || 1;
+  const ux = dx / L;
+  const uy = dy / L;
+  const bx = tip[0] - ux * len;
+  const by = tip[1] - uy * len;
+  const w = len / 6;
+  return [tip, [bx - uy * w, by + ux * w], [bx + uy * w, by - ux * w]];
+}
