@@ -30,9 +30,12 @@ export function holeScheduleCsv(joint: Joint, title: string): string {
   ];
   for (const p of joint.plates) {
     const datum = plateDatum(p);
-    for (const h of holesOfPlate(joint, p)) {
+    const holes = holesOfPlate(joint, p)
+      .map((h) => ({ h, x: datum.sense * (h.x_mm - datum.x_mm), y: h.y_mm + p.spec.width_mm / 2 }))
+      .sort((a, b) => a.x - b.x || a.y - b.y); // in drilling order along the plate
+    for (const { h, x, y } of holes) {
       const slot = Math.abs(h.along_mm - h.across_mm) > 1e-9 ? mm(Math.max(h.along_mm, h.across_mm)) : "";
-      lines.push(row([p.id, h.id, mm(datum.sense * (h.x_mm - datum.x_mm)), mm(h.y_mm + p.spec.width_mm / 2), mm(Math.min(h.across_mm, h.along_mm)), slot, datum.text]));
+      lines.push(row([p.id, h.id, mm(x), mm(y), mm(Math.min(h.across_mm, h.along_mm)), slot, datum.text]));
     }
   }
   return lines.join("\n") + "\n";

@@ -1,0 +1,185 @@
+/**
+ * Export read-back: the SVG's holes and dimension values and the DXF's holes against the layout, the
+ * bill of materials against a hand count, bolt lengths against the product standards' dimensions.
+ */
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import DxfParser from "dxf-parser";
+import { XMLParser } from "fast-xml-parser";
+import { describe, expect, it } from "vitest";
+import { checkScenario } from "../src/engine/check.js";
+import { billOfMaterials, boltLengths } from "../src/export/bolt-list.js";
+import { exportFiles } from "../src/export/index.js";
+import { parseScenario, requireCheckable } from "../src/io/scenario.js";
+import { cli, scenarioPath, tempScenario } from "./helpers/cli.js";
+
+function load(text: string) {
+  const { scenario, code } = parseScenario(text);
+  const s = requireCheckable(scenario, code);
+  return { scenario: s, ...checkScenario(s, code) };
+}
+const demo = (name: string) => load(readFileSync(scenarioPath(name), "utf8"));
+
+type Node = Record<string, unknown>;
+function walk(node: unknown, visit: (tag: string, n: Node) => void, tag = ""): void {
+  if (Array.isArray(node)) node.forEach((n) => walk(n, visit, tag));
+  else if (node && typeof node === "object") {
+    visit(tag, node as Node);
+    for (const [k, v] of Object.entries(node)) if (!k.startsWith("@_") && k !== "#text") walk(v, visit, k);
+  }
+}
+
+describe("SVG drawing read back", () => {
+  const { scenario, joint, report } = demo("footbridge-tie.yaml");
+  const svg = exportFiles({ scenario, joint, report, date: "2026-01-01", base: "t" }, ["svg"]).files[0]!.content;
+  const doc = new XMLParser({ ignoreAttributes: false }).parse(svg);
+  const root = doc.svg as Node;
+  const k = Number(root["@_data-scale"]);
+  const ox = Number(root["@_data-origin-x"]);
+  const oy = Number(root["@_data-origin-y"]);
+  const circles: Node[] = [];
+  const dims: Node[] = [];
+  walk(doc, (tag, n) => {
+    if (tag === "circle" && n["@_data-hole"]) circles.push(n);
+    if (tag === "g" && n["@_class"] === "dim") dims.push(n);
+  });
+
+  it("has every hole at its coordinates, to scale, at true diameter", () => {
+    expect(circles).toHaveLength(joint.holes.length);
+    for (const h of joint.holes) {
+      const c = circles.find((x) => x["@_data-hole"] === h.id)!;
+      expect(Number(c["@_data-x-mm"])).toBeCloseTo(h.x_mm, 6);
+      expect(Number(c["@_data-y-mm"])).toBeCloseTo(h.y_mm, 6);
+      expect(Number(c["@_cx"])).toBeCloseTo(ox + h.x_mm / k, 2);
+      expect(Number(c["@_cy"])).toBeCloseTo(oy - h.y_mm / k, 2);
+      expect(Number(c["@_r"])).toBeCloseTo(22 / 2 / k, 3); // Ø22 for M20, IS 800:2007 Table 19
+    }
+  });
+
+  it("dimensions the end distance 40, pitch 65, butt end distance 40, gap 10, edge 40, gauge 70 and the overall 300 × 220", () => {
+    const along = dims.filter((d) => d["@_data-direction"] === "x").map((d) => Number(d["@_data-value"]));
+    const across = dims.filter((d) => d["@_data-direction"] === "y").map((d) => Number(d["@_data-value"]));
+    // chain along: cover end 40, pitch 65, at butt 40, gap 10, 40, 65, 40 — then the cover length 300
+    expect(along).toEqual([40, 65, 40, 10, 40, 65, 40, 300]);
+    // chain across: edge 40, gauge 70, 70, edge 40 — then the width 220
+    expect(across).toEqual([40, 70, 70, 40, 220]);
+  });
+
+  it("carries a title block with the scenario, the code, the bolts, the strength and the scale; ISO 128 line types", () => {
+    expect(svg).toContain("Footbridge FB-2 bottom tie");
+    expect(svg).toContain("IS 800:2007");
+    expect(svg).toContain("12 × M20 × 65 class 8.8");
+    expect(svg).toMatch(/727\.4 kN for T = 620\.0 kN/);
+    expect(svg).toMatch(/1:\d+ on A3/);
+    expect(svg).toMatch(/\.centre \{[^}]*stroke-dasharray: 9 1\.5 1 1\.5/); // long-dash dot
+    expect(svg).toMatch(/\.outline \{[^}]*stroke-width: 0\.5/); // continuous wide
+    expect(svg).toContain("qualified engineer");
+  });
+});
+
+describe("DXF read back with a DXF parser", () => {
+  const { scenario, joint, report } = demo("truss-chord-staggered.yaml");
+  const dxfText = exportFiles({ scenario, joint, report, date: "2026-01-01", base: "t" }, ["dxf"]).files[0]!.content;
+  const dxf = new DxfParser().parseSync(dxfText) as unknown as { header: Record<string, unknown>; entities: Array<{ type: string; layer: string; center?: { x: number; y: number }; radius?: number }>; tables: { layer: { layers: Record<string, unknown> } } };
+
+  it("declares millimetres ($INSUNITS = 4) and has the layers", () => {
+    expect(dxf.header.$INSUNITS).toBe(4);
+    for (const l of ["OUTLINES", "HIDDEN", "HOLES", "CENTRE", "DIMENSIONS", "TEXT", "SECTION"]) expect(Object.keys(dxf.tables.layer.layers)).toContain(l);
+  });
+
+  it("has one circle per hole on layer HOLES, radius d0/2 = 11 mm, at the hole coordinates (full size)", () => {
+    const holes = dxf.entities.filter((e) => e.type === "CIRCLE" && e.layer === "HOLES");
+    expect(holes).toHaveLength(joint.holes.length);
+    for (const h of joint.holes) {
+      const c = holes.find((e) => Math.abs(e.center!.x - h.x_mm) < 1e-6 && Math.abs(e.center!.y - h.y_mm) < 1e-6);
+      expect(c, h.id).toBeDefined();
+      expect(c!.radius).toBeCloseTo(11, 6);
+    }
+  });
+});
+
+describe("bolt lengths and the bill of materials", () => {
+  it("footbridge tie: grip 10 + 16 + 10 = 36; + washer 3 (ISO 7089) + nut 18 (ISO 4032) + 2 × 2.5 = 62 → M20 × 65; 12 of each; covers 300 × 220 × 10 = 5.18 kg", () => {
+    const { scenario, joint } = demo("footbridge-tie.yaml");
+    const bom = billOfMaterials(joint, scenario);
+    expect(bom.lengths.map((l) => [l.grip_mm, l.required_mm, l.length_mm])).toEqual([[36, 62, 65], [36, 62, 65]]);
+    expect(bom.bolts).toEqual([expect.objectContaining({ size: "M20", class: "8.8", length_mm: 65, quantity: 12 })]);
+    expect(bom.nuts[0]!.quantity).toBe(12);
+    expect(bom.washers[0]!.quantity).toBe(12);
+    expect(bom.plates.map((p) => [p.id, p.length_mm, p.mass_kg])).toEqual([["coverA", 300, 5.18], ["coverB", 300, 5.18]]);
+    expect(bom.ok).toBe(true);
+  });
+
+  it("friction-grip chord: grip 40 both sides (20 + 20; 20 + 4 packing + 16); 2 hardened washers 4 + nut 16 + 5 = 69 → 70; 20 bolts, 40 washers, a packing plate", () => {
+    const { scenario, joint } = demo("truss-chord-staggered.yaml");
+    const bom = billOfMaterials(joint, scenario);
+    expect(bom.lengths.map((l) => [l.grip_mm, l.required_mm, l.length_mm])).toEqual([[40, 69, 70], [40, 69, 70]]);
+    expect(bom.bolts[0]!.quantity).toBe(20);
+    expect(bom.washers[0]!.quantity).toBe(40);
+    expect(bom.plates.map((p) => p.id)).toEqual(["coverA", "packing"]);
+  });
+
+  it("threads excluded from the shear plane: M16 lap of 2 × 10 mm needs 45 mm, but its plain shank 45 − (2 × 16 + 6) = 7 mm stops short of the plane at 10 mm: 50 mm is used (shank 12 mm)", () => {
+    const text = readFileSync(scenarioPath("mezzanine-hanger.yaml"), "utf8").replace("threads_in_shear_planes: true", "threads_in_shear_planes: false");
+    const { scenario, joint } = load(text);
+    const [line] = boltLengths(joint, scenario);
+    // required: 20 + 3 + 14.8 + 2 × 2 = 41.8 → 45 (series); ISO 4014 b = 2d + 6 = 38 for l ≤ 125
+    expect(line!.required_mm).toBeCloseTo(41.8, 6);
+    expect(line!.deepestShearPlane_mm).toBe(10);
+    expect(line!.length_mm).toBe(50);
+    expect(line!.threadsClear).toBe(true);
+    expect(line!.note).toMatch(/lengthened from 45 to 50 mm/);
+  });
+});
+
+describe("splicewright export", () => {
+  it("writes every format into a new folder and names each file", () => {
+    const dir = join(mkdtempSync(join(tmpdir(), "splicewright-export-")), "nested", "out");
+    const r = cli(["export", scenarioPath("footbridge-tie.yaml"), "--format", "all", "--out", dir]);
+    expect(r.code).toBe(0);
+    for (const f of ["footbridge-tie.svg", "footbridge-tie.dxf", "footbridge-tie-holes.csv", "footbridge-tie-bom.csv", "footbridge-tie.json"]) expect(existsSync(join(dir, f)), f).toBe(true);
+    const json = JSON.parse(readFileSync(join(dir, "footbridge-tie.json"), "utf8"));
+    expect(json.schema).toBe("splicewright-export/1");
+    expect(json.layout.holes).toHaveLength(12);
+    const csv = readFileSync(join(dir, "footbridge-tie-holes.csv"), "utf8");
+    expect(csv).toMatch(/^# splicewright hole schedule/);
+    // cover plate A's first hole in drilling order: x = 40 from the cover's left end, y = 40 from its lower edge
+    expect(csv.split("\n")[3]).toMatch(/^coverA,A4,40,40,22,/);
+  });
+
+  it("refuses to overwrite without --force and writes nothing then", () => {
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-export-"));
+    writeFileSync(join(dir, "footbridge-tie.dxf"), "mine");
+    const r = cli(["export", scenarioPath("footbridge-tie.yaml"), "--format", "svg,dxf", "--out", dir]);
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim()).toMatch(/footbridge-tie\.dxf: already exists \(use --force to overwrite\)$/);
+    expect(readFileSync(join(dir, "footbridge-tie.dxf"), "utf8")).toBe("mine");
+    expect(existsSync(join(dir, "footbridge-tie.svg"))).toBe(false);
+    expect(cli(["export", scenarioPath("footbridge-tie.yaml"), "--format", "svg,dxf", "--out", dir, "--force"]).code).toBe(0);
+  });
+
+  it("exports the n-th layout of the search with --rank", () => {
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-export-"));
+    const r = cli(["export", scenarioPath("footbridge-tie-search.yaml"), "--rank", "2", "--format", "json", "--out", dir]);
+    expect(r.code).toBe(0);
+    const json = JSON.parse(readFileSync(join(dir, "footbridge-tie-search-rank2.json"), "utf8"));
+    expect(json.result.pass).toBe(true);
+  });
+
+  it("an unknown format and a scenario without a layout are bad input (exit 2)", () => {
+    expect(cli(["export", scenarioPath("footbridge-tie.yaml"), "--format", "pdf", "--out", tmpdir()]).stderr).toMatch(/--format: unknown format "pdf"/);
+    const r = cli(["export", scenarioPath("footbridge-tie-search.yaml"), "--format", "svg", "--out", tmpdir()]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/bolts: required for check/);
+  });
+
+  it("a failing layout is still drawn, and export exits 1 saying so", () => {
+    const text = readFileSync(scenarioPath("mezzanine-hanger.yaml"), "utf8").replace("factored_tension: 150 kN", "factored_tension: 200 kN");
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-export-"));
+    const r = cli(["export", tempScenario(text), "--format", "svg", "--out", dir]);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/the layout fails \d+ check/);
+    expect(readFileSync(join(dir, "scenario.svg"), "utf8")).toContain("FAIL");
+  });
+});
