@@ -15,7 +15,8 @@ import { searchLayouts } from "../search/search.js";
 import { writeFileSafely, writeFilesSafely } from "./files.js";
 import { EXPORT_FORMATS, exportFiles, type ExportFormat } from "../export/index.js";
 import { basename, extname, join } from "node:path";
-import type { CheckableScenario } from "../model/scenario.js";
+import { billOfMaterials } from "../export/bolt-list.js";
+import { renderReportHtml } from "../report/html.js";
 import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
@@ -60,6 +61,16 @@ function positiveInt(name: string) {
     if (!/^\d+$/.test(v) || Number(v) < 1) throw new InputError(`--${name}`, `must be a whole number of 1 or more, got "${v}"`);
     return Number(v);
   };
+}
+
+/** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
+function chooseLayout(file: string, rank: number | undefined, costsFile: string | undefined) {
+  const { scenario, code } = parseScenario(readScenarioText(file));
+  if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
+  const outcome = searchLayouts({ scenario, code, costs: loadCosts(costsFile, scenario.costs) }, { top: rank, rankBy: "cost" });
+  const chosen = outcome.results[rank - 1];
+  if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
+  return { checkable: chosen.scenario, code };
 }
 
 function parseFormats(text: string): ExportFormat[] {
@@ -148,17 +159,7 @@ async function run(argv: string[], io: Io): Promise<number> {
     .option("--force", "overwrite existing files")
     .action((file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean }) => {
       const formats = parseFormats(opts.format);
-      const text = readScenarioText(file);
-      const { scenario, code } = parseScenario(text);
-      let checkable: CheckableScenario;
-      if (opts.rank !== undefined) {
-        const outcome = searchLayouts({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, { top: opts.rank, rankBy: "cost" });
-        const chosen = outcome.results[opts.rank - 1];
-        if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
-        checkable = chosen.scenario;
-      } else {
-        checkable = requireCheckable(scenario, code);
-      }
+      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
       const { joint, report } = checkScenario(checkable, code);
       const base = basename(file, extname(file)) + (opts.rank !== undefined ? `-rank${opts.rank}` : "");
       const { files, bom } = exportFiles({ scenario: checkable, joint, report, date: today(), base }, formats);
@@ -168,6 +169,25 @@ async function run(argv: string[], io: Io): Promise<number> {
       if (!report.pass) io.err(`the layout fails ${report.checks.filter((c) => !c.pass).length} check(s): see \`splicewright check ${file}\``);
       if (!bom.ok) io.err("the bill of materials has no valid bolt length for every group (see the notes)");
       exit = report.pass && bom.ok ? 0 : 1;
+    });
+
+  program
+    .command("report")
+    .description("write a self-contained HTML calculation report (inputs, drawing, every check, verdict)")
+    .argument("<scenario>", "scenario file (YAML)")
+    .requiredOption("--out <file>", "the HTML file to write")
+    .option("--rank <n>", "report on the n-th layout of the search instead of the scenario's own layout", positiveInt("rank"))
+    .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
+    .option("--force", "overwrite an existing file")
+    .action((file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean }) => {
+      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
+      const { joint, report } = checkScenario(checkable, code);
+      const bom = billOfMaterials(joint, checkable);
+      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
+      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date: today(), version: VERSION, origin });
+      writeFileSafely(opts.out, html, opts.force ?? false);
+      io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
+      exit = report.pass ? 0 : 1;
     });
 
   try {

@@ -7,10 +7,12 @@ import { blockShapes } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { leastNetPath, type NetPath } from "../../geometry/net-section.js";
+import { tearOutDistances } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
-import { withLazyText, type StrengthCheck, type Warning } from "../../model/results.js";
+import type { StrengthCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
-import { f, kN, utilisation } from "../format.js";
+import { strength } from "../check-builders.js";
+import { f, kN } from "../format.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
 import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
 import { cl } from "./citation.js";
@@ -46,18 +48,6 @@ export function groupFactors(joint: Joint, group: BoltGroupGeometry): GroupFacto
     beta_lg: beta_lg(group.grip_mm, d, blj),
     beta_pkg: beta_pkg(group.packing_mm),
   };
-}
-
-/**
- * A strength check result. The substituted-values text and the notes are written only when read
- * (a search runs thousands of checks and prints a few), from the same numbers.
- */
-function strength(
-  partial: Omit<StrengthCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string; notes?: () => string[] },
-): StrengthCheck {
-  const { substituted, notes, ...numbers } = partial;
-  const u = utilisation(numbers.demand_N, numbers.resistance_N);
-  return withLazyText({ type: "strength", ...numbers, utilisation: u, pass: u <= 1 + 1e-9 }, substituted, notes ?? (() => []));
 }
 
 /**
@@ -108,18 +98,10 @@ export function bearingFactor(holes: readonly Hole[], connection: PlateConnectio
   let e = Infinity;
   let p = Infinity;
   let d0 = 0;
-  for (const h of holes) {
-    d0 = Math.max(d0, h.along_mm);
-    const u = connection.towardEnd * (connection.endX_mm - h.x_mm);
-    // The hole directly ahead of h (toward the end) within its own tear-out strip.
-    let ahead = -Infinity;
-    for (const k of holes) {
-      if (k === h) continue;
-      const uk = connection.towardEnd * (connection.endX_mm - k.x_mm);
-      if (uk < u - 1e-9 && Math.abs(k.y_mm - h.y_mm) < h.across_mm) ahead = Math.max(ahead, uk);
-    }
-    if (ahead === -Infinity) e = Math.min(e, u);
-    else p = Math.min(p, u - ahead);
+  for (const t of tearOutDistances(holes, connection)) {
+    d0 = Math.max(d0, t.hole.along_mm);
+    if (t.toHoleAhead_mm === null) e = Math.min(e, t.toEnd_mm);
+    else p = Math.min(p, t.toHoleAhead_mm);
   }
   return { e_mm: e, p_mm: p, d0_mm: d0, kb: kbFactor(e, p, d0, fub_MPa, fu_MPa) };
 }

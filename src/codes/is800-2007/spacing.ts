@@ -4,49 +4,12 @@
  */
 import { distance, gaugeLines, transverseLines } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
-import { withLazyText, type RuleCheck } from "../../model/results.js";
+import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
-import type { Citation } from "../../model/results.js";
 import { f } from "../format.js";
+import { holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { epsilon } from "./materials.js";
-
-function rule(r: Omit<RuleCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string }): RuleCheck {
-  const { substituted, ...numbers } = r;
-  const u = r.bound === "max" ? r.value_mm / r.limit_mm : r.value_mm > 0 ? r.limit_mm / r.value_mm : Infinity;
-  const pass = r.bound === "max" ? r.value_mm <= r.limit_mm + 1e-9 : r.value_mm >= r.limit_mm - 1e-9;
-  return withLazyText({ type: "rule" as const, ...numbers, utilisation: u, pass }, substituted, () => []);
-}
-
-/** Plates (not packing) through which a hole passes. */
-function platesThrough(joint: Joint, hole: Hole): PlatePiece[] {
-  return joint.plates.filter((p) => p.role !== "packing" && p.connections.some((c) => c.group === hole.group));
-}
-
-/** Thickness of the thinner plate that two holes both pass through (the t of cl. 10.2.3). */
-function pairThickness(joint: Joint, a: Hole, b: Hole): number {
-  const shared = platesThrough(joint, a).filter((p) => platesThrough(joint, b).includes(p));
-  return Math.min(...shared.map((p) => p.spec.thickness_mm));
-}
-
-/** Plates at either face of some bolt group's stack: the "outside" plates of cl. 10.2.3.3 and 10.2.4.3. */
-function outsidePlates(joint: Joint): PlatePiece[] {
-  const ids = new Set<string>();
-  for (const g of joint.groups) {
-    const ends = [g.stack[0], g.stack[g.stack.length - 1]];
-    for (const id of ends) if (id && id !== "packing") ids.add(id);
-  }
-  return joint.plates.filter((p) => ids.has(p.id));
-}
-
-function holePlates(joint: Joint): PlatePiece[] {
-  return joint.plates.filter((p) => p.role !== "packing");
-}
-
-function platesHoles(joint: Joint, plate: PlatePiece): Hole[] {
-  const groups = new Set(plate.connections.map((c) => c.group));
-  return joint.holes.filter((h) => groups.has(h.group));
-}
 
 /**
  * Whether a plate's fasteners are staggered at equal intervals (cl. 10.2.3.4): consecutive transverse
@@ -66,46 +29,6 @@ export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_m
     if (Math.abs(lines[i]!.at_mm - lines[i - 1]!.at_mm - spacing) > 1e-6) return { staggered: false, gauge_mm: gauge };
   }
   return { staggered: true, gauge_mm: gauge };
-}
-
-interface Worst {
-  value: number;
-  limit: number;
-  where: string;
-  /** Text of the substituted values, built only for the governing case. */
-  detail: () => string;
-}
-
-function keepWorst(current: Worst | null, next: Worst, bound: "min" | "max"): Worst {
-  if (!current) return next;
-  const ratio = (w: Worst) => (bound === "max" ? w.value / w.limit : w.limit / w.value);
-  return ratio(next) > ratio(current) + 1e-12 ? next : current;
-}
-
-function worstRule(
-  id: string,
-  kind: RuleCheck["kind"],
-  title: string,
-  citation: Citation,
-  formula: string,
-  bound: "min" | "max",
-  worst: Worst | null,
-): RuleCheck[] {
-  if (!worst) return [];
-  return [
-    rule({
-      id,
-      kind,
-      title,
-      component: worst.where,
-      citation,
-      formula,
-      substituted: worst.detail,
-      value_mm: worst.value,
-      limit_mm: worst.limit,
-      bound,
-    }),
-  ];
 }
 
 /** Minimum spacing between fastener centres, 2.5 d. IS 800:2007, cl. 10.2.2. */

@@ -1,0 +1,226 @@
+/**
+ * The calculation report: one self-contained HTML file (inline styles, inline SVG drawing, system
+ * fonts, no network requests), laid out as a plain calculation sheet that prints cleanly to A4. Pure.
+ */
+import type { Joint } from "../model/joint.js";
+import type { CheckReport, CheckResult } from "../model/results.js";
+import type { CheckableScenario } from "../model/scenario.js";
+import type { BillOfMaterials } from "../export/bolt-list.js";
+import { renderSvg } from "../export/svg.js";
+import { CAUTION, citationText } from "./check-json.js";
+
+export interface ReportInput {
+  scenario: CheckableScenario;
+  joint: Joint;
+  report: CheckReport;
+  bom: BillOfMaterials;
+  date: string;
+  version: string;
+  /** Where the layout came from: the scenario's own, or a search result. */
+  origin: string;
+}
+
+const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+const fx = (v: number, d = 1) => (Number.isFinite(v) ? v.toFixed(d) : "∞");
+
+const SPLICE_TEXT: Record<Joint["spliceType"], string> = {
+  lap: "Lap splice: two plates, bolts in single shear",
+  "butt-single-cover": "Butt splice with one cover plate: bolts in single shear",
+  "butt-double-cover": "Butt splice with two cover plates: bolts in double shear",
+};
+
+/** Which section of the report a check belongs to. */
+function componentOf(c: CheckResult): string {
+  if (c.kind === "bolt-shear" || c.kind === "slip" || c.kind === "grip-length") return "Bolts";
+  if (c.type === "rule") return "Spacing, end and edge rules";
+  return c.component.replace(/, side [AB]$/, "").replace(/^./, (m) => m.toUpperCase());
+}
+
+function demandText(c: CheckResult): string {
+  return c.type === "strength" ? `${fx(c.demand_N / 1000)} kN` : `${fx(c.value_mm)} mm`;
+}
+
+function resistanceText(c: CheckResult): string {
+  return c.type === "strength" ? `${fx(c.resistance_N / 1000)} kN` : `${c.bound === "min" ? "≥" : "≤"} ${fx(c.limit_mm)} mm`;
+}
+
+function bar(c: CheckResult): string {
+  const u = Number.isFinite(c.utilisation) ? c.utilisation : 9.99;
+  const width = Math.min(100, Math.max(0, u * 100));
+  return `<div class="bar${c.pass ? "" : " over"}" role="img" aria-label="utilisation ${fx(u, 2)}"><span style="width:${fx(width, 1)}%"></span></div><span class="u">${fx(u, 2)}</span>`;
+}
+
+function checkRows(checks: CheckResult[], governing: string): string {
+  return checks
+    .map(
+      (c) => `<tr class="${c.pass ? "pass" : "fail"}${c.id === governing ? " governing" : ""}" data-check="${esc(c.id)}">
+  <td class="clause">${esc(citationText(c.citation))}</td>
+  <td><b>${esc(c.title)}</b><br><span class="muted">${esc(c.component)}</span></td>
+  <td class="formula"><div>${esc(c.formula)}</div><div class="subst">${esc(c.substituted)}</div>${c.notes.length ? `<div class="muted">${esc(c.notes.join("; "))}</div>` : ""}</td>
+  <td class="num">${esc(demandText(c))}</td>
+  <td class="num">${esc(resistanceText(c))}</td>
+  <td class="util">${bar(c)}</td>
+  <td class="result">${c.pass ? "pass" : "FAIL"}${c.id === governing ? "<br><span class=\"muted\">governs</span>" : ""}</td>
+</tr>`,
+    )
+    .join("\n");
+}
+
+export function renderReportHtml(input: ReportInput): string {
+  const { scenario, joint, report, bom } = input;
+  const b = scenario.bolts;
+  const svg = renderSvg({ scenario, joint, report, bom, date: input.date }).replace(/^<\?xml[^>]*>\s*/, "");
+  const groups = new Map<string, CheckResult[]>();
+  for (const c of report.checks) {
+    const key = componentOf(c);
+    groups.set(key, [...(groups.get(key) ?? []), c]);
+  }
+  const governing = report.checks.find((c) => c.id === report.governing);
+  const failed = report.checks.filter((c) => !c.pass);
+  const verdict = report.pass ? "PASS — every check passes" : `FAIL — ${failed.length} check${failed.length > 1 ? "s" : ""} fail`;
+  const plateRows = joint.plates
+    .map((p) => `<tr><td>${esc(p.label)}</td><td class="num">${fx(p.spec.width_mm)}</td><td class="num">${fx(p.spec.thickness_mm)}</td><td>${esc(p.spec.grade)}</td><td class="num">${p.fy_MPa} / ${p.fu_MPa}</td><td>${esc(p.spec.edges)}</td><td class="num">${p.role === "packing" ? "—" : fx(p.forceShare, 3)}</td></tr>`)
+    .join("\n");
+  const l = scenario.layout;
+  const layoutRows: Array<[string, string]> = [["Pattern", joint.patternText + (joint.spliceType !== "lap" ? " per side of the butt" : "")]];
+  if (l.kind !== "holes") {
+    layoutRows.push(["Pitch", `${fx(l.pitch_mm)} mm`], ["Gauge", `${fx(l.gauge_mm)} mm`], ["End distance", `${fx(l.endDistance_mm)} mm`]);
+    if (joint.spliceType !== "lap") layoutRows.push(["End distance at the butt", `${fx(l.endDistanceAtButt_mm)} mm`], ["Butt gap", `${fx(joint.buttGap_mm)} mm`]);
+  }
+  layoutRows.push(["Bolts", `${joint.holes.length}`], ["Splice length", `${fx(joint.spliceLength_mm)} mm`], ["Holes", `Ø${fx(joint.holes[0]?.across_mm ?? 0)} mm (${b.hole})`]);
+  const bomRows = [
+    ...bom.bolts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
+    ...bom.nuts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
+    ...bom.washers.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
+    ...bom.plates.map((x) => `<tr><td>${esc(`${x.item} ${x.width_mm} × ${x.thickness_mm} × ${fx(x.length_mm, 0)} ${x.grade}`)}</td><td class="num">${x.quantity}</td><td>${fx(x.mass_kg, 2)} kg, ${x.holes} holes Ø${x.holeDiameter_mm}</td></tr>`),
+  ].join("\n");
+
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<meta name="generator" content="splicewright ${esc(input.version)}">
+<title>${esc(scenario.name)} — calculation report</title>
+<style>
+  :root { --ink: #111; --muted: #555; --rule: #999; }
+  * { box-sizing: border-box; }
+  body { font-family: "DejaVu Sans", "Liberation Sans", Arial, Helvetica, sans-serif; color: var(--ink); margin: 0 auto; max-width: 1100px; padding: 16px 24px; font-size: 13px; line-height: 1.35; }
+  header.sheet { border: 1.5px solid var(--ink); display: grid; grid-template-columns: 1fr auto; margin-bottom: 12px; }
+  header.sheet h1 { font-size: 18px; margin: 0; padding: 8px 10px; border-right: 1px solid var(--ink); }
+  header.sheet .meta { padding: 6px 10px; font-size: 12px; }
+  h2 { font-size: 15px; border-bottom: 1.5px solid var(--ink); padding-bottom: 2px; margin: 18px 0 8px; }
+  h3 { font-size: 13px; margin: 14px 0 4px; }
+  table { border-collapse: collapse; width: 100%; margin: 4px 0 10px; }
+  th, td { border: 1px solid var(--rule); padding: 3px 6px; vertical-align: top; text-align: left; }
+  th { background: #eee; font-weight: 600; }
+  td.num { text-align: right; white-space: nowrap; }
+  td.clause { white-space: nowrap; font-size: 12px; }
+  td.formula { font-family: "DejaVu Sans Mono", "Liberation Mono", Consolas, monospace; font-size: 11px; }
+  td.formula .subst { margin-top: 2px; }
+  .muted { color: var(--muted); font-size: 11px; font-family: inherit; }
+  td.util { width: 130px; white-space: nowrap; }
+  .bar { display: inline-block; width: 80px; height: 10px; border: 1px solid var(--ink); vertical-align: middle; position: relative; }
+  .bar span { display: block; height: 100%; background: #444; }
+  .bar.over span { background: repeating-linear-gradient(45deg, #000 0 3px, #fff 3px 5px); }
+  .u { margin-left: 6px; font-variant-numeric: tabular-nums; }
+  tr.fail td.result { font-weight: bold; }
+  tr.governing td { border-top: 2px solid var(--ink); border-bottom: 2px solid var(--ink); }
+  .kv td:first-child { width: 32%; color: var(--muted); }
+  figure.drawing { margin: 0; border: 1px solid var(--rule); }
+  figure.drawing svg { width: 100%; height: auto; display: block; }
+  .verdict { border: 2px solid var(--ink); padding: 8px 12px; font-size: 16px; font-weight: bold; margin: 8px 0; }
+  .caution { border: 1px solid var(--ink); padding: 8px 12px; font-size: 12px; margin-top: 16px; }
+  footer { margin-top: 18px; font-size: 11px; color: var(--muted); }
+  @page { size: A4; margin: 14mm 12mm 16mm; @bottom-right { content: "page " counter(page) " of " counter(pages); font-size: 9pt; } @bottom-left { content: "splicewright calculation report"; font-size: 9pt; } }
+  @media print {
+    body { max-width: none; padding: 0; font-size: 10pt; }
+    section.page { break-before: page; }
+    tr, .verdict, .caution, figure.drawing { break-inside: avoid; }
+    thead { display: table-header-group; }
+    a { color: inherit; text-decoration: none; }
+  }
+</style>
+</head>
+<body>
+<header class="sheet">
+  <h1>Calculation report — bolted tension splice</h1>
+  <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
+</header>
+
+<section id="project">
+<h2>1. Project and scenario</h2>
+<table class="kv">
+<tr><td>Scenario</td><td>${esc(scenario.name)}</td></tr>
+<tr><td>Project</td><td>${esc(scenario.project ?? "—")}</td></tr>
+<tr><td>Design code</td><td>${esc(report.codeTitle)}</td></tr>
+<tr><td>Splice</td><td>${esc(SPLICE_TEXT[joint.spliceType])}</td></tr>
+<tr><td>Layout</td><td>${esc(input.origin)}</td></tr>
+</table>
+</section>
+
+<section id="inputs">
+<h2>2. Inputs</h2>
+<h3>Load</h3>
+<table class="kv">
+<tr><td>Factored tension T</td><td>${fx(scenario.load.factoredTension_N / 1000)} kN</td></tr>
+${scenario.load.serviceTension_N !== undefined ? `<tr><td>Service tension</td><td>${fx(scenario.load.serviceTension_N / 1000)} kN</td></tr>` : ""}
+</table>
+<h3>Plates</h3>
+<table>
+<thead><tr><th>Plate</th><th>Width (mm)</th><th>Thickness (mm)</th><th>Steel</th><th>fy / fu (MPa)</th><th>Edges</th><th>Share of T</th></tr></thead>
+<tbody>${plateRows}</tbody>
+</table>
+<h3>Bolts and layout</h3>
+<table class="kv">
+<tr><td>Bolts</td><td>M${b.size_mm} property class ${b.propertyClass} (ISO 898-1), ${b.assembly === "bearing" ? "bearing type" : `friction grip, μf ${b.slipFactor}, slip designed at ${b.slipAt} load`}; threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes</td></tr>
+${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n")}
+</table>
+</section>
+
+<section id="drawing" class="page">
+<h2>3. Drawing</h2>
+<figure class="drawing">${svg}</figure>
+<h3>Bill of materials</h3>
+<table>
+<thead><tr><th>Item</th><th>Quantity</th><th>Standard / notes</th></tr></thead>
+<tbody>${bomRows}</tbody>
+</table>
+${bom.notes.length ? `<p>${bom.notes.map(esc).join("<br>")}</p>` : ""}
+</section>
+
+<section id="checks" class="page">
+<h2>4. Checks</h2>
+${[...groups.entries()]
+  .map(
+    ([name, checks]) => `<h3>${esc(name)}</h3>
+<table class="checks">
+<thead><tr><th>Clause</th><th>Check</th><th>Formula and substituted values</th><th>Demand</th><th>Resistance / limit</th><th>Utilisation</th><th>Result</th></tr></thead>
+<tbody>
+${checkRows(checks, report.governing)}
+</tbody>
+</table>`,
+  )
+  .join("\n")}
+</section>
+
+<section id="result" class="page">
+<h2>5. Result</h2>
+<table class="kv">
+<tr><td>Joint design strength</td><td>${fx(report.jointStrength_N / 1000)} kN</td></tr>
+<tr><td>Governing check</td><td>${governing ? esc(`${governing.title}, ${governing.component} — ${citationText(governing.citation)}`) : "—"}</td></tr>
+<tr><td>Efficiency</td><td>${fx(report.efficiency * 100)} %<br><span class="muted">${esc(report.efficiencyDefinition)}</span></td></tr>
+<tr><td>Highest utilisation</td><td>${fx(report.maxUtilisation, 3)}</td></tr>
+</table>
+${report.warnings.length ? `<h3>Warnings</h3><ul>${report.warnings.map((w) => `<li><b>${esc(w.id)}</b>: ${esc(w.message)}</li>`).join("")}</ul>` : ""}
+<h3>Conventions</h3>
+<ul>${report.conventions.map((c) => `<li>${esc(c)}</li>`).join("")}</ul>
+<div class="verdict" id="verdict">Verdict: ${esc(verdict)}</div>
+${failed.length ? `<p>Failing: ${failed.map((c) => esc(`${c.title} (${c.component})`)).join("; ")}</p>` : ""}
+<div class="caution"><b>Caution.</b> ${esc(CAUTION)}</div>
+</section>
+<footer>Generated by splicewright ${esc(input.version)} on ${esc(input.date)}. All dimensions in mm, forces in kN, stresses in MPa.</footer>
+</body>
+</html>
+`;
+}
