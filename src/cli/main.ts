@@ -16,6 +16,12 @@ import { writeFileSafely, writeFilesSafely } from "./files.js";
 import { EXPORT_FORMATS, exportFiles, type ExportFormat } from "../export/index.js";
 import { basename, extname, join } from "node:path";
 import { billOfMaterials } from "../export/bolt-list.js";
+import { compareChoices, compareCodes, MappingError, type CompareColumn } from "../compare/compare.js";
+import { compareJson } from "../report/compare-json.js";
+import { formatCompare } from "./compare-table.js";
+import { parseMapping, parseMappingText } from "../io/equivalents.js";
+import { codeIds, findCode } from "../codes/registry.js";
+import { BOLT_SIZES_MM, isBoltSize, isPropertyClass, type PropertyClass } from "../catalogue/bolts.js";
 import { renderReportHtml } from "../report/html.js";
 import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
@@ -43,6 +49,13 @@ export function readScenarioText(file: string): string {
 function loadCheckable(file: string) {
   const { scenario, code } = parseScenario(readScenarioText(file));
   return { scenario: requireCheckable(scenario, code), code };
+}
+
+/** The bundled table of nearest equivalent materials between codes. */
+export const BUNDLED_EQUIVALENTS = fileURLToPath(new URL("../../catalogue/equivalents.yaml", import.meta.url));
+
+function splitList(text: string): string[] {
+  return text.split(",").map((s) => s.trim()).filter(Boolean);
 }
 
 /** The bundled cost catalogue (illustrative prices), next to the package. */
@@ -188,6 +201,51 @@ async function run(argv: string[], io: Io): Promise<number> {
       writeFileSafely(opts.out, html, opts.force ?? false);
       io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
       exit = report.pass ? 0 : 1;
+    });
+
+  program
+    .command("compare")
+    .description("the same splice side by side under other bolt classes, bolt sizes or design codes")
+    .argument("<scenario>", "scenario file (YAML)")
+    .option("--classes <list>", "property classes, e.g. 4.6,8.8,10.9")
+    .option("--sizes <list>", "bolt sizes, e.g. 16,20,24 or M16,M20")
+    .option("--codes <list>", "design codes, e.g. is800,en1993,aisc360")
+    .option("--costs <file>", "cost catalogue instead of the bundled illustrative one")
+    .option("--json", "print the comparison as JSON")
+    .action((file: string, opts: { classes?: string; sizes?: string; codes?: string; costs?: string; json?: boolean }) => {
+      const { scenario, code } = parseScenario(readScenarioText(file));
+      const costs = loadCosts(opts.costs, scenario.costs);
+      if (!opts.classes && !opts.sizes && !opts.codes) throw new InputError("compare", "give --classes, --sizes or --codes");
+      if (opts.codes && (opts.classes || opts.sizes)) throw new InputError("--codes", "compare codes on their own (classes and sizes differ between codes)");
+      let columns: CompareColumn[];
+      if (opts.codes) {
+        const codes = splitList(opts.codes).map((id) => {
+          const found = findCode(id);
+          if (!found) throw new InputError("--codes", `unknown design code "${id}" (known: ${codeIds().join(", ")})`);
+          return found;
+        });
+        const table = scenario.compare !== undefined ? parseMapping(scenario.compare, "compare") : parseMappingText(readScenarioText(BUNDLED_EQUIVALENTS), "catalogue/equivalents.yaml");
+        try {
+          columns = compareCodes(scenario, code, codes, costs, table);
+        } catch (e) {
+          if (e instanceof MappingError) throw new InputError(e.field, e.message);
+          throw e;
+        }
+      } else {
+        const classes = opts.classes ? splitList(opts.classes).map((c) => {
+          const cls = c;
+          if (!isPropertyClass(cls) || !(code.classesFor(scenario.bolts?.assembly ?? "bearing") as readonly string[]).includes(cls)) throw new InputError("--classes", `unknown or not allowed property class "${c}" (allowed: ${code.classesFor(scenario.bolts?.assembly ?? "bearing").join(", ")})`);
+          return cls as PropertyClass;
+        }) : [];
+        const sizes = opts.sizes ? splitList(opts.sizes).map((t) => {
+          const d = Number(t.replace(/^M/i, ""));
+          if (!isBoltSize(d)) throw new InputError("--sizes", `unknown bolt size "${t}" (known: ${BOLT_SIZES_MM.map((x) => `M${x}`).join(", ")})`);
+          return d;
+        }) : [];
+        columns = compareChoices(scenario, code, costs, classes, sizes);
+      }
+      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency), null, 2) : formatCompare(scenario.name, columns, costs.currency));
+      exit = columns.some((c) => c.best) ? 0 : 1;
     });
 
   try {

@@ -5,7 +5,7 @@
 import type { GeometryCode } from "../geometry/joint-builder.js";
 import type { Joint } from "../model/joint.js";
 import type { CheckResult, Warning } from "../model/results.js";
-import type { CheckableScenario, PlateSpec, Scenario } from "../model/scenario.js";
+import type { CheckableScenario, CheckOptions, PlateSpec, Scenario } from "../model/scenario.js";
 
 /** An input the code cannot accept, with the scenario path it concerns. */
 export interface ScopeError {
@@ -65,6 +65,22 @@ export interface StrengthBound {
   plates_N: number;
 }
 
+/**
+ * What a code reads from a scenario beyond the fields every code reads (EN 1993-1-8: partial factors of
+ * a national annex, the steel-strength convention). A code without such settings leaves it out.
+ */
+export interface CodeSettings {
+  /** Scenario fields only this code reads, as file paths ("factors", "options.steel_strengths"); any other code refuses them. */
+  fields: readonly string[];
+  /** The code's own defaults for shared options a scenario leaves out. */
+  optionDefaults: Partial<Pick<CheckOptions, "boltNetArea" | "boltStrength">>;
+  /**
+   * The code bound to one scenario's settings: the methods that see only a plate or a bolt size
+   * (plateStrength, holeDimensions, unperforatedStrength, netStrengthPerWidth) answer for that scenario.
+   */
+  bind(scenario: Scenario): DesignCode;
+}
+
 export interface DesignCode extends GeometryCode {
   id: string;
   title: string;
@@ -86,4 +102,6 @@ export interface DesignCode extends GeometryCode {
   netStrengthPerWidth(spec: PlateSpec): number;
   /** Property classes the code allows for an assembly (friction grip: 8.8 and 10.9 under IS 800). */
   classesFor(assembly: "bearing" | "friction-grip"): readonly string[];
+  /** Scenario settings this code reads (absent: none). */
+  settings?: CodeSettings;
 }

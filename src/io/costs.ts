@@ -22,6 +22,10 @@ export type CostFile = z.infer<typeof costSchema>;
 function issueText(e: z.ZodError, prefix: string): InputError {
   const issue = e.issues[0]!;
   const path = [prefix, ...issue.path.map(String)].filter(Boolean).join(".");
+  if (issue.code === "unrecognized_keys") {
+    const key = (issue as { keys?: string[] }).keys?.[0] ?? "";
+    return new InputError(`${path}.${key}`, "unknown field (not part of the cost table)");
+  }
   return new InputError(path, issue.message);
 }
 

@@ -11,8 +11,20 @@ import type { BoltSpec, CheckableScenario, EdgePreparation, HoleType, LayoutSpec
 import { scenarioSchema, type ScenarioFile } from "./schema.js";
 import { InputError, MAX_FILE_BYTES, parseYaml } from "./yaml.js";
 import { validateCosts } from "./costs.js";
+import { parseMapping } from "./equivalents.js";
+import type { En10025Convention } from "../catalogue/steels.js";
 
 export { InputError, MAX_FILE_BYTES, parseYaml };
+
+/** The value at a path of the input, or undefined where the path does not exist. */
+function valueAt(value: unknown, path: ReadonlyArray<PropertyKey>): unknown {
+  let v: unknown = value;
+  for (const k of path) {
+    if (v === null || typeof v !== "object") return undefined;
+    v = (v as Record<PropertyKey, unknown>)[k];
+  }
+  return v;
+}
 
 function issuePath(path: ReadonlyArray<PropertyKey>): string {
   return path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");
@@ -28,11 +40,11 @@ export function validateFile(value: unknown): ScenarioFile {
   const issue = result.error.issues[0]!;
   const path = issuePath(issue.path);
   let reason = issue.message;
-  if (issue.code === "invalid_type" && /received undefined/.test(issue.message)) reason = "required";
   if (issue.code === "unrecognized_keys") {
     const keys = (issue as { keys?: string[] }).keys ?? [];
     throw new InputError(path ? `${path}.${keys[0] ?? ""}` : keys[0] ?? "", `unknown field (not part of the scenario format)`);
   }
+  if (valueAt(value, issue.path) === undefined) reason = "required";
   throw new InputError(path, reason);
 }
 
@@ -171,13 +183,15 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     load: { factoredTension_N: file.load.factored_tension },
     options: {
       exposedToCorrosion: file.options.exposed_to_corrosion,
-      boltNetArea: file.options.bolt_net_area,
-      boltStrength: file.options.bolt_strength,
+      boltNetArea: file.options.bolt_net_area ?? code.settings?.optionDefaults.boltNetArea ?? "0.78-gross",
+      boltStrength: file.options.bolt_strength ?? code.settings?.optionDefaults.boltStrength ?? "minimum",
       netSectionLoad: file.options.net_section_load,
     },
   };
+  codeSettingsOf(file, code, scenario);
   if (file.project !== undefined) scenario.project = file.project;
   if (file.costs !== undefined) scenario.costs = validateCosts(file.costs, "costs");
+  if (file.compare !== undefined) scenario.compare = parseMapping(file.compare, "compare");
   if (file.load.service_tension !== undefined) {
     if (file.load.service_tension > file.load.factored_tension) throw new InputError("load.service_tension", "exceeds the factored tension");
     scenario.load.serviceTension_N = file.load.service_tension;
@@ -218,7 +232,34 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
   }
   const scope = code.scopeErrors(scenario)[0];
   if (scope) throw new InputError(scope.path, scope.message);
-  return { scenario, code };
+  return { scenario, code: code.settings ? code.settings.bind(scenario) : code };
+}
+
+/**
+ * The settings only some codes read (partial factors, the steel-strength convention, the M12/M14
+ * clearance): carried onto the scenario for a code that reads them, refused for any other code rather
+ * than ignored.
+ */
+function codeSettingsOf(file: ScenarioFile, code: DesignCode, scenario: Scenario): void {
+  const given: Array<[string, boolean]> = [
+    ["factors", file.factors !== undefined],
+    ["options.steel_strengths", file.options.steel_strengths !== undefined],
+    ["options.small_bolt_clearance", file.options.small_bolt_clearance !== undefined],
+  ];
+  for (const [path, present] of given) {
+    if (present && !code.settings?.fields.includes(path)) throw new InputError(path, `not read by ${code.id} (a setting of ${codeIds().filter((id) => findCode(id)?.settings?.fields.includes(path)).join(", ") || "no known code"})`);
+  }
+  if (file.options.steel_strengths !== undefined) scenario.options.steelStrengths = file.options.steel_strengths as En10025Convention;
+  if (file.options.small_bolt_clearance !== undefined) scenario.options.smallBoltClearance_mm = file.options.small_bolt_clearance as 1 | 2;
+  if (file.factors) {
+    const f = file.factors;
+    const factors: NonNullable<Scenario["factors"]> = {};
+    if (f.gamma_m0 !== undefined) factors.gammaM0 = f.gamma_m0;
+    if (f.gamma_m2 !== undefined) factors.gammaM2 = f.gamma_m2;
+    if (f.gamma_m3 !== undefined) factors.gammaM3 = f.gamma_m3;
+    if (f.gamma_m3_ser !== undefined) factors.gammaM3ser = f.gamma_m3_ser;
+    scenario.factors = factors;
+  }
 }
 
 /** Parse and validate a scenario's text completely. */

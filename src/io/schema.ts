@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { parseQuantity, type Quantity, UnitError } from "../units/units.js";
 import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
+import { EN10025_CONVENTIONS } from "../catalogue/steels.js";
 
 /** Largest values accepted, to stop absurd input before it reaches the core. */
 export const LIMITS = {
@@ -20,6 +21,10 @@ export const LIMITS = {
 
 function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean; max?: number } = {}) {
   return z.unknown().transform((value, ctx): number => {
+    if (value === undefined) {
+      ctx.addIssue({ code: "custom", message: "required" });
+      return z.NEVER;
+    }
     let v: number;
     try {
       v = parseQuantity(value, q);
@@ -118,9 +123,22 @@ const search = z.strictObject({
 
 const options = z.strictObject({
   exposed_to_corrosion: z.boolean().default(false),
-  bolt_net_area: z.enum(["0.78-gross", "iso-stress-area"]).default("0.78-gross"),
-  bolt_strength: z.enum(["minimum", "nominal"]).default("minimum"),
+  // No default here: the design code supplies it (src/io/scenario.ts), so a code can tell an explicit choice.
+  bolt_net_area: z.enum(["0.78-gross", "iso-stress-area"]).optional(),
+  bolt_strength: z.enum(["minimum", "nominal"]).optional(),
   net_section_load: z.enum(["full", "transferred"]).default("full"),
+  steel_strengths: z.enum(EN10025_CONVENTIONS as [string, ...string[]]).optional(),
+  small_bolt_clearance: z.number().refine((v) => v === 1 || v === 2, "must be 1 or 2 (mm: the normal-hole clearance of M12 and M14 bolts)").optional(),
+});
+
+/** A partial factor of a national annex: a plain number from 1.0 to 2.0. */
+const partialFactor = () => z.number().min(1, "must be at least 1.0").max(2, "must be at most 2.0");
+
+const factors = z.strictObject({
+  gamma_m0: partialFactor().optional(),
+  gamma_m2: partialFactor().optional(),
+  gamma_m3: partialFactor().optional(),
+  gamma_m3_ser: partialFactor().optional(),
 });
 
 export const scenarioSchema = z.strictObject({
@@ -146,7 +164,9 @@ export const scenarioSchema = z.strictObject({
   layout: layout.optional(),
   search: search.optional(),
   costs: z.unknown().optional(),
-  options: options.default({ exposed_to_corrosion: false, bolt_net_area: "0.78-gross", bolt_strength: "minimum", net_section_load: "full" }),
+  compare: z.unknown().optional(),
+  options: options.default({ exposed_to_corrosion: false, net_section_load: "full" }),
+  factors: factors.optional(),
 });
 
 export type ScenarioFile = z.infer<typeof scenarioSchema>;

@@ -2,6 +2,7 @@
  * The typed scenario, in core units (N, mm, MPa). Produced by src/io from a YAML file; the core never sees YAML.
  */
 import type { NetAreaConvention, BoltStrengthBasis, PropertyClass } from "../catalogue/bolts.js";
+import type { En10025Convention } from "../catalogue/steels.js";
 
 export type SpliceType = "lap" | "butt-single-cover" | "butt-double-cover";
 
@@ -118,6 +119,18 @@ export interface CheckOptions {
    * "transferred": a path carries only what its plate has not yet passed to bolts ahead of it.
    */
   netSectionLoad: "full" | "transferred";
+  /** EN 1993-1-8 scenarios: fy and fu from EN 10025-2 by thickness, or from EN 1993-1-1 Table 3.1. */
+  steelStrengths?: En10025Convention;
+  /** EN 1993-1-8 scenarios: normal-hole clearance of M12 and M14 bolts, 1 mm (EN 1090-2) or 2 mm (EN 1993-1-8, 3.6.1(5)). */
+  smallBoltClearance_mm?: 1 | 2;
+}
+
+/** Partial factors a scenario sets (a national annex); absent ones take the code's recommended values. */
+export interface PartialFactorSettings {
+  gammaM0?: number;
+  gammaM2?: number;
+  gammaM3?: number;
+  gammaM3ser?: number;
 }
 
 export interface Scenario {
@@ -137,6 +150,10 @@ export interface Scenario {
   layout?: LayoutSpec;
   search?: SearchSpec;
   options: CheckOptions;
+  /** Partial factors of the national annex (EN 1993-1-8 scenarios). */
+  factors?: PartialFactorSettings;
+  /** The scenario's own table of equivalent materials for `compare --codes` (validated in src/io). */
+  compare?: unknown;
   /** The scenario's own cost entries (validated by src/io/costs.ts), applied over the catalogue. */
   costs?: unknown;
   /** Free text the engineer wants carried into the output (project, member mark). */

@@ -1,5 +1,5 @@
 /** Run the built CLI (dist/, built by `npm test`'s pretest) as a user would. */
-import { spawnSync } from "node:child_process";
+import { execFile, spawnSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { dirname, join, resolve } from "node:path";
@@ -29,4 +29,14 @@ export function tempScenario(text: string, name = "scenario.yaml"): string {
 
 export function scenarioPath(name: string): string {
   return join(ROOT, "scenarios", name);
+}
+
+/** The built CLI, without blocking: lets a table of cases run concurrently. */
+export function cliAsync(args: string[], cwd: string = ROOT): Promise<CliResult> {
+  return new Promise((resolvePromise) => {
+    execFile(process.execPath, [BIN, ...args], { cwd, encoding: "utf8" }, (error, stdout, stderr) => {
+      const code = error ? (typeof error.code === "number" ? error.code : -1) : 0;
+      resolvePromise({ code, stdout, stderr });
+    });
+  });
 }

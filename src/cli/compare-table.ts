@@ -1,0 +1,46 @@
+/** The compare columns as a terminal table (one column per choice). */
+import Table from "cli-table3";
+import type { CompareColumn } from "../compare/compare.js";
+import { CAUTION, citationText } from "../report/check-json.js";
+import { resultRow } from "../report/search-json.js";
+
+const fx = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? "—" : v.toFixed(d));
+
+export function compareRows(columns: CompareColumn[]): Array<[string, string[]]> {
+  const rows: Array<[string, (c: CompareColumn) => string]> = [
+    ["Code", (c) => c.code.id],
+    ["Bolt", (c) => (c.best ? resultRow(c.best, 1).bolt : "—")],
+    ["Pattern", (c) => (c.best ? c.best.family.pattern : "—")],
+    ["Counts", (c) => (c.best ? resultRow(c.best, 1).counts : "—")],
+    ["Pitch / gauge (mm)", (c) => (c.best ? `${fx(resultRow(c.best, 1).pitch_mm)} / ${fx(resultRow(c.best, 1).gauge_mm)}` : "—")],
+    ["End / edge (mm)", (c) => (c.best ? `${fx(resultRow(c.best, 1).endDistance_mm)} / ${fx(resultRow(c.best, 1).edgeDistance_mm)}` : "—")],
+    ["Bolt count", (c) => (c.best ? String(c.best.joint.holes.length) : "—")],
+    ["Splice length (mm)", (c) => (c.best ? fx(c.best.joint.spliceLength_mm) : "—")],
+    ["Joint strength (kN)", (c) => (c.best ? fx(c.best.report.jointStrength_N / 1000, 1) : "—")],
+    ["Efficiency", (c) => (c.best ? `${fx(c.best.report.efficiency * 100, 1)} %` : "—")],
+    ["Cost", (c) => (c.best ? fx(c.best.cost.total, 1) : "—")],
+    ["Cost above cheapest", (c) => (c.costDifference === null ? "—" : c.costDifference === 0 ? "cheapest" : `+${fx(c.costDifference, 1)}`)],
+    [
+      "Governing check",
+      (c) => {
+        const g = c.best?.report.checks.find((x) => x.id === c.best?.report.governing);
+        return g ? `${g.title} (${citationText(g.citation)})` : c.outcome.noResultReason ? "no compliant layout" : "—";
+      },
+    ],
+  ];
+  return rows.map(([name, f]) => [name, columns.map(f)]);
+}
+
+export function formatCompare(title: string, columns: CompareColumn[], currency: string): string {
+  const table = new Table({ head: ["", ...columns.map((c) => c.label)], style: { head: [], border: [] }, wordWrap: true });
+  for (const [name, cells] of compareRows(columns)) table.push([name, ...cells]);
+  const out = [`splicewright — compare: ${title}`, "", table.toString(), `Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`];
+  const mapped = columns.filter((c) => c.mapping.length);
+  if (mapped.length) {
+    out.push("", "Mapping of materials between codes (nearest equivalents — these are not identical materials; strengths, thickness bands and testing differ):");
+    for (const c of mapped) out.push(`  ${c.code.id}: ${c.mapping.join("; ")}`);
+  }
+  for (const c of columns) if (!c.best && c.outcome.noResultReason) out.push(`${c.label}: ${c.outcome.noResultReason}`);
+  out.push("", `CAUTION: ${CAUTION}`);
+  return out.join("\n");
+}

@@ -1,0 +1,418 @@
+/**
+ * EN 1993-1-8 (with EN 1993-1-1) checks of a splice, run on the joint's hole coordinates.
+ * Each function returns results (data); none prints, none throws for a failed check.
+ */
+import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
+import { blockShapes } from "../../geometry/block-shear.js";
+import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
+import { leastNetPath } from "../../geometry/net-section.js";
+import { tearOutDistances } from "../../geometry/tear-out.js";
+import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
+import type { StrengthCheck } from "../../model/results.js";
+import type { CheckableScenario } from "../../model/scenario.js";
+import { strength } from "../check-builders.js";
+import { f, kN } from "../format.js";
+import { governingNetPath, groupLabel } from "../is800-2007/joint-checks.js";
+import { alpha_b, alpha_d_end, alpha_d_inner, Fb_Rd, groupResistance, k1_edge, k1_inner, singleLapLimit } from "./bearing.js";
+import { alpha_v, beta_Lf, beta_p, Fv_Rd, smallBoltHoleFactor } from "./bolt-shear.js";
+import { cl, cl11 } from "./citation.js";
+import { bearingHoleFactor, holeWidth, ks, normalClearance_mm } from "./holes.js";
+import { boltStrength } from "./materials.js";
+import { Npl_Rd, Nnet_Rd, Nu_Rd, Veff_1_Rd } from "./members.js";
+import type { Ec3Settings } from "./settings.js";
+import { Fp_C, Fs_Rd } from "./slip.js";
+
+/** One bolt group with its shear resistance and the reductions that set it. */
+export interface Ec3Group {
+  group: BoltGroupGeometry;
+  holes: Hole[];
+  /** Distance between the centres of the end fasteners along the force, mm (3.8). */
+  Lj_mm: number;
+  beta_Lf: number;
+  beta_p: number;
+  /** 0.85 for M12/M14 of class 8.8 or 10.9 in 2 mm clearance holes (3.6.1(5)), else 1. */
+  smallHole: number;
+  alpha_v: number;
+  /** As where the planes pass the threads, π d²/4 where they pass the shank, mm². */
+  A_mm2: number;
+  bolt: BoltMaterial;
+  /** Fv,Rd of one bolt in one shear plane with βLf, βp and the small-hole factor, N. */
+  FvPlane_N: number;
+}
+
+/** The shear resistance of one group's bolts, from its hole coordinates (3.6.1, 3.8). */
+export function groupOf(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, group: BoltGroupGeometry): Ec3Group {
+  const { bolts } = scenario;
+  const d = bolts.size_mm;
+  const holes = joint.holes.filter((h) => h.group === group.id);
+  const Lj = jointLength_mm(holes);
+  const bolt = boltStrength(bolts.propertyClass, d);
+  const threads = bolts.threadsInShearPlanes;
+  const A = threads ? boltNetArea_mm2(d, "iso-stress-area") : shankArea_mm2(d);
+  const av = alpha_v(bolts.propertyClass, threads);
+  const clearance = bolts.hole === "standard" ? normalClearance_mm(d, s.smallBoltClearance_mm) : 0;
+  const small = smallBoltHoleFactor(d, clearance, bolts.propertyClass);
+  const bLf = beta_Lf(Lj, d);
+  const bp = beta_p(group.packing_mm, d);
+  return {
+    group,
+    holes,
+    Lj_mm: Lj,
+    beta_Lf: bLf,
+    beta_p: bp,
+    smallHole: small,
+    alpha_v: av,
+    A_mm2: A,
+    bolt,
+    FvPlane_N: Fv_Rd(av, bolt.fub_MPa, A, s.factors.gamma_M2) * bLf * bp * small,
+  };
+}
+
+/** Shear planes that carry a plate's force into each bolt: one for a plate at a face of the stack, else all. */
+export function planesCarrying(plate: PlatePiece, group: BoltGroupGeometry): number {
+  const i = group.stack.indexOf(plate.id);
+  return i === 0 || i === group.stack.length - 1 ? 1 : group.shearPlanes;
+}
+
+/**
+ * Bolt shear of a bearing-type or Category B group: T ≤ n · Fv,Rd.
+ * EN 1993-1-8, 3.6.1, Table 3.4, with 3.8 (βLf), 3.6.1(12) (βp) and 3.6.1(5) (0.85).
+ * Fv,Rd = planes · αv · fub · A / γM2 · βLf · βp (N).
+ */
+export function boltShearCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group): StrengthCheck {
+  const d = scenario.bolts.size_mm;
+  const planes = g.group.shearPlanes;
+  const perBolt = planes * g.FvPlane_N;
+  const n = g.holes.length;
+  const threads = scenario.bolts.threadsInShearPlanes;
+  return strength({
+    id: `bolt-shear:${g.group.id}`,
+    kind: "bolt-shear",
+    title: "Bolt shear",
+    component: groupLabel(joint, g.group),
+    citation: cl("3.6.1", { table: "Table 3.4", equation: "with 3.8 and 3.6.1(12)" }),
+    formula: "T ≤ n·Fv,Rd;  Fv,Rd = planes · αv·fub·A/γM2 · βLf·βp",
+    substituted: () =>
+      `Fv,Rd = ${planes} × ${g.alpha_v} × ${g.bolt.fub_MPa} × ${f(g.A_mm2)} / ${s.factors.gamma_M2} × ${f(g.beta_Lf, 3)} × ${f(g.beta_p, 3)}` +
+      (g.smallHole !== 1 ? ` × ${g.smallHole}` : "") +
+      ` = ${kN(perBolt, 2)};  n·Fv,Rd = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N,
+    resistance_N: n * perBolt,
+    loadRatio: 1,
+    notes: () => [
+      `fub = ${g.bolt.fub_MPa} MPa (${g.bolt.source}); A = ${threads ? `As = ${f(g.A_mm2)} mm² (threads in the shear planes), αv = ${g.alpha_v}` : `π d²/4 = ${f(g.A_mm2)} mm² (shank in the shear planes), αv = 0.6`}`,
+      `Lj = ${f(g.Lj_mm)} mm ${g.Lj_mm > 15 * d ? `> 15d = ${f(15 * d)} mm: βLf = 1 − (${f(g.Lj_mm)} − ${f(15 * d)})/(200 × ${d}) = ${f(g.beta_Lf, 3)} (limits 0.75–1.0)` : `≤ 15d = ${f(15 * d)} mm: βLf = 1.0`}`,
+      g.group.packing_mm > d / 3
+        ? `packing tp = ${f(g.group.packing_mm)} mm > d/3: βp = 9 × ${d}/(8 × ${d} + 3 × ${f(g.group.packing_mm)}) = ${f(g.beta_p, 3)}`
+        : `packing ${f(g.group.packing_mm)} mm ≤ d/3 = ${f(d / 3)} mm: βp = 1.0`,
+      ...(g.smallHole !== 1 ? [`M${d} class ${scenario.bolts.propertyClass} in 2 mm clearance holes: Fv,Rd × 0.85 (3.6.1(5))`] : []),
+    ],
+  });
+}
+
+/** One bolt's bearing on one plate, from its coordinates. */
+export interface BoltBearing {
+  hole: Hole;
+  /** End bolt (no bolt ahead toward the plate end in its strip): αd from e1; else from p1. */
+  end: boolean;
+  /** e1 (end bolt) or p1 (inner bolt), mm. */
+  along_mm: number;
+  alpha_d: number;
+  alpha_b: number;
+  /** Edge bolt (no bolt between it and a side edge): k1 from e2 and p2; else from p2. */
+  edge: boolean;
+  e2_mm: number;
+  p2_mm: number | null;
+  k1: number;
+  d0_mm: number;
+  Fb_N: number;
+  /** Limited to 1.5 fu d t / γM2 (3.6.1(10)). */
+  limited: boolean;
+}
+
+/** Whether a group is a single lap joint with one transverse line of bolts (3.6.1(10)). */
+export function singleLapOneLine(g: BoltGroupGeometry, holes: readonly Hole[]): boolean {
+  if (g.shearPlanes !== 1 || holes.length === 0) return false;
+  const x0 = holes[0]!.x_mm;
+  return holes.every((h) => Math.abs(h.x_mm - x0) <= LINE_TOLERANCE_MM);
+}
+
+/**
+ * Fb,Rd of every bolt of a group on one plate, each from its own coordinates.
+ * EN 1993-1-8, Table 3.4: αb from the end distance e1 (end bolts) or the pitch p1 to the bolt ahead in
+ * its strip (inner bolts) toward the plate end it bears on; k1 from the edge distance e2 and the
+ * distance p2 to the nearest other gauge line (edge bolts: on an outermost gauge line) or from p2 alone
+ * (inner bolts); the limit of 3.6.1(10) for single lap joints with one transverse line.
+ */
+export function boltBearings(holes: readonly Hole[], connection: PlateConnection, plate: PlatePiece, scenario: CheckableScenario, s: Ec3Settings, oneLineLap: boolean): BoltBearing[] {
+  const { bolts } = scenario;
+  const d = bolts.size_mm;
+  const fub = boltStrength(bolts.propertyClass, d).fub_MPa;
+  const fu = plate.fu_MPa;
+  const t = plate.spec.thickness_mm;
+  const gM2 = s.factors.gamma_M2;
+  const factor = bearingHoleFactor(bolts.hole, bolts.slotDirection);
+  const half = plate.spec.width_mm / 2;
+  const cap = oneLineLap ? singleLapLimit(fu, d, t, gM2) : Infinity;
+  return tearOutDistances(holes, connection).map(({ hole: h, toEnd_mm, toHoleAhead_mm }) => {
+    const d0 = holeWidth(h);
+    const end = toHoleAhead_mm === null;
+    const along = end ? toEnd_mm - (h.along_mm - d0) / 2 : toHoleAhead_mm;
+    const ad = end ? alpha_d_end(along, d0) : alpha_d_inner(along, d0);
+    let below = false;
+    let above = false;
+    let p2 = Infinity;
+    for (const k of holes) {
+      const dy = k.y_mm - h.y_mm;
+      if (k === h || Math.abs(dy) <= LINE_TOLERANCE_MM) continue;
+      if (dy < 0) below = true;
+      else above = true;
+      p2 = Math.min(p2, Math.abs(dy));
+    }
+    const reach = (h.across_mm - d0) / 2;
+    const e2 = Math.min(below ? Infinity : half + h.y_mm - reach, above ? Infinity : half - h.y_mm - reach);
+    const p2v = Number.isFinite(p2) ? p2 : null;
+    const edge = !below || !above;
+    const k1 = edge ? k1_edge(e2, p2v, d0) : k1_inner(p2, d0);
+    const ab = alpha_b(ad, fub, fu);
+    const Fb = Fb_Rd(k1, ab, fu, d, t, gM2, factor);
+    return { hole: h, end, along_mm: along, alpha_d: ad, alpha_b: ab, edge, e2_mm: e2, p2_mm: p2v, k1, d0_mm: d0, Fb_N: Math.min(Fb, cap), limited: Fb > cap };
+  });
+}
+
+function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: number, gM2: number, factor: number): string {
+  const aTerm = b.end ? `e1/3d0 = ${f(b.along_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.alpha_d, 3)}` : `p1/3d0 − 1/4 = ${f(b.along_mm)}/(3 × ${f(b.d0_mm)}) − 0.25 = ${f(b.alpha_d, 3)}`;
+  const eTerm = b.edge ? `2.8e2/d0 − 1.7 = 2.8 × ${f(b.e2_mm)}/${f(b.d0_mm)} − 1.7 = ${f(2.8 * b.e2_mm / b.d0_mm - 1.7, 3)}, ` : "";
+  const pTerm = b.p2_mm === null ? "" : `1.4p2/d0 − 1.7 = 1.4 × ${f(b.p2_mm)}/${f(b.d0_mm)} − 1.7 = ${f(1.4 * b.p2_mm / b.d0_mm - 1.7, 3)}, `;
+  return (
+    `bolt ${b.hole.id} (${b.end ? "end" : "inner"}, ${b.edge ? "edge" : "inner"}): αb = min(${aTerm}, fub/fu = ${fub}/${fu} = ${f(fub / fu, 3)}, 1) = ${f(b.alpha_b, 3)}; ` +
+    `k1 = min(${eTerm}${pTerm}2.5) = ${f(b.k1, 3)}; Fb,Rd = ${f(b.k1, 3)} × ${f(b.alpha_b, 3)} × ${fu} × ${d} × ${f(t)}${factor !== 1 ? ` × ${factor}` : ""} / ${gM2}` +
+    (b.limited ? ` → limited to 1.5·fu·d·t/γM2 = ${kN(b.Fb_N, 2)}` : ` = ${kN(b.Fb_N, 2)}`)
+  );
+}
+
+/**
+ * Bearing of one group's bolts on one plate: plate force ≤ the group's bearing resistance.
+ * EN 1993-1-8, 3.6.1, Table 3.4 (Fb,Rd per bolt), 3.6.1(10) (single lap, one transverse line) and 3.7
+ * (group: ΣFb,Rd, or n × the least resistance where some Fv,Rd < Fb,Rd).
+ */
+export function bearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection, g: Ec3Group): StrengthCheck {
+  const { bolts } = scenario;
+  const d = bolts.size_mm;
+  const oneLine = singleLapOneLine(g.group, g.holes);
+  const each = boltBearings(g.holes, connection, plate, scenario, s, oneLine);
+  const planes = planesCarrying(plate, g.group);
+  const Fv = planes * g.FvPlane_N;
+  const group = groupResistance(each.map((b) => b.Fb_N), Fv);
+  const least = each.reduce((a, b) => (b.Fb_N < a.Fb_N ? b : a));
+  const sum = each.reduce((a, b) => a + b.Fb_N, 0);
+  const T = scenario.load.factoredTension_N;
+  const fub = g.bolt.fub_MPa;
+  const t = plate.spec.thickness_mm;
+  const factor = bearingHoleFactor(bolts.hole, bolts.slotDirection);
+  const side = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  return strength({
+    id: `bearing:${plate.id}:${connection.group}`,
+    kind: "bolt-bearing",
+    title: "Bolt bearing (group)",
+    component: `${plate.label}${side}`,
+    citation: cl("3.7", { table: "Table 3.4", equation: oneLine ? "with 3.6.1(10)" : "Fb,Rd per bolt" }),
+    formula: "F ≤ ΣFb,Rd if every Fv,Rd ≥ Fb,Rd, else n·min(Fv,Rd, Fb,Rd);  Fb,Rd = k1·αb·fu·d·t / γM2",
+    substituted: () =>
+      `least ${bearingText(least, fub, plate.fu_MPa, d, t, s.factors.gamma_M2, factor)};  ΣFb,Rd over ${each.length} bolts = ${kN(sum)};  ` +
+      `Fv,Rd = ${kN(Fv, 2)} (${planes} plane${planes > 1 ? "s" : ""}) ` +
+      (group.rule === "sum" ? `≥ every Fb,Rd → ΣFb,Rd = ${kN(group.resistance_N)}` : `< some Fb,Rd → ${each.length} × ${kN(group.resistance_N / each.length, 2)} = ${kN(group.resistance_N)}`) +
+      (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
+    limitState: "ULS",
+    demand_N: T * plate.forceShare,
+    resistance_N: group.resistance_N,
+    loadRatio: plate.forceShare,
+    notes: () => [
+      `Fb,Rd per bolt: ${each.map((b) => `${b.hole.id} ${f(b.Fb_N / 1000, 1)}`).join(", ")} kN`,
+      ...(factor !== 1 ? [`bearing × ${factor} for ${bolts.hole} holes (Table 3.4, note 1)`] : []),
+      ...(oneLine ? ["single lap joint with one transverse line of bolts: Fb,Rd ≤ 1.5·fu·d·t/γM2, washers under head and nut (3.6.1(10))"] : []),
+    ],
+  });
+}
+
+/**
+ * M12/M14 bolts in 2 mm clearance holes: the group's bearing resistance must not be below its shear
+ * resistance. EN 1993-1-8, 3.6.1(5) (the condition from memory). Both sides expressed as joint tension:
+ * n·Fv,Rd against the least over the group's plates of ΣFb,Rd / (the plate's share of T). The check
+ * limits no load (load ratio 0): it passes or fails the layout.
+ */
+export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group): StrengthCheck {
+  const n = g.holes.length;
+  const shear = n * g.group.shearPlanes * g.FvPlane_N;
+  let bearing = Infinity;
+  let where = "";
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
+    for (const c of plate.connections) {
+      if (c.group !== g.group.id) continue;
+      const sum = boltBearings(g.holes, c, plate, scenario, s, singleLapOneLine(g.group, g.holes)).reduce((a, b) => a + b.Fb_N, 0) / plate.forceShare;
+      if (sum < bearing) {
+        bearing = sum;
+        where = plate.label;
+      }
+    }
+  }
+  return strength({
+    id: `small-bolt-holes:${g.group.id}`,
+    kind: "bolt-bearing",
+    title: "M12/M14 in 2 mm holes: bearing ≥ shear",
+    component: groupLabel(joint, g.group),
+    citation: cl("3.6.1(5)"),
+    formula: "n·Fv,Rd ≤ ΣFb,Rd / share (as joint tension, least plate)",
+    substituted: () => `n·Fv,Rd = ${n} × ${kN(g.group.shearPlanes * g.FvPlane_N, 2)} = ${kN(shear)};  bearing of the group, ${where}: ${kN(bearing)}`,
+    limitState: "ULS",
+    demand_N: shear,
+    resistance_N: bearing,
+    loadRatio: 0,
+    notes: () => ["a condition on the layout: it sets no load"],
+  });
+}
+
+/**
+ * Slip resistance of a preloaded group: Category B at the service load (γM3,ser), Category C at the
+ * factored load (γM3). EN 1993-1-8, 3.9.1, Tables 3.6 (ks) and 3.7 (μ); Table 3.2 (categories).
+ * F ≤ n · Fs,Rd;  Fs,Rd = ks·nf·μ·Fp,C / γM3;  Fp,C = 0.7·fub·As.
+ */
+export function slipCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group): StrengthCheck {
+  const { bolts, load } = scenario;
+  const As = boltNetArea_mm2(bolts.size_mm, "iso-stress-area");
+  const FpC = Fp_C(g.bolt.fub_MPa, As);
+  const mu = bolts.slipFactor ?? 0;
+  const nf = g.group.shearPlanes;
+  const k = ks(bolts.hole, bolts.slotDirection);
+  const service = s.category === "B";
+  const gamma = service ? s.factors.gamma_M3_ser : s.factors.gamma_M3;
+  const perBolt = Fs_Rd(k, nf, mu, FpC, gamma);
+  const n = g.holes.length;
+  const demand = service ? (load.serviceTension_N ?? load.factoredTension_N) : load.factoredTension_N;
+  return strength({
+    id: `slip:${g.group.id}`,
+    kind: "slip",
+    title: service ? "Slip resistance at service load (Category B)" : "Slip resistance at factored load (Category C)",
+    component: groupLabel(joint, g.group),
+    citation: cl("3.9.1", { table: "Tables 3.6, 3.7" }),
+    formula: `F ≤ n·Fs,Rd${service ? ",ser" : ""};  Fs,Rd = ks·n·μ·Fp,C / ${service ? "γM3,ser" : "γM3"};  Fp,C = 0.7·fub·As`,
+    substituted: () =>
+      `Fp,C = 0.7 × ${g.bolt.fub_MPa} × ${f(As)} = ${kN(FpC, 2)};  Fs,Rd = ${k} × ${nf} × ${f(mu, 2)} × ${kN(FpC, 2)} / ${gamma} = ${kN(perBolt, 2)};  ` +
+      `${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
+    limitState: service ? "SLS" : "ULS",
+    demand_N: demand,
+    resistance_N: n * perBolt,
+    loadRatio: service ? demand / load.factoredTension_N : 1,
+    notes: () => [service ? "Category B: demand is the service tension (load.service_tension)" : "Category C: demand is the factored tension", `ks = ${k} for ${bolts.hole} holes (Table 3.6)`],
+  });
+}
+
+function shareText(plate: PlatePiece): string {
+  return plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T (covers share by area)` : "";
+}
+
+/**
+ * Gross-section yield of a plate, F ≤ Npl,Rd = A·fy/γM0.
+ * EN 1993-1-1, 6.2.3(2)a, equation (6.6).
+ */
+export function grossYieldCheck(scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece): StrengthCheck {
+  const { width_mm: b, thickness_mm: t } = plate.spec;
+  const R = Npl_Rd(b * t, plate.fy_MPa, s.factors.gamma_M0);
+  return strength({
+    id: `gross-yield:${plate.id}`,
+    kind: "gross-yield",
+    title: "Gross-section yield",
+    component: plate.label,
+    citation: cl11("6.2.3(2)a", { equation: "(6.6)" }),
+    formula: "F ≤ Npl,Rd = A·fy / γM0",
+    substituted: () => `Npl,Rd = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${s.factors.gamma_M0} = ${kN(R)}` + shareText(plate),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * plate.forceShare,
+    resistance_N: R,
+    loadRatio: plate.forceShare,
+    notes: () => [plate.materialNote],
+  });
+}
+
+/**
+ * Net section of a plate over the least net path, straight or staggered.
+ * EN 1993-1-1, 6.2.3(2)b, equation (6.7): F ≤ Nu,Rd = 0.9·Anet·fu/γM2; Category C connections
+ * 6.2.3(4), equation (6.8): F ≤ Nnet,Rd = Anet·fy/γM0. Anet by 6.2.2.2: (b − Σd0 + Σ s²/4p)·t, the least
+ * of every path (with options.net_section_load "transferred", the path of highest demand/resistance,
+ * each carrying the load its plate has not yet passed to bolts ahead of it).
+ */
+export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece): StrengthCheck {
+  const { width_mm: b, thickness_mm: t } = plate.spec;
+  const holes = holesOfPlate(joint, plate);
+  const transferred = scenario.options.netSectionLoad === "transferred";
+  const { path, fraction } = transferred ? governingNetPath(joint, plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const Anet = path.netWidth_mm * t;
+  const catC = s.category === "C";
+  const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);
+  const ratio = plate.forceShare * fraction;
+  const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+  const resistance = catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${s.factors.gamma_M0}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${s.factors.gamma_M2}`;
+  return strength({
+    id: `net-section:${plate.id}`,
+    kind: "net-section",
+    title: catC ? "Net section (Category C)" : "Net-section rupture",
+    component: plate.label,
+    citation: catC ? cl11("6.2.3(4)", { equation: "(6.8), Anet by 6.2.2.2" }) : cl11("6.2.3(2)b", { equation: "(6.7), Anet by 6.2.2.2" }),
+    formula:
+      (transferred ? "F·k/n ≤ " : "F ≤ ") +
+      (catC ? "Nnet,Rd = Anet·fy / γM0" : "Nu,Rd = 0.9·Anet·fu / γM2") +
+      ";  Anet = (b − Σd0 + Σ s²/4p)·t, " +
+      (transferred ? "k = bolts not yet passed; highest demand/resistance over all paths" : "least over all paths"),
+    substituted: () =>
+      `${transferred ? "governing" : "least"} path ${pathText}: Anet = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(Anet)} mm²;  ` +
+      `${resistance} = ${kN(R)}` +
+      (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
+      shareText(plate),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * ratio,
+    resistance_N: R,
+    loadRatio: ratio,
+    notes: () => [`path searched over every straight and staggered route through ${holes.length} holes`],
+  });
+}
+
+/**
+ * Block tearing of a plate for one bolt group: the governing shape of all that can form.
+ * EN 1993-1-8, 3.10.2(2), equation (3.9), concentric loading: Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0.
+ * A block holding k of the group's n bolts takes k/n of the plate's force. Null for a single gauge line
+ * (no block with a tension plane; the tear-out of that line is the e1 term of αd in bearing).
+ */
+export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const shapes = blockShapes(holes, connection, plate.spec.width_mm);
+  const t = plate.spec.thickness_mm;
+  const { gamma_M0, gamma_M2 } = s.factors;
+  let best: { capacity: number; ratio: number; R: number; shape: (typeof shapes)[number] } | null = null;
+  for (const shape of shapes) {
+    const R = Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2);
+    const ratio = (plate.forceShare * shape.boltsInBlock) / holes.length;
+    if (!best || R / ratio < best.capacity - 1e-9) best = { capacity: R / ratio, ratio, R, shape };
+  }
+  if (!best) return null;
+  const { shape: b, R, ratio } = best;
+  const side = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  return strength({
+    id: `block-shear:${plate.id}:${connection.group}`,
+    kind: "block-shear",
+    title: "Block tearing",
+    component: `${plate.label}${side}`,
+    citation: cl("3.10.2(2)", { equation: "(3.9)" }),
+    formula: "F·k/n ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0",
+    substituted: () =>
+      `${b.description} (${b.boltsInBlock} of ${holes.length} bolts): Ant = ${f(b.tensionNet_mm)} × ${f(t)} = ${f(b.tensionNet_mm * t)} mm², ` +
+      `Anv = ${f(b.shearNet_mm)} × ${f(t)} = ${f(b.shearNet_mm * t)} mm²;  Veff,1,Rd = ${plate.fu_MPa} × ${f(b.tensionNet_mm * t)}/${gamma_M2} + ${plate.fy_MPa} × ${f(b.shearNet_mm * t)}/(√3 × ${gamma_M0}) = ${kN(R)}`,
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * ratio,
+    resistance_N: R,
+    loadRatio: ratio,
+    notes: () => [`governing of ${shapes.length} block shapes`],
+  });
+}

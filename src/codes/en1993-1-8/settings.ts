@@ -1,0 +1,86 @@
+/**
+ * The settings an EN 1993-1-8 check depends on beyond the plates, bolts and layout: the partial factors
+ * (recommended values, or a national annex's), the source of fy and fu, the M12/M14 clearance and the
+ * category of the bolted connection.
+ */
+import type { En10025Convention } from "../../catalogue/steels.js";
+import type { BoltSpec, Scenario } from "../../model/scenario.js";
+
+export interface PartialFactors {
+  /** Resistance of cross-sections (gross yield; Category C net section), γM0. EN 1993-1-1, 6.1. */
+  gamma_M0: number;
+  /** Net-section rupture, bolts, plates in bearing, γM2. EN 1993-1-1, 6.1; EN 1993-1-8, Table 2.1. */
+  gamma_M2: number;
+  /** Slip resistance at the ultimate limit state (Category C), γM3. EN 1993-1-8, Table 2.1. */
+  gamma_M3: number;
+  /** Slip resistance at the serviceability limit state (Category B), γM3,ser. EN 1993-1-8, Table 2.1. */
+  gamma_M3_ser: number;
+}
+
+/**
+ * The recommended values. EN 1993-1-1, 6.1(1) NOTE 2B (γM0 1.00, γM2 1.25) and EN 1993-1-8, 2.2(2)
+ * NOTE, Table 2.1 (γM2 1.25, γM3 1.25, γM3,ser 1.10); see ../shared check values. A national annex may
+ * set others (scenario section `factors:`).
+ */
+export const RECOMMENDED_FACTORS: PartialFactors = { gamma_M0: 1.0, gamma_M2: 1.25, gamma_M3: 1.25, gamma_M3_ser: 1.1 };
+
+/**
+ * Categories of bolted connections loaded in shear. EN 1993-1-8, 3.4.1: A bearing type; B slip-resistant
+ * at the serviceability limit state; C slip-resistant at the ultimate limit state.
+ */
+export type Category = "A" | "B" | "C";
+
+export interface Ec3Settings {
+  factors: PartialFactors;
+  steel: En10025Convention;
+  /** Normal-hole clearance of M12 and M14 bolts, mm. */
+  smallBoltClearance_mm: 1 | 2;
+  category: Category;
+}
+
+/** The category of a scenario's bolts (no bolts: bearing type, as the search assumes). */
+export function categoryOf(bolts: BoltSpec | undefined): Category {
+  if (!bolts || bolts.assembly === "bearing") return "A";
+  return bolts.slipAt === "ultimate" ? "C" : "B";
+}
+
+/** The settings of a scenario, with the recommended values and the product standard where it is silent. */
+export function settingsOf(scenario: Scenario): Ec3Settings {
+  const f = scenario.factors ?? {};
+  return {
+    factors: {
+      gamma_M0: f.gammaM0 ?? RECOMMENDED_FACTORS.gamma_M0,
+      gamma_M2: f.gammaM2 ?? RECOMMENDED_FACTORS.gamma_M2,
+      gamma_M3: f.gammaM3 ?? RECOMMENDED_FACTORS.gamma_M3,
+      gamma_M3_ser: f.gammaM3ser ?? RECOMMENDED_FACTORS.gamma_M3_ser,
+    },
+    steel: scenario.options.steelStrengths ?? "en10025-2",
+    smallBoltClearance_mm: scenario.options.smallBoltClearance_mm ?? 1,
+    category: categoryOf(scenario.bolts),
+  };
+}
+
+/** Whether two settings are the same (a bound code checks the scenario it is given against its own). */
+export function sameSettings(a: Ec3Settings, b: Ec3Settings): boolean {
+  const fa = a.factors;
+  const fb = b.factors;
+  return (
+    fa.gamma_M0 === fb.gamma_M0 &&
+    fa.gamma_M2 === fb.gamma_M2 &&
+    fa.gamma_M3 === fb.gamma_M3 &&
+    fa.gamma_M3_ser === fb.gamma_M3_ser &&
+    a.steel === b.steel &&
+    a.smallBoltClearance_mm === b.smallBoltClearance_mm &&
+    a.category === b.category
+  );
+}
+
+/** The partial factors as printed on the sheet. */
+export function factorsText(f: PartialFactors): string {
+  const recommended =
+    f.gamma_M0 === RECOMMENDED_FACTORS.gamma_M0 &&
+    f.gamma_M2 === RECOMMENDED_FACTORS.gamma_M2 &&
+    f.gamma_M3 === RECOMMENDED_FACTORS.gamma_M3 &&
+    f.gamma_M3_ser === RECOMMENDED_FACTORS.gamma_M3_ser;
+  return `partial factors γM0 ${f.gamma_M0.toFixed(2)}, γM2 ${f.gamma_M2.toFixed(2)}, γM3 ${f.gamma_M3.toFixed(2)}, γM3,ser ${f.gamma_M3_ser.toFixed(2)} (${recommended ? "the recommended values of EN 1993-1-1 6.1 and EN 1993-1-8 Table 2.1" : "set by the scenario (national annex)"})`;
+}

@@ -1,0 +1,119 @@
+/**
+ * Side by side: the same splice searched under different bolt classes, bolt sizes or design codes.
+ * Every column is one run of the ordinary search (src/search/search.ts) with the space restricted to
+ * that choice — there is no separate path. Pure.
+ */
+import type { CostTable } from "../catalogue/costs.js";
+import type { PropertyClass } from "../catalogue/bolts.js";
+import type { DesignCode } from "../codes/types.js";
+import type { PlateSpec, Scenario } from "../model/scenario.js";
+import { searchLayouts, type Candidate, type SearchOutcome } from "../search/search.js";
+
+export interface CompareColumn {
+  label: string;
+  code: DesignCode;
+  scenario: Scenario;
+  outcome: SearchOutcome;
+  best: Candidate | null;
+  /** Cost above the cheapest column (0 for the cheapest; null when this column has no layout). */
+  costDifference: number | null;
+  /** What was mapped to reach this code (codes comparison only). */
+  mapping: string[];
+}
+
+export interface CodeMapping {
+  steel: Array<Record<string, string>>;
+  bolts: Array<Record<string, string>>;
+}
+
+/** One column per (class, size) choice; a list left empty keeps the scenario's own search range. */
+export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[]): CompareColumn[] {
+  const classList: Array<PropertyClass | undefined> = classes.length ? classes : [undefined];
+  const sizeList: Array<number | undefined> = sizes.length ? sizes : [undefined];
+  const columns: CompareColumn[] = [];
+  for (const c of classList) {
+    for (const d of sizeList) {
+      const search = { ...(scenario.search ?? {}) };
+      if (c !== undefined) search.classes = [c];
+      if (d !== undefined) search.sizes_mm = [d];
+      const s: Scenario = { ...scenario, search };
+      const label = [d !== undefined ? `M${d}` : "", c !== undefined ? `class ${c}` : ""].filter(Boolean).join(" ");
+      columns.push(column(label, s, code, costs, []));
+    }
+  }
+  return withDifferences(columns);
+}
+
+function column(label: string, scenario: Scenario, code: DesignCode, costs: CostTable, mapping: string[]): CompareColumn {
+  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost" });
+  return { label, code, scenario, outcome, best: outcome.results[0] ?? null, costDifference: null, mapping };
+}
+
+function withDifferences(columns: CompareColumn[]): CompareColumn[] {
+  const costs = columns.map((c) => c.best?.cost.total).filter((v): v is number => v !== undefined);
+  const cheapest = costs.length ? Math.min(...costs) : 0;
+  for (const c of columns) c.costDifference = c.best ? c.best.cost.total - cheapest : null;
+  return columns;
+}
+
+/** The entry of a mapping table that names `value` under `from`, or undefined. */
+function mapValue(table: Array<Record<string, string>>, from: string, to: string, value: string): string | undefined {
+  return table.find((row) => row[from] === value)?.[to];
+}
+
+export class MappingError extends Error {
+  constructor(
+    readonly field: string,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+/**
+ * The scenario restated under another code: steel grades and bolt classes mapped by the table.
+ * Throws MappingError naming what has no equivalent.
+ */
+export function mapScenario(scenario: Scenario, from: DesignCode, to: DesignCode, table: CodeMapping): { scenario: Scenario; mapping: string[] } {
+  if (from.id === to.id) return { scenario, mapping: [] };
+  const mapping: string[] = [];
+  const grade = (spec: PlateSpec, where: string): PlateSpec => {
+    const g = mapValue(table.steel, from.id, to.id, spec.grade);
+    if (!g) throw new MappingError(`${where}.grade`, `no ${to.id} equivalent of steel ${spec.grade} in the mapping`);
+    const line = `steel ${spec.grade} → ${g}`;
+    if (!mapping.includes(line)) mapping.push(line);
+    return { ...spec, grade: g };
+  };
+  const plates = {
+    mainA: grade(scenario.plates.mainA, "plates.main"),
+    mainB: grade(scenario.plates.mainB, "plates.main_b"),
+    covers: scenario.plates.covers.map((c, i) => grade(c, i === 0 ? "plates.cover" : "plates.cover_b")),
+  };
+  const out: Scenario = { ...scenario, code: to.id, plates };
+  const classes = scenario.search?.classes;
+  if (classes) {
+    const mapped = classes.map((c) => {
+      const m = mapValue(table.bolts, from.id, to.id, c);
+      if (m) mapping.push(`bolt class ${c} → ${m}`);
+      return m;
+    }).filter((c): c is string => c !== undefined) as PropertyClass[];
+    if (mapped.length === 0) throw new MappingError("search.classes", `none of the classes ${classes.join(", ")} has a ${to.id} equivalent in the mapping`);
+    out.search = { ...scenario.search, classes: mapped };
+  }
+  if (scenario.bolts) {
+    const m = mapValue(table.bolts, from.id, to.id, scenario.bolts.propertyClass);
+    if (!m) throw new MappingError("bolts.class", `no ${to.id} equivalent of bolt class ${scenario.bolts.propertyClass} in the mapping`);
+    out.bolts = { ...scenario.bolts, propertyClass: m as PropertyClass };
+  }
+  return { scenario: out, mapping };
+}
+
+/** One column per design code, the scenario mapped to each by the table. */
+export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping): CompareColumn[] {
+  return withDifferences(
+    codes.map((to) => {
+      const { scenario: mapped, mapping } = mapScenario(scenario, from, to, table);
+      return column(to.id, mapped, to, costs, mapping);
+    }),
+  );
+}

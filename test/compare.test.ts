@@ -1,0 +1,64 @@
+/**
+ * `compare`: every column is the ordinary search with that choice alone; the code mapping is printed;
+ * unknown choices are one-line errors.
+ */
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { compareChoices } from "../src/compare/compare.js";
+import { parseCostTable } from "../src/io/costs.js";
+import { parseScenario } from "../src/io/scenario.js";
+import { searchLayouts } from "../src/search/search.js";
+import { cli, ROOT, scenarioPath } from "./helpers/cli.js";
+
+const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
+const demo = scenarioPath("footbridge-tie-search.yaml");
+
+describe("compare by class and size", () => {
+  const { scenario, code } = parseScenario(readFileSync(demo, "utf8"));
+
+  it("a column equals search run with that class alone", () => {
+    const columns = compareChoices(scenario, code, costs, ["4.6", "8.8", "10.9"], []);
+    expect(columns.map((c) => c.label)).toEqual(["class 4.6", "class 8.8", "class 10.9"]);
+    for (const [i, cls] of (["4.6", "8.8", "10.9"] as const).entries()) {
+      const alone = searchLayouts({ scenario: { ...scenario, search: { ...scenario.search, classes: [cls] } }, code, costs }, { top: 1, rankBy: "cost" });
+      expect(columns[i]!.best?.key).toEqual(alone.results[0]?.key);
+    }
+    const cheapest = Math.min(...columns.map((c) => c.best!.cost.total));
+    for (const c of columns) expect(c.costDifference).toBeCloseTo(c.best!.cost.total - cheapest, 9);
+  });
+
+  it("classes × sizes give one column per pair, each the search with that pair alone", () => {
+    const columns = compareChoices(scenario, code, costs, ["8.8"], [20, 24]);
+    expect(columns.map((c) => c.label)).toEqual(["M20 class 8.8", "M24 class 8.8"]);
+    const alone = searchLayouts({ scenario: { ...scenario, search: { ...scenario.search, classes: ["8.8"], sizes_mm: [24] } }, code, costs }, { top: 1, rankBy: "cost" });
+    expect(columns[1]!.best?.key).toEqual(alone.results[0]?.key);
+  });
+});
+
+describe("splicewright compare (CLI)", () => {
+  it("prints one column per class with layout, bolts, length, efficiency, strength, cost, governing check and difference", () => {
+    const r = cli(["compare", demo, "--classes", "4.6,8.8,10.9"]);
+    expect(r.code).toBe(0);
+    for (const row of ["Counts", "Bolt count", "Splice length", "Efficiency", "Joint strength", "Cost above cheapest", "Governing check"]) expect(r.stdout).toContain(row);
+    expect(r.stdout).toContain("cheapest");
+    expect(r.stdout).toContain("qualified engineer");
+  });
+
+  it("--json has one entry per column", () => {
+    const j = JSON.parse(cli(["compare", demo, "--sizes", "M20,24", "--json"]).stdout);
+    expect(j.columns.map((c: { label: string }) => c.label)).toEqual(["M20", "M24"]);
+    expect(j.columns[0].best.bolt).toMatch(/^M20 /);
+  });
+
+  it.each([
+    [["--classes", "7.7"], /--classes: unknown or not allowed property class "7.7"/],
+    [["--sizes", "M17"], /--sizes: unknown bolt size "M17"/],
+    [["--codes", "bs5950"], /--codes: unknown design code "bs5950"/],
+    [[], /compare: give --classes, --sizes or --codes/],
+  ])("bad choice %j → one line, exit 2", (args, expected) => {
+    const r = cli(["compare", demo, ...(args as string[])]);
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim().split("\n")).toHaveLength(1);
+    expect(r.stderr).toMatch(expected as RegExp);
+  });
+});
