@@ -4,7 +4,7 @@
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
-import type { CheckResult } from "../../model/results.js";
+import type { CheckResult, Warning } from "../../model/results.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { f, kN } from "../format.js";
@@ -95,8 +95,28 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   }
   const singleLine = gfs.some((gf) => new Set(gf.holes.map((h) => h.y_mm)).size === 1);
   if (singleLine) conventions.push("block shear: one gauge line, no block with a tension plane can form; tear-out is the e/3d0 term of kb");
-  return { checks, warnings: factorWarnings(joint, gfs), conventions };
+  const warnings = factorWarnings(joint, gfs);
+  const minimum = minimumDesignAction(scenario);
+  if (minimum) warnings.push(minimum);
+  return { checks, warnings, conventions };
 }
+
+/**
+ * Minimum design action on fastenings: a connection of a tension member is designed for at least
+ * 0.3 times the member's design capacity in tension. IS 800:2007, cl. 10.7 (from memory).
+ * A warning, not a failed check: the engineer decides whether the member is fully utilised elsewhere.
+ */
+function minimumDesignAction(scenario: CheckableScenario): Warning | null {
+  const member = Math.min(unperforated(scenario.plates.mainA), unperforated(scenario.plates.mainB));
+  const T = scenario.load.factoredTension_N;
+  if (T >= 0.3 * member - 1e-9) return null;
+  return {
+    id: "below-minimum-design-action",
+    message: `factored tension ${f(T / 1000)} kN is below 0.3 × the main plate's tension capacity (0.3 × ${f(member / 1000)} = ${f((0.3 * member) / 1000)} kN), the minimum design action for connections of tension members (IS 800:2007 cl. 10.7, from memory)`,
+  };
+}
+
+const unperforated = (spec: PlateSpec) => unperforatedStrength(spec).value_N;
 
 /**
  * Design tension strength of the unperforated plate: the lesser of cl. 6.2 gross yield and
