@@ -270,6 +270,19 @@ function extents(prims: Primitive[], text: number): { min: Point; max: Point } {
   return { min: [x0, y0], max: [x1, y1] };
 }
 
+/** A filled arrowhead at `tip` pointing away from `from`, length `len`, width 1:3 (ISO 129): its corners. */
+export function arrowHeadPoints(tip: Point, from: Point, len: number): Point[] {
+  const dx = tip[0] - from[0];
+  const dy = tip[1] - from[1];
+  const L = Math.hypot(dx, dy) || 1;
+  const ux = dx / L;
+  const uy = dy / L;
+  const bx = tip[0] - ux * len;
+  const by = tip[1] - uy * len;
+  const w = len / 6;
+  return [tip, [bx - uy * w, by + ux * w], [bx + uy * w, by - ux * w]];
+}
+
 /** Drawing scales of ISO 5455 used here, smallest reduction first. */
 export const SCALES = [1, 2, 5, 10, 20, 50];
 

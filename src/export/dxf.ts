@@ -9,7 +9,7 @@ import type { Joint } from "../model/joint.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
-import { buildDrawing, formatLength, type Layer, type Point } from "./drawing.js";
+import { arrowHeadPoints, buildDrawing, formatLength, type Layer, type Point } from "./drawing.js";
 
 export const DXF_LAYERS: Record<Layer, string> = {
   outlines: "OUTLINES",
@@ -63,7 +63,7 @@ export function renderDxf(input: DxfInput): string {
         break;
       case "arrow": {
         dxf.addLine(p3(prim.from), p3(prim.to), { layerName: DXF_LAYERS[prim.layer] });
-        dxf.addLWPolyline(head(prim.to, prim.from, 3 * k).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName: DXF_LAYERS[prim.layer], flags: 1 });
+        dxf.addLWPolyline(arrowHeadPoints(prim.to, prim.from, 3 * k).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName: DXF_LAYERS[prim.layer], flags: 1 });
         break;
       }
       case "dim": {
@@ -76,7 +76,7 @@ export function renderDxf(input: DxfInput): string {
         dxf.addLine(p3(a), p3(b), { layerName });
         const arrow = Math.min(2.5 * k, Math.hypot(b[0] - a[0], b[1] - a[1]) / 3);
         for (const [tip, from] of [[a, b], [b, a]] as Array<[Point, Point]>) {
-          dxf.addLWPolyline(head(tip, from, arrow).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName, flags: 1 });
+          dxf.addLWPolyline(arrowHeadPoints(tip, from, arrow).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName, flags: 1 });
         }
         const mid: Point = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
         dxf.addText(p3(along ? [mid[0], mid[1] + 1 * k] : [mid[0] - 1 * k, mid[1]]), 2.5 * k, formatLength(prim.value), { layerName, rotation: along ? 0 : 90 });
@@ -94,16 +94,4 @@ export function renderDxf(input: DxfInput): string {
   ];
   lines.forEach((t, i) => dxf.addText(point3d(drawing.min[0], drawing.min[1] - (8 + 6 * i) * k, 0), text, t, { layerName: DXF_LAYERS.text }));
   return dxf.stringify();
-}
-
-function head(tip: Point, from: Point, len: number): Point[] {
-  const dx = tip[0] - from[0];
-  const dy = tip[1] - from[1];
-  const L = Math.hypot(dx, dy) || 1;
-  const ux = dx / L;
-  const uy = dy / L;
-  const bx = tip[0] - ux * len;
-  const by = tip[1] - uy * len;
-  const w = len / 6;
-  return [tip, [bx - uy * w, by + ux * w], [bx + uy * w, by - ux * w]];
 }

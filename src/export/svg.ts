@@ -6,7 +6,7 @@ import type { Joint } from "../model/joint.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
-import { buildDrawing, formatLength, SCALES, type Drawing, type Point, type Primitive } from "./drawing.js";
+import { arrowHeadPoints, buildDrawing, formatLength, SCALES, type Drawing, type Point, type Primitive } from "./drawing.js";
 
 export const SHEET = { width: 420, height: 297, margin: 10, titleHeight: 42 } as const;
 
@@ -138,17 +138,9 @@ function renderPrimitive(p: Primitive, P: (p: Point) => Point, k: number): strin
   }
 }
 
-/** A filled arrowhead at `tip`, pointing away from `from`, length len (paper mm), 1:3 (ISO 129). */
+/** SVG points of an arrowhead (paper mm). */
 function arrowHead(tip: Point, from: Point, len: number): string {
-  const dx = tip[0] - from[0];
-  const dy = tip[1] - from[1];
-  const L = Math.hypot(dx, dy) || 1;
-  const ux = dx / L;
-  const uy = dy / L;
-  const bx = tip[0] - ux * len;
-  const by = tip[1] - uy * len;
-  const w = len / 6;
-  return [[tip[0], tip[1]], [bx - uy * w, by + ux * w], [bx + uy * w, by - ux * w]].map((q) => q.map(n).join(",")).join(" ");
+  return arrowHeadPoints(tip, from, len).map((q) => q.map(n).join(",")).join(" ");
 }
 
 function renderDim(p: Extract<Primitive, { kind: "dim" }>, P: (p: Point) => Point): string {

@@ -55,15 +55,10 @@ function shearPlane(holes: LocalHole[], y: number, uLast: number): BlockPlane {
   return { gross_mm: uLast, net_mm: uLast - deduction };
 }
 
-/** Tension plane across the force at u = uLast, from y0 to y1 (y0 < y1). */
-function tensionPlane(holes: LocalHole[], uLast: number, y0: number, y1: number, edge0: boolean, edge1: boolean): BlockPlane {
+/** Tension plane across the force at u = uLast, from y0 to y1 (y0 < y1; either may be a plate edge). */
+function tensionPlane(holes: LocalHole[], uLast: number, y0: number, y1: number): BlockPlane {
   let deduction = 0;
-  for (const h of holes) {
-    if (!near(h.u, uLast)) continue;
-    if (near(h.y, y0) && edge0) continue; // a plate edge, not a hole
-    if (near(h.y, y1) && edge1) continue;
-    deduction += weight(h.y, y0, y1) * h.across;
-  }
+  for (const h of holes) if (near(h.u, uLast)) deduction += weight(h.y, y0, y1) * h.across;
   return { gross_mm: y1 - y0, net_mm: y1 - y0 - deduction };
 }
 
@@ -94,7 +89,7 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
       const uLast = lastU(block);
       const sa = shearPlane(local, ys[a]!, uLast);
       const sb = shearPlane(local, ys[b]!, uLast);
-      const t = tensionPlane(local, uLast, ys[a]!, ys[b]!, false, false);
+      const t = tensionPlane(local, uLast, ys[a]!, ys[b]!);
       shapes.push({
         description: `central block between gauge lines ${a + 1} and ${b + 1} of ${G}`,
         shearGross_mm: sa.gross_mm + sb.gross_mm,
@@ -114,8 +109,8 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
     const uLast = lastU(block);
     const sa = shearPlane(local, ys[a]!, uLast);
     const sm = shearPlane(local, ys[m]!, uLast);
-    const t0 = tensionPlane(local, uLast, -half, ys[a]!, true, false);
-    const t1 = tensionPlane(local, uLast, ys[m]!, half, false, true);
+    const t0 = tensionPlane(local, uLast, -half, ys[a]!);
+    const t1 = tensionPlane(local, uLast, ys[m]!, half);
     shapes.push({
       description: a === 0 ? "edge strips outside the outer gauge lines" : `edge strips, gauge lines 1–${a + 1} and ${m + 1}–${G} of ${G}`,
       shearGross_mm: sa.gross_mm + sm.gross_mm,
@@ -131,7 +126,7 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
     const lower = inLines(0, a);
     const uL = lastU(lower);
     const sL = shearPlane(local, ys[a]!, uL);
-    const tL = tensionPlane(local, uL, -half, ys[a]!, true, false);
+    const tL = tensionPlane(local, uL, -half, ys[a]!);
     shapes.push({
       description: `one edge strip, gauge lines 1–${a + 1} of ${G}`,
       shearGross_mm: sL.gross_mm,
@@ -144,7 +139,7 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
     const upper = inLines(b, G - 1);
     const uU = lastU(upper);
     const sU = shearPlane(local, ys[b]!, uU);
-    const tU = tensionPlane(local, uU, ys[b]!, half, false, true);
+    const tU = tensionPlane(local, uU, ys[b]!, half);
     shapes.push({
       description: `one edge strip, gauge lines ${b + 1}–${G} of ${G}`,
       shearGross_mm: sU.gross_mm,
