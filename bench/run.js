@@ -76,3 +76,42 @@ for (const [name, sizes, classes] of [
   console.log(`   ${name.padEnd(30)} search ${fast.ms.toFixed(1)} ms (${fast.value.stats.fullChecks} checks), brute force ${brute.ms.toFixed(0)} ms (${brute.value.checks} checks): ${(brute.ms / fast.ms).toFixed(0)}× faster, same top 10: ${same ? "yes" : "NO"}`);
 }
 console.log(`   overall: ${(totalBrute / totalFast).toFixed(0)}× faster than brute force`);
+
+// ── Whole-job schedule ─────────────────────────────────────────────────────────────────────────────
+{
+  const { generatedProject } = await import("../dist/schedule/generate.js");
+  const { spawnSync } = await import("node:child_process");
+  const { mkdtempSync, writeFileSync } = await import("node:fs");
+  const { tmpdir, availableParallelism } = await import("node:os");
+  const dir = mkdtempSync(join(tmpdir(), "splicewright-bench-"));
+  const bin = join(root, "bin", "splicewright.js");
+  console.log("");
+  console.log(`4. Whole-job schedule: generated roof jobs (bracing laps, web ties, chords; M16/M20/M24 × 4.6/8.8/10.9, 5 mm step, ≤ 6 lines),`);
+  console.log(`   the CLI end to end on ${availableParallelism()} worker threads: per-splice searches, choice of types, re-check, output (Node start-up included)`);
+  const jobs = [
+    [50, ["--max-types", "2"]],
+    [200, ["--max-types", "2"]],
+    [500, ["--max-types", "2"], "target: under 30 s on a 2-core machine"],
+    [1000, ["--max-types", "2"]],
+    [1000, ["--max-types", "4", "--cost-per-type", "500", "--one-class-per-diameter"]],
+    [1000, ["--max-types", "4", "--cost-per-type", "500", "--one-class-per-diameter", "--method", "mip"]],
+    [1000, ["--max-types", "3", "--min-bolts-per-type", "400"]],
+  ];
+  for (const [n, args, note] of jobs) {
+    const file = join(dir, `job-${n}.json`);
+    writeFileSync(file, generatedProject(n, 2024 + n));
+    const t0 = performance.now();
+    const r = spawnSync(process.execPath, [bin, "schedule", file, "--json", ...args], { encoding: "utf8", maxBuffer: 1 << 28 });
+    const wall = performance.now() - t0;
+    if (r.status !== 0) {
+      console.log(`   ${String(n).padStart(5)} splices ${args.join(" ")}: exit ${r.status}: ${r.stderr.trim().split("\n")[0]}`);
+      continue;
+    }
+    const j = JSON.parse(r.stdout);
+    console.log(
+      `   ${String(n).padStart(5)} splices ${args.join(" ").padEnd(72)} ${(wall / 1000).toFixed(1).padStart(5)} s ` +
+        `(searches ${(j.elapsed_ms.search / 1000).toFixed(1)} s for ${j.effort.searched} distinct splices, ${j.effort.checks} checks; choice ${j.elapsed_ms.selection} ms by ${j.method}, ${j.proven ? "proven" : "NOT proven"}); ` +
+        `${j.types.map((t) => t.type).join(" + ")}, premium ${((100 * j.totals.premiumWithStocking) / j.totals.ownOptimum.total).toFixed(1)} %${note ? `  [${note}]` : ""}`,
+    );
+  }
+}

@@ -45,7 +45,7 @@ describe("splicewright check", () => {
     expect(r.stdout).toContain("Bolt shear (bolts)");
   });
 
-  it("a failing spacing rule prints the value and its limit: pitch 40 < 2.5 × 16 = 40? no — 38 < 40", () => {
+  it("a failing spacing rule prints the value and its limit: pitch 38 mm < 2.5 × 16 = 40 mm (IS 800:2007 cl. 10.2.2)", () => {
     const file = tempScenario(base.replace("pitch: 50", "pitch: 38"));
     const j = JSON.parse(cli(["check", file, "--json"]).stdout);
     const rule = j.checks.find((c: { id: string }) => c.id === "min-spacing");

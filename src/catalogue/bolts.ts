@@ -91,3 +91,49 @@ export function isBoltSize(d: number): d is BoltSize {
 export function isPropertyClass(c: string): c is PropertyClass {
   return (PROPERTY_CLASSES as readonly string[]).includes(c);
 }
+
+/**
+ * Inch bolt sizes the catalogue knows (nominal diameter, in): ½, ⅝, ¾, ⅞, 1, 1⅛. Used with AISC 360-16;
+ * the core carries them in mm (d × 25.4). AISC takes the nominal unthreaded body area Ab = π d²/4
+ * (AISC 360-16 J3.6), so no stress-area table is needed.
+ */
+export const INCH_BOLT_SIZES_IN = [0.5, 0.625, 0.75, 0.875, 1, 1.125] as const;
+
+/** The inch size (in) of a diameter in mm, when it is one of the catalogue's inch sizes. */
+export function inchBoltSize(d_mm: number): number | undefined {
+  return INCH_BOLT_SIZES_IN.find((d) => Math.abs(d * 25.4 - d_mm) < 1e-6);
+}
+
+/** An inch size as the trade writes it: "3/4 in", "1-1/8 in". */
+export function inchSizeText(d_in: number): string {
+  const whole = Math.floor(d_in + 1e-9);
+  const eighths = Math.round((d_in - whole) * 16);
+  const frac = eighths === 0 ? "" : (() => {
+    let n = eighths;
+    let den = 16;
+    while (n % 2 === 0) {
+      n /= 2;
+      den /= 2;
+    }
+    return `${n}/${den}`;
+  })();
+  return `${whole > 0 ? String(whole) : ""}${whole > 0 && frac ? "-" : ""}${frac} in`;
+}
+
+/**
+ * ASTM bolt grades used with AISC 360-16: ASTM F3125 Grade A325 (Group A), Grade A490 (Group B), and
+ * ASTM A307 Grade A. `iso` is the ISO 898-1 property class of the same strength level (A325 ↔ 8.8,
+ * A490 ↔ 10.9, A307 ↔ 4.6; common practice, as the metric F3125 grades A325M/A490M correspond to 8.8/10.9),
+ * which code-neutral parts (cost table, bill of materials) key by. Fu: specified minimum tensile strength,
+ * ksi (ASTM F3125: 120 ksi for A325 up to 1 in, 105 ksi over 1 in — from memory; 150 ksi A490; A307 60 ksi).
+ */
+export const ASTM_BOLT_GRADES = ["A307", "A325", "A490"] as const;
+export type AstmBoltGrade = (typeof ASTM_BOLT_GRADES)[number];
+export const ASTM_ISO_EQUIVALENT: Record<AstmBoltGrade, PropertyClass> = { A307: "4.6", A325: "8.8", A490: "10.9" };
+
+/** "A325", "F3125 A325", "ASTM F3125 Grade A325", "A325M" → "A325"; undefined when not an ASTM grade. */
+export function astmBoltGrade(text: string): AstmBoltGrade | undefined {
+  const key = text.trim().toUpperCase().replace(/\s+/g, " ").replace(/^ASTM /, "").replace(/^F3125 (GRADE |GR\.? ?)?/, "");
+  const m = /^(A307|A325|A490)M?$/.exec(key);
+  return m ? (m[1] as AstmBoltGrade) : undefined;
+}

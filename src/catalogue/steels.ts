@@ -88,9 +88,9 @@ const EN10025_QUALITIES: Record<En10025Grade, readonly string[]> = {
 
 /**
  * Non-alloy structural steels, EN 10025-2 (the product standard): minimum yield strength ReH by nominal
- * thickness (Table 7) and tensile strength Rm for 3 ≤ t ≤ 100 mm (the lower limit of its range).
- * S275 and S355 up to 40 mm and their Rm: read in the published table (see ../shared check values);
- * S235 and the bands beyond 40 mm: EN 10025-2 Table 7, from memory.
+ * thickness (≤ 16, 16–40, 40–63, 63–80, 80–100 mm) and the lower limit of the tensile strength Rm for
+ * 3 ≤ t ≤ 100 mm. S275 and S355 up to 40 mm and their Rm: read in the published table (see ../shared
+ * check values); S235 and the bands beyond 40 mm: EN 10025-2, from memory.
  */
 export const EN10025_2_GRADES: Record<En10025Grade, EnBand[]> = {
   S235: [
@@ -116,6 +116,9 @@ export const EN10025_2_GRADES: Record<En10025Grade, EnBand[]> = {
   ],
 };
 
+/** Rm of EN 10025-2 below 3 mm (the product standard tabulates thin products apart), MPa; from memory. */
+const EN10025_2_FU_BELOW_3MM: Record<En10025Grade, number> = { S235: 360, S275: 430, S355: 510 };
+
 /**
  * The simplified nominal values of EN 1993-1-1, Table 3.1 for the EN 10025-2 grades: t ≤ 40 mm and
  * 40 < t ≤ 80 mm. S275 and S355 for t ≤ 40 mm: read in the published table (see ../shared check values);
@@ -136,9 +139,9 @@ export const EN1993_1_1_TABLE_3_1: Record<En10025Grade, EnBand[]> = {
   ],
 };
 
-/** Thickness range each convention covers, mm (EN 10025-2 Rm is tabulated apart below 3 mm; Table 3.1 stops at 80 mm). */
+/** Thickness range each convention covers, mm (Table 3.1 stops at 80 mm). */
 export const EN10025_THICKNESS_RANGE: Record<En10025Convention, { min_mm: number; max_mm: number }> = {
-  "en10025-2": { min_mm: 3, max_mm: 100 },
+  "en10025-2": { min_mm: 0, max_mm: 100 },
   "en1993-1-1": { min_mm: 0, max_mm: 80 },
 };
 
@@ -164,13 +167,33 @@ export function en10025Strength(name: string, t_mm: number, convention: En10025C
   if (!grade) throw new RangeError(`unknown EN 10025-2 grade "${name}"`);
   const range = EN10025_THICKNESS_RANGE[convention];
   const bands = convention === "en10025-2" ? EN10025_2_GRADES[grade] : EN1993_1_1_TABLE_3_1[grade];
-  const band = t_mm >= range.min_mm ? bands.find((b) => t_mm > b.over_mm && t_mm <= b.upTo_mm) : undefined;
+  const band = t_mm > range.min_mm ? bands.find((b) => t_mm > b.over_mm && t_mm <= b.upTo_mm) : undefined;
   if (!band) throw new RangeError(`t = ${t_mm} mm is outside ${range.min_mm}–${range.max_mm} mm for ${grade} under ${convention}`);
+  const thin = convention === "en10025-2" && t_mm < 3;
   return {
     grade: name.trim().toUpperCase(),
     fy_MPa: band.fy_MPa,
-    fu_MPa: band.fu_MPa,
-    band: band.over_mm === 0 ? `t ≤ ${band.upTo_mm} mm` : `${band.over_mm} < t ≤ ${band.upTo_mm} mm`,
+    fu_MPa: thin ? EN10025_2_FU_BELOW_3MM[grade] : band.fu_MPa,
+    band: thin ? "t < 3 mm" : band.over_mm === 0 ? `t ≤ ${band.upTo_mm} mm` : `${band.over_mm} < t ≤ ${band.upTo_mm} mm`,
     source: convention === "en10025-2" ? "EN 10025-2, ReH and Rm by thickness" : "EN 1993-1-1, Table 3.1",
   };
+}
+
+/**
+ * ASTM plate steels used with AISC 360-16: specified minimum yield Fy and tensile strength Fu (ksi),
+ * one value for every thickness the splices here use (A36 plates up to 8 in; A572 Grade 50 up to 4 in).
+ * Source: AISC Steel Construction Manual, Table 2-5 (ASTM A36; ASTM A572 Grade 50) — common practice
+ * values: A36 Fy 36 ksi, Fu 58 ksi; A572 Gr 50 Fy 50 ksi, Fu 65 ksi.
+ */
+export const ASTM_PLATE_GRADES: Record<string, { Fy_ksi: number; Fu_ksi: number; maxThickness_in: number; source: string }> = {
+  A36: { Fy_ksi: 36, Fu_ksi: 58, maxThickness_in: 8, source: "ASTM A36 (AISC Manual Table 2-5)" },
+  "A572-50": { Fy_ksi: 50, Fu_ksi: 65, maxThickness_in: 4, source: "ASTM A572 Grade 50 (AISC Manual Table 2-5)" },
+};
+
+/** Accepted spellings of the ASTM plate grades ("A572 Gr 50", "A572-50", "a36"). */
+export function astmPlateGrade(name: string): string | undefined {
+  const key = name.trim().toUpperCase().replace(/\s+/g, " ");
+  if (key === "A36" || key === "ASTM A36") return "A36";
+  if (/^(ASTM )?A572[- ]?(GR\.? ?|GRADE ?)?50$/.test(key)) return "A572-50";
+  return undefined;
 }

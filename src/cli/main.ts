@@ -28,6 +28,7 @@ import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
 import { formatSheet } from "./sheet.js";
+import { registerSchedule } from "./schedule-command.js";
 
 export const VERSION = "0.1.0";
 
@@ -247,6 +248,8 @@ async function run(argv: string[], io: Io): Promise<number> {
       io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency), null, 2) : formatCompare(scenario.name, columns, costs.currency));
       exit = columns.some((c) => c.best) ? 0 : 1;
     });
+
+  registerSchedule(program, io, (c) => (exit = c));
 
   try {
     await program.parseAsync(argv);

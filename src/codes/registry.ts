@@ -1,9 +1,13 @@
 /** The design codes splicewright knows, by the id a scenario's `code:` names. */
 import { IS800_2007 } from "./is800-2007/index.js";
+import { EN1993_1_8 } from "./en1993-1-8/index.js";
+import { AISC360_16 } from "./aisc360-16/index.js";
 import type { DesignCode } from "./types.js";
 
 const CODES: Record<string, DesignCode> = {
   "is800-2007": IS800_2007,
+  "en1993-1-8": EN1993_1_8,
+  "aisc360-16": AISC360_16,
 };
 
 /** Accepted spellings of each code id. */
@@ -12,6 +16,15 @@ const ALIASES: Record<string, string> = {
   "is 800": "is800-2007",
   "is 800:2007": "is800-2007",
   "is800:2007": "is800-2007",
+  en1993: "en1993-1-8",
+  "en 1993-1-8": "en1993-1-8",
+  "en1993-1-8:2005": "en1993-1-8",
+  "en 1993-1-8:2005": "en1993-1-8",
+  ec3: "en1993-1-8",
+  "eurocode 3": "en1993-1-8",
+  aisc360: "aisc360-16",
+  "aisc 360-16": "aisc360-16",
+  "aisc 360": "aisc360-16",
 };
 
 export function codeIds(): string[] {

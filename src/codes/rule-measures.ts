@@ -80,3 +80,39 @@ export function worstRule(
     }),
   ];
 }
+
+/**
+ * The bolt group's centroid on the plate axis (within 0.5 mm). The codes' checks assume a concentric
+ * group; an eccentric group is reported as failing rather than accepted silently.
+ * @param citation the assumption as the calling code states it
+ */
+export function groupCentroidRule(joint: Joint, citation: Citation): RuleCheck[] {
+  let worst: Worst | null = null;
+  for (const g of joint.groups) {
+    const holes = joint.holes.filter((h) => h.group === g.id);
+    const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
+    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${Math.abs(yc).toFixed(2)} mm vs 0.5 mm` }, "max");
+  }
+  return worstRule("group-centroid", "group-centroid", "Bolt group on the plate axis", citation, "|y centroid| ≤ 0.5 mm", "max", worst);
+}
+
+/**
+ * Every pair of holes that lie in one plate together, each pair once (a pair in several plates is
+ * visited with the first of them), with that plate and its holes.
+ */
+export function forEachHolePair(joint: Joint, visit: (plate: PlatePiece, a: Hole, b: Hole, holes: readonly Hole[]) => void): void {
+  const seen = new Set<string>();
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    for (let i = 0; i < holes.length; i++) {
+      for (let j = i + 1; j < holes.length; j++) {
+        const a = holes[i]!;
+        const b = holes[j]!;
+        const key = `${a.id}|${b.id}`;
+        if (seen.has(key)) continue;
+        seen.add(key);
+        visit(plate, a, b, holes);
+      }
+    }
+  }
+}

@@ -151,3 +151,24 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
   }
   return shapes;
 }
+
+/**
+ * The governing block of a plate: the shape with the least joint tension at which it fails, when a
+ * block holding k of a group's n bolts takes share·k/n of the joint tension. Null when no shape forms.
+ * @param resist the code's design resistance of a shape (N), with whatever detail its text needs
+ */
+export function governingBlock<D>(
+  shapes: readonly BlockShape[],
+  bolts: number,
+  share: number,
+  resist: (shape: BlockShape) => { value_N: number; detail: D },
+): { shape: BlockShape; ratio: number; value_N: number; detail: D } | null {
+  let best: { shape: BlockShape; ratio: number; value_N: number; detail: D; capacity: number } | null = null;
+  for (const shape of shapes) {
+    const r = resist(shape);
+    const ratio = (share * shape.boltsInBlock) / bolts;
+    const capacity = r.value_N / ratio;
+    if (!best || capacity < best.capacity - 1e-9) best = { shape, ratio, value_N: r.value_N, detail: r.detail, capacity };
+  }
+  return best && { shape: best.shape, ratio: best.ratio, value_N: best.value_N, detail: best.detail };
+}

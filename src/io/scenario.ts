@@ -4,11 +4,11 @@
  */
 import { findCode, codeIds } from "../codes/registry.js";
 import type { DesignCode } from "../codes/types.js";
-import { isBoltSize, isPropertyClass, BOLT_SIZES_MM, PROPERTY_CLASSES, type PropertyClass } from "../catalogue/bolts.js";
+import { isBoltSize, isPropertyClass, BOLT_SIZES_MM, PROPERTY_CLASSES, type PropertyClass, ASTM_BOLT_GRADES, ASTM_ISO_EQUIVALENT, astmBoltGrade, inchBoltSize, INCH_BOLT_SIZES_IN, inchSizeText } from "../catalogue/bolts.js";
 import { buildJoint } from "../geometry/joint-builder.js";
 import { geometryErrors } from "../geometry/validate.js";
 import type { BoltSpec, CheckableScenario, EdgePreparation, HoleType, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
-import { scenarioSchema, type ScenarioFile } from "./schema.js";
+import { scenarioSchema, withInputUnits, type ScenarioFile } from "./schema.js";
 import { InputError, MAX_FILE_BYTES, parseYaml } from "./yaml.js";
 import { validateCosts } from "./costs.js";
 import { parseMapping } from "./equivalents.js";
@@ -35,7 +35,8 @@ export function validateFile(value: unknown): ScenarioFile {
   if (value === null || typeof value !== "object" || Array.isArray(value)) {
     throw new InputError("", "the scenario must be a YAML mapping of fields (name, code, splice, plates, load, ...)");
   }
-  const result = scenarioSchema.safeParse(value);
+  const system = (value as Record<string, unknown>).units === "us" ? "us" : "si";
+  const result = withInputUnits(system, () => scenarioSchema.safeParse(value));
   if (result.success) return result.data;
   const issue = result.error.issues[0]!;
   const path = issuePath(issue.path);
@@ -52,9 +53,21 @@ function plateSpec(p: { width: number; thickness: number; grade: string; edges: 
   return { width_mm: p.width, thickness_mm: p.thickness, grade: p.grade, edges: p.edges as EdgePreparation };
 }
 
+/** A catalogue bolt size: metric (M12–M36) or inch (½–1⅛ in), mm. */
+function knownSize(d_mm: number): boolean {
+  return isBoltSize(d_mm) || inchBoltSize(d_mm) !== undefined;
+}
+
+function sizeText(d_mm: number): string {
+  return Number.isInteger(d_mm) ? `M${d_mm}` : `${(d_mm / 25.4).toFixed(4).replace(/0+$/, "")} in`;
+}
+
+const KNOWN_SIZES = `${BOLT_SIZES_MM.map((d) => `M${d}`).join(", ")}; ${INCH_BOLT_SIZES_IN.map((d) => inchSizeText(d)).join(", ")}`;
+
 function boltSpec(b: NonNullable<ScenarioFile["bolts"]>): BoltSpec {
-  if (!isBoltSize(b.size)) throw new InputError("bolts.size", `M${b.size} is not in the catalogue (known: ${BOLT_SIZES_MM.map((d) => `M${d}`).join(", ")})`);
-  if (!isPropertyClass(b.class)) throw new InputError("bolts.class", `unknown property class "${b.class}" (known: ${PROPERTY_CLASSES.join(", ")})`);
+  if (!knownSize(b.size)) throw new InputError("bolts.size", `${sizeText(b.size)} is not in the catalogue (known: ${KNOWN_SIZES})`);
+  const astm = astmBoltGrade(b.class);
+  if (!isPropertyClass(b.class) && !astm) throw new InputError("bolts.class", `unknown property class "${b.class}" (known: ${PROPERTY_CLASSES.join(", ")}; ASTM grades ${ASTM_BOLT_GRADES.join(", ")})`);
   if (b.type === "bearing" && (b.slip_factor !== undefined || b.slip_at !== undefined)) {
     throw new InputError(b.slip_factor !== undefined ? "bolts.slip_factor" : "bolts.slip_at", "applies to friction-grip bolts only (bolts.type: friction-grip)");
   }
@@ -63,11 +76,12 @@ function boltSpec(b: NonNullable<ScenarioFile["bolts"]>): BoltSpec {
   }
   const spec: BoltSpec = {
     size_mm: b.size,
-    propertyClass: b.class as PropertyClass,
+    propertyClass: astm ? ASTM_ISO_EQUIVALENT[astm] : (b.class as PropertyClass),
     assembly: b.type as BoltSpec["assembly"],
     threadsInShearPlanes: b.threads_in_shear_planes,
     hole: b.hole as HoleType,
   };
+  if (astm) spec.astmGrade = astm;
   if (b.slip_factor !== undefined) spec.slipFactor = b.slip_factor;
   if (b.type === "friction-grip") spec.slipAt = b.slip_at ?? "service";
   if (b.slot_direction) spec.slotDirection = b.slot_direction;
@@ -188,6 +202,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
       netSectionLoad: file.options.net_section_load,
     },
   };
+  if (file.units === "us") scenario.units = "us";
   codeSettingsOf(file, code, scenario);
   if (file.project !== undefined) scenario.project = file.project;
   if (file.costs !== undefined) scenario.costs = validateCosts(file.costs, "costs");
@@ -207,7 +222,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     const spec: NonNullable<Scenario["search"]> = {};
     if (s.sizes) {
       s.sizes.forEach((d, i) => {
-        if (!isBoltSize(d)) throw new InputError(`search.sizes[${i}]`, `M${d} is not in the catalogue`);
+        if (!knownSize(d)) throw new InputError(`search.sizes[${i}]`, `${sizeText(d)} is not in the catalogue`);
       });
       spec.sizes_mm = s.sizes;
     }
@@ -245,11 +260,19 @@ function codeSettingsOf(file: ScenarioFile, code: DesignCode, scenario: Scenario
     ["factors", file.factors !== undefined],
     ["options.steel_strengths", file.options.steel_strengths !== undefined],
     ["options.small_bolt_clearance", file.options.small_bolt_clearance !== undefined],
+    ["units", file.units === "us"],
+    ["options.bearing_deformation", file.options.bearing_deformation !== undefined],
+    ["options.fillers_developed", file.options.fillers_developed !== undefined],
   ];
+  if (file.bolts && astmBoltGrade(file.bolts.class) && !code.settings?.fields.includes("bolts.class (ASTM grade)")) {
+    throw new InputError("bolts.class", `ASTM grade ${file.bolts.class} is not read by ${code.id} (a bolt grade of ${codeIds().filter((id) => findCode(id)?.settings?.fields.includes("bolts.class (ASTM grade)")).join(", ")}; use an ISO 898-1 class)`);
+  }
   for (const [path, present] of given) {
     if (present && !code.settings?.fields.includes(path)) throw new InputError(path, `not read by ${code.id} (a setting of ${codeIds().filter((id) => findCode(id)?.settings?.fields.includes(path)).join(", ") || "no known code"})`);
   }
   if (file.options.steel_strengths !== undefined) scenario.options.steelStrengths = file.options.steel_strengths as En10025Convention;
+  if (file.options.bearing_deformation !== undefined) scenario.options.bearingDeformation = file.options.bearing_deformation;
+  if (file.options.fillers_developed !== undefined) scenario.options.fillersDeveloped = file.options.fillers_developed;
   if (file.options.small_bolt_clearance !== undefined) scenario.options.smallBoltClearance_mm = file.options.small_bolt_clearance as 1 | 2;
   if (file.factors) {
     const f = file.factors;

@@ -4,7 +4,7 @@
  * "450 kN", "0.75 in", "100 kip" are converted. Fields are snake_case in the file.
  */
 import { z } from "zod";
-import { parseQuantity, type Quantity, UnitError } from "../units/units.js";
+import { DEFAULT_INPUT_UNIT, parseQuantity, type Quantity, UnitError, US_INPUT_UNIT } from "../units/units.js";
 import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
 import { EN10025_CONVENTIONS } from "../catalogue/steels.js";
 
@@ -19,6 +19,20 @@ export const LIMITS = {
   holes: 2_000,
 } as const;
 
+/** What a bare number means while one file is validated (`units: us` → in, kip, ksi); SI otherwise. */
+let inputUnits: Record<Quantity, string> = DEFAULT_INPUT_UNIT;
+
+/** Run a validation with bare numbers read in the file's unit system (synchronous; restored after). */
+export function withInputUnits<T>(system: "si" | "us", run: () => T): T {
+  const saved = inputUnits;
+  inputUnits = system === "us" ? US_INPUT_UNIT : DEFAULT_INPUT_UNIT;
+  try {
+    return run();
+  } finally {
+    inputUnits = saved;
+  }
+}
+
 function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean; max?: number } = {}) {
   return z.unknown().transform((value, ctx): number => {
     if (value === undefined) {
@@ -27,7 +41,7 @@ function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean
     }
     let v: number;
     try {
-      v = parseQuantity(value, q);
+      v = parseQuantity(value, q, inputUnits);
     } catch (e) {
       ctx.addIssue({ code: "custom", message: e instanceof UnitError ? e.message : String(e) });
       return z.NEVER;
@@ -65,9 +79,18 @@ const plate = z.strictObject({
   edges: z.enum(EDGE_PREPARATIONS as [string, ...string[]]).default("rolled"),
 });
 
-/** Bolt size: "M20" or 20. */
+/** Bolt size: "M20" or 20; an inch size "3/4 in", "0.75 in" (or 0.75 with units: us), as mm. */
 const boltSize = z.union([z.number(), z.string()]).transform((v, ctx): number => {
   const text = String(v).trim();
+  if (inputUnits === US_INPUT_UNIT && typeof v === "number") return v * 25.4;
+  if (/in$/i.test(text)) {
+    try {
+      return parseQuantity(text, "length");
+    } catch (e) {
+      ctx.addIssue({ code: "custom", message: e instanceof UnitError ? e.message : String(e) });
+      return z.NEVER;
+    }
+  }
   const m = /^M?(\d+(?:\.\d+)?)$/i.exec(text);
   if (!m) {
     ctx.addIssue({ code: "custom", message: `"${text}" is not a metric bolt size such as M20` });
@@ -127,6 +150,8 @@ const options = z.strictObject({
   bolt_net_area: z.enum(["0.78-gross", "iso-stress-area"]).optional(),
   bolt_strength: z.enum(["minimum", "nominal"]).optional(),
   net_section_load: z.enum(["full", "transferred"]).default("full"),
+  bearing_deformation: z.enum(["considered", "not-considered"]).optional(),
+  fillers_developed: z.boolean().optional(),
   steel_strengths: z.enum(EN10025_CONVENTIONS as [string, ...string[]]).optional(),
   small_bolt_clearance: z.number().refine((v) => v === 1 || v === 2, "must be 1 or 2 (mm: the normal-hole clearance of M12 and M14 bolts)").optional(),
 });
@@ -144,6 +169,7 @@ const factors = z.strictObject({
 export const scenarioSchema = z.strictObject({
   name: z.string().min(1, "must not be empty"),
   project: z.string().optional(),
+  units: z.enum(["si", "us"]).optional(),
   code: z.string().min(1),
   splice: z.strictObject({
     type: z.enum(["lap", "butt-single-cover", "butt-double-cover"]),

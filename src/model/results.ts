@@ -25,7 +25,8 @@ export type CheckKind =
   | "min-end-distance"
   | "min-edge-distance"
   | "max-edge-distance"
-  | "group-centroid";
+  | "group-centroid"
+  | "filler-thickness";
 
 /**
  * Strength checks compare forces (N) and scale with the joint tension; rules compare lengths (mm).

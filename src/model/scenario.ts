@@ -1,7 +1,7 @@
 /**
  * The typed scenario, in core units (N, mm, MPa). Produced by src/io from a YAML file; the core never sees YAML.
  */
-import type { NetAreaConvention, BoltStrengthBasis, PropertyClass } from "../catalogue/bolts.js";
+import type { AstmBoltGrade, NetAreaConvention, BoltStrengthBasis, PropertyClass } from "../catalogue/bolts.js";
 import type { En10025Convention } from "../catalogue/steels.js";
 
 export type SpliceType = "lap" | "butt-single-cover" | "butt-double-cover";
@@ -38,6 +38,11 @@ export type BoltAssembly = "bearing" | "friction-grip";
 export interface BoltSpec {
   size_mm: number;
   propertyClass: PropertyClass;
+  /**
+   * AISC 360-16 scenarios: the ASTM grade named (F3125 A325 / A490, A307); propertyClass then holds the
+   * ISO class of the same strength level for code-neutral parts (costs, bill of materials).
+   */
+  astmGrade?: AstmBoltGrade;
   assembly: BoltAssembly;
   /** Slip factor μf (friction-grip only), IS 800:2007 Table 20. */
   slipFactor?: number;
@@ -123,6 +128,10 @@ export interface CheckOptions {
   steelStrengths?: En10025Convention;
   /** EN 1993-1-8 scenarios: normal-hole clearance of M12 and M14 bolts, 1 mm (EN 1090-2) or 2 mm (EN 1993-1-8, 3.6.1(5)). */
   smallBoltClearance_mm?: 1 | 2;
+  /** AISC 360-16 scenarios: deformation at the bolt hole at service load a design consideration (J3.10(a)(1)) or not ((a)(2)). */
+  bearingDeformation?: "considered" | "not-considered";
+  /** AISC 360-16 scenarios: fillers (packing) developed by extension and extra bolts (J5.2(b)); default false. */
+  fillersDeveloped?: boolean;
 }
 
 /** Partial factors a scenario sets (a national annex); absent ones take the code's recommended values. */
@@ -133,8 +142,13 @@ export interface PartialFactorSettings {
   gammaM3ser?: number;
 }
 
+/** Units of a scenario file's bare numbers and of the output: SI (mm, kN, MPa) or US customary (in, kip, ksi). */
+export type UnitSystem = "si" | "us";
+
 export interface Scenario {
   name: string;
+  /** Input and display units (default SI); the core still works in N, mm, MPa. */
+  units?: UnitSystem;
   code: string;
   splice: { type: SpliceType; buttGap_mm: number };
   plates: {

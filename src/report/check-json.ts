@@ -4,6 +4,8 @@
 import type { Joint } from "../model/joint.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
+import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
+import { toUnit } from "../units/units.js";
 
 export const CAUTION =
   "splicewright is an aid to design. Its results must be verified by a qualified engineer against the governing edition of the design code, its national annex and local regulations. Bolt installation, corrosion and fatigue are outside the checks unless stated.";
@@ -16,8 +18,17 @@ export function citationText(c: { standard: string; clause: string; table?: stri
   return `${c.standard} cl. ${c.clause}${extra ? ` (${extra})` : ""}`;
 }
 
+/**
+ * The JSON of a check. The SI fields (kN, mm) are always present; a scenario with `units: us` adds the
+ * same figures in US customary units beside them (`_kip`, `_in` fields) and `units: "us"`.
+ */
 export function checkReportJson(scenario: CheckableScenario, joint: Joint, report: CheckReport) {
+  const us = scenario.units === "us";
+  const kip = (N: number) => round(toUnit(N, "kip", "force"), 2);
+  const inch = (mm: number) => round(toUnit(mm, "in", "length"), 4);
+  const inchSize = inchBoltSize(scenario.bolts.size_mm);
   return {
+    units: us ? "us" : "si",
     scenario: scenario.name,
     ...(scenario.project !== undefined ? { project: scenario.project } : {}),
     code: report.code,
@@ -25,8 +36,9 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
     spliceType: joint.spliceType,
     pattern: joint.patternText,
     bolt: {
-      size: `M${scenario.bolts.size_mm}`,
+      size: inchSize !== undefined ? inchSizeText(inchSize) : `M${scenario.bolts.size_mm}`,
       class: scenario.bolts.propertyClass,
+      ...(scenario.bolts.astmGrade ? { astmGrade: scenario.bolts.astmGrade } : {}),
       assembly: scenario.bolts.assembly,
       count: joint.holes.length,
     },
@@ -34,6 +46,7 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
     pass: report.pass,
     jointStrength_kN: round(report.jointStrength_N / 1000, 2),
     factoredTension_kN: round(scenario.load.factoredTension_N / 1000, 2),
+    ...(us ? { jointStrength_kip: kip(report.jointStrength_N), factoredTension_kip: kip(scenario.load.factoredTension_N) } : {}),
     governing: report.governing,
     efficiency: round(report.efficiency, 4),
     efficiencyDefinition: report.efficiencyDefinition,
@@ -52,6 +65,14 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
       resistance_kN: c.type === "strength" ? round(c.resistance_N / 1000, 2) : null,
       value_mm: c.type === "rule" ? round(c.value_mm, 2) : null,
       limit_mm: c.type === "rule" ? round(c.limit_mm, 2) : null,
+      ...(us
+        ? {
+            demand_kip: c.type === "strength" ? kip(c.demand_N) : null,
+            resistance_kip: c.type === "strength" ? kip(c.resistance_N) : null,
+            value_in: c.type === "rule" ? inch(c.value_mm) : null,
+            limit_in: c.type === "rule" ? inch(c.limit_mm) : null,
+          }
+        : {}),
       utilisation: round(c.utilisation, 4),
       pass: c.pass,
       notes: c.notes,

@@ -16,6 +16,8 @@ export const SEARCH_DEFAULTS = {
   maxAlong: 12,
   /** At least two bolts in each group (common practice: a single bolt has no redundancy). */
   minBolts: 2,
+  /** Step for a scenario in US customary units (`units: us`): ¼ in (common practice). */
+  stepUs_mm: 6.35,
 } as const;
 
 export interface SearchSpace {
@@ -97,7 +99,7 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
     classes,
     assembly,
     patterns: s.patterns ?? [...SEARCH_PATTERNS],
-    step_mm: s.step_mm ?? SEARCH_DEFAULTS.step_mm,
+    step_mm: s.step_mm ?? (scenario.units === "us" ? SEARCH_DEFAULTS.stepUs_mm : SEARCH_DEFAULTS.step_mm),
     maxAlong: s.maxAlong ?? SEARCH_DEFAULTS.maxAlong,
     minBolts: s.minBolts ?? SEARCH_DEFAULTS.minBolts,
     coverThicknesses_mm: scenario.splice.type === "lap" ? [] : s.coverThicknesses_mm ?? [scenario.plates.covers[0]!.thickness_mm],

@@ -21,6 +21,9 @@ export const UNIT_FACTORS: Record<Quantity, Record<string, number>> = {
 /** The unit a bare number means in a scenario file, per quantity. */
 export const DEFAULT_INPUT_UNIT: Record<Quantity, string> = { length: "mm", force: "kN", stress: "MPa" };
 
+/** The unit a bare number means in a scenario file with `units: us` (US customary). */
+export const US_INPUT_UNIT: Record<Quantity, string> = { length: "in", force: "kip", stress: "ksi" };
+
 export class UnitError extends Error {}
 
 /**
@@ -29,10 +32,10 @@ export class UnitError extends Error {}
  * Accepts "12 mm", "12mm", "0.75 in", "100 kip", "36 ksi", "450 kN", and simple fractions "3/4 in", "1 1/8 in".
  * @throws UnitError naming the reason when the text is not a number with a known unit of this quantity.
  */
-export function parseQuantity(value: unknown, quantity: Quantity): number {
+export function parseQuantity(value: unknown, quantity: Quantity, defaults: Record<Quantity, string> = DEFAULT_INPUT_UNIT): number {
   if (typeof value === "number") {
     if (!Number.isFinite(value)) throw new UnitError(`${value} is not a finite number`);
-    return value * factorOf(DEFAULT_INPUT_UNIT[quantity], quantity);
+    return value * factorOf(defaults[quantity], quantity);
   }
   if (typeof value !== "string") throw new UnitError(`expected a number or a string such as "12 mm", got ${describe(value)}`);
   const text = value.trim();
@@ -40,7 +43,7 @@ export function parseQuantity(value: unknown, quantity: Quantity): number {
   if (!match) throw new UnitError(`"${value}" is not a number with a unit`);
   const amount = parseAmount(match[1] ?? "");
   const unit = match[2] ?? "";
-  const factor = unit === "" ? factorOf(DEFAULT_INPUT_UNIT[quantity], quantity) : factorOf(unit, quantity);
+  const factor = unit === "" ? factorOf(defaults[quantity], quantity) : factorOf(unit, quantity);
   return amount * factor;
 }
 

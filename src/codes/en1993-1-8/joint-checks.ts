@@ -94,7 +94,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, s: Ec3
     citation: cl("3.6.1", { table: "Table 3.4", equation: "with 3.8 and 3.6.1(12)" }),
     formula: "T ≤ n·Fv,Rd;  Fv,Rd = planes · αv·fub·A/γM2 · βLf·βp",
     substituted: () =>
-      `Fv,Rd = ${planes} × ${g.alpha_v} × ${g.bolt.fub_MPa} × ${f(g.A_mm2)} / ${s.factors.gamma_M2} × ${f(g.beta_Lf, 3)} × ${f(g.beta_p, 3)}` +
+      `Fv,Rd = ${planes} × ${g.alpha_v} × ${g.bolt.fub_MPa} × ${f(g.A_mm2)} / ${f(s.factors.gamma_M2, 2)} × ${f(g.beta_Lf, 3)} × ${f(g.beta_p, 3)}` +
       (g.smallHole !== 1 ? ` × ${g.smallHole}` : "") +
       ` = ${kN(perBolt, 2)};  n·Fv,Rd = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
     limitState: "ULS",
@@ -188,7 +188,7 @@ function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: numb
   const pTerm = b.p2_mm === null ? "" : `1.4p2/d0 − 1.7 = 1.4 × ${f(b.p2_mm)}/${f(b.d0_mm)} − 1.7 = ${f(1.4 * b.p2_mm / b.d0_mm - 1.7, 3)}, `;
   return (
     `bolt ${b.hole.id} (${b.end ? "end" : "inner"}, ${b.edge ? "edge" : "inner"}): αb = min(${aTerm}, fub/fu = ${fub}/${fu} = ${f(fub / fu, 3)}, 1) = ${f(b.alpha_b, 3)}; ` +
-    `k1 = min(${eTerm}${pTerm}2.5) = ${f(b.k1, 3)}; Fb,Rd = ${f(b.k1, 3)} × ${f(b.alpha_b, 3)} × ${fu} × ${d} × ${f(t)}${factor !== 1 ? ` × ${factor}` : ""} / ${gM2}` +
+    `k1 = min(${eTerm}${pTerm}2.5) = ${f(b.k1, 3)}; Fb,Rd = ${f(b.k1, 3)} × ${f(b.alpha_b, 3)} × ${fu} × ${d} × ${f(t)}${factor !== 1 ? ` × ${factor}` : ""} / ${f(gM2, 2)}` +
     (b.limited ? ` → limited to 1.5·fu·d·t/γM2 = ${kN(b.Fb_N, 2)}` : ` = ${kN(b.Fb_N, 2)}`)
   );
 }
@@ -300,7 +300,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Setti
     citation: cl("3.9.1", { table: "Tables 3.6, 3.7" }),
     formula: `F ≤ n·Fs,Rd${service ? ",ser" : ""};  Fs,Rd = ks·n·μ·Fp,C / ${service ? "γM3,ser" : "γM3"};  Fp,C = 0.7·fub·As`,
     substituted: () =>
-      `Fp,C = 0.7 × ${g.bolt.fub_MPa} × ${f(As)} = ${kN(FpC, 2)};  Fs,Rd = ${k} × ${nf} × ${f(mu, 2)} × ${kN(FpC, 2)} / ${gamma} = ${kN(perBolt, 2)};  ` +
+      `Fp,C = 0.7 × ${g.bolt.fub_MPa} × ${f(As)} = ${kN(FpC, 2)};  Fs,Rd = ${k} × ${nf} × ${f(mu, 2)} × ${kN(FpC, 2)} / ${f(gamma, 2)} = ${kN(perBolt, 2)};  ` +
       `${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
     limitState: service ? "SLS" : "ULS",
     demand_N: demand,
@@ -328,7 +328,7 @@ export function grossYieldCheck(scenario: CheckableScenario, s: Ec3Settings, pla
     component: plate.label,
     citation: cl11("6.2.3(2)a", { equation: "(6.6)" }),
     formula: "F ≤ Npl,Rd = A·fy / γM0",
-    substituted: () => `Npl,Rd = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${s.factors.gamma_M0} = ${kN(R)}` + shareText(plate),
+    substituted: () => `Npl,Rd = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)} = ${kN(R)}` + shareText(plate),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * plate.forceShare,
     resistance_N: R,
@@ -354,7 +354,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
   const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);
   const ratio = plate.forceShare * fraction;
   const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
-  const resistance = catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${s.factors.gamma_M0}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${s.factors.gamma_M2}`;
+  const resistance = catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",
@@ -408,7 +408,7 @@ export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: 
     formula: "F·k/n ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0",
     substituted: () =>
       `${b.description} (${b.boltsInBlock} of ${holes.length} bolts): Ant = ${f(b.tensionNet_mm)} × ${f(t)} = ${f(b.tensionNet_mm * t)} mm², ` +
-      `Anv = ${f(b.shearNet_mm)} × ${f(t)} = ${f(b.shearNet_mm * t)} mm²;  Veff,1,Rd = ${plate.fu_MPa} × ${f(b.tensionNet_mm * t)}/${gamma_M2} + ${plate.fy_MPa} × ${f(b.shearNet_mm * t)}/(√3 × ${gamma_M0}) = ${kN(R)}`,
+      `Anv = ${f(b.shearNet_mm)} × ${f(t)} = ${f(b.shearNet_mm * t)} mm²;  Veff,1,Rd = ${plate.fu_MPa} × ${f(b.tensionNet_mm * t)}/${f(gamma_M2, 2)} + ${plate.fy_MPa} × ${f(b.shearNet_mm * t)}/(√3 × ${f(gamma_M0, 2)}) = ${kN(R)}`,
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * ratio,
     resistance_N: R,

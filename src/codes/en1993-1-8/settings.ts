@@ -60,18 +60,21 @@ export function settingsOf(scenario: Scenario): Ec3Settings {
   };
 }
 
-/** Whether two settings are the same (a bound code checks the scenario it is given against its own). */
-export function sameSettings(a: Ec3Settings, b: Ec3Settings): boolean {
-  const fa = a.factors;
-  const fb = b.factors;
+/**
+ * Whether a scenario has these settings (a bound code checks every scenario it is given against its
+ * own). Reads the scenario's fields directly: the search asks this for every bound it takes.
+ */
+export function settingsMatch(s: Ec3Settings, scenario: Scenario): boolean {
+  const f = scenario.factors;
+  const r = RECOMMENDED_FACTORS;
   return (
-    fa.gamma_M0 === fb.gamma_M0 &&
-    fa.gamma_M2 === fb.gamma_M2 &&
-    fa.gamma_M3 === fb.gamma_M3 &&
-    fa.gamma_M3_ser === fb.gamma_M3_ser &&
-    a.steel === b.steel &&
-    a.smallBoltClearance_mm === b.smallBoltClearance_mm &&
-    a.category === b.category
+    (f?.gammaM0 ?? r.gamma_M0) === s.factors.gamma_M0 &&
+    (f?.gammaM2 ?? r.gamma_M2) === s.factors.gamma_M2 &&
+    (f?.gammaM3 ?? r.gamma_M3) === s.factors.gamma_M3 &&
+    (f?.gammaM3ser ?? r.gamma_M3_ser) === s.factors.gamma_M3_ser &&
+    (scenario.options.steelStrengths ?? "en10025-2") === s.steel &&
+    (scenario.options.smallBoltClearance_mm ?? 1) === s.smallBoltClearance_mm &&
+    categoryOf(scenario.bolts) === s.category
   );
 }
 

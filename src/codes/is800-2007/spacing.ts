@@ -7,7 +7,7 @@ import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
@@ -35,21 +35,10 @@ export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_m
 export function minSpacingRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
-  const seen = new Set<string>();
-  for (const plate of holePlates(joint)) {
-    const holes = platesHoles(joint, plate);
-    for (let i = 0; i < holes.length; i++) {
-      for (let j = i + 1; j < holes.length; j++) {
-        const a = holes[i]!;
-        const b = holes[j]!;
-        const key = `${a.id}|${b.id}`;
-        if (seen.has(key)) continue;
-        seen.add(key);
-        const s = distance(a, b);
-        worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
-      }
-    }
-  }
+  forEachHolePair(joint, (plate, a, b) => {
+    const s = distance(a, b);
+    worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
+  });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
 }
 
@@ -185,19 +174,5 @@ export function gripRule(joint: Joint): RuleCheck[] {
  * group is reported as failing rather than accepted silently.
  */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  let worst: Worst | null = null;
-  for (const g of joint.groups) {
-    const holes = joint.holes.filter((h) => h.group === g.id);
-    const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
-    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${f(Math.abs(yc), 2)} mm vs 0.5 mm` }, "max");
-  }
-  return worstRule(
-    "group-centroid",
-    "group-centroid",
-    "Bolt group on the plate axis",
-    { standard: "general", clause: "concentric bolt group, assumed by every check of cl. 6 and 10.3" },
-    "|y centroid| ≤ 0.5 mm",
-    "max",
-    worst,
-  );
+  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by every check of cl. 6 and 10.3" });
 }

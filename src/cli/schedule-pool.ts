@@ -1,0 +1,88 @@
+/**
+ * The per-splice searches of a job on worker threads. Identical splices (same plates, load, space and
+ * options) are searched once. Results come back in splice order whatever order the workers finish in.
+ */
+import { availableParallelism } from "node:os";
+import { Worker } from "node:worker_threads";
+import type { CostTable } from "../catalogue/costs.js";
+import type { Project } from "../io/project.js";
+import { spliceOptions, type SpliceOptions } from "../schedule/options.js";
+
+export interface PoolOptions {
+  /** Worker threads; 0 runs every search on the main thread. */
+  workers: number;
+  onProgress?: (done: number, total: number) => void;
+}
+
+export interface PoolResult {
+  results: SpliceOptions[];
+  /** Distinct splices searched. */
+  searched: number;
+  workers: number;
+}
+
+export const defaultWorkers = (): number => availableParallelism();
+
+/** A splice's identity for the search: its scenario without name and project. */
+const identity = (p: Project, m: number) => JSON.stringify({ ...p.splices[m]!.scenario, name: "", project: "" });
+
+/** The same options under another splice's name. */
+function renamed(o: SpliceOptions, name: string): SpliceOptions {
+  return { ...o, options: o.options.map((x) => ({ ...x, scenario: { ...x.scenario, name } })) };
+}
+
+export async function searchSplices(projectText: string, project: Project, costs: CostTable, opts: PoolOptions): Promise<PoolResult> {
+  const groups = new Map<string, number[]>();
+  project.splices.forEach((_, m) => {
+    const key = identity(project, m);
+    groups.set(key, [...(groups.get(key) ?? []), m]);
+  });
+  const tasks = [...groups.values()];
+  const total = project.splices.length;
+  const found: Array<SpliceOptions | undefined> = Array(total);
+  let done = 0;
+  const store = (task: number[], result: SpliceOptions) => {
+    for (const m of task) found[m] = m === task[0] ? result : renamed(result, project.splices[m]!.id);
+    done += task.length;
+    opts.onProgress?.(done, total);
+  };
+  const W = Math.min(opts.workers, tasks.length);
+  if (W <= 0) {
+    for (const task of tasks) store(task, spliceOptions(project.splices[task[0]!]!.scenario, project.code, costs));
+  } else {
+    await new Promise<void>((resolve, reject) => {
+      const workers: Worker[] = [];
+      let next = 0;
+      let finished = 0;
+      let failed = false;
+      const stop = (e: Error) => {
+        if (failed) return;
+        failed = true;
+        for (const w of workers) void w.terminate();
+        reject(e);
+      };
+      const feed = (w: Worker) => {
+        if (next < tasks.length) w.postMessage(tasks[next++]![0]);
+      };
+      const byFirst = new Map(tasks.map((t) => [t[0]!, t]));
+      for (let i = 0; i < W; i++) {
+        const w = new Worker(new URL("./schedule-search-worker.js", import.meta.url), { workerData: { projectText, costs } });
+        workers.push(w);
+        w.on("message", (msg: { index: number; result: SpliceOptions }) => {
+          store(byFirst.get(msg.index)!, msg.result);
+          finished++;
+          if (finished === tasks.length) {
+            for (const x of workers) void x.terminate();
+            resolve();
+          } else feed(w);
+        });
+        w.on("error", (e) => stop(new Error(`a search worker failed: ${e.message}`)));
+        w.on("exit", (code) => {
+          if (finished < tasks.length) stop(new Error(`a search worker stopped (exit code ${code}) before the searches were done`));
+        });
+        feed(w);
+      }
+    });
+  }
+  return { results: found as SpliceOptions[], searched: tasks.length, workers: Math.max(0, W) };
+}

@@ -1,0 +1,83 @@
+/** The job schedule as terminal text. */
+import Table from "cli-table3";
+import { CAUTION } from "../report/check-json.js";
+import type { Schedule } from "../schedule/schedule.js";
+
+const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
+const pct = (part: number, whole: number) => (whole > 0 ? `${((100 * part) / whole).toFixed(1)} %` : "—");
+const table = (head: string[]) => new Table({ head, style: { head: [], border: [], compact: true } });
+
+export interface ScheduleEffort {
+  searched: number;
+  workers: number;
+  typesSearched: number;
+  checks: number;
+  search_ms: number;
+  selection_ms: number;
+}
+
+export function formatSchedule(s: Schedule, codeTitle: string, currency: string, effort: ScheduleEffort): string {
+  const out: string[] = [];
+  const t = s.totals;
+  const r = s.rules;
+  out.push("splicewright — job schedule: bolted tension splices with few bolt types");
+  out.push(`Project:  ${s.project}`);
+  out.push(`Code:     ${codeTitle}`);
+  out.push(`Splices:  ${t.rows} in the schedule, ${t.splices} to make (with quantities)`);
+  out.push(
+    `Rules:    ${r.maxTypes === undefined ? "no limit on bolt types" : `at most ${r.maxTypes} bolt type${r.maxTypes === 1 ? "" : "s"}`}; ` +
+      `fixed cost per type stocked ${r.costPerType}; ${r.oneClassPerDiameter ? "one property class per diameter" : "classes of one diameter may mix"}; ` +
+      `${r.minBoltsPerType > 0 ? `at least ${r.minBoltsPerType} bolts of every type used` : "no minimum bolts per type"}`,
+  );
+  out.push(`Choice:   ${s.selection.method}: ${s.selection.statement}`);
+  out.push("");
+  out.push("Bolt types chosen:");
+  const types = table(["Type", "Schedule rows", "Splices", "Bolts", `Layout cost`]);
+  for (const u of s.types) types.push([u.type, String(u.rows), String(u.splices), String(u.bolts), fx(u.layoutCost, 1)]);
+  out.push(types.toString());
+  out.push("");
+  out.push("Splices (bolts and cost per splice; × qty for the row; counts per side of the butt for butt splices):");
+  const rows = table(["Id", "Mark", "Qty", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", "End", "Bolts", "Util.", "Cost", "Row cost", "Own optimum", "Premium"]);
+  for (const row of s.rows) {
+    const l = row.layout;
+    rows.push([
+      row.id,
+      row.mark,
+      String(row.quantity),
+      row.type,
+      l.pattern,
+      l.counts,
+      fx(l.pitch_mm),
+      fx(l.gauge_mm),
+      l.endDistanceAtButt_mm !== null ? `${fx(l.endDistance_mm)} / ${fx(l.endDistanceAtButt_mm)}` : fx(l.endDistance_mm),
+      String(row.boltsEach),
+      fx(l.utilisation, 2),
+      fx(row.costEach, 1),
+      fx(row.cost, 1),
+      `${row.ownType} ${fx(row.ownCostEach, 1)}`,
+      row.premium > 0 ? `+${fx(row.premium, 1)}` : "0",
+    ]);
+  }
+  out.push(rows.toString());
+  out.push(`Dimensions in mm; costs in ${currency}. End: end distance (/ at the butt). Every layout has passed every check of \`splicewright check\`, and was checked again before it was scheduled.`);
+  out.push("");
+  out.push("Totals:");
+  out.push(`  layouts ${fx(t.layoutCost, 1)} + ${t.typesUsed} type${t.typesUsed === 1 ? "" : "s"} stocked × ${r.costPerType} = ${fx(t.total, 1)}; ${t.bolts} bolts`);
+  out.push(`  each splice at its own optimum: layouts ${fx(t.own.layoutCost, 1)} with ${t.own.typesUsed} types (stocked: ${fx(t.own.stockingCost, 1)}) = ${fx(t.own.total, 1)}`);
+  out.push(`  premium of rationalising: layouts +${fx(t.premium, 1)} (${pct(t.premium, t.own.layoutCost)}); with stocking ${t.premiumWithStocking >= 0 ? "+" : ""}${fx(t.premiumWithStocking, 1)} (${pct(t.premiumWithStocking, t.own.total)})`);
+  out.push("");
+  out.push("Bolts to order (every splice of the job, quantities included):");
+  const order = table(["Type", "Item", "Length", "Quantity"]);
+  for (const o of s.order) order.push([o.type, o.item, o.length_mm === null ? "" : String(o.length_mm), String(o.quantity)]);
+  out.push(order.toString());
+  out.push("Lengths: grip + washers + nut + thread projection, rounded up to the preferred series (see `splicewright export`).");
+  for (const n of s.notes) out.push(`note: ${n}`);
+  out.push("");
+  out.push(
+    `Effort: ${effort.searched} distinct splices × their bolt types (${effort.typesSearched} type searches, ${effort.checks} full checks) on ${effort.workers === 0 ? "the main thread" : `${effort.workers} worker thread${effort.workers === 1 ? "" : "s"}`} in ${(effort.search_ms / 1000).toFixed(1)} s; ` +
+      `choice of types in ${effort.selection_ms.toFixed(0)} ms.`,
+  );
+  out.push("");
+  out.push(`CAUTION: ${CAUTION}`);
+  return out.join("\n");
+}

@@ -1,0 +1,39 @@
+/**
+ * Bearing and tearout at bolt holes, AISC 360-16 J3.10(a).
+ */
+import type { HoleType, SlotDirection } from "../../model/scenario.js";
+import { PHI } from "./factors.js";
+
+/**
+ * Coefficients of J3.10(a): bearing Rn = cb·d·t·Fu, tearout Rn = ct·lc·t·Fu.
+ * (1) standard, oversized, short-slotted holes, or long slots parallel to the force, deformation at
+ *     service a design consideration: cb 2.4, ct 1.2 (Eq. J3-6a, J3-6c);
+ * (2) the same, deformation not a consideration: cb 3.0, ct 1.5 (Eq. J3-6b, J3-6d);
+ * (3) long slots perpendicular to the force: cb 2.0, ct 1.0 (Eq. J3-6e, J3-6f).
+ * AISC 360-16 J3.10(a).
+ */
+export function bearingCoefficients(deformationConsidered: boolean, hole: HoleType, slot: SlotDirection | undefined): { cb: number; ct: number; equation: string } {
+  if (hole === "long-slot" && slot === "across") return { cb: 2.0, ct: 1.0, equation: "Eq. J3-6e, J3-6f" };
+  return deformationConsidered ? { cb: 2.4, ct: 1.2, equation: "Eq. J3-6a, J3-6c" } : { cb: 3.0, ct: 1.5, equation: "Eq. J3-6b, J3-6d" };
+}
+
+/** Design bearing strength of one bolt on one plate, φ·cb·d·t·Fu (N). AISC 360-16 J3.10(a); φ = 0.75. */
+export function phiRnBearing(cb: number, d_mm: number, t_mm: number, Fu_MPa: number): number {
+  return PHI.bearing * cb * d_mm * t_mm * Fu_MPa;
+}
+
+/**
+ * Design tearout strength of one bolt on one plate, φ·ct·lc·t·Fu (N). AISC 360-16 J3.10(a); φ = 0.75.
+ * @param lc_mm clear distance along the force from the edge of the hole to the edge of the adjacent hole or of the material
+ */
+export function phiRnTearout(ct: number, lc_mm: number, t_mm: number, Fu_MPa: number): number {
+  return PHI.bearing * ct * Math.max(0, lc_mm) * t_mm * Fu_MPa;
+}
+
+/**
+ * Clear distance lc of a hole: to the plate end, the end distance less half the hole length; to the
+ * hole ahead, the spacing less the hole length (both holes of one size). AISC 360-16 J3.10.
+ */
+export function clearDistance_mm(toEnd_mm: number, toHoleAhead_mm: number | null, holeLength_mm: number): number {
+  return toHoleAhead_mm === null ? toEnd_mm - holeLength_mm / 2 : toHoleAhead_mm - holeLength_mm;
+}

@@ -1,0 +1,321 @@
+/**
+ * AISC 360-16 (LRFD) checks of a splice, run on the joint's hole coordinates.
+ * Each function returns results (data); none prints, none throws for a failed check.
+ */
+import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
+import { blockShapes, governingBlock } from "../../geometry/block-shear.js";
+import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { jointLength_mm } from "../../geometry/lines.js";
+import { leastNetPath } from "../../geometry/net-section.js";
+import { tearOutDistances } from "../../geometry/tear-out.js";
+import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
+import type { StrengthCheck } from "../../model/results.js";
+import type { BoltSpec, CheckableScenario, Scenario } from "../../model/scenario.js";
+import { strength } from "../check-builders.js";
+import { f } from "../format.js";
+import { governingNetPath, groupLabel } from "../is800-2007/joint-checks.js";
+import { bearingCoefficients, clearDistance_mm, phiRnBearing, phiRnTearout } from "./bearing.js";
+import { a307GripFactor, fillerFactor, Fnv_MPa, longJointFactor, phiRnShear } from "./bolt-shear.js";
+import { cl } from "./citation.js";
+import { unitText } from "./display.js";
+import { PHI } from "./factors.js";
+import { netAllowance_mm } from "./holes.js";
+import { astmGradeOf, boltGroupOf, Tb_N, type BoltGroup } from "./materials.js";
+import { hf, phiRnSlip, phiSlip } from "./slip.js";
+import { phiPnRupture, phiPnYield, phiRnBlockShear, spliceEffectiveArea } from "./tension.js";
+
+/** What the checks need to know about the bolt, from the scenario. */
+export interface AiscBolt {
+  d_mm: number;
+  /** Inch size (in) for inch bolts; undefined for metric bolts. */
+  inch: number | undefined;
+  name: string;
+  group: BoltGroup;
+  Ab_mm2: number;
+  Fnv_MPa: number;
+  threadsIncluded: boolean;
+}
+
+export function aiscBolt(bolts: Pick<BoltSpec, "size_mm" | "astmGrade" | "propertyClass" | "threadsInShearPlanes">): AiscBolt {
+  const d = bolts.size_mm;
+  const inch = inchBoltSize(d);
+  const grade = astmGradeOf(bolts);
+  if (!grade) throw new RangeError(`no ASTM grade for class ${bolts.propertyClass}`);
+  const group = boltGroupOf(grade);
+  const threadsIncluded = group === "A307" || bolts.threadsInShearPlanes;
+  return {
+    d_mm: d,
+    inch,
+    name: `${inch !== undefined ? inchSizeText(inch) : `M${d}`} ${grade}${inch === undefined ? "M" : ""} (${group})`,
+    group,
+    Ab_mm2: shankArea_mm2(d),
+    Fnv_MPa: Fnv_MPa(group, threadsIncluded, inch !== undefined),
+    threadsIncluded,
+  };
+}
+
+/** Reductions of one group's bolt shear: long joint (Table J3.2 [b]), fillers (J5.2), A307 grip ([c]). */
+export interface GroupShear {
+  group: BoltGroupGeometry;
+  holes: Hole[];
+  patternLength_mm: number;
+  longJoint: number;
+  filler: number;
+  grip: number;
+  /** φRn of one bolt in one shear plane, N. */
+  perPlane_N: number;
+}
+
+export function groupShear(joint: Joint, scenario: Scenario & { bolts: BoltSpec }, group: BoltGroupGeometry): GroupShear {
+  const bolt = aiscBolt(scenario.bolts);
+  const holes = joint.holes.filter((h) => h.group === group.id);
+  const length = jointLength_mm(holes);
+  const lj = longJointFactor(length, bolt.inch !== undefined);
+  const filler = fillerFactor(group.packing_mm, scenario.options.fillersDeveloped ?? false);
+  const grip = a307GripFactor(bolt.group, group.grip_mm, bolt.d_mm);
+  return { group, holes, patternLength_mm: length, longJoint: lj, filler, grip, perPlane_N: phiRnShear(bolt.Fnv_MPa, bolt.Ab_mm2, lj * filler * grip) };
+}
+
+function reductionNotes(gs: GroupShear, scenario: CheckableScenario): string[] {
+  const u = unitText(scenario);
+  const bolt = aiscBolt(scenario.bolts);
+  const limit = bolt.inch !== undefined ? "38 in" : "950 mm";
+  return [
+    `fastener pattern length ${u.len(gs.patternLength_mm)} ${gs.longJoint < 1 ? `> ${limit}: Fnv × 0.833` : `≤ ${limit}: no reduction`} (Table J3.2 note [b])`,
+    gs.group.packing_mm > 0
+      ? `filler ${u.len(gs.group.packing_mm)}: ${gs.filler < 1 ? `1 − 0.4(t − 0.25) = ${f(gs.filler, 3)} (J5.2)` : scenario.options.fillersDeveloped ? "developed, no reduction (J5.2)" : "≤ 1/4 in, no reduction (J5.2)"}`
+      : "no filler",
+    ...(bolt.group === "A307" ? [`A307 grip ${u.len(gs.group.grip_mm)}: factor ${f(gs.grip, 3)} (1 % per 1/16 in over 5d; Table J3.2 note [c], from memory)`] : []),
+  ];
+}
+
+/**
+ * Bolt shear of a group: T ≤ n·ns·φRn, φRn = φ·Fnv·Ab with the long-joint, filler and A307 grip
+ * reductions. AISC 360-16 J3.6, Table J3.2, J5.2.
+ */
+export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gs: GroupShear): StrengthCheck {
+  const bolt = aiscBolt(scenario.bolts);
+  const u = unitText(scenario);
+  const n = gs.holes.length;
+  const ns = gs.group.shearPlanes;
+  const R = n * ns * gs.perPlane_N;
+  return strength({
+    id: `bolt-shear:${gs.group.id}`,
+    kind: "bolt-shear",
+    title: "Bolt shear",
+    component: groupLabel(joint, gs.group),
+    citation: cl("J3.6", { table: "Table J3.2", equation: "Eq. J3-1" }),
+    formula: "T ≤ n·ns·φRn;  φRn = φ·Fnv·Ab·(long joint)·(filler)·(A307 grip), φ = 0.75, Ab = π d²/4",
+    substituted: () =>
+      `${bolt.name}, threads ${bolt.threadsIncluded ? "included (N)" : "excluded (X)"}: Fnv = ${u.stress(bolt.Fnv_MPa)}, Ab = ${u.area(bolt.Ab_mm2)};  ` +
+      `φRn = 0.75 × ${u.stress(bolt.Fnv_MPa)} × ${u.area(bolt.Ab_mm2)} × ${f(gs.longJoint, 3)} × ${f(gs.filler, 3)} × ${f(gs.grip, 3)} = ${u.force(gs.perPlane_N)};  ` +
+      `n·ns·φRn = ${n} × ${ns} × ${u.force(gs.perPlane_N)} = ${u.force(R)}`,
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N,
+    resistance_N: R,
+    loadRatio: 1,
+    notes: () => reductionNotes(gs, scenario),
+  });
+}
+
+/** Shear planes a plate's bolts transfer its force through: a main plate between two covers 2, else 1. */
+function planesFor(plate: PlatePiece, group: BoltGroupGeometry): number {
+  return plate.role === "main" ? group.shearPlanes : 1;
+}
+
+/** Holes with their width and length enlarged by the B4.3b allowance (1/16 in, 2 mm) for net areas. */
+export function netHoles(holes: readonly Hole[], d_mm: number): Hole[] {
+  const a = netAllowance_mm(d_mm);
+  return holes.map((h) => ({ ...h, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
+}
+
+/**
+ * Bolt group strength on one plate: plate force ≤ Σ over the bolts of min(shear, bearing, tearout).
+ * AISC 360-16 J3.6 (shear per bolt, the planes through which this plate is loaded), J3.10(a) (bearing
+ * φ·cb·d·t·Fu and tearout φ·ct·lc·t·Fu, lc the clear distance to the plate end or the hole ahead).
+ */
+export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, gs: GroupShear): StrengthCheck {
+  const { bolts, options } = scenario;
+  const bolt = aiscBolt(bolts);
+  const u = unitText(scenario);
+  const considered = (options.bearingDeformation ?? "considered") === "considered";
+  const { cb, ct, equation } = bearingCoefficients(considered, bolts.hole, bolts.slotDirection);
+  const t = plate.spec.thickness_mm;
+  const Fu = plate.fu_MPa;
+  const shear = gs.perPlane_N * planesFor(plate, gs.group);
+  const bearing = phiRnBearing(cb, bolt.d_mm, t, Fu);
+  let total = 0;
+  const tally = new Map<string, { count: number; each: number; text: string }>();
+  for (const to of tearOutDistances(gs.holes, connection)) {
+    const lc = clearDistance_mm(to.toEnd_mm, to.toHoleAhead_mm, to.hole.along_mm);
+    const tear = phiRnTearout(ct, lc, t, Fu);
+    const least = Math.min(shear, bearing, tear);
+    total += least;
+    const [key, text] =
+      least === shear ? ["shear", "bolt shear"] : least === bearing ? ["bearing", "bearing"] : [`tearout ${f(lc, 3)}`, `tearout, lc = ${u.len(lc)} (${to.toHoleAhead_mm === null ? "to the end" : "to the hole ahead"})`];
+    const entry = tally.get(key) ?? { count: 0, each: least, text };
+    entry.count += 1;
+    tally.set(key, entry);
+  }
+  const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  return strength({
+    id: `bearing:${plate.id}:${connection.group}`,
+    kind: "bolt-bearing",
+    title: "Bolt group: shear, bearing, tearout",
+    component: `${plate.label}${sideText}`,
+    citation: cl("J3.10", { equation }),
+    formula: `F ≤ Σ min(ns·φFnv·Ab, φ·${cb}·d·t·Fu, φ·${ct}·lc·t·Fu), φ = 0.75`,
+    substituted: () =>
+      `per bolt: shear ${planesFor(plate, gs.group)} × ${u.force(gs.perPlane_N)} = ${u.force(shear)}; bearing 0.75 × ${cb} × ${u.len(bolt.d_mm)} × ${u.len(t)} × ${u.stress(Fu)} = ${u.force(bearing)};  ` +
+      `Σ = ${[...tally.values()].map((e) => `${e.count} × ${u.force(e.each)} (${e.text})`).join(" + ")} = ${u.force(total)}` +
+      (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * plate.forceShare,
+    resistance_N: total,
+    loadRatio: plate.forceShare,
+    notes: () => [considered ? "deformation at the bolt hole at service load is a design consideration (J3.10(a)(1))" : "deformation at the bolt hole at service load is not a design consideration (J3.10(a)(2))"],
+  });
+}
+
+/**
+ * Slip resistance of a slip-critical group at the factored load: T ≤ n·φ·μ·Du·hf·Tb·ns.
+ * AISC 360-16 J3.8, Eq. J3-4, Table J3.1 (Tb).
+ */
+export function slipCheck(joint: Joint, scenario: CheckableScenario, gs: GroupShear): StrengthCheck {
+  const { bolts } = scenario;
+  const bolt = aiscBolt(bolts);
+  const u = unitText(scenario);
+  const mu = bolts.slipFactor ?? 0;
+  const phi = phiSlip(bolts.hole, bolts.slotDirection);
+  const fillers = gs.group.packing_mm > 0 ? 1 : 0;
+  const h = hf(fillers);
+  const group = bolt.group === "Group B" ? "Group B" : "Group A";
+  const Tb = Tb_N(bolt.d_mm, group, bolt.inch) ?? 0;
+  const ns = gs.group.shearPlanes;
+  const perBolt = phiRnSlip(phi, mu, h, Tb, ns);
+  const n = gs.holes.length;
+  return strength({
+    id: `slip:${gs.group.id}`,
+    kind: "slip",
+    title: "Slip resistance (slip-critical)",
+    component: groupLabel(joint, gs.group),
+    citation: cl("J3.8", { table: "Table J3.1", equation: "Eq. J3-4" }),
+    formula: "T ≤ n·φRn;  φRn = φ·μ·Du·hf·Tb·ns, Du = 1.13",
+    substituted: () =>
+      `Class ${mu >= 0.5 ? "B" : "A"} μ = ${f(mu, 2)}, Tb = ${u.force(Tb)} (${group}), hf = ${f(h, 2)} (${fillers} filler${fillers === 1 ? "" : "s"}), ns = ${ns}, φ = ${f(phi, 2)};  ` +
+      `φRn = ${f(phi, 2)} × ${f(mu, 2)} × 1.13 × ${f(h, 2)} × ${u.force(Tb)} × ${ns} = ${u.force(perBolt)};  n·φRn = ${n} × ${u.force(perBolt)} = ${u.force(n * perBolt)}`,
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N,
+    resistance_N: n * perBolt,
+    loadRatio: 1,
+    notes: () => ["slip checked at the factored (LRFD) load; the bolts are also checked in shear, bearing and tearout (J3.8)"],
+  });
+}
+
+/** Main plates are tension members (Chapter D); cover plates are connecting elements (J4.1). */
+const isSplicePlate = (plate: PlatePiece) => plate.role === "cover";
+
+/**
+ * Tensile yielding of the gross section: F ≤ 0.90·Fy·Ag.
+ * AISC 360-16 D2(a) for main plates, J4.1(a) for splice plates.
+ */
+export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
+  const u = unitText(scenario);
+  const { width_mm: b, thickness_mm: t } = plate.spec;
+  const Ag = b * t;
+  const R = phiPnYield(Ag, plate.fy_MPa);
+  const cover = isSplicePlate(plate);
+  return strength({
+    id: `gross-yield:${plate.id}`,
+    kind: "gross-yield",
+    title: "Tensile yielding (gross section)",
+    component: plate.label,
+    citation: cover ? cl("J4.1(a)", { equation: "Eq. J4-1" }) : cl("D2(a)", { equation: "Eq. D2-1" }),
+    formula: "F ≤ φ·Fy·Ag, φ = 0.90",
+    substituted: () => `φPn = 0.90 × ${u.stress(plate.fy_MPa)} × ${u.len(b)} × ${u.len(t)} = ${u.force(R)}` + (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T (covers share by area)` : ""),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * plate.forceShare,
+    resistance_N: R,
+    loadRatio: plate.forceShare,
+    notes: () => [plate.materialNote],
+  });
+}
+
+/**
+ * Tensile rupture of the net section over the least straight or staggered path, hole widths + 1/16 in:
+ * main plates F ≤ 0.75·Fu·Ae, Ae = U·An with U = 1 (D2(b), D3, Table D3.1 case 1 — every element of the
+ * plate connected); splice plates F ≤ 0.75·Fu·An with An ≤ 0.85·Ag (J4.1(b)). An by B4.3.
+ */
+export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
+  const u = unitText(scenario);
+  const { width_mm: b, thickness_mm: t } = plate.spec;
+  const holes = netHoles(holesOfPlate(joint, plate), joint.boltDiameter_mm);
+  const transferred = scenario.options.netSectionLoad === "transferred";
+  const { path, fraction } = transferred ? governingNetPath(joint, plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const An = path.netWidth_mm * t;
+  const Ag = b * t;
+  const cover = isSplicePlate(plate);
+  const Ae = cover ? spliceEffectiveArea(An, Ag) : An;
+  const R = phiPnRupture(Ae, plate.fu_MPa);
+  const ratio = plate.forceShare * fraction;
+  const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+  return strength({
+    id: `net-section:${plate.id}`,
+    kind: "net-section",
+    title: "Tensile rupture (net section)",
+    component: plate.label,
+    citation: cover ? cl("J4.1(b)", { equation: "Eq. J4-2" }) : cl("D2(b)", { equation: "Eq. D2-2; B4.3b; D3" }),
+    formula: cover
+      ? "F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + 1/16 in) + Σ s²/4g)·t, φ = 0.75"
+      : "F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + 1/16 in) + Σ s²/4g)·t, φ = 0.75",
+    substituted: () =>
+      `${transferred ? "governing" : "least"} path ${pathText}: An = (${u.n(b)} − ${u.n(path.holeDeduction_mm)} + ${u.n(path.staggerAddition_mm)}) × ${u.n(t)} = ${u.area(An)}` +
+      (cover ? `;  Ae = min(An, 0.85 × ${u.area(Ag)}) = ${u.area(Ae)}` : `;  Ae = 1.0 × An = ${u.area(Ae)}`) +
+      `;  φPn = 0.75 × ${u.stress(plate.fu_MPa)} × ${u.area(Ae)} = ${u.force(R)}` +
+      (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
+      (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * ratio,
+    resistance_N: R,
+    loadRatio: ratio,
+    notes: () => [`path searched over every straight and staggered route through ${holes.length} holes, each hole ${u.len(netAllowance_mm(joint.boltDiameter_mm))} wider than nominal (B4.3b)`],
+  });
+}
+
+/**
+ * Block shear of a plate for one group over every block shape the pattern forms; a block holding k of
+ * the n bolts takes k/n of the plate's force. AISC 360-16 J4.3, Eq. J4-5 (Ubs = 1; net areas with the
+ * B4.3b allowance). Null when the pattern has one gauge line (no tension plane; tearout covers it).
+ */
+export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+  const u = unitText(scenario);
+  const holes = netHoles(joint.holes.filter((h) => h.group === connection.group), joint.boltDiameter_mm);
+  const shapes = blockShapes(holes, connection, plate.spec.width_mm);
+  const t = plate.spec.thickness_mm;
+  const best = governingBlock(shapes, holes.length, plate.forceShare, (shape) => {
+    const r = phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
+    return { value_N: r.phiRn_N, detail: r };
+  });
+  if (!best) return null;
+  const s = best.shape;
+  const r = best.detail;
+  const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  return strength({
+    id: `block-shear:${plate.id}:${connection.group}`,
+    kind: "block-shear",
+    title: "Block shear",
+    component: `${plate.label}${sideText}`,
+    citation: cl("J4.3", { equation: "Eq. J4-5" }),
+    formula: "F·k/n ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1",
+    substituted: () =>
+      `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Agv = ${u.area(s.shearGross_mm * t)}, Anv = ${u.area(s.shearNet_mm * t)}, Ant = ${u.area(s.tensionNet_mm * t)};  ` +
+      `rupture 0.75 × (0.60 × ${u.stress(plate.fu_MPa)} × Anv + ${u.stress(plate.fu_MPa)} × Ant) = ${u.force(r.rupture_N)}, ` +
+      `yield 0.75 × (0.60 × ${u.stress(plate.fy_MPa)} × Agv + ${u.stress(plate.fu_MPa)} × Ant) = ${u.force(r.yield_N)};  φRn = ${u.force(r.phiRn_N)}`,
+    limitState: "ULS",
+    demand_N: scenario.load.factoredTension_N * best.ratio,
+    resistance_N: r.phiRn_N,
+    loadRatio: best.ratio,
+    notes: () => [`governing of ${shapes.length} block shapes`],
+  });
+}
+

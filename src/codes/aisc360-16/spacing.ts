@@ -1,0 +1,151 @@
+/**
+ * Spacing, end and edge rules of AISC 360-16 J3.3–J3.5 and the filler limit of J5.2, as pass/fail checks
+ * measured on the hole coordinates. Each result prints the governing value and its limit.
+ */
+import { inchBoltSize } from "../../catalogue/bolts.js";
+import { distance, gaugeLines } from "../../geometry/lines.js";
+import type { Joint } from "../../model/joint.js";
+import type { RuleCheck } from "../../model/results.js";
+import type { CheckableScenario, Scenario } from "../../model/scenario.js";
+import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { cl } from "./citation.js";
+import { unitText } from "./display.js";
+import { MM_PER_IN } from "./factors.js";
+
+/** Minimum spacing between centres of standard, oversized or slotted holes, 2⅔ d (3 d preferred). AISC 360-16 J3.3. */
+export function minSpacing_mm(d_mm: number): number {
+  return (8 / 3) * d_mm;
+}
+
+/**
+ * Minimum edge distance from the centre of a standard hole to an edge of a connected part, mm.
+ * AISC 360-16 Table J3.4 (in: ½ → ¾, ⅝ → ⅞, ¾ → 1, ⅞ → 1⅛, 1 → 1¼, 1⅛ → 1½, over 1¼ → 1¼ d) and
+ * Table J3.4M (M16 22, M20 26, M22 28, M24 30, M27 34, M30 38, M36 46, over M36 1.25 d).
+ */
+export function minEdge_mm(d_mm: number): number {
+  const inch = inchBoltSize(d_mm);
+  if (inch !== undefined) {
+    const table: Record<string, number> = { "0.5": 0.75, "0.625": 0.875, "0.75": 1, "0.875": 1.125, "1": 1.25, "1.125": 1.5 };
+    return (table[String(inch)] ?? 1.25 * inch) * MM_PER_IN;
+  }
+  const metric: Record<number, number> = { 16: 22, 20: 26, 22: 28, 24: 30, 27: 34, 30: 38, 36: 46 };
+  return metric[d_mm] ?? 1.25 * d_mm;
+}
+
+/** Maximum edge distance: 12 t of the part, not above 6 in (150 mm). AISC 360-16 J3.5. */
+export function maxEdge_mm(t_mm: number, inch: boolean): number {
+  return Math.min(12 * t_mm, inch ? 6 * MM_PER_IN : 150);
+}
+
+/**
+ * Maximum spacing of fasteners in parts in contact: painted, or unpainted not subject to corrosion,
+ * 24 t of the thinner part and 12 in (305 mm); unpainted weathering steel subject to atmospheric corrosion
+ * (here: options.exposed_to_corrosion), 14 t and 7 in (180 mm). AISC 360-16 J3.5(a), (b).
+ */
+export function maxSpacing_mm(t_mm: number, inch: boolean, corrosion: boolean): number {
+  return corrosion ? Math.min(14 * t_mm, inch ? 7 * MM_PER_IN : 180) : Math.min(24 * t_mm, inch ? 12 * MM_PER_IN : 305);
+}
+
+const isInch = (joint: Joint) => inchBoltSize(joint.boltDiameter_mm) !== undefined;
+
+/** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
+export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
+  const u = unitText(scenario);
+  const limit = minSpacing_mm(joint.boltDiameter_mm);
+  let worst: Worst | null = null;
+  forEachHolePair(joint, (plate, a, b) => {
+    const s = distance(a, b);
+    worst = keepWorst(worst, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * joint.boltDiameter_mm)} preferred)` }, "min");
+  });
+  return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("J3.3"), "s ≥ 2⅔ d", "min", worst);
+}
+
+/** Maximum spacing along gauge lines and across between adjacent gauge lines. AISC 360-16 J3.5. */
+export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+  const u = unitText(scenario);
+  const corrosion = scenario.options.exposedToCorrosion;
+  let along: Worst | null = null;
+  let across: Worst | null = null;
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    for (const line of gaugeLines(holes)) {
+      for (let k = 1; k < line.holes.length; k++) {
+        const a = line.holes[k - 1]!;
+        const b = line.holes[k]!;
+        const limit = maxSpacing_mm(pairThickness(joint, a, b), isInch(joint), corrosion);
+        const s = b.x_mm - a.x_mm;
+        along = keepWorst(along, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs ${u.len(limit)}` }, "max");
+      }
+    }
+    for (const group of new Set(holes.map((h) => h.group))) {
+      const gl = gaugeLines(holes.filter((h) => h.group === group));
+      for (let i = 1; i < gl.length; i++) {
+        const a = gl[i - 1]!.holes[0]!;
+        const b = gl[i]!.holes[0]!;
+        const limit = maxSpacing_mm(pairThickness(joint, a, b), isInch(joint), corrosion);
+        const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
+        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(gl[i - 1]!.at_mm)} and ${u.len(gl[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` }, "max");
+      }
+    }
+  }
+  const formula = corrosion ? "s ≤ min(14 t, 7 in / 180 mm) (weathering steel, corrosion)" : "s ≤ min(24 t, 12 in / 305 mm)";
+  return [
+    ...worstRule("max-pitch", "max-pitch", "Maximum spacing along the force", cl("J3.5"), formula, "max", along),
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("J3.5"), formula, "max", across),
+  ];
+}
+
+/**
+ * Minimum end and edge distances (Table J3.4 / J3.4M, standard holes) and the maximum edge distance
+ * 12 t ≤ 6 in (J3.5), applied to side edges and to plate ends. AISC 360-16 J3.4, J3.5.
+ */
+export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+  const u = unitText(scenario);
+  const d = joint.boltDiameter_mm;
+  const minLimit = minEdge_mm(d);
+  let minEnd: Worst | null = null;
+  let minEdge: Worst | null = null;
+  let maxEdge: Worst | null = null;
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    if (holes.length === 0) continue;
+    const half = plate.spec.width_mm / 2;
+    const maxLimit = maxEdge_mm(plate.spec.thickness_mm, isInch(joint));
+    for (const h of holes) {
+      const e = half - Math.abs(h.y_mm);
+      minEdge = keepWorst(minEdge, { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id}: ${u.len(e)} vs ${u.len(minLimit)}` }, "min");
+      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ 6 in → ${u.len(maxLimit)}` }, "max");
+    }
+    for (const c of plate.connections) {
+      const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, e: c.towardEnd * (c.endX_mm - h.x_mm) }));
+      for (const { h, e } of us) {
+        minEnd = keepWorst(minEnd, { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(minLimit)}` }, "min");
+      }
+      const nearest = us.reduce((m, x) => (x.e < m.e ? x : m), us[0]!);
+      maxEdge = keepWorst(maxEdge, { value: nearest.e, limit: maxLimit, where: plate.label, detail: () => `hole ${nearest.h.id} to the plate end: ${u.len(nearest.e)} vs ${u.len(maxLimit)}` }, "max");
+    }
+  }
+  return [
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("J3.4", { table: "Table J3.4" }), "e ≥ Table J3.4 value", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("J3.4", { table: "Table J3.4" }), "e ≥ Table J3.4 value", "min", minEdge),
+    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("J3.5"), "e ≤ min(12 t, 6 in / 150 mm)", "max", maxEdge),
+  ];
+}
+
+/** Fillers over ¾ in (19 mm) must be developed. AISC 360-16 J5.2(b). */
+export function fillerRule(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+  if (scenario.options.fillersDeveloped) return [];
+  const u = unitText(scenario);
+  const limit = 0.75 * MM_PER_IN;
+  let worst: Worst | null = null;
+  for (const g of joint.groups) {
+    if (g.packing_mm <= 0) continue;
+    worst = keepWorst(worst, { value: g.packing_mm, limit, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `filler ${u.len(g.packing_mm)} vs ${u.len(limit)} (undeveloped)` }, "max");
+  }
+  return worstRule("filler-thickness", "filler-thickness", "Undeveloped filler thickness", cl("J5.2(b)"), "t filler ≤ 3/4 in unless developed", "max", worst);
+}
+
+/** The bolt group's centroid on the plate axis (every check assumes a concentric group). */
+export function centroidRule(joint: Joint): RuleCheck[] {
+  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by every check of D2, J3 and J4" });
+}

@@ -1,0 +1,169 @@
+/**
+ * Spacing, end and edge distances of EN 1993-1-8, Table 3.3, as pass/fail checks measured on the hole
+ * coordinates. Minimum values always; maximum values where the steel is exposed to the weather or other
+ * corrosive influences (Table 3.3, note 1: for tension members not exposed they are unlimited).
+ * d0 is the hole's diameter (a slot's width); t the thinner outer connected part (note 3).
+ */
+import { distance, gaugeLines, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
+import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
+import type { RuleCheck } from "../../model/results.js";
+import type { CheckableScenario } from "../../model/scenario.js";
+import { f } from "../format.js";
+import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { cl } from "./citation.js";
+import { holeWidth } from "./holes.js";
+
+const slotted = (h: Hole) => Math.abs(h.across_mm - h.along_mm) > 1e-9;
+
+/** Thickness of the thinner outer connected part of the groups a plate's holes belong to (Table 3.3, note 3). */
+export function outerThickness(joint: Joint, plate: PlatePiece): number {
+  const groups = new Set(plate.connections.map((c) => c.group));
+  return Math.min(...outsidePlates(joint).filter((p) => p.connections.some((c) => groups.has(c.group))).map((p) => p.spec.thickness_mm));
+}
+
+/**
+ * Minimum end and edge distances. EN 1993-1-8, Table 3.3: e1 ≥ 1.2 d0 and e2 ≥ 1.2 d0; slotted holes
+ * e3 ≥ 1.5 d0 (slot axis to the end) and e4 ≥ 1.5 d0 (centre of the end radius to the edge).
+ */
+export function minEndEdgeRules(joint: Joint): RuleCheck[] {
+  let minEnd: Worst | null = null;
+  let minEdge: Worst | null = null;
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    const half = plate.spec.width_mm / 2;
+    for (const h of holes) {
+      const d0 = holeWidth(h);
+      const factor = slotted(h) ? 1.5 : 1.2;
+      const name = slotted(h) ? "e4" : "e2";
+      const edge = half - Math.abs(h.y_mm) - (h.across_mm - d0) / 2;
+      minEdge = keepWorst(minEdge, { value: edge, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id}: ${name} = ${f(edge)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` }, "min");
+    }
+    for (const c of plate.connections) {
+      for (const h of holes.filter((k) => k.group === c.group)) {
+        const d0 = holeWidth(h);
+        const factor = slotted(h) ? 1.5 : 1.2;
+        const name = slotted(h) ? "e3" : "e1";
+        const end = c.towardEnd * (c.endX_mm - h.x_mm) - (h.along_mm - d0) / 2;
+        minEnd = keepWorst(minEnd, { value: end, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${name} = ${f(end)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` }, "min");
+      }
+    }
+  }
+  return [
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("3.5", { table: "Table 3.3" }), "e1 ≥ 1.2 d0 (slotted: e3 ≥ 1.5 d0)", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("3.5", { table: "Table 3.3" }), "e2 ≥ 1.2 d0 (slotted: e4 ≥ 1.5 d0)", "min", minEdge),
+  ];
+}
+
+const cell = (x: number, y: number) => `${Math.round(x / LINE_TOLERANCE_MM)}:${Math.round(y / LINE_TOLERANCE_MM)}`;
+
+/**
+ * Two holes staggered against each other: on different gauge lines and transverse lines, with no hole
+ * of the plate at the other corners of their rectangle (a grid's diagonal is not a stagger).
+ * @param occupied the plate's hole centres as `cell` keys
+ */
+function staggeredPair(occupied: ReadonlySet<string>, a: Hole, b: Hole): boolean {
+  return !occupied.has(cell(a.x_mm, b.y_mm)) && !occupied.has(cell(b.x_mm, a.y_mm));
+}
+
+/**
+ * Minimum spacing. EN 1993-1-8, Table 3.3, for every pair of holes in a plate: on one gauge line
+ * p1 ≥ 2.2 d0; on one transverse line p2 ≥ 2.4 d0; staggered pairs p2 ≥ 1.2 d0 with the distance
+ * L ≥ 2.4 d0 (note 5).
+ */
+export function minSpacingRules(joint: Joint): RuleCheck[] {
+  let pitch: Worst | null = null;
+  let gauge: Worst | null = null;
+  let staggerGauge: Worst | null = null;
+  let staggerDistance: Worst | null = null;
+  const occupiedBy = new Map<PlatePiece, Set<string>>();
+  forEachHolePair(joint, (plate, a, b, holes) => {
+    let occupied = occupiedBy.get(plate);
+    if (!occupied) occupiedBy.set(plate, (occupied = new Set(holes.map((h) => cell(h.x_mm, h.y_mm)))));
+    const d0 = Math.max(holeWidth(a), holeWidth(b));
+    const dx = Math.abs(a.x_mm - b.x_mm);
+    const dy = Math.abs(a.y_mm - b.y_mm);
+    const pair = `holes ${a.id}–${b.id}`;
+    if (dy <= LINE_TOLERANCE_MM) {
+      pitch = keepWorst(pitch, { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `${pair}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` }, "min");
+    } else if (dx <= LINE_TOLERANCE_MM) {
+      gauge = keepWorst(gauge, { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `${pair}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` }, "min");
+    } else if (staggeredPair(occupied, a, b)) {
+      const L = distance(a, b);
+      staggerGauge = keepWorst(staggerGauge, { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `${pair} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` }, "min");
+      staggerDistance = keepWorst(staggerDistance, { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `${pair} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` }, "min");
+    }
+  });
+  const citation = cl("3.5", { table: "Table 3.3" });
+  return [
+    ...worstRule("min-pitch", "min-spacing", "Minimum spacing along the force", citation, "p1 ≥ 2.2 d0", "min", pitch),
+    ...worstRule("min-gauge", "min-spacing", "Minimum spacing across the force", citation, "p2 ≥ 2.4 d0", "min", gauge),
+    ...worstRule("min-stagger-gauge", "min-spacing", "Minimum line spacing, staggered", cl("3.5", { table: "Table 3.3, note 5" }), "p2 ≥ 1.2 d0 (with L ≥ 2.4 d0)", "min", staggerGauge),
+    ...worstRule("min-stagger-distance", "min-spacing", "Minimum distance between staggered holes", cl("3.5", { table: "Table 3.3, note 5" }), "L ≥ 2.4 d0", "min", staggerDistance),
+  ];
+}
+
+/**
+ * Maximum spacing, end and edge distances of members exposed to corrosion. EN 1993-1-8, Table 3.3 with
+ * Figure 3.1(d) (tension members): e1, e2 ≤ 4t + 40 mm; p1 on the outer gauge lines (p1,0) ≤ min(14t,
+ * 200 mm); p1 on inner gauge lines (p1,i) ≤ min(28t, 400 mm); p2 ≤ min(14t, 200 mm). None apply to tension
+ * members not exposed (note 1). End distances are measured at every plate end a group bears on.
+ */
+export function maxRules(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+  if (!scenario.options.exposedToCorrosion) return [];
+  let edges: Worst | null = null;
+  let outer: Worst | null = null;
+  let inner: Worst | null = null;
+  let across: Worst | null = null;
+  const seen = new Set<string>();
+  for (const plate of holePlates(joint)) {
+    const holes = platesHoles(joint, plate);
+    if (holes.length === 0) continue;
+    const t = outerThickness(joint, plate);
+    const eMax = 4 * t + 40;
+    const half = plate.spec.width_mm / 2;
+    const ys = holes.map((h) => h.y_mm);
+    for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
+      edges = keepWorst(edges, { value: e, limit: eMax, where: plate.label, detail: () => `${side} edge to the nearest gauge line: e2 = ${f(e)} mm vs 4t + 40 = 4 × ${f(t)} + 40 = ${f(eMax)} mm` }, "max");
+    }
+    for (const c of plate.connections) {
+      const nearest = Math.min(...holes.filter((h) => h.group === c.group).map((h) => c.towardEnd * (c.endX_mm - h.x_mm)));
+      edges = keepWorst(edges, { value: nearest, limit: eMax, where: plate.label, detail: () => `plate end to the nearest transverse line: e1 = ${f(nearest)} mm vs 4t + 40 = 4 × ${f(t)} + 40 = ${f(eMax)} mm` }, "max");
+    }
+    const lines = gaugeLines(holes);
+    lines.forEach((line, index) => {
+      const isOuter = index === 0 || index === lines.length - 1;
+      const limit = isOuter ? Math.min(14 * t, 200) : Math.min(28 * t, 400);
+      for (let k = 1; k < line.holes.length; k++) {
+        const a = line.holes[k - 1]!;
+        const b = line.holes[k]!;
+        const key = `${a.id}|${b.id}`;
+        if (seen.has(key)) continue;
+        seen.add(key);
+        const p = b.x_mm - a.x_mm;
+        const w: Worst = { value: p, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on ${isOuter ? "an outer" : "an inner"} gauge line: ${f(p)} mm vs ${isOuter ? "min(14t, 200)" : "min(28t, 400)"} with t = ${f(t)} → ${f(limit)} mm` };
+        if (isOuter) outer = keepWorst(outer, w, "max");
+        else inner = keepWorst(inner, w, "max");
+      }
+    });
+    for (const group of new Set(holes.map((h) => h.group))) {
+      const gl = gaugeLines(holes.filter((h) => h.group === group));
+      for (let i = 1; i < gl.length; i++) {
+        const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
+        const limit = Math.min(14 * t, 200);
+        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: p2 = ${f(g)} mm vs min(14t, 200) with t = ${f(t)} → ${f(limit)} mm` }, "max");
+      }
+    }
+  }
+  const citation = cl("3.5", { table: "Table 3.3, exposed to corrosion" });
+  return [
+    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum end and edge distance (exposed)", citation, "e1, e2 ≤ 4t + 40 mm", "max", edges),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on outer gauge lines (exposed)", citation, "p1,0 ≤ min(14t, 200 mm)", "max", outer),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch on inner gauge lines (exposed)", citation, "p1,i ≤ min(28t, 400 mm)", "max", inner),
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force (exposed)", citation, "p2 ≤ min(14t, 200 mm)", "max", across),
+  ];
+}
+
+/** The bolt group on the plate axis: the concentric group every EN 1993-1-8 check here assumes. */
+export function centroidRule(joint: Joint): RuleCheck[] {
+  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by 3.7, 3.10.2(2) and EN 1993-1-1 6.2.3" });
+}

@@ -1,0 +1,94 @@
+/**
+ * The schedule as JSON and CSV (RFC 4180 quoting). Pure: text out, the CLI writes the files.
+ */
+import { CAUTION } from "../report/check-json.js";
+import type { Schedule } from "./schedule.js";
+
+const money = (v: number) => Number(v.toFixed(2));
+const cell = (v: string | number | null) => {
+  const s = v === null ? "" : String(v);
+  return /[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+};
+const csvLine = (cells: Array<string | number | null>) => cells.map(cell).join(",");
+
+function rulesText(s: Schedule): string[] {
+  const r = s.rules;
+  return [
+    r.maxTypes === undefined ? "no limit on the number of bolt types" : `at most ${r.maxTypes} bolt type${r.maxTypes === 1 ? "" : "s"}`,
+    `fixed cost per type stocked: ${r.costPerType}`,
+    `one property class per diameter: ${r.oneClassPerDiameter ? "yes" : "no"}`,
+    `minimum bolts per type used: ${r.minBoltsPerType || "none"}`,
+  ];
+}
+
+export function scheduleJson(s: Schedule, meta: { code: string; currency: string; elapsed_ms?: Record<string, number> }) {
+  const t = s.totals;
+  return {
+    project: s.project,
+    code: meta.code,
+    currency: meta.currency,
+    rules: { maxTypes: s.rules.maxTypes ?? null, costPerType: s.rules.costPerType, oneClassPerDiameter: s.rules.oneClassPerDiameter, minBoltsPerType: s.rules.minBoltsPerType },
+    rulesText: rulesText(s),
+    method: s.selection.method,
+    proven: s.selection.proven,
+    provenStatement: s.selection.statement,
+    ...(s.selection.subsets !== undefined ? { subsetsEvaluated: s.selection.subsets } : {}),
+    ...(s.selection.solver ? { solver: s.selection.solver } : {}),
+    types: s.types.map((u) => ({ ...u, layoutCost: money(u.layoutCost) })),
+    splices: s.rows.map((r) => ({
+      id: r.id,
+      mark: r.mark,
+      description: r.description,
+      quantity: r.quantity,
+      type: r.type,
+      layout: r.layout,
+      boltsEach: r.boltsEach,
+      bolts: r.bolts,
+      boltLengths: r.boltLengths,
+      costEach: money(r.costEach),
+      cost: money(r.cost),
+      ownOptimum: { type: r.ownType, costEach: money(r.ownCostEach) },
+      premiumEach: money(r.premiumEach),
+      premium: money(r.premium),
+    })),
+    totals: {
+      rows: t.rows,
+      splices: t.splices,
+      bolts: t.bolts,
+      typesUsed: t.typesUsed,
+      layoutCost: money(t.layoutCost),
+      stockingCost: money(t.stockingCost),
+      total: money(t.total),
+      ownOptimum: { layoutCost: money(t.own.layoutCost), typesUsed: t.own.typesUsed, stockingCost: money(t.own.stockingCost), total: money(t.own.total) },
+      premium: money(t.premium),
+      premiumWithStocking: money(t.premiumWithStocking),
+    },
+    order: s.order,
+    notes: s.notes,
+    ...(meta.elapsed_ms ? { elapsed_ms: meta.elapsed_ms } : {}),
+    caution: CAUTION,
+  };
+}
+
+export function scheduleCsv(s: Schedule): string {
+  const lines = [
+    `# splicewright schedule: ${s.project}`,
+    `# ${rulesText(s).join("; ")}; ${s.selection.proven ? "proven optimal" : "NOT proven optimal"} (${s.selection.method})`,
+    csvLine(["id", "mark", "quantity", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths_mm", "utilisation", "governing", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"]),
+  ];
+  for (const r of s.rows) {
+    const l = r.layout;
+    lines.push(
+      csvLine([r.id, r.mark, r.quantity, r.type, l.pattern, l.counts, l.pitch_mm, l.gauge_mm, l.endDistance_mm, l.endDistanceAtButt_mm, l.edgeDistance_mm, l.coverThickness_mm, r.boltsEach, r.bolts, r.boltLengths.map((b) => `${b.quantity}×${b.length_mm}`).join(" "), l.utilisation, l.governing, money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)]),
+    );
+  }
+  const t = s.totals;
+  lines.push(csvLine(["TOTAL", "", t.splices, `${t.typesUsed} types`, "", "", "", "", "", "", "", "", "", t.bolts, "", "", "", "", money(t.layoutCost), "", money(t.own.layoutCost), "", money(t.premium)]));
+  return lines.join("\n") + "\n";
+}
+
+export function orderCsv(s: Schedule): string {
+  const lines = [`# splicewright bolts to order: ${s.project}`, csvLine(["type", "kind", "item", "length_mm", "quantity", "standard"])];
+  for (const o of s.order) lines.push(csvLine([o.type, o.kind, o.item, o.length_mm, o.quantity, o.standard]));
+  return lines.join("\n") + "\n";
+}
