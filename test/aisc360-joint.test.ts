@@ -62,6 +62,12 @@ describe("hand-worked splice (our own, US units): canopy tie, 8 × 1/2 in A572-5
     expect(kips(strengthOf(r, "net-section:coverA").resistance_N)).toBeCloseTo(101.95, 1);
   });
   it("block shear of the main plate 169.41 kips", () => expect(kips(strengthOf(r, "block-shear:mainB:B").resistance_N)).toBeCloseTo(169.41, 1));
+  it("no 3 d warning at a 3 in pitch (3 d = 2.25 in); a 2-1/8 in pitch passes 2⅔ d = 2 in but warns (J3.3)", () => {
+    expect(r.report.warnings.some((w) => w.id === "spacing-below-3d")).toBe(false);
+    const close = run(demo.replace("pitch: 3\n", "pitch: 2.125\n"));
+    expect(close.report.checks.find((c) => c.id === "min-spacing")!.pass).toBe(true);
+    expect(close.report.warnings.some((w) => w.id === "spacing-below-3d")).toBe(true);
+  });
   it("efficiency 0.753, every check passes", () => {
     expect(r.report.efficiency).toBeCloseTo(0.753, 3);
     expect(r.report.pass).toBe(true);

@@ -8,7 +8,7 @@ import { compareChoices } from "../src/compare/compare.js";
 import { parseCostTable } from "../src/io/costs.js";
 import { parseScenario } from "../src/io/scenario.js";
 import { searchLayouts } from "../src/search/search.js";
-import { cli, ROOT, scenarioPath } from "./helpers/cli.js";
+import { cli, ROOT, scenarioPath, tempScenario } from "./helpers/cli.js";
 
 const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
 const demo = scenarioPath("footbridge-tie-search.yaml");
@@ -60,5 +60,37 @@ describe("splicewright compare (CLI)", () => {
     expect(r.code).toBe(2);
     expect(r.stderr.trim().split("\n")).toHaveLength(1);
     expect(r.stderr).toMatch(expected as RegExp);
+  });
+});
+
+describe("compare by design code", () => {
+  it("prints the mapping of materials with its caveat, one column per code", () => {
+    const r = cli(["compare", demo, "--codes", "is800,en1993"]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain("steel E250 → S275");
+    expect(r.stdout).toMatch(/these are not identical materials/);
+    expect(r.stdout).toContain("en1993-1-8");
+  });
+
+  it("the Eurocode column equals search run on the mapped scenario under that code alone", async () => {
+    const { compareCodes, mapScenario } = await import("../src/compare/compare.js");
+    const { parseMappingText } = await import("../src/io/equivalents.js");
+    const { findCode } = await import("../src/codes/registry.js");
+    const { scenario, code } = parseScenario(readFileSync(demo, "utf8"));
+    const table = parseMappingText(readFileSync(`${ROOT}/catalogue/equivalents.yaml`, "utf8"), "equivalents");
+    const ec3 = findCode("en1993")!;
+    const [, column] = compareCodes(scenario, code, [code, ec3], costs, table);
+    const { scenario: mapped } = mapScenario(scenario, code, ec3, table);
+    const bound = ec3.settings ? ec3.settings.bind(mapped) : ec3;
+    const alone = searchLayouts({ scenario: mapped, code: bound, costs }, { top: 1, rankBy: "cost" });
+    expect(column!.best?.key).toEqual(alone.results[0]?.key);
+    expect(column!.best?.report.code).toBe("en1993-1-8");
+  });
+
+  it("a grade with no equivalent in the mapping is a one-line error naming the field", () => {
+    const text = readFileSync(demo, "utf8") + 'compare:\n  steel: [{ is800-2007: E350, en1993-1-8: S355 }]\n  bolts: [{ is800-2007: "8.8", en1993-1-8: "8.8" }]\n';
+    const r = cli(["compare", tempScenario(text), "--codes", "en1993"]);
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim()).toMatch(/^splicewright: error: plates\.main\.grade: no en1993-1-8 equivalent of steel E250 in the mapping$/);
   });
 });

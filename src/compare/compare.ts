@@ -113,7 +113,8 @@ export function compareCodes(scenario: Scenario, from: DesignCode, codes: Design
   return withDifferences(
     codes.map((to) => {
       const { scenario: mapped, mapping } = mapScenario(scenario, from, to, table);
-      return column(to.id, mapped, to, costs, mapping);
+      // A code with scenario settings (factors, conventions) is bound to the mapped scenario, as parsing does.
+      return column(to.id, mapped, to.settings ? to.settings.bind(mapped) : to, costs, mapping);
     }),
   );
 }

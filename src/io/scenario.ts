@@ -59,7 +59,8 @@ function knownSize(d_mm: number): boolean {
 }
 
 function sizeText(d_mm: number): string {
-  return Number.isInteger(d_mm) ? `M${d_mm}` : `${(d_mm / 25.4).toFixed(4).replace(/0+$/, "")} in`;
+  if (Number.isInteger(d_mm) || d_mm < 0.25 * 25.4) return `M${d_mm}${d_mm < 6 ? " (a bare size is mm unless units: us)" : ""}`;
+  return `${(d_mm / 25.4).toFixed(4).replace(/0+$/, "")} in`;
 }
 
 const KNOWN_SIZES = `${BOLT_SIZES_MM.map((d) => `M${d}`).join(", ")}; ${INCH_BOLT_SIZES_IN.map((d) => inchSizeText(d)).join(", ")}`;

@@ -179,3 +179,12 @@ export interface CheckableScenario extends Scenario {
   bolts: BoltSpec;
   layout: LayoutSpec;
 }
+
+/** Every plate of a scenario with its path in the file (for messages that name the field). */
+export function platesWithPaths(scenario: Scenario): Array<[string, PlateSpec]> {
+  return [
+    ["plates.main", scenario.plates.mainA],
+    ["plates.main_b", scenario.plates.mainB],
+    ...scenario.plates.covers.map((c, i): [string, PlateSpec] => [i === 0 ? "plates.cover" : "plates.cover_b", c]),
+  ];
+}

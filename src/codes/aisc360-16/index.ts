@@ -7,7 +7,7 @@ import { inchBoltSize } from "../../catalogue/bolts.js";
 import { astmPlateGrade } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult } from "../../model/results.js";
-import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
+import { platesWithPaths, type CheckableScenario, type PlateSpec, type Scenario } from "../../model/scenario.js";
 import { factorWarnings } from "../is800-2007/joint-checks.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { unitText, type UnitText } from "./display.js";
@@ -17,7 +17,7 @@ import { astmGradeOf, GRADES, plateStrength, Tb_N } from "./materials.js";
 import { phiPnRupture, phiPnYield } from "./tension.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
 import { SLIP_CLASSES } from "./slip.js";
-import { centroidRule, edgeRules, fillerRule, maxSpacingRule, minSpacingRule } from "./spacing.js";
+import { centroidRule, edgeRules, fillerRule, maxSpacingRule, minSpacingRule, preferredSpacingWarning } from "./spacing.js";
 
 export const AISC360_ID = "aisc360-16";
 
@@ -26,12 +26,7 @@ const METRIC_SIZES = [16, 20, 22, 24, 27, 30, 36];
 /** Inputs AISC 360-16 (as implemented here) cannot check, each with its scenario path. */
 function scopeErrors(scenario: Scenario): ScopeError[] {
   const errors: ScopeError[] = [];
-  const plates: Array<[string, PlateSpec]> = [
-    ["plates.main", scenario.plates.mainA],
-    ["plates.main_b", scenario.plates.mainB],
-    ...scenario.plates.covers.map((c, i): [string, PlateSpec] => [i === 0 ? "plates.cover" : "plates.cover_b", c]),
-  ];
-  for (const [path, spec] of plates) {
+  for (const [path, spec] of platesWithPaths(scenario)) {
     if (!astmPlateGrade(spec.grade)) errors.push({ path: `${path}.grade`, message: `unknown ASTM plate grade "${spec.grade}" for AISC 360-16 (known: ${GRADES.join(", ")})` });
   }
   const bolts = scenario.bolts;
@@ -95,6 +90,8 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   for (const gs of shears) {
     if (gs.longJoint < 1) warnings.push({ id: "long-joint", message: `${gs.group.id}: fastener pattern longer than ${bolt.inch !== undefined ? "38 in" : "950 mm"}, Fnv × 0.833 (Table J3.2 note [b])` });
   }
+  const spacing = preferredSpacingWarning(joint, scenario);
+  if (spacing) warnings.push(spacing);
   return { checks, warnings, conventions };
 }
 

@@ -5,7 +5,7 @@
 import { inchBoltSize } from "../../catalogue/bolts.js";
 import { distance, gaugeLines } from "../../geometry/lines.js";
 import type { Joint } from "../../model/joint.js";
-import type { RuleCheck } from "../../model/results.js";
+import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
 import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
@@ -58,6 +58,21 @@ export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
     worst = keepWorst(worst, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * joint.boltDiameter_mm)} preferred)` }, "min");
   });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("J3.3"), "s ≥ 2⅔ d", "min", worst);
+}
+
+/**
+ * The preferred spacing of 3 d: a warning (not a failed check) when the least centre distance is below it.
+ * AISC 360-16 J3.3 ("a distance of 3d is preferred").
+ */
+export function preferredSpacingWarning(joint: Joint, scenario: Scenario): Warning | null {
+  const d = joint.boltDiameter_mm;
+  let least = Infinity;
+  forEachHolePair(joint, (_plate, a, b) => {
+    least = Math.min(least, distance(a, b));
+  });
+  if (!(least < 3 * d - 1e-9)) return null;
+  const u = unitText(scenario);
+  return { id: "spacing-below-3d", message: `least bolt spacing ${u.len(least)} is below the preferred 3 d = ${u.len(3 * d)} (AISC 360-16 J3.3; the minimum 2⅔ d is checked)` };
 }
 
 /** Maximum spacing along gauge lines and across between adjacent gauge lines. AISC 360-16 J3.5. */
