@@ -173,8 +173,6 @@ function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel
   };
 }
 
-
-
 /** Best `top` layouts over the declared space, ranked by `rankBy`, proven by best-first search. */
 export function searchLayouts(ctx: SearchContext, options: SearchOptions): SearchOutcome {
   const { scenario, code } = ctx;
@@ -253,7 +251,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return N;
   };
 
-  // Seed: one node per family, keyed by its cheapest dimensions; families a bound rules out are skipped.
+  // Seed: one node per family, keyed by a lower bound of its members; families a bound rules out are skipped.
   for (const f of fams) {
     if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
     const counts = f.countsPerLine ?? Array(f.lines).fill(1);
