@@ -183,3 +183,25 @@ describe("splicewright export", () => {
     expect(readFileSync(join(dir, "scenario.svg"), "utf8")).toContain("FAIL");
   });
 });
+
+describe("US-unit scenarios", () => {
+  const text = readFileSync(scenarioPath("canopy-tie-us.yaml"), "utf8").replace("size: 3/4 in", "size: M20");
+
+  it("the DXF of a US-unit scenario is drawn in inches ($INSUNITS = 1): an M20 hole (Ø22 mm, AISC Table J3.3M) has radius 11/25.4 in", () => {
+    const { scenario, joint, report } = load(text);
+    const dxfText = exportFiles({ scenario, joint, report, date: "2026-01-01", base: "t" }, ["dxf"]).files[0]!.content;
+    const dxf = new DxfParser().parseSync(dxfText) as unknown as { header: Record<string, unknown>; entities: Array<{ type: string; layer: string; center?: { x: number; y: number }; radius?: number }> };
+    expect(dxf.header.$INSUNITS).toBe(1);
+    const holes = dxf.entities.filter((e) => e.type === "CIRCLE" && e.layer === "HOLES");
+    expect(holes).toHaveLength(joint.holes.length);
+    for (const h of holes) expect(h.radius).toBeCloseTo(11 / 25.4, 9);
+    const h0 = joint.holes[0]!;
+    expect(holes.some((c) => Math.abs(c.center!.x - h0.x_mm / 25.4) < 1e-9 && Math.abs(c.center!.y - h0.y_mm / 25.4) < 1e-9)).toBe(true);
+  });
+
+  it("export refuses inch bolts with one line (no ASTM length, nut and washer tables yet)", () => {
+    const r = cli(["export", scenarioPath("canopy-tie-us.yaml"), "--format", "svg", "--out", tmpdir()]);
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim()).toMatch(/^splicewright: error: bolts\.size: export and report do not cover inch bolts yet/);
+  });
+});

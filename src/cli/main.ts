@@ -21,7 +21,7 @@ import { compareJson } from "../report/compare-json.js";
 import { formatCompare } from "./compare-table.js";
 import { parseMapping, parseMappingText } from "../io/equivalents.js";
 import { codeIds, findCode } from "../codes/registry.js";
-import { BOLT_SIZES_MM, isBoltSize, isPropertyClass, type PropertyClass } from "../catalogue/bolts.js";
+import { BOLT_SIZES_MM, inchBoltSize, isBoltSize, isPropertyClass, type PropertyClass } from "../catalogue/bolts.js";
 import { renderReportHtml } from "../report/html.js";
 import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
@@ -80,6 +80,9 @@ function positiveInt(name: string) {
 /** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
 function chooseLayout(file: string, rank: number | undefined, costsFile: string | undefined) {
   const { scenario, code } = parseScenario(readScenarioText(file));
+  if (scenario.bolts && inchBoltSize(scenario.bolts.size_mm) !== undefined) {
+    throw new InputError("bolts.size", "export and report do not cover inch bolts yet (no ASTM F3125 length, nut and washer tables): use check or search");
+  }
   if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
   const outcome = searchLayouts({ scenario, code, costs: loadCosts(costsFile, scenario.costs) }, { top: rank, rankBy: "cost" });
   const chosen = outcome.results[rank - 1];

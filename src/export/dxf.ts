@@ -1,8 +1,9 @@
 /**
  * The drawing as an ASCII DXF in model space at full size, written with @tarikjabiri/dxf (a maintained
- * DXF writer). Units declared in the header ($INSUNITS: millimetres). Layers: OUTLINES, HIDDEN, HOLES,
+ * DXF writer). Units declared in the header ($INSUNITS). Layers: OUTLINES, HIDDEN, HOLES,
  * CENTRE, DIMENSIONS, TEXT, SECTION. Dimensions are drawn as lines, arrowheads and text, which every
- * CAD program displays without regenerating dimension blocks. Pure: returns the DXF text.
+ * CAD program displays without regenerating dimension blocks. A US-unit scenario is drawn in inches
+ * ($INSUNITS: inches). Pure: returns the DXF text.
  */
 import { DxfWriter, point3d, Units, Colors } from "@tarikjabiri/dxf";
 import type { Joint } from "../model/joint.js";
@@ -29,15 +30,18 @@ export interface DxfInput {
   date: string;
   /** Drawing scale the text heights are sized for (text 3.5 mm at 1:scale). */
   scale: number;
+  /** Drawing units: millimetres, or inches for a US-unit scenario. */
+  units: "mm" | "in";
 }
 
 export function renderDxf(input: DxfInput): string {
   const k = input.scale;
   const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText: `T = ${(input.scenario.load.factoredTension_N / 1000).toFixed(0)} kN` });
   const dxf = new DxfWriter();
-  dxf.setUnits(Units.Millimeters);
-  dxf.addLType("DASHED", "Dashed __ __ __", [3 * k, -1.5 * k]);
-  dxf.addLType("CENTER", "Center ____ _ ____ _", [9 * k, -1.5 * k, 1 * k, -1.5 * k]);
+  const u = input.units === "in" ? 1 / 25.4 : 1; // model mm → drawing units
+  dxf.setUnits(input.units === "in" ? Units.Inches : Units.Millimeters);
+  dxf.addLType("DASHED", "Dashed __ __ __", [3 * k * u, -1.5 * k * u]);
+  dxf.addLType("CENTER", "Center ____ _ ____ _", [9 * k * u, -1.5 * k * u, 1 * k * u, -1.5 * k * u]);
   dxf.addLayer(DXF_LAYERS.outlines, Colors.White, "Continuous");
   dxf.addLayer(DXF_LAYERS.hidden, Colors.White, "DASHED");
   dxf.addLayer(DXF_LAYERS.holes, Colors.Cyan, "Continuous");
@@ -45,25 +49,26 @@ export function renderDxf(input: DxfInput): string {
   dxf.addLayer(DXF_LAYERS.dimensions, Colors.Green, "Continuous");
   dxf.addLayer(DXF_LAYERS.text, Colors.White, "Continuous");
   dxf.addLayer(DXF_LAYERS.section, Colors.Yellow, "Continuous");
-  const p3 = (p: Point) => point3d(p[0], p[1], 0);
-  const text = 3.5 * k;
+  const p3 = (p: Point) => point3d(p[0] * u, p[1] * u, 0);
+  const pts = (ps: Point[]) => ps.map((q) => ({ point: { x: q[0] * u, y: q[1] * u } }));
+  const text = 3.5 * k * u;
   for (const prim of drawing.primitives) {
     switch (prim.kind) {
       case "line":
         dxf.addLine(p3(prim.a), p3(prim.b), { layerName: DXF_LAYERS[prim.layer] });
         break;
       case "poly":
-        dxf.addLWPolyline(prim.points.map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName: DXF_LAYERS[prim.layer], flags: prim.closed ? 1 : 0 });
+        dxf.addLWPolyline(pts(prim.points), { layerName: DXF_LAYERS[prim.layer], flags: prim.closed ? 1 : 0 });
         break;
       case "circle":
-        dxf.addCircle(p3(prim.c), prim.r, { layerName: DXF_LAYERS[prim.layer] });
+        dxf.addCircle(p3(prim.c), prim.r * u, { layerName: DXF_LAYERS[prim.layer] });
         break;
       case "text":
-        dxf.addText(p3(prim.at), prim.height, prim.text, { layerName: DXF_LAYERS[prim.layer] });
+        dxf.addText(p3(prim.at), prim.height * u, prim.text, { layerName: DXF_LAYERS[prim.layer] });
         break;
       case "arrow": {
         dxf.addLine(p3(prim.from), p3(prim.to), { layerName: DXF_LAYERS[prim.layer] });
-        dxf.addLWPolyline(arrowHeadPoints(prim.to, prim.from, 3 * k).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName: DXF_LAYERS[prim.layer], flags: 1 });
+        dxf.addLWPolyline(pts(arrowHeadPoints(prim.to, prim.from, 3 * k)), { layerName: DXF_LAYERS[prim.layer], flags: 1 });
         break;
       }
       case "dim": {
@@ -76,10 +81,11 @@ export function renderDxf(input: DxfInput): string {
         dxf.addLine(p3(a), p3(b), { layerName });
         const arrow = Math.min(2.5 * k, Math.hypot(b[0] - a[0], b[1] - a[1]) / 3);
         for (const [tip, from] of [[a, b], [b, a]] as Array<[Point, Point]>) {
-          dxf.addLWPolyline(arrowHeadPoints(tip, from, arrow).map((q) => ({ point: { x: q[0], y: q[1] } })), { layerName, flags: 1 });
+          dxf.addLWPolyline(pts(arrowHeadPoints(tip, from, arrow)), { layerName, flags: 1 });
         }
         const mid: Point = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
-        dxf.addText(p3(along ? [mid[0], mid[1] + 1 * k] : [mid[0] - 1 * k, mid[1]]), 2.5 * k, formatLength(prim.value), { layerName, rotation: along ? 0 : 90 });
+        const label = input.units === "in" ? `${(prim.value / 25.4).toFixed(3).replace(/\.?0+$/, "")}"` : formatLength(prim.value);
+        dxf.addText(p3(along ? [mid[0], mid[1] + 1 * k] : [mid[0] - 1 * k, mid[1]]), 2.5 * k * u, label, { layerName, rotation: along ? 0 : 90 });
         break;
       }
     }
@@ -90,8 +96,8 @@ export function renderDxf(input: DxfInput): string {
     `splicewright - bolted tension splice: ${input.scenario.name}`,
     `${input.report.codeTitle}`,
     `${input.joint.holes.length} x M${b.size_mm} class ${b.propertyClass} ${b.assembly}; joint strength ${(input.report.jointStrength_N / 1000).toFixed(1)} kN; utilisation ${input.report.maxUtilisation.toFixed(2)}; ${input.report.pass ? "PASS" : "FAIL"}`,
-    `drawn for 1:${k}; dimensions in mm; ${input.date}. To be verified by a qualified engineer.`,
+    `drawn for 1:${k}; dimensions in ${input.units === "in" ? "inches" : "mm"}; ${input.date}. To be verified by a qualified engineer.`,
   ];
-  lines.forEach((t, i) => dxf.addText(point3d(drawing.min[0], drawing.min[1] - (8 + 6 * i) * k, 0), text, t, { layerName: DXF_LAYERS.text }));
+  lines.forEach((t, i) => dxf.addText(p3([drawing.min[0], drawing.min[1] - (8 + 6 * i) * k]), text, t, { layerName: DXF_LAYERS.text }));
   return dxf.stringify();
 }

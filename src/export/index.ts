@@ -33,7 +33,7 @@ export function exportFiles(input: ExportInput, formats: readonly ExportFormat[]
   const files: ExportFile[] = [];
   for (const f of formats) {
     if (f === "svg") files.push({ name: `${input.base}.svg`, content: renderSvg(svgInput) });
-    if (f === "dxf") files.push({ name: `${input.base}.dxf`, content: renderDxf({ ...svgInput, scale: layoutSheet(svgInput).scale }) });
+    if (f === "dxf") files.push({ name: `${input.base}.dxf`, content: renderDxf({ ...svgInput, scale: layoutSheet(svgInput).scale, units: input.scenario.units === "us" ? "in" : "mm" }) });
     if (f === "csv") {
       files.push({ name: `${input.base}-holes.csv`, content: holeScheduleCsv(input.joint, input.scenario.name) });
       files.push({ name: `${input.base}-bom.csv`, content: billOfMaterialsCsv(bom, input.scenario.name) });

@@ -26,7 +26,7 @@ function expression(terms: Array<[number, string]>): string {
   const parts = terms.map(([c, name], i) => `${c < 0 ? "-" : i === 0 ? "" : "+"} ${num(Math.abs(c))} ${name}`.trim());
   const lines: string[] = [];
   for (let i = 0; i < parts.length; i += 8) lines.push(parts.slice(i, i + 8).join(" "));
-  return lines.join("\n   ") || "0 y_none";
+  return lines.join("\n   ");
 }
 
 export const yName = (t: number) => `y${t}`;
@@ -89,7 +89,7 @@ export function selectionLp(p: SelectionProblem): SelectionLp {
   const text = [
     "\\ splicewright: bolt types to stock for a job (generated)",
     "Minimize",
-    ` obj: ${objective.length ? expression(objective) : "0 " + yName(types[0] ?? 0)}`,
+    ` obj: ${expression(objective)}`,
     "Subject To",
     ...rows,
     "Bounds",
