@@ -118,7 +118,7 @@ async function run(argv: string[], io: Io): Promise<number> {
   const program = new Command();
   program
     .name("splicewright")
-    .description("Check and search bolted tension splices in flat steel plates (IS 800:2007).\nResults are an aid to design: verify them with a qualified engineer.")
+    .description("Check and search bolted tension splices in flat steel plates (IS 800:2007, EN 1993-1-8, AISC 360-16).\nResults are an aid to design: verify them with a qualified engineer.")
     .version(VERSION)
     .exitOverride()
     .configureOutput({ writeOut: (s) => io.out(s.replace(/\n$/, "")), writeErr: (s) => io.err(s.replace(/\n$/, "")) });

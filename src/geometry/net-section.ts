@@ -9,7 +9,7 @@
  * the edges. With holes sorted by y that is a shortest path in a directed acyclic graph, solved exactly
  * by dynamic programming over every pair of holes — no list of "likely" paths.
  */
-import type { Hole } from "../model/joint.js";
+import type { Hole, PlatePiece } from "../model/joint.js";
 import { LINE_TOLERANCE_MM } from "./lines.js";
 
 export interface NetPath {
@@ -118,4 +118,37 @@ export function describePath(path: readonly Hole[], width_mm: number): NetPath {
     holeDeduction_mm: deduction,
     staggerAddition_mm: stagger,
   };
+}
+
+/**
+ * The governing net path when load already handed to bolts is discounted.
+ * A hole's level k/n counts the bolts of its group at or nearer the plate end the group bears toward
+ * (the load comes from the far side); a path carries its plate force times the highest level among
+ * its holes (its most loaded line). For each level, the least path whose holes stay at or below that
+ * level and reach it; the governing one has the highest level/width. In a cover plate a path that
+ * mixes holes of both groups crosses the butt and carries the whole cover force.
+ */
+export function governingNetPath(plate: PlatePiece, holes: readonly Hole[]): { path: NetPath; fraction: number } {
+  const width = plate.spec.width_mm;
+  const level = new Map<Hole, number>();
+  for (const c of plate.connections) {
+    const own = holes.filter((h) => h.group === c.group);
+    const u = (h: Hole) => c.towardEnd * (c.endX_mm - h.x_mm);
+    for (const h of own) level.set(h, own.filter((k) => u(k) <= u(h) + 1e-9).length / own.length);
+  }
+  let best: { path: NetPath; fraction: number } = { path: leastNetPath([], width), fraction: 1 };
+  const consider = (path: NetPath | null, fraction: number) => {
+    if (path && fraction / path.netWidth_mm > best.fraction / best.path.netWidth_mm + 1e-15) best = { path, fraction };
+  };
+  for (const c of plate.connections) {
+    const own = holes.filter((h) => h.group === c.group);
+    for (const lv of [...new Set(own.map((h) => level.get(h)!))]) {
+      consider(leastNetPath(own, width, { allowed: (h) => level.get(h)! <= lv + 1e-12, tag: (h) => (Math.abs(level.get(h)! - lv) <= 1e-12 ? 1 : 0), required: 1 }), lv);
+    }
+  }
+  if (plate.connections.length === 2) {
+    const [a, b] = plate.connections;
+    consider(leastNetPath(holes, width, { tag: (h) => (h.group === a!.group ? 1 : h.group === b!.group ? 2 : 0), required: 3 }), 1);
+  }
+  return best;
 }

@@ -6,14 +6,14 @@ import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalog
 import { blockShapes } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
-import { leastNetPath } from "../../geometry/net-section.js";
+import { leastNetPath, governingNetPath } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
-import { governingNetPath, groupLabel } from "../is800-2007/joint-checks.js";
+import { groupLabel } from "../is800-2007/joint-checks.js";
 import { alpha_b, alpha_d_end, alpha_d_inner, Fb_Rd, groupResistance, k1_edge, k1_inner, singleLapLimit } from "./bearing.js";
 import { alpha_v, beta_Lf, beta_p, Fv_Rd, smallBoltHoleFactor } from "./bolt-shear.js";
 import { cl, cl11 } from "./citation.js";
@@ -348,7 +348,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
   const { width_mm: b, thickness_mm: t } = plate.spec;
   const holes = holesOfPlate(joint, plate);
   const transferred = scenario.options.netSectionLoad === "transferred";
-  const { path, fraction } = transferred ? governingNetPath(joint, plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const { path, fraction } = transferred ? governingNetPath(plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
   const Anet = path.netWidth_mm * t;
   const catC = s.category === "C";
   const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);

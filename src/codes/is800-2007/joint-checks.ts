@@ -6,7 +6,7 @@ import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bo
 import { blockShapes } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
-import { leastNetPath, type NetPath } from "../../geometry/net-section.js";
+import { governingNetPath, leastNetPath } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck, Warning } from "../../model/results.js";
@@ -222,7 +222,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const { width_mm: b, thickness_mm: t } = plate.spec;
   const holes = holesOfPlate(joint, plate);
   const transferred = scenario.options.netSectionLoad === "transferred";
-  const { path, fraction } = transferred ? governingNetPath(joint, plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const { path, fraction } = transferred ? governingNetPath(plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
   const An = path.netWidth_mm * t;
   const R = Tdn(An, plate.fu_MPa);
   const ratio = plate.forceShare * fraction;
@@ -250,39 +250,6 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
       ...(transferred ? ["net-section load: transferred (each path carries the load its plate has not yet passed to bolts ahead of it)"] : []),
     ],
   });
-}
-
-/**
- * The governing net path when load already handed to bolts is discounted.
- * A hole's level k/n counts the bolts of its group at or nearer the plate end the group bears toward
- * (the load comes from the far side); a path carries its plate force times the highest level among
- * its holes (its most loaded line). For each level, the least path whose holes stay at or below that
- * level and reach it; the governing one has the highest level/width. In a cover plate a path that
- * mixes holes of both groups crosses the butt and carries the whole cover force.
- */
-export function governingNetPath(joint: Joint, plate: PlatePiece, holes: readonly Hole[]): { path: NetPath; fraction: number } {
-  const width = plate.spec.width_mm;
-  const level = new Map<Hole, number>();
-  for (const c of plate.connections) {
-    const own = holes.filter((h) => h.group === c.group);
-    const u = (h: Hole) => c.towardEnd * (c.endX_mm - h.x_mm);
-    for (const h of own) level.set(h, own.filter((k) => u(k) <= u(h) + 1e-9).length / own.length);
-  }
-  let best: { path: NetPath; fraction: number } = { path: leastNetPath([], width), fraction: 1 };
-  const consider = (path: NetPath | null, fraction: number) => {
-    if (path && fraction / path.netWidth_mm > best.fraction / best.path.netWidth_mm + 1e-15) best = { path, fraction };
-  };
-  for (const c of plate.connections) {
-    const own = holes.filter((h) => h.group === c.group);
-    for (const lv of [...new Set(own.map((h) => level.get(h)!))]) {
-      consider(leastNetPath(own, width, { allowed: (h) => level.get(h)! <= lv + 1e-12, tag: (h) => (Math.abs(level.get(h)! - lv) <= 1e-12 ? 1 : 0), required: 1 }), lv);
-    }
-  }
-  if (plate.connections.length === 2) {
-    const [a, b] = plate.connections;
-    consider(leastNetPath(holes, width, { tag: (h) => (h.group === a!.group ? 1 : h.group === b!.group ? 2 : 0), required: 3 }), 1);
-  }
-  return best;
 }
 
 /**
