@@ -43,7 +43,7 @@ export class ProgressBar {
     if (done < this.total && now - this.last < 100) return;
     this.last = now;
     this.shown = true;
-    this.stream.write(`\r${progressLine(this.label, done, this.total, (now - this.t0) / 1000, this.stream.columns ?? 80)}\u001b[K`);
+    this.stream.write(`\r${progressLine(this.label, done, this.total, (now - this.t0) / 1000, this.stream.columns || 80)}\u001b[K`);
   }
 
   /** Clear the bar's line. */

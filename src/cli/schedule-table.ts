@@ -63,7 +63,7 @@ export function formatSchedule(s: Schedule, codeTitle: string, currency: string,
   out.push("");
   out.push("Totals:");
   out.push(`  layouts ${fx(t.layoutCost, 1)} + ${t.typesUsed} type${t.typesUsed === 1 ? "" : "s"} stocked × ${r.costPerType} = ${fx(t.total, 1)}; ${t.bolts} bolts`);
-  out.push(`  each splice at its own optimum: layouts ${fx(t.own.layoutCost, 1)} with ${t.own.typesUsed} types (stocked: ${fx(t.own.stockingCost, 1)}) = ${fx(t.own.total, 1)}`);
+  out.push(`  each splice at its own optimum: layouts ${fx(t.own.layoutCost, 1)} with ${t.own.typesUsed} type${t.own.typesUsed === 1 ? "" : "s"} (stocked: ${fx(t.own.stockingCost, 1)}) = ${fx(t.own.total, 1)}`);
   out.push(`  premium of rationalising: layouts +${fx(t.premium, 1)} (${pct(t.premium, t.own.layoutCost)}); with stocking ${t.premiumWithStocking >= 0 ? "+" : ""}${fx(t.premiumWithStocking, 1)} (${pct(t.premiumWithStocking, t.own.total)})`);
   out.push("");
   out.push("Bolts to order (every splice of the job, quantities included):");

@@ -59,7 +59,7 @@ export function solveByEnumeration(p: SelectionProblem): SolvedSelection {
     proven: true,
     subsets: r.subsets,
     statement: r.assignment
-      ? `proven optimal: exact enumeration of the type subsets with an admissible bound (${r.subsets} subsets evaluated), re-checked by the cost evaluator`
+      ? `proven optimal: exact enumeration of the type subsets with an admissible bound (${r.subsets} subset${r.subsets === 1 ? "" : "s"} evaluated), re-checked by the cost evaluator`
       : "proven: no choice of types within the rules gives every splice a compliant layout (exact enumeration)",
   });
 }
