@@ -23,3 +23,7 @@ export { billOfMaterials, boltLengths } from "./export/bolt-list.js";
 export { renderReportHtml } from "./report/html.js";
 export { compareChoices, compareCodes } from "./compare/compare.js";
 export { checkScenario, checkJoint, exitCodeOf } from "./engine/check.js";
+export { buildSchedule } from "./schedule/schedule.js";
+export { spliceOptions, selectionProblem } from "./schedule/options.js";
+export { enumerateSelection, evaluateAssignment } from "./schedule/selection.js";
+export { solveByEnumeration, chooseMethod } from "./schedule/solve.js";
