@@ -72,6 +72,14 @@ describe("compare by design code", () => {
     expect(r.stdout).toContain("en1993-1-8");
   });
 
+  it("maps to AISC 360-16 (E250 → A36, 8.8 → A325) and finds a layout under it", () => {
+    const j = JSON.parse(cli(["compare", demo, "--codes", "is800,aisc360", "--json"]).stdout);
+    const aisc = j.columns.find((c: { code: string }) => c.code === "aisc360-16");
+    expect(aisc.mapping).toContain("steel E250 → A36");
+    expect(aisc.mapping).toContain("bolt class 8.8 → A325");
+    expect(aisc.best).not.toBeNull();
+  });
+
   it("the Eurocode column equals search run on the mapped scenario under that code alone", async () => {
     const { compareCodes, mapScenario } = await import("../src/compare/compare.js");
     const { parseMappingText } = await import("../src/io/equivalents.js");

@@ -4,7 +4,7 @@
  * that choice — there is no separate path. Pure.
  */
 import type { CostTable } from "../catalogue/costs.js";
-import type { PropertyClass } from "../catalogue/bolts.js";
+import { ASTM_ISO_EQUIVALENT, astmBoltGrade, type PropertyClass } from "../catalogue/bolts.js";
 import type { DesignCode } from "../codes/types.js";
 import type { PlateSpec, Scenario } from "../model/scenario.js";
 import { searchLayouts, type Candidate, type SearchOutcome } from "../search/search.js";
@@ -90,20 +90,27 @@ export function mapScenario(scenario: Scenario, from: DesignCode, to: DesignCode
     covers: scenario.plates.covers.map((c, i) => grade(c, i === 0 ? "plates.cover" : "plates.cover_b")),
   };
   const out: Scenario = { ...scenario, code: to.id, plates };
+  // A mapped bolt grade named by ASTM (A325…) is held internally as the ISO class of its strength level,
+  // as the scenario parser holds it (src/catalogue/bolts.ts, ASTM_ISO_EQUIVALENT).
+  const internal = (name: string): PropertyClass => {
+    const astm = astmBoltGrade(name);
+    return astm ? ASTM_ISO_EQUIVALENT[astm] : (name as PropertyClass);
+  };
   const classes = scenario.search?.classes;
   if (classes) {
     const mapped = classes.map((c) => {
       const m = mapValue(table.bolts, from.id, to.id, c);
       if (m) mapping.push(`bolt class ${c} → ${m}`);
-      return m;
-    }).filter((c): c is string => c !== undefined) as PropertyClass[];
+      return m === undefined ? undefined : internal(m);
+    }).filter((c): c is PropertyClass => c !== undefined);
     if (mapped.length === 0) throw new MappingError("search.classes", `none of the classes ${classes.join(", ")} has a ${to.id} equivalent in the mapping`);
     out.search = { ...scenario.search, classes: mapped };
   }
   if (scenario.bolts) {
     const m = mapValue(table.bolts, from.id, to.id, scenario.bolts.propertyClass);
     if (!m) throw new MappingError("bolts.class", `no ${to.id} equivalent of bolt class ${scenario.bolts.propertyClass} in the mapping`);
-    out.bolts = { ...scenario.bolts, propertyClass: m as PropertyClass };
+    const astm = astmBoltGrade(m);
+    out.bolts = { ...scenario.bolts, propertyClass: internal(m), ...(astm ? { astmGrade: astm } : {}) };
   }
   return { scenario: out, mapping };
 }
