@@ -121,7 +121,12 @@ async function run(argv: string[], io: Io): Promise<number> {
     .description("Check and search bolted tension splices in flat steel plates (IS 800:2007, EN 1993-1-8, AISC 360-16).\nResults are an aid to design: verify them with a qualified engineer.")
     .version(VERSION)
     .exitOverride()
-    .configureOutput({ writeOut: (s) => io.out(s.replace(/\n$/, "")), writeErr: (s) => io.err(s.replace(/\n$/, "")) });
+    .configureOutput({
+      writeOut: (s) => io.out(s.replace(/\n$/, "")),
+      writeErr: (s) => io.err(s.replace(/\n$/, "")),
+      // Usage mistakes read like every other bad input: one line, "splicewright: error: …".
+      outputError: (s, write) => write(`splicewright: ${s.trim().split("\n").map((l) => l.trim()).filter(Boolean).join(" ")}\n`),
+    });
 
   program
     .command("check")

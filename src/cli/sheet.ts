@@ -41,10 +41,13 @@ function layoutText(scenario: CheckableScenario, joint: Joint): string {
   const butt = joint.spliceType !== "lap";
   const per = butt ? " per side of the butt" : "";
   if (l.kind === "holes") return `${joint.patternText}${per}; end distance at the far end ${len(l.endDistance_mm)}`;
+  // Pitch and gauge only where there is more than one transverse line / gauge line.
+  const lines = new Set(joint.holes.filter((h) => h.group === joint.holes[0]?.group).map((h) => h.x_mm)).size;
+  const gaugeLines = new Set(joint.holes.map((h) => h.y_mm)).size;
   const parts = [
     `${joint.patternText}${per}`,
-    `pitch ${len(l.pitch_mm)}`,
-    `gauge ${len(l.gauge_mm)}`,
+    ...(lines > 1 ? [`pitch ${len(l.pitch_mm)}`] : []),
+    ...(gaugeLines > 1 ? [`gauge ${len(l.gauge_mm)}`] : []),
     `end distance ${len(l.endDistance_mm)}`,
   ];
   if (butt) parts.push(`end distance at the butt ${len(l.endDistanceAtButt_mm)}`);

@@ -38,7 +38,9 @@ export function validateFile(value: unknown): ScenarioFile {
   const system = (value as Record<string, unknown>).units === "us" ? "us" : "si";
   const result = withInputUnits(system, () => scenarioSchema.safeParse(value));
   if (result.success) return result.data;
-  const issue = result.error.issues[0]!;
+  // An unknown field is reported first: a misspelt required field shows up as both "unknown" and
+  // "required", and the misspelling is what the engineer has to see.
+  const issue = result.error.issues.find((i) => i.code === "unrecognized_keys") ?? result.error.issues[0]!;
   const path = issuePath(issue.path);
   let reason = issue.message;
   if (issue.code === "unrecognized_keys") {

@@ -176,6 +176,13 @@ ${scenario.load.serviceTension_N !== undefined ? `<tr><td>Service tension</td><t
 <tr><td>Bolts</td><td>M${b.size_mm} property class ${b.propertyClass} (ISO 898-1), ${b.assembly === "bearing" ? "bearing type" : `friction grip, μf ${b.slipFactor}, slip designed at ${b.slipAt} load`}; threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes</td></tr>
 ${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n")}
 </table>
+<h3>Options</h3>
+<table class="kv">
+<tr><td>Exposed to corrosion</td><td>${scenario.options.exposedToCorrosion ? "yes" : "no"}</td></tr>
+<tr><td>Bolt net area Anb</td><td>${esc(scenario.options.boltNetArea)}</td></tr>
+<tr><td>Bolt strength basis</td><td>ISO 898-1 ${esc(scenario.options.boltStrength)} values</td></tr>
+<tr><td>Net-section load</td><td>${scenario.options.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"}</td></tr>
+</table>
 </section>
 
 <section id="drawing" class="page">
