@@ -152,3 +152,16 @@ export function governingNetPath(plate: PlatePiece, holes: readonly Hole[]): { p
   }
   return best;
 }
+
+/**
+ * The net path a check uses: the least path with the whole plate force ("full", the clauses as
+ * written), or the governing path with load already transferred ("transferred").
+ */
+export function netPathFor(plate: PlatePiece, holes: readonly Hole[], load: "full" | "transferred"): { path: NetPath; fraction: number } {
+  return load === "transferred" ? governingNetPath(plate, holes) : { path: leastNetPath(holes, plate.spec.width_mm), fraction: 1 };
+}
+
+/** The holes of a path as the sheet names them: "holes A1–A4–A2", or "no hole". */
+export function pathLabel(path: NetPath): string {
+  return path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+}

@@ -6,7 +6,7 @@ import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts
 import { blockShapes, governingBlock } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
-import { leastNetPath, governingNetPath } from "../../geometry/net-section.js";
+import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck } from "../../model/results.js";
@@ -250,14 +250,14 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const { width_mm: b, thickness_mm: t } = plate.spec;
   const holes = netHoles(holesOfPlate(joint, plate), joint.boltDiameter_mm);
   const transferred = scenario.options.netSectionLoad === "transferred";
-  const { path, fraction } = transferred ? governingNetPath(plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
   const Ag = b * t;
   const cover = isSplicePlate(plate);
   const Ae = cover ? spliceEffectiveArea(An, Ag) : An;
   const R = phiPnRupture(Ae, plate.fu_MPa);
   const ratio = plate.forceShare * fraction;
-  const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+  const pathText = pathLabel(path);
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",

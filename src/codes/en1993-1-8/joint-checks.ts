@@ -6,7 +6,7 @@ import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalog
 import { blockShapes } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
-import { leastNetPath, governingNetPath } from "../../geometry/net-section.js";
+import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck } from "../../model/results.js";
@@ -348,12 +348,12 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
   const { width_mm: b, thickness_mm: t } = plate.spec;
   const holes = holesOfPlate(joint, plate);
   const transferred = scenario.options.netSectionLoad === "transferred";
-  const { path, fraction } = transferred ? governingNetPath(plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const Anet = path.netWidth_mm * t;
   const catC = s.category === "C";
   const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);
   const ratio = plate.forceShare * fraction;
-  const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+  const pathText = pathLabel(path);
   const resistance = catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
   return strength({
     id: `net-section:${plate.id}`,

@@ -6,7 +6,7 @@ import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bo
 import { blockShapes } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
-import { governingNetPath, leastNetPath } from "../../geometry/net-section.js";
+import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck, Warning } from "../../model/results.js";
@@ -222,11 +222,11 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const { width_mm: b, thickness_mm: t } = plate.spec;
   const holes = holesOfPlate(joint, plate);
   const transferred = scenario.options.netSectionLoad === "transferred";
-  const { path, fraction } = transferred ? governingNetPath(plate, holes) : { path: leastNetPath(holes, b), fraction: 1 };
+  const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
   const R = Tdn(An, plate.fu_MPa);
   const ratio = plate.forceShare * fraction;
-  const pathText = path.holes.length === 0 ? "no hole" : `holes ${path.holes.map((h) => h.id).join("–")}`;
+  const pathText = pathLabel(path);
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",
