@@ -99,3 +99,22 @@ describe("splicewright search", () => {
   });
 });
 
+
+describe("search in US units with inch bolts (AISC 360-16)", () => {
+  const us = scenarioPath("canopy-tie-us-search.yaml");
+
+  it("searches inch A325/A490 bolts, prints inches and kips, and --save round-trips through check", () => {
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-us-"));
+    const file = join(dir, "chosen.yaml");
+    const r = cli(["search", us, "--top", "3", "--save", file]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/bolt sizes: 5\/8 in, 3\/4 in, 7\/8 in, 1 in/);
+    expect(r.stdout).toMatch(/Strength kips/);
+    expect(r.stdout).toMatch(/│ 1 │ (5\/8|3\/4|7\/8|1) in A(325|490) /);
+    const j = JSON.parse(cli(["search", us, "--top", "1", "--json"]).stdout);
+    const c = JSON.parse(cli(["check", file, "--json"]).stdout);
+    expect(c.pass).toBe(true);
+    expect(c.jointStrength_kN).toBeCloseTo(j.results[0].jointStrength_kN, 2);
+    expect(readFileSync(file, "utf8")).toMatch(/class: A(325|490)/);
+  });
+});

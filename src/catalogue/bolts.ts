@@ -137,3 +137,28 @@ export function astmBoltGrade(text: string): AstmBoltGrade | undefined {
   const m = /^(A307|A325|A490)M?$/.exec(key);
   return m ? (m[1] as AstmBoltGrade) : undefined;
 }
+
+/** A bolt size as the trade writes it: "M20", or an inch size "3/4 in". */
+export function boltSizeText(d_mm: number): string {
+  const inch = inchBoltSize(d_mm);
+  return inch !== undefined ? inchSizeText(inch) : `M${d_mm}`;
+}
+
+/** The grade of a bolt as printed: the ISO class, or for an inch bolt its ASTM grade (A325 for 8.8…). */
+export function boltGradeText(propertyClass: PropertyClass, d_mm: number): string {
+  if (inchBoltSize(d_mm) === undefined) return propertyClass;
+  const astm = (Object.keys(ASTM_ISO_EQUIVALENT) as AstmBoltGrade[]).find((g) => ASTM_ISO_EQUIVALENT[g] === propertyClass);
+  return astm ?? propertyClass;
+}
+
+/** The size of a cost-table key ("M20", "3/4 in", "1-1/8 in", "1 in"), mm; undefined if not a size. */
+export function sizeOfKey(key: string): number | undefined {
+  const metric = /^M(\d+)$/.exec(key);
+  if (metric) return Number(metric[1]);
+  const inch = /^(?:(\d+)-)?(?:(\d+)\/(\d+)|(\d+)) in$/.exec(key.trim());
+  if (!inch) return undefined;
+  const whole = Number(inch[1] ?? 0) + Number(inch[4] ?? 0);
+  const frac = inch[2] ? Number(inch[2]) / Number(inch[3]) : 0;
+  const d_in = whole + frac;
+  return INCH_BOLT_SIZES_IN.some((d) => Math.abs(d - d_in) < 1e-9) ? d_in * 25.4 : undefined;
+}

@@ -4,14 +4,14 @@
  */
 import type { Joint } from "../model/joint.js";
 import type { BoltAssembly } from "../model/scenario.js";
-import type { PropertyClass } from "./bolts.js";
+import { boltSizeText, type PropertyClass } from "./bolts.js";
 
 /** Steel density, kg/mm³ (7850 kg/m³, common practice). */
 export const STEEL_DENSITY_KG_PER_MM3 = 7.85e-6;
 
 export interface CostTable {
   currency: string;
-  /** Price of one bolt assembly by size ("M20") and property class ("8.8"). */
+  /** Price of one bolt assembly by size ("M20", or "3/4 in") and property class ("8.8"; inch bolts by the ISO class of their ASTM grade: A307 4.6, A325 8.8, A490 10.9). */
   boltAssembly: Record<string, Partial<Record<PropertyClass, number>>>;
   /** Price per hole per plate drilled. */
   hole: number;
@@ -33,7 +33,7 @@ export interface CostBreakdown {
 
 /** Price of one bolt assembly, or undefined when the table has none for that size and class. */
 export function boltPrice(table: CostTable, d_mm: number, propertyClass: PropertyClass): number | undefined {
-  return table.boltAssembly[`M${d_mm}`]?.[propertyClass];
+  return table.boltAssembly[boltSizeText(d_mm)]?.[propertyClass];
 }
 
 /**
@@ -59,7 +59,7 @@ export function holeCount(joint: Joint): number {
 
 export function spliceCost(joint: Joint, table: CostTable, propertyClass: PropertyClass, assembly: BoltAssembly): CostBreakdown {
   const price = boltPrice(table, joint.boltDiameter_mm, propertyClass);
-  if (price === undefined) throw new RangeError(`the cost table has no price for M${joint.boltDiameter_mm} class ${propertyClass}`);
+  if (price === undefined) throw new RangeError(`the cost table has no price for ${boltSizeText(joint.boltDiameter_mm)} class ${propertyClass}`);
   const n = joint.holes.length;
   const holes = holeCount(joint);
   const mass = splicePlateMass_kg(joint);

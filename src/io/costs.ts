@@ -4,6 +4,7 @@
  */
 import { z } from "zod";
 import type { CostTable } from "../catalogue/costs.js";
+import { sizeOfKey } from "../catalogue/bolts.js";
 import { InputError, parseYaml } from "./yaml.js";
 
 const price = z.number().nonnegative("must not be negative");
@@ -11,7 +12,7 @@ const classPrices = z.record(z.string().regex(/^(4\.6|5\.6|8\.8|10\.9)$/, "a pro
 
 export const costSchema = z.strictObject({
   currency: z.string().optional(),
-  bolt_assembly: z.record(z.string().regex(/^M\d+$/, "a bolt size such as M20"), classPrices).optional(),
+  bolt_assembly: z.record(z.string().refine((k) => sizeOfKey(k) !== undefined, "a bolt size such as M20 or 3/4 in"), classPrices).optional(),
   hole: price.optional(),
   plate_per_kg: price.optional(),
   friction_grip_extra: price.optional(),

@@ -4,7 +4,7 @@
  */
 import { stringify } from "yaml";
 import type { Candidate } from "../search/search.js";
-import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
+import { boltGradeText, boltSizeText, inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
 
 export function savedScenarioText(original: Record<string, unknown>, c: Candidate, rank: number): string {
   const out: Record<string, unknown> = structuredClone(original);
@@ -14,7 +14,7 @@ export function savedScenarioText(original: Record<string, unknown>, c: Candidat
   const l = c.layout;
   const b = c.scenario.bolts;
   const inch = inchBoltSize(b.size_mm);
-  const bolts: Record<string, unknown> = { size: inch !== undefined ? inchSizeText(inch) : `M${b.size_mm}`, class: b.propertyClass, type: b.assembly, threads_in_shear_planes: b.threadsInShearPlanes, hole: b.hole };
+  const bolts: Record<string, unknown> = { size: inch !== undefined ? inchSizeText(inch) : `M${b.size_mm}`, class: b.astmGrade ?? (inch !== undefined ? boltGradeText(b.propertyClass, b.size_mm) : b.propertyClass), type: b.assembly, threads_in_shear_planes: b.threadsInShearPlanes, hole: b.hole };
   if (b.slipFactor !== undefined) bolts.slip_factor = b.slipFactor;
   if (b.slipAt !== undefined) bolts.slip_at = b.slipAt;
   if (b.slotDirection !== undefined) bolts.slot_direction = b.slotDirection;
@@ -39,7 +39,7 @@ export function savedScenarioText(original: Record<string, unknown>, c: Candidat
     out.plates = plates;
   }
   const header =
-    `# Written by splicewright search: result ${rank} (${c.family.pattern}, M${c.family.size_mm} ${c.family.propertyClass}).\n` +
+    `# Written by splicewright search: result ${rank} (${c.family.pattern}, ${boltSizeText(c.family.size_mm)} ${c.family.propertyClass}).\n` +
     `# Check it with: splicewright check <this file>. Results are to be verified by a qualified engineer.\n`;
   return header + stringify(out);
 }

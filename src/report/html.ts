@@ -7,6 +7,7 @@ import type { CheckReport, CheckResult } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "../export/bolt-list.js";
 import { renderSvg } from "../export/svg.js";
+import { boltSizeText } from "../catalogue/bolts.js";
 import { CAUTION, citationText } from "./check-json.js";
 
 export interface ReportInput {
@@ -173,7 +174,7 @@ ${scenario.load.serviceTension_N !== undefined ? `<tr><td>Service tension</td><t
 </table>
 <h3>Bolts and layout</h3>
 <table class="kv">
-<tr><td>Bolts</td><td>M${b.size_mm} property class ${b.propertyClass} (ISO 898-1), ${b.assembly === "bearing" ? "bearing type" : `friction grip, μf ${b.slipFactor}, slip designed at ${b.slipAt} load`}; threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes</td></tr>
+<tr><td>Bolts</td><td>${esc(boltSizeText(b.size_mm))} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `property class ${b.propertyClass} (ISO 898-1)`}, ${b.assembly === "bearing" ? "bearing type" : `friction grip, μf ${b.slipFactor}, slip designed at ${b.slipAt} load`}; threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes</td></tr>
 ${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n")}
 </table>
 <h3>Options</h3>

@@ -4,6 +4,7 @@
 import type { Candidate, SearchOutcome } from "../search/search.js";
 import type { RankBy } from "../search/ranking.js";
 import { CAUTION } from "./check-json.js";
+import { boltGradeText, boltSizeText } from "../catalogue/bolts.js";
 
 export interface ResultRow {
   rank: number;
@@ -49,7 +50,7 @@ export function resultRow(c: Candidate, rank: number): ResultRow {
   const butt = c.joint.spliceType !== "lap";
   const row: ResultRow = {
     rank,
-    bolt: `M${c.family.size_mm} ${c.family.propertyClass}`,
+    bolt: `${boltSizeText(c.family.size_mm)} ${boltGradeText(c.family.propertyClass, c.family.size_mm)}`,
     size_mm: c.family.size_mm,
     class: c.family.propertyClass,
     assembly: c.family.base.bolts.assembly,
@@ -61,10 +62,10 @@ export function resultRow(c: Candidate, rank: number): ResultRow {
     gauge_mm: l.kind !== "holes" && Math.max(...c.counts) > 1 ? l.gauge_mm : null,
     endDistance_mm: l.endDistance_mm,
     endDistanceAtButt_mm: butt && l.kind !== "holes" ? l.endDistanceAtButt_mm : null,
-    edgeDistance_mm: r(narrow / 2 - Math.max(...ys), 1),
+    edgeDistance_mm: r(narrow / 2 - Math.max(...ys), 2),
     coverThickness_mm: c.family.coverThickness_mm ?? null,
     bolts: c.joint.holes.length,
-    spliceLength_mm: r(c.joint.spliceLength_mm, 1),
+    spliceLength_mm: r(c.joint.spliceLength_mm, 2),
     jointStrength_kN: r(c.report.jointStrength_N / 1000),
     efficiency: r(c.report.efficiency, 4),
     utilisation: r(c.report.maxUtilisation, 4),

@@ -7,7 +7,8 @@
  * layout reported has passed the full checker (engine/check.ts) on its hole coordinates.
  */
 import type { CostBreakdown, CostTable } from "../catalogue/costs.js";
-import { spliceCost } from "../catalogue/costs.js";
+import { boltPrice, spliceCost } from "../catalogue/costs.js";
+import { boltSizeText } from "../catalogue/bolts.js";
 import type { DesignCode, LayoutShape } from "../codes/types.js";
 import { checkScenario } from "../engine/check.js";
 import { buildJoint } from "../geometry/joint-builder.js";
@@ -436,7 +437,7 @@ class TaperedStream {
  * it joins).
  */
 function perBoltCost(ctx: SearchContext, f: Family): number {
-  const price = ctx.costs.boltAssembly[`M${f.size_mm}`]?.[f.propertyClass] ?? 0;
+  const price = boltPrice(ctx.costs, f.size_mm, f.propertyClass) ?? 0;
   const sides = f.base.splice.type === "lap" ? 1 : 2;
   return sides * (price + (f.base.bolts.assembly === "friction-grip" ? ctx.costs.frictionGripExtra : 0) + 2 * ctx.costs.hole);
 }
@@ -493,5 +494,5 @@ function explainNothing(ctx: SearchContext, unperforated: number, reasons: Map<s
   const parts: string[] = [];
   if (top) parts.push(`${top[1]} families ruled out by the ${top[0]} bound`);
   if (last) parts.push(`the last candidates failed ${last.check}: ${last.value}`);
-  return `no layout in the declared space passes every check (${parts.join("; ") || "no candidate in the space"}); widen the space (sizes ${space.sizes_mm.map((d) => `M${d}`).join(", ")}, classes ${space.classes.join(", ")}, at most ${space.maxAlong} lines)`;
+  return `no layout in the declared space passes every check (${parts.join("; ") || "no candidate in the space"}); widen the space (sizes ${space.sizes_mm.map(boltSizeText).join(", ")}, classes ${space.classes.join(", ")}, at most ${space.maxAlong} lines)`;
 }

@@ -3,7 +3,7 @@
  * search section, the cost catalogue and the design code's own limits. The output states it in full.
  */
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
-import type { PropertyClass } from "../catalogue/bolts.js";
+import { boltSizeText, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
 import type { DesignCode, SearchLimits } from "../codes/types.js";
 import type { BoltAssembly, BoltSpec, CheckableScenario, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
 
@@ -91,7 +91,10 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
   const assembly = scenario.bolts?.assembly ?? "bearing";
   const allowed = code.classesFor(assembly) as readonly string[];
   const priced = (d: number, c: PropertyClass) => boltPrice(costs, d, c) !== undefined;
-  const catalogueSizes = [...new Set(Object.keys(costs.boltAssembly).map((k) => Number(k.replace(/^M/, ""))))].sort((a, b) => a - b);
+  // Default sizes: the priced sizes of the scenario's own unit system (inch bolts for `units: us`).
+  const catalogueSizes = [...new Set(Object.keys(costs.boltAssembly).map(sizeOfKey).filter((d): d is number => d !== undefined))]
+    .filter((d) => (inchBoltSize(d) !== undefined) === (scenario.units === "us"))
+    .sort((a, b) => a - b);
   const sizes = s.sizes_mm ?? catalogueSizes;
   const classes = (s.classes ?? (["4.6", "5.6", "8.8", "10.9"] as PropertyClass[])).filter((c) => allowed.includes(c));
   const space: SearchSpace = {
@@ -208,7 +211,7 @@ export function scenarioOf(f: Family, layout: LayoutSpec): CheckableScenario {
 
 export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scenario): string[] {
   const lines = [
-    `bolt sizes: ${space.sizes_mm.map((d) => `M${d}`).join(", ")}`,
+    `bolt sizes: ${space.sizes_mm.map(boltSizeText).join(", ")}`,
     `property classes: ${space.classes.join(", ")} (${space.assembly === "bearing" ? "bearing type" : "friction grip"})`,
     `patterns: ${space.patterns.join(", ")}${space.patterns.includes("tapered") ? " (tapered: each transverse line its own count, symmetric about the plate axis, all counts odd or all even and never rising away from the butt — lap: from plate B's end)" : ""}`,
     `bolts across: 1 up to what the narrowest plate fits with the minimum gauge and edge distance${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
@@ -231,7 +234,7 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
     entry.seen.add(f.size_mm);
     const span = (v: Array<number | undefined>) => (v.length && v[0] !== undefined ? `${v[0]}–${v[v.length - 1]}` : "—");
     const pitches = stepRange(f.limits.pitchMin_mm, f.limits.pitchMax_mm, space.step_mm);
-    entry.ranges.push(`M${f.size_mm}: pitch ${span(pitches)}, end ${span(f.ends_mm)}${scenario.splice.type !== "lap" ? `, at butt ${span(f.endsAtButt_mm)}` : ""}`);
+    entry.ranges.push(`${boltSizeText(f.size_mm)}: pitch ${span(pitches)}, end ${span(f.ends_mm)}${scenario.splice.type !== "lap" ? `, at butt ${span(f.endsAtButt_mm)}` : ""}`);
   }
   for (const [pattern, entry] of byPattern) {
     lines.push(`${pattern}: ${entry.statement}`);
