@@ -3,6 +3,7 @@
  * rationalising against each splice's own optimum, and the bolts to order per type with their lengths.
  * Every scheduled layout is run through the checker again and its cost recomputed from its joint. Pure.
  */
+import { boltSizeText } from "../catalogue/bolts.js";
 import { spliceCost, type CostTable } from "../catalogue/costs.js";
 import type { DesignCode } from "../codes/types.js";
 import { checkScenario } from "../engine/check.js";
@@ -136,7 +137,7 @@ export function buildSchedule(input: ScheduleInput): Schedule {
     for (const b of bom.bolts) addOrder({ type: label, kind: "bolt", item: b.item, length_mm: b.length_mm, quantity: b.quantity * s.quantity, standard: b.standard });
     for (const n of bom.nuts) addOrder({ type: label, kind: "nut", item: n.item, length_mm: null, quantity: n.quantity * s.quantity, standard: n.standard });
     for (const w of bom.washers) addOrder({ type: label, kind: "washer", item: w.item, length_mm: null, quantity: w.quantity * s.quantity, standard: w.standard });
-    const use = uses.get(t) ?? { type: label, size: `M${o.type.size_mm}`, class: o.type.propertyClass, assembly: o.type.assembly, rows: 0, splices: 0, bolts: 0, layoutCost: 0 };
+    const use = uses.get(t) ?? { type: label, size: boltSizeText(o.type.size_mm), class: o.type.propertyClass, assembly: o.type.assembly, rows: 0, splices: 0, bolts: 0, layoutCost: 0 };
     use.rows++;
     use.splices += s.quantity;
     use.bolts += o.bolts * s.quantity;

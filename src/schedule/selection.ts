@@ -13,6 +13,7 @@
  * (mip.ts) covers large K and the minimum-bolts rule. `evaluateAssignment` is the one cost evaluator
  * every answer is re-checked by, whichever method found it.
  */
+import { boltSizeText } from "../catalogue/bolts.js";
 import type { BoltType } from "../search/per-type.js";
 
 export interface SelectionRules {
@@ -53,7 +54,7 @@ export interface Evaluation {
 export const COST_TOLERANCE = 1e-9;
 const tol = (v: number) => (Number.isFinite(v) ? COST_TOLERANCE * Math.max(1, Math.abs(v)) : 0);
 
-export const typeLabel = (t: BoltType): string => `M${t.size_mm} ${t.propertyClass}${t.assembly === "friction-grip" ? " friction-grip" : ""}`;
+export const typeLabel = (t: BoltType): string => `${boltSizeText(t.size_mm)} ${t.propertyClass}${t.assembly === "friction-grip" ? " friction-grip" : ""}`;
 
 /** The one cost evaluator: total cost of an assignment and every rule it breaks. */
 export function evaluateAssignment(p: SelectionProblem, a: Assignment): Evaluation {
@@ -79,7 +80,7 @@ export function evaluateAssignment(p: SelectionProblem, a: Assignment): Evaluati
     for (const t of used) {
       const type = p.types[t]!;
       const seen = classOf.get(type.size_mm);
-      if (seen !== undefined && seen !== type.propertyClass) problems.push(`M${type.size_mm} in two classes (${seen} and ${type.propertyClass})`);
+      if (seen !== undefined && seen !== type.propertyClass) problems.push(`${boltSizeText(type.size_mm)} in two classes (${seen} and ${type.propertyClass})`);
       classOf.set(type.size_mm, type.propertyClass);
     }
   }
