@@ -156,9 +156,9 @@ export function buildDrawing(joint: Joint, lengths: readonly BoltLengthLine[], o
   for (const p of mains) {
     const [x0, x1] = drawnExtent(p, ext);
     const dir = p.continues === "left" ? -1 : 1;
-    const xe = dir < 0 ? x0 : x1;
-    prims.push({ kind: "arrow", layer: "text", from: [xe + dir * 4 * k, 0], to: [xe + dir * 22 * k, 0] });
-    prims.push({ kind: "text", layer: "text", at: [xe + dir * 13 * k, 2.5 * k], height: text, text: options.loadText, anchor: "middle" });
+    const xe = (dir < 0 ? x0 : x1) + dir * (0.06 * W + 2 * k); // clear of the break line
+    prims.push({ kind: "arrow", layer: "text", from: [xe, 0], to: [xe + dir * 18 * k, 0] });
+    prims.push({ kind: "text", layer: "text", at: [xe, 2.5 * k], height: text, text: options.loadText, anchor: dir < 0 ? "end" : "start" });
   }
   // Plate labels.
   for (const p of joint.plates) {
@@ -166,12 +166,12 @@ export function buildDrawing(joint: Joint, lengths: readonly BoltLengthLine[], o
     const label = `${p.label} ${fx(p.spec.width_mm)} × ${fx(p.spec.thickness_mm)} ${p.spec.grade}`;
     if (p.role === "main") {
       const x = p.continues === "left" ? x0 + 2 * k : x1 - 2 * k;
-      prims.push({ kind: "text", layer: "text", at: [x, -p.spec.width_mm / 2 + 3 * k], height: 0.8 * text, text: label, anchor: p.continues === "left" ? "start" : "end" });
+      prims.push({ kind: "text", layer: "text", at: [x, -p.spec.width_mm / 2 - 6 * k], height: 0.8 * text, text: label, anchor: p.continues === "left" ? "start" : "end" }); // below the plate, clear of the holes
     } else if (p.role === "cover" && p.stackIndex === top.stackIndex) {
-      prims.push({ kind: "text", layer: "text", at: [(x0 + x1) / 2, -p.spec.width_mm / 2 - 6 * k], height: 0.8 * text, text: label, anchor: "middle" });
+      prims.push({ kind: "text", layer: "text", at: [(x0 + x1) / 2, -p.spec.width_mm / 2 - 11 * k], height: 0.8 * text, text: label, anchor: "middle" });
     }
   }
-  const planTitleAt: Point = [spliceX0, -W / 2 - 14 * k];
+  const planTitleAt: Point = [spliceX0, -W / 2 - 18 * k];
 
   // Section: a longitudinal cut along the gauge line with the most holes, below the plan.
   const gaugeY = ys.reduce((best, y) => (joint.holes.filter((h) => h.y_mm === y).length > joint.holes.filter((h) => h.y_mm === best).length ? y : best), ys[0] ?? 0);
@@ -259,7 +259,13 @@ function extents(prims: Primitive[], text: number): { min: Point; max: Point } {
     if (p.kind === "line") (add(p.a), add(p.b));
     else if (p.kind === "poly") p.points.forEach((q) => add(q));
     else if (p.kind === "circle") add(p.c, p.r);
-    else if (p.kind === "text") add(p.at, text * p.text.length * 0.3);
+    else if (p.kind === "text") {
+      // Width about 0.6 × height per character; anchored start, middle or end.
+      const w = 0.6 * p.height * p.text.length;
+      const x0t = p.anchor === "start" ? p.at[0] : p.anchor === "end" ? p.at[0] - w : p.at[0] - w / 2;
+      add([x0t, p.at[1] - 0.3 * p.height]);
+      add([x0t + w, p.at[1] + p.height]);
+    }
     else if (p.kind === "arrow") (add(p.from), add(p.to));
     else if (p.kind === "dim") {
       add(p.from);
