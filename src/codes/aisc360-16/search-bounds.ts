@@ -7,6 +7,7 @@
 import { inchBoltSize } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
 import type { LayoutShape, SearchLimits, StrengthBound } from "../types.js";
+import { BoundBuilder, groupGrips } from "../bound-builder.js";
 import { bearingCoefficients, phiRnBearing, phiRnTearout } from "./bearing.js";
 import { a307GripFactor, fillerFactor, longJointFactor, phiRnShear } from "./bolt-shear.js";
 import { netAllowance_mm, holeDimensions } from "./holes.js";
@@ -74,21 +75,9 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
   const planes = splice.type === "butt-double-cover" ? 2 : 1;
   const length = shape.pitch_mm === undefined ? 0 : (m - 1) * shape.pitch_mm;
   const lj = longJointFactor(length, inch);
-  const best: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity, plates_N: Infinity };
-  const keep = (capacity: number, check: string, kind: "bolt" | "plate") => {
-    if (capacity < best.jointStrength_N) {
-      best.jointStrength_N = capacity;
-      best.check = check;
-    }
-    if (kind === "bolt") best.perBolt_N = Math.min(best.perBolt_N, capacity / n);
-    else best.plates_N = Math.min(best.plates_N, capacity);
-  };
-
-  const tA = plates.mainA.thickness_mm;
-  const tB = plates.mainB.thickness_mm;
-  const coverT = plates.covers.reduce((s, c) => s + c.thickness_mm, 0);
-  const grips = butt ? [coverT + tA + (tA <= tB ? scenario.packing_mm : 0), coverT + tB + (tB < tA ? scenario.packing_mm : 0)] : [tA + tB];
-  const packs = butt ? [tA <= tB ? scenario.packing_mm : 0, tB < tA ? scenario.packing_mm : 0] : [0];
+  const bound = new BoundBuilder(n);
+  const keep = (capacity: number, check: string, kind: "bolt" | "plate") => (kind === "bolt" ? bound.bolt(capacity, check) : bound.plate(capacity, check));
+  const { grips, packs } = groupGrips(scenario);
   const perPlane = grips.map((grip, i) =>
     phiRnShear(bolt.Fnv_MPa, bolt.Ab_mm2, lj * fillerFactor(packs[i] ?? 0, options.fillersDeveloped ?? false) * a307GripFactor(bolt.group, grip, d)),
   );
@@ -135,5 +124,5 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     const endEach = p.end === undefined ? each : Math.min(each, phiRnTearout(ct, p.end - hole.along_mm / 2, t, st.fu_MPa));
     keep(((n - atEnd) * each + atEnd * endEach) / p.share, "bolt-bearing", "bolt");
   }
-  return best;
+  return bound.result;
 }

@@ -7,6 +7,7 @@
 import { boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
 import type { LayoutShape, SearchLimits, StrengthBound } from "../types.js";
+import { BoundBuilder } from "../bound-builder.js";
 import { alpha_b, alpha_d_end, alpha_d_inner, Fb_Rd, singleLapLimit } from "./bearing.js";
 import { alpha_v, beta_Lf, beta_p, Fv_Rd, smallBoltHoleFactor } from "./bolt-shear.js";
 import { bearingHoleFactor, holeDimensions, holeWidth, ks, normalClearance_mm } from "./holes.js";
@@ -93,14 +94,7 @@ export function strengthBound(
   const threads = bolts.threadsInShearPlanes;
   const clearance = bolts.hole === "standard" ? normalClearance_mm(d, s.smallBoltClearance_mm) : 0;
   const FvBase = Fv_Rd(alpha_v(bolts.propertyClass, threads), fub, threads ? As : shankArea_mm2(d), gamma_M2) * beta_Lf(Lj, d) * smallBoltHoleFactor(d, clearance, bolts.propertyClass);
-  const out: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity, plates_N: Infinity };
-  const keep = (capacity: number, check: string, kind: "bolts" | "plates") => {
-    if (capacity < out.jointStrength_N) {
-      out.jointStrength_N = capacity;
-      out.check = check;
-    }
-    if (kind === "plates") out.plates_N = Math.min(out.plates_N, capacity);
-  };
+  const bound = new BoundBuilder(n);
 
   // Groups: packing lies on the thinner main plate's side (as the joint builder places it).
   const butt = splice.type !== "lap";
@@ -113,17 +107,15 @@ export function strengthBound(
   if (s.category !== "C") {
     for (const side of sides) {
       const v = n * planes * FvPlane(side);
-      keep(v, "bolt-shear", "bolts");
-      out.perBolt_N = Math.min(out.perBolt_N, v / n);
+      bound.bolt(v, "bolt-shear");
     }
   }
   if (s.category !== "A") {
     const gamma = s.category === "B" ? s.factors.gamma_M3_ser : s.factors.gamma_M3;
     const v = n * Fs_Rd(ks(bolts.hole, bolts.slotDirection), planes, bolts.slipFactor ?? 0, Fp_C(fub, As), gamma);
     if (s.category === "C") {
-      keep(v, "slip", "bolts");
-      out.perBolt_N = Math.min(out.perBolt_N, v / n);
-    } else if (v < (load.serviceTension_N ?? load.factoredTension_N)) out.serviceOk = false;
+      bound.bolt(v, "slip");
+    } else if (v < (load.serviceTension_N ?? load.factoredTension_N)) bound.serviceFails();
   }
 
   // Plates: gross yield, the straight net path through one line, bearing with k1 at 2.5.
@@ -148,10 +140,10 @@ export function strengthBound(
     const st = strengthOf(p.spec);
     const t = p.spec.thickness_mm;
     const A = p.spec.width_mm * t;
-    keep(Npl_Rd(A, st.fy_MPa, gamma_M0) / p.share, "gross-yield", "plates");
+    bound.plate(Npl_Rd(A, st.fy_MPa, gamma_M0) / p.share, "gross-yield");
     const holesOnLine = scenario.options.netSectionLoad === "transferred" ? (counts[p.fullLine] ?? widest) : widest;
     const Anet = (p.spec.width_mm - holesOnLine * hole.across_mm) * t;
-    keep((s.category === "C" ? Nnet_Rd(Anet, st.fy_MPa, gamma_M0) : Nu_Rd(Anet, st.fu_MPa, gamma_M2)) / p.share, "net-section", "plates");
+    bound.plate((s.category === "C" ? Nnet_Rd(Anet, st.fy_MPa, gamma_M0) : Nu_Rd(Anet, st.fu_MPa, gamma_M2)) / p.share, "net-section");
     // Bearing: each bolt's Fb,Rd is at most 2.5·αb·fu·d·t/γM2 with αb ≤ min(fub/fu, 1); the bolts on the
     // line at the plate end have no bolt ahead (αd = e1/3d0); in a grid every other bolt has one straight
     // ahead at p; in a staggered pattern, from the third line on, one on its own gauge line at 2s.
@@ -169,9 +161,8 @@ export function strengthBound(
     for (const side of p.sides) {
       // 3.7: the group resistance is at most ΣFb,Rd and at most n × Fv,Rd of the planes carrying this plate.
       const Fv = (p.outer ? 1 : planes) * FvPlane(side);
-      keep(Math.min(sum, n * Fv) / p.share, "bolt-bearing", "bolts");
-      out.perBolt_N = Math.min(out.perBolt_N, Math.min(Fb(Infinity), Fv) / p.share);
+      bound.bolt(Math.min(sum, n * Fv) / p.share, "bolt-bearing", Math.min(Fb(Infinity), Fv) / p.share);
     }
   }
-  return out;
+  return bound.result;
 }

@@ -7,6 +7,7 @@
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
 import type { LayoutShape, SearchLimits, StrengthBound } from "../types.js";
+import { BoundBuilder, groupGrips } from "../bound-builder.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
 import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
 import { bearingHoleFactor, holeDimensions, holeFactorKh } from "./holes.js";
@@ -86,42 +87,22 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
   const planes = splice.type === "butt-double-cover" ? 2 : 1;
   const lj = shape.pitch_mm === undefined ? 0 : (m - 1) * shape.pitch_mm;
   const blj = beta_lj(lj, d);
-  const best: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity, plates_N: Infinity };
-  const plateTerm = (capacity: number) => {
-    best.plates_N = Math.min(best.plates_N, capacity);
-  };
-  const perBolt = (capacity: number) => {
-    best.perBolt_N = Math.min(best.perBolt_N, capacity / n);
-  };
-  const keep = (capacity: number, check: string) => {
-    if (capacity < best.jointStrength_N) {
-      best.jointStrength_N = capacity;
-      best.check = check;
-    }
-  };
+  const bound = new BoundBuilder(n);
 
   // Bolt shear and slip, per group (both groups of a butt splice have n bolts; packing on one side).
-  const tA = plates.mainA.thickness_mm;
-  const tB = plates.mainB.thickness_mm;
-  const coverT = plates.covers.reduce((s, c) => s + c.thickness_mm, 0);
-  const grips = butt ? [coverT + tA + (tA <= tB ? scenario.packing_mm : 0), coverT + tB + (tB < tA ? scenario.packing_mm : 0)] : [tA + tB];
-  const packs = butt ? [tA <= tB ? scenario.packing_mm : 0, tB < tA ? scenario.packing_mm : 0] : [0];
+  const { grips, packs } = groupGrips(scenario);
   const friction = bolts.assembly === "friction-grip";
   const slipAtUltimate = friction && bolts.slipAt === "ultimate";
   grips.forEach((grip, i) => {
     const nn = bolts.threadsInShearPlanes ? planes : 0;
     if (!slipAtUltimate) {
       const v = Vdsb({ fub_MPa: mat.fub_MPa, nn, ns: planes - nn, Anb_mm2: Anb, Asb_mm2: shankArea_mm2(d), beta_lj: blj, beta_lg: beta_lg(grip, d, blj), beta_pkg: beta_pkg(packs[i] ?? 0) });
-      keep(n * v, "bolt-shear");
-      perBolt(n * v);
+      bound.bolt(n * v, "bolt-shear");
     }
     if (friction) {
       const v = Vdsf(bolts.slipFactor ?? 0, planes, holeFactorKh(bolts.hole, bolts.slotDirection), F0(Anb, mat.fub_MPa), bolts.slipAt ?? "service", blj);
-      if (bolts.slipAt === "ultimate") {
-        keep(n * v, "slip");
-        perBolt(n * v);
-      }
-      else if (n * v < (load.serviceTension_N ?? load.factoredTension_N)) best.serviceOk = false;
+      if (bolts.slipAt === "ultimate") bound.bolt(n * v, "slip");
+      else if (n * v < (load.serviceTension_N ?? load.factoredTension_N)) bound.serviceFails();
     }
   });
 
@@ -144,12 +125,9 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
   for (const p of list) {
     const st = plateStrength(p.spec);
     const t = p.spec.thickness_mm;
-    keep(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share, "gross-yield");
-    plateTerm(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share);
+    bound.plate(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share, "gross-yield");
     const holesOnLine = options.netSectionLoad === "transferred" ? (shape.countsPerLine[p.fullLine] ?? widest) : widest;
-    const net = Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share;
-    keep(net, "net-section");
-    plateTerm(net);
+    bound.plate(Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share, "net-section");
     if (!slipAtUltimate && p.end !== undefined) {
       // Holes on the line at the plate end have no hole ahead: their e-term is always in kb.
       let kbUpper = Math.min(p.end / (3 * hole.along_mm), mat.fub_MPa / st.fu_MPa, 1.0);
@@ -158,10 +136,8 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
         const p_eff = shape.pattern === "staggered" ? 2 * shape.pitch_mm : shape.pitch_mm;
         kbUpper = kbFactor(p.end, p_eff, hole.along_mm, mat.fub_MPa, st.fu_MPa);
       }
-      const bearing = (n * Vdpb(kbUpper, d, t, st.fu_MPa, bearingHoleFactor(bolts.hole))) / p.share;
-      keep(bearing, "bolt-bearing");
-      perBolt(bearing);
+      bound.bolt((n * Vdpb(kbUpper, d, t, st.fu_MPa, bearingHoleFactor(bolts.hole))) / p.share, "bolt-bearing");
     }
   }
-  return best;
+  return bound.result;
 }

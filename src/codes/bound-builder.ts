@@ -1,0 +1,53 @@
+/**
+ * Shared pieces of every code's search bound (DesignCode.strengthBound): collecting its terms, and the
+ * grip and packing of each bolt group as the joint builder forms them.
+ */
+import type { Scenario } from "../model/scenario.js";
+import type { StrengthBound } from "./types.js";
+
+/** Collects the terms of a strength bound: the least capacity and its check, per bolt, plates only. */
+export class BoundBuilder {
+  readonly result: StrengthBound = { jointStrength_N: Infinity, check: "", serviceOk: true, perBolt_N: Infinity, plates_N: Infinity };
+
+  /** @param boltsPerGroup the n that bolt-group capacities are divided by for perBolt_N */
+  constructor(private readonly boltsPerGroup: number) {}
+
+  private least(capacity: number, check: string): void {
+    if (capacity < this.result.jointStrength_N) {
+      this.result.jointStrength_N = capacity;
+      this.result.check = check;
+    }
+  }
+
+  /** A bolt-group term (shear, slip at ULS, bearing); its per-bolt share defaults to capacity / n. */
+  bolt(capacity: number, check: string, perBolt: number = capacity / this.boltsPerGroup): void {
+    this.least(capacity, check);
+    this.result.perBolt_N = Math.min(this.result.perBolt_N, perBolt);
+  }
+
+  /** A plate term (gross yield, net section), independent of the bolt count. */
+  plate(capacity: number, check: string): void {
+    this.least(capacity, check);
+    this.result.plates_N = Math.min(this.result.plates_N, capacity);
+  }
+
+  /** A service-load check that cannot pass. */
+  serviceFails(): void {
+    this.result.serviceOk = false;
+  }
+}
+
+/**
+ * Grip and packing of each bolt group, as the joint builder forms them: a lap splice has one group through
+ * both plates; a butt splice has side A and side B through the covers, the packing lying on the thinner
+ * main plate's side.
+ */
+export function groupGrips(scenario: Scenario): { grips: number[]; packs: number[] } {
+  const { plates, splice } = scenario;
+  const tA = plates.mainA.thickness_mm;
+  const tB = plates.mainB.thickness_mm;
+  if (splice.type === "lap") return { grips: [tA + tB], packs: [0] };
+  const coverT = plates.covers.reduce((s, c) => s + c.thickness_mm, 0);
+  const packs = [tA <= tB ? scenario.packing_mm : 0, tB < tA ? scenario.packing_mm : 0];
+  return { grips: [coverT + tA + packs[0]!, coverT + tB + packs[1]!], packs };
+}
