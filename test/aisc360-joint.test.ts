@@ -61,7 +61,10 @@ describe("hand-worked splice (our own, US units): canopy tie, 8 × 1/2 in A572-5
     expect(kips(strengthOf(r, "net-section:mainB").resistance_N)).toBeCloseTo(152.34, 1);
     expect(kips(strengthOf(r, "net-section:coverA").resistance_N)).toBeCloseTo(101.95, 1);
   });
-  it("block shear of the main plate 169.41 kips", () => expect(kips(strengthOf(r, "block-shear:mainB:B").resistance_N)).toBeCloseTo(169.41, 1));
+  it("block shear of the main plate: the one-sided block over both gauge lines governs — Agv = 4.5 × 0.5 = 2.25, Anv = (4.5 − 1.5 × 7/8) × 0.5 = 1.594, Ant = (6 − 1.5 × 7/8) × 0.5 = 2.344 in²; 0.75 × (0.6 × 65 × 1.594 + 65 × 2.344) = 160.88 kips (< yield form 164.88)", () => {
+    expect(kips(strengthOf(r, "block-shear:mainB:B").resistance_N)).toBeCloseTo(0.75 * (0.6 * 65 * 1.59375 + 65 * 2.34375), 2);
+    expect(strengthOf(r, "block-shear:mainB:B").loadRatio).toBe(1);
+  });
   it("no 3 d warning at a 3 in pitch (3 d = 2.25 in); a 2-1/8 in pitch passes 2⅔ d = 2 in but warns (J3.3)", () => {
     expect(r.report.warnings.some((w) => w.id === "spacing-below-3d")).toBe(false);
     const close = run(demo.replace("pitch: 3\n", "pitch: 2.125\n"));

@@ -45,10 +45,13 @@ describe("footbridge-tie.yaml: butt splice, two 10 mm covers on 220 × 16 E250, 
     expect(kN(report.jointStrength_N)).toBeCloseTo(727.37, 1);
   });
 
-  it("block shear, main plate: one edge strip over lines 2–3 (4 of 6 bolts): Tdb1 = 1680×250/(√3×1.1) + 0.9×1232×410/1.25 = 584.1 kN", () => {
+  it("block shear, main plate: the one-sided block over all 3 lines (6 of 6 bolts) governs: Avg = 105×16 = 1680, Atn = (180 − 2.5×22)×16 = 2000; Tdb1 = 1680×250/(√3×1.1) + 0.9×2000×410/1.25 = 810.8 kN, permitting 810.8 kN of joint tension", () => {
     const c = strength(report, "block-shear:mainB:B");
-    expect(kN(c.resistance_N)).toBeCloseTo(584.1, 1);
-    expect(c.loadRatio).toBeCloseTo(4 / 6, 9);
+    expect(kN(c.resistance_N)).toBeCloseTo((1680 * 250) / (Math.sqrt(3) * 1.1) / 1000 + (0.9 * 2000 * 410) / 1.25 / 1000, 6);
+    expect(kN(c.resistance_N)).toBeCloseTo(810.8, 1);
+    expect(c.loadRatio).toBe(1);
+    // the edge strip over lines 2–3 (4 of 6 bolts): Tdb1 = 1680×250/(√3×1.1) + 0.9×1232×410/1.25 = 584.1 kN permits 584.1 × 6/4 = 876.2 kN > 810.8
+    expect(c.substituted).toMatch(/joint tension it permits = R × n\/k = R × 6\/6 = 810\.8 kN/);
   });
 
   it("efficiency = 727.4 / min(3520 × 250/1.1, 0.9 × 3520 × 410/1.25) = 727.4 / 800.0 = 0.909", () => {

@@ -114,14 +114,15 @@ describe("hand-worked: sports-hall-chord-ec3.yaml — 260 × 16 S355 chord, two 
     expect(kN(report.jointStrength_N)).toBeCloseTo(1050.39, 2);
   });
 
-  it("block tearing, main plate (3.10.2(2)): edge strip of gauge lines 2–3, 6 of 9 bolts; Anv = (190 − 2.5 × 22) × 16 = 2160, Ant = (130 − 11 − 22) × 16 = 1552 mm²; 470 × 1552/1.25 + 355 × 2160/√3 = 1026.27 kN vs 950 × 6/9", () => {
+  it("block tearing, main plate (3.10.2(2)): the one-sided block over all 3 gauge lines, 9 of 9 bolts, governs; Anv = (190 − 2.5 × 22) × 16 = 2160, Ant = (2 × 80 + 50 − 2.5 × 22) × 16 = 2480 mm²; 470 × 2480/1.25 + 355 × 2160/√3 = 1375.19 kN vs 950 kN (the edge strip of lines 2–3, 6 of 9 bolts, 1026.27 kN, permits 1026.27 × 9/6 = 1539.4 kN)", () => {
     const c = strength(report, "block-shear:mainA:A");
-    expect(kN(c.resistance_N)).toBeCloseTo(583.552 + 442.7165, 2);
-    expect(c.loadRatio).toBeCloseTo(6 / 9, 12);
+    expect(kN(c.resistance_N)).toBeCloseTo(932.48 + 442.7165, 2);
+    expect(c.loadRatio).toBe(1);
   });
 
-  it("block tearing, cover: Anv = (185 − 55) × 10 = 1300, Ant = 970 mm² → 364.72 + 266.45 = 631.17 kN vs 475 × 6/9", () => {
-    expect(kN(strength(report, "block-shear:coverA:A").resistance_N)).toBeCloseTo(364.72 + 266.448, 2);
+  it("block tearing, cover: one-sided block, Anv = (185 − 55) × 10 = 1300, Ant = 155 × 10 = 1550 mm² → 582.8 + 266.45 = 849.25 kN vs 475 kN", () => {
+    expect(kN(strength(report, "block-shear:coverA:A").resistance_N)).toBeCloseTo(582.8 + 266.448, 2);
+    expect(strength(report, "block-shear:coverA:A").loadRatio).toBeCloseTo(0.5, 12);
   });
 
   it("Table 3.3 minima: p1 70 ≥ 2.2 × 22 = 48.4; p2 80 ≥ 52.8; e1 45 ≥ 26.4; e2 50 ≥ 26.4; a grid has no staggered pairs; not exposed: no maxima", () => {
@@ -219,17 +220,39 @@ describe("preloaded bolts: Categories B and C (3.4.1, 3.9.1)", () => {
 describe("M12 bolts in 2 mm clearance holes (3.6.1(5))", () => {
   const small = (clearance: 1 | 2) =>
     lap({ width: 100, thickness: 8, grade: "S275" }, 80, { size: "M12", class: "8.8" }, { pattern: "grid", across: 2, along: 2, pitch: 40, gauge: 45, end_distance: 30 }, { small_bolt_clearance: clearance });
-  it("14 mm holes: Fv,Rd = 0.85 × 0.6 × 800 × 84.3/1.25 = 27.52 kN, 4 bolts 110.07 kN; the bearing-not-below-shear condition is checked", () => {
+  it("Fv,Rd of M12 8.8 in 14 mm holes = 0.85 × 0.6 × 800 × 84.3/1.25 = 27.5 kN (EN 1993-1-8 Table 3.4 × 0.85; ArcelorMittal bolt resistance tables, class 8.8, M12: 27.5 kN)", () => {
     const { report, joint } = run(small(2));
     expect(joint.holes[0]!.across_mm).toBe(14);
+    expect(kN(strength(report, "bolt-shear:J").resistance_N) / 4).toBeCloseTo(27.5, 1);
     expect(kN(strength(report, "bolt-shear:J").resistance_N)).toBeCloseTo(4 * 0.85 * 0.6 * 800 * 84.3 / 1.25 / 1000, 9);
+  });
+  it("shear-governed (8 mm plies): Fb,Rd of every bolt 55.3–56.2 kN > Fv,Rd 27.5 kN, so the 2 mm holes are refused with the reason", () => {
+    const { report } = run(small(2));
     // bearing, S275 fu 410, d0 14, e2 27.5: k1 = 2.5; Fb,Rd = 2.5 × 410 × 12 × 8/1.25 × αb = 78.72 × (30/42) = 56.23 (end bolts),
-    // 78.72 × (40/42 − 0.25) = 55.29 (inner); ΣFb,Rd = 2 × 56.23 + 2 × 55.29 = 223.04 kN ≥ n·Fv,Rd 110.07 kN: the condition holds
+    // 78.72 × (40/42 − 0.25) = 55.29 (inner): the worst ratio is an end bolt, 56.23 / 27.52
     const cond = strength(report, "small-bolt-holes:J");
     expect(cond.loadRatio).toBe(0);
-    expect(cond.demand_N).toBeCloseTo(strength(report, "bolt-shear:J").resistance_N, 6);
-    expect(kN(cond.resistance_N)).toBeCloseTo(2 * 78.72 * (30 / 42) + 2 * 78.72 * (40 / 42 - 0.25), 6);
+    expect(kN(cond.demand_N)).toBeCloseTo(78.72 * (30 / 42), 2);
+    expect(kN(cond.resistance_N)).toBeCloseTo(0.85 * 0.6 * 800 * 84.3 / 1.25 / 1000, 6);
+    expect(cond.pass).toBe(false);
+    expect(cond.substituted).toMatch(/shear would govern/);
+    expect(report.pass).toBe(false);
+  });
+  it("bearing-governed (5 mm plies, e1 20, p1 32): Fb,Rd 23.43 (end) and 25.19 kN (inner) ≤ Fv,Rd 27.52 kN: allowed", () => {
+    const { report } = run(lap({ width: 100, thickness: 5, grade: "S275" }, 60, { size: "M12", class: "8.8" }, { pattern: "grid", across: 2, along: 2, pitch: 32, gauge: 45, end_distance: 20 }, { small_bolt_clearance: 2 }));
+    // αd = 20/42 = 0.4762 (end), 32/42 − 0.25 = 0.5119 (inner); k1 = min(2.8 × 27.5/14 − 1.7, 1.4 × 45/14 − 1.7, 2.5) = 2.5;
+    // Fb,Rd = 2.5 × αd × 410 × 12 × 5/1.25 = 23.43 / 25.19 kN (Table 3.4)
+    const cond = strength(report, "small-bolt-holes:J");
+    expect(kN(cond.demand_N)).toBeCloseTo(2.5 * (32 / 42 - 0.25) * 410 * 12 * 5 / 1.25 / 1000, 6);
     expect(cond.pass).toBe(true);
+    expect(report.pass).toBe(true);
+  });
+  it("class 4.6 M12 in 2 mm holes: no 0.85, but the condition still applies", () => {
+    const text = lap({ width: 100, thickness: 8, grade: "S275" }, 40, { size: "M12", class: "4.6" }, { pattern: "grid", across: 2, along: 2, pitch: 40, gauge: 45, end_distance: 30 }, { small_bolt_clearance: 2 });
+    const { report } = run(text);
+    // Fv,Rd = 0.6 × 400 × 84.3/1.25 = 16.19 kN (ArcelorMittal class 4.6 table, M12: 16.2 kN); Fb,Rd 56.23 > 16.19: refused
+    expect(kN(strength(report, "bolt-shear:J").resistance_N) / 4).toBeCloseTo(16.2, 1);
+    expect(strength(report, "small-bolt-holes:J").pass).toBe(false);
   });
   it("13 mm holes: no 0.85 and no condition", () => {
     const { report, joint } = run(small(1));

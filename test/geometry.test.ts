@@ -101,12 +101,21 @@ describe("block shear shapes, IS 800:2007 cl. 6.4.1", () => {
     expect(one).toMatchObject({ shearGross_mm: 105, shearNet_mm: 72, tensionGross_mm: 110, tensionNet_mm: 77, boltsInBlock: 4 });
   });
 
-  it("lists every shape: 3 central blocks, 1 two-sided and 4 one-sided edge strips for 3 gauge lines", () => {
-    expect(shapes).toHaveLength(8);
+  it("the one-sided block over every gauge line: shear plane on line 1, 105 / (105 − 1.5 × 22) = 72; tension plane from line 1 to the far edge, 2 × 70 + 40 = 180 / (180 − 2.5 × 22) = 125; 6 of 6 bolts", () => {
+    const one = shapes.find((s) => s.description.startsWith("one-sided block, shear plane on gauge line 1 of 3"))!;
+    expect(one).toMatchObject({ shearGross_mm: 105, shearNet_mm: 72, tensionGross_mm: 180, tensionNet_mm: 125, boltsInBlock: 6 });
+    const mirror = shapes.find((s) => s.description.startsWith("one-sided block, shear plane on gauge line 3 of 3"))!;
+    expect(mirror).toMatchObject({ shearGross_mm: 105, shearNet_mm: 72, tensionGross_mm: 180, tensionNet_mm: 125, boltsInBlock: 6 });
   });
 
-  it("a single gauge line has no block with a tension plane", () => {
+  it("lists every shape: 3 central blocks, 1 two-sided and 4 one-sided edge strips, 2 one-sided blocks over every line, for 3 gauge lines", () => {
+    expect(shapes).toHaveLength(10);
+  });
+
+  it("a single gauge line forms the one-sided block each way: shear 100 / (100 − 1.5 × 22) = 67, tension 50 / (50 − 11) = 39, 2 of 2 bolts", () => {
     const line = holes([[40, 0], [100, 0]]);
-    expect(blockShapes(line, { group: "J", endX_mm: 0, towardEnd: -1 }, 100)).toHaveLength(0);
+    const single = blockShapes(line, { group: "J", endX_mm: 0, towardEnd: -1 }, 100);
+    expect(single).toHaveLength(2);
+    for (const s of single) expect(s).toMatchObject({ shearGross_mm: 100, shearNet_mm: 67, tensionGross_mm: 50, tensionNet_mm: 39, boltsInBlock: 2 });
   });
 });

@@ -39,7 +39,7 @@ describe("HTML report content", () => {
     expect(html).toContain("IS 800:2007 cl. 6.3.1");
     expect(html).toContain("Tdn = 0.9 × 2464.0 × 410 / 1.25 = 727.4 kN");
     expect(html).toMatch(/Efficiency<\/td><td>90\.9 %/);
-    expect(html).toContain("design strength of the unperforated thinner main plate");
+    expect(html).toContain("design tension strength of the unperforated thinner main plate, basis: the lesser of gross yield and rupture");
     expect(html).toMatch(/Verdict: PASS/);
     expect(html).toContain("qualified engineer");
   });

@@ -5,7 +5,7 @@
 import type { GeometryCode } from "../geometry/joint-builder.js";
 import type { Joint } from "../model/joint.js";
 import type { CheckResult, Warning } from "../model/results.js";
-import type { CheckableScenario, CheckOptions, PlateSpec, Scenario } from "../model/scenario.js";
+import type { CheckableScenario, CheckOptions, EfficiencyBasis, PlateSpec, Scenario } from "../model/scenario.js";
 
 /** An input the code cannot accept, with the scenario path it concerns. */
 export interface ScopeError {
@@ -91,9 +91,11 @@ export interface DesignCode extends GeometryCode {
   /** Run every check on the joint's geometry. */
   checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks;
   /**
-   * Design tension strength of an unperforated plate under this code, the denominator of efficiency.
+   * Design tension strength of an unperforated plate under this code, the denominator of efficiency, on
+   * the basis given (default "lesser": the lesser of gross yield and rupture with An = Ag). Whatever the
+   * basis, "lesser" bounds every joint strength from above.
    */
-  unperforatedStrength(spec: PlateSpec): { value_N: number; definition: string };
+  unperforatedStrength(spec: PlateSpec, basis?: EfficiencyBasis): { value_N: number; definition: string };
   /** Search-space limits for a bolt size and pattern. */
   searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutShape["pattern"]): SearchLimits;
   /** Admissible upper bound of the joint strength of a layout shape (see DEVELOPERS.md). */

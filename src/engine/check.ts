@@ -12,7 +12,7 @@ export interface CheckOutcome {
   report: CheckReport;
 }
 
-/** The thinner main plate (ties broken by the lower unperforated strength). */
+/** The thinner main plate (ties broken by the lower unperforated strength, the lesser of yield and rupture). */
 function thinnerMainPlate(scenario: CheckableScenario, code: DesignCode) {
   const { mainA, mainB } = scenario.plates;
   if (mainA.thickness_mm !== mainB.thickness_mm) return mainA.thickness_mm < mainB.thickness_mm ? mainA : mainB;
@@ -32,7 +32,7 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
       governing = c.id;
     }
   }
-  const plain = code.unperforatedStrength(thinnerMainPlate(scenario, code));
+  const plain = code.unperforatedStrength(thinnerMainPlate(scenario, code), scenario.options.efficiencyBasis);
   const maxUtilisation = checks.reduce((m, c) => Math.max(m, c.utilisation), 0);
   return {
     code: code.id,

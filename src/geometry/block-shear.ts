@@ -8,10 +8,13 @@
  *   - central block between gauge lines a < b: two shear planes (a and b), tension plane from a to b;
  *   - edge strips on both sides, gauge lines 0 … a and m … G−1 (a < m): shear planes on a and m,
  *     tension planes from each side edge to a and to m;
- *   - one edge strip, gauge lines 0 … a or a … G−1 (not all lines): one shear plane, one tension plane.
+ *   - one edge strip, gauge lines 0 … a or a … G−1: one shear plane, one tension plane to a side edge;
+ *     with every line in it, the one-sided block (shear plane along an outer line, tension plane across
+ *     every line to the far edge) — also the block of a single gauge line.
  * A hole whose centre lies inside a plane is deducted whole, one at the plane's end by half (the plane
  * ends at the hole centre). Bolts on a block's boundary lines count as bolts of the block, so the block
- * takes the share (bolts in block / bolts in group) of the plate's force — conservative for those lines.
+ * takes the share (bolts in block / bolts in group) of the plate's force — conservative for those lines —
+ * or, by the scenario's choice (options.block_shear_load: full), the whole plate force.
  */
 import type { Hole, PlateConnection } from "../model/joint.js";
 import { LINE_TOLERANCE_MM } from "./lines.js";
@@ -121,27 +124,29 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
     });
   }
 
-  // One edge strip: lines 0..a (lower side) or a..G−1 (upper side), not every line.
-  for (let a = 0; a < G - 1; a++) {
+  // One edge strip, bounded by one side edge: lines 0..a with its shear plane on line a and its tension
+  // plane from the lower edge, or lines a..G−1 from the upper edge. With a spanning every line it is the
+  // one-sided block: the shear plane along one outer line, the tension plane from it across every line
+  // to the far edge (for a single gauge line, the shear plane along it and the tension plane to one edge).
+  for (let a = 0; a < G; a++) {
     const lower = inLines(0, a);
     const uL = lastU(lower);
     const sL = shearPlane(local, ys[a]!, uL);
     const tL = tensionPlane(local, uL, -half, ys[a]!);
     shapes.push({
-      description: `one edge strip, gauge lines 1–${a + 1} of ${G}`,
+      description: a === G - 1 ? `one-sided block, shear plane on gauge line ${G} of ${G}, tension plane to the ${G === 1 ? "edge at −y" : "far edge (−y)"}` : `one edge strip, gauge lines 1–${a + 1} of ${G}`,
       shearGross_mm: sL.gross_mm,
       shearNet_mm: sL.net_mm,
       tensionGross_mm: tL.gross_mm,
       tensionNet_mm: tL.net_mm,
       boltsInBlock: lower.length,
     });
-    const b = a + 1;
-    const upper = inLines(b, G - 1);
+    const upper = inLines(a, G - 1);
     const uU = lastU(upper);
-    const sU = shearPlane(local, ys[b]!, uU);
-    const tU = tensionPlane(local, uU, ys[b]!, half);
+    const sU = shearPlane(local, ys[a]!, uU);
+    const tU = tensionPlane(local, uU, ys[a]!, half);
     shapes.push({
-      description: `one edge strip, gauge lines ${b + 1}–${G} of ${G}`,
+      description: a === 0 ? `one-sided block, shear plane on gauge line 1 of ${G}, tension plane to the ${G === 1 ? "edge at +y" : "far edge (+y)"}` : `one edge strip, gauge lines ${a + 1}–${G} of ${G}`,
       shearGross_mm: sU.gross_mm,
       shearNet_mm: sU.net_mm,
       tensionGross_mm: tU.gross_mm,
@@ -152,23 +157,55 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
   return shapes;
 }
 
+/** How much of its plate's force a block carries: k/n of it (equal bolt shares) or all of it. */
+export type BlockShearLoad = "share" | "full";
+
+/** The governing block of a plate, with the joint tension it permits. */
+export interface GoverningBlock<D> {
+  shape: BlockShape;
+  /** Block demand per unit joint tension: share·k/n, or share with the full plate force. */
+  ratio: number;
+  value_N: number;
+  /** The joint tension at which this block fails: value / ratio, N. */
+  permits_N: number;
+  detail: D;
+}
+
 /**
  * The governing block of a plate: the shape with the least joint tension at which it fails, when a
- * block holding k of a group's n bolts takes share·k/n of the joint tension. Null when no shape forms.
+ * block holding k of a group's n bolts takes share·k/n of the joint tension (load "share") or the
+ * plate's whole force, share·T (load "full"). Null when no shape forms.
  * @param resist the code's design resistance of a shape (N), with whatever detail its text needs
  */
 export function governingBlock<D>(
   shapes: readonly BlockShape[],
   bolts: number,
   share: number,
+  load: BlockShearLoad,
   resist: (shape: BlockShape) => { value_N: number; detail: D },
-): { shape: BlockShape; ratio: number; value_N: number; detail: D } | null {
-  let best: { shape: BlockShape; ratio: number; value_N: number; detail: D; capacity: number } | null = null;
+): GoverningBlock<D> | null {
+  let best: GoverningBlock<D> | null = null;
   for (const shape of shapes) {
     const r = resist(shape);
-    const ratio = (share * shape.boltsInBlock) / bolts;
-    const capacity = r.value_N / ratio;
-    if (!best || capacity < best.capacity - 1e-9) best = { shape, ratio, value_N: r.value_N, detail: r.detail, capacity };
+    const ratio = load === "full" ? share : (share * shape.boltsInBlock) / bolts;
+    const permits = r.value_N / ratio;
+    if (!best || permits < best.permits_N - 1e-9) best = { shape, ratio, value_N: r.value_N, permits_N: permits, detail: r.detail };
   }
-  return best && { shape: best.shape, ratio: best.ratio, value_N: best.value_N, detail: best.detail };
+  return best;
+}
+
+/** The block's share of the load and the joint tension it permits, in words (every code's block text). */
+export function blockLoadText(b: GoverningBlock<unknown>, bolts: number, share: number, load: BlockShearLoad, kN: (n: number) => string): string {
+  const k = b.shape.boltsInBlock;
+  const fraction = load === "full" ? "the whole plate force" : `k/n = ${k}/${bolts} of the plate force`;
+  const permits = load === "full" ? `R${share !== 1 ? ` / ${share.toFixed(3)}` : ""}` : `R × n/k${share !== 1 ? ` / ${share.toFixed(3)}` : ""} = R × ${bolts}/${k}${share !== 1 ? ` / ${share.toFixed(3)}` : ""}`;
+  return `the block carries ${fraction}: joint tension it permits = ${permits} = ${kN(b.permits_N)}`;
+}
+
+/** The block-shear load convention in words, stated on every sheet (`name`: the code's term for the check). */
+export function blockShearConvention(load: BlockShearLoad, name: string): string {
+  const shapes = `${name}: every shape the holes form (central blocks, edge strips, one-sided blocks)`;
+  return load === "full"
+    ? `${shapes}; every block carries its plate's whole force (options.block_shear_load: full, the conservative office convention); the joint tension a block permits is R / the plate's share`
+    : `${shapes}; a block holding k of a group's n bolts carries k/n of its plate's force — each bolt an equal share, the basis of the bolt-group checks (options.block_shear_load: share; "full" puts the whole plate force on every block); the joint tension a block permits is R × n/k`;
 }

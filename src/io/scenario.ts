@@ -203,6 +203,8 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
       boltNetArea: file.options.bolt_net_area ?? code.settings?.optionDefaults.boltNetArea ?? "0.78-gross",
       boltStrength: file.options.bolt_strength ?? code.settings?.optionDefaults.boltStrength ?? "minimum",
       netSectionLoad: file.options.net_section_load,
+      blockShearLoad: file.options.block_shear_load,
+      efficiencyBasis: file.options.efficiency_basis,
     },
   };
   if (file.units === "us") scenario.units = "us";

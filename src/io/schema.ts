@@ -150,6 +150,8 @@ const options = z.strictObject({
   bolt_net_area: z.enum(["0.78-gross", "iso-stress-area"]).optional(),
   bolt_strength: z.enum(["minimum", "nominal"]).optional(),
   net_section_load: z.enum(["full", "transferred"]).default("full"),
+  block_shear_load: z.enum(["share", "full"]).default("share"),
+  efficiency_basis: z.enum(["lesser", "rupture", "yield"]).default("lesser"),
   bearing_deformation: z.enum(["considered", "not-considered"]).optional(),
   fillers_developed: z.boolean().optional(),
   steel_strengths: z.enum(EN10025_CONVENTIONS as [string, ...string[]]).optional(),
@@ -191,7 +193,7 @@ export const scenarioSchema = z.strictObject({
   search: search.optional(),
   costs: z.unknown().optional(),
   compare: z.unknown().optional(),
-  options: options.default({ exposed_to_corrosion: false, net_section_load: "full" }),
+  options: options.default({ exposed_to_corrosion: false, net_section_load: "full", block_shear_load: "share", efficiency_basis: "lesser" }),
   factors: factors.optional(),
 });
 

@@ -4,6 +4,10 @@
 import type { AstmBoltGrade, NetAreaConvention, BoltStrengthBasis, PropertyClass } from "../catalogue/bolts.js";
 import type { En10025Convention } from "../catalogue/steels.js";
 
+/** The unperforated plate strength that efficiency divides by. */
+export type EfficiencyBasis = "lesser" | "rupture" | "yield";
+export const EFFICIENCY_BASES: readonly EfficiencyBasis[] = ["lesser", "rupture", "yield"];
+
 export type SpliceType = "lap" | "butt-single-cover" | "butt-double-cover";
 
 /**
@@ -124,6 +128,13 @@ export interface CheckOptions {
    * "transferred": a path carries only what its plate has not yet passed to bolts ahead of it.
    */
   netSectionLoad: "full" | "transferred";
+  /**
+   * Block shear demand. "share": a block holding k of a group's n bolts carries k/n of its plate's force
+   * (equal bolt shares, as the bolt-group checks assume). "full": every block carries the whole plate force.
+   */
+  blockShearLoad: "share" | "full";
+  /** Denominator of efficiency: the unperforated plate's lesser of yield and rupture, or one of them. */
+  efficiencyBasis: EfficiencyBasis;
   /** EN 1993-1-8 scenarios: fy and fu from EN 10025-2 by thickness, or from EN 1993-1-1 Table 3.1. */
   steelStrengths?: En10025Convention;
   /** EN 1993-1-8 scenarios: normal-hole clearance of M12 and M14 bolts, 1 mm (EN 1090-2) or 2 mm (EN 1993-1-8, 3.6.1(5)). */

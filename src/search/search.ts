@@ -201,9 +201,16 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const width = narrowest(scenario);
   const transferred = scenario.options.netSectionLoad === "transferred";
 
+  // The lesser of yield and rupture bounds every joint strength; efficiency divides by the chosen basis,
+  // never below it (on every basis the denominator is at least the lesser for the same plate).
   const unperforated = Math.min(
     code.unperforatedStrength(scenario.plates.mainA).value_N,
     code.unperforatedStrength(scenario.plates.mainB).value_N,
+  );
+  const basis = scenario.options.efficiencyBasis;
+  const denominator = Math.min(
+    code.unperforatedStrength(scenario.plates.mainA, basis).value_N,
+    code.unperforatedStrength(scenario.plates.mainB, basis).value_N,
   );
 
   // No layout can carry more than the unperforated main plate (every joint strength is at most its gross
@@ -266,9 +273,10 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }
     // Seed key: the family's bolts and holes (plate mass left out: a lower bound of every member).
     const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedNmin(f);
-    // Efficiency never exceeds 1: the joint strength is at most the thinner plate's gross yield and its
-    // net rupture, each at most the unperforated strength. Grid and staggered families have a tighter bound.
-    const efficiencyUpper = Math.min(1, (bound ? bound.jointStrength_N : taperedPlateBound(f)) / unperforated);
+    // The joint strength is at most the thinner plate's gross yield and its net rupture, each at most the
+    // unperforated strength (the lesser); grid and staggered families have a tighter bound. Efficiency
+    // divides it by the basis's strength of the thinner plate, never below `denominator`.
+    const efficiencyUpper = Math.min(unperforated, bound ? bound.jointStrength_N : taperedPlateBound(f)) / denominator;
     heap.push({
       kind: "family",
       f,

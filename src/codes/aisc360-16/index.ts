@@ -7,7 +7,9 @@ import { inchBoltSize } from "../../catalogue/bolts.js";
 import { astmPlateGrade } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult } from "../../model/results.js";
-import { platesWithPaths, type CheckableScenario, type PlateSpec, type Scenario } from "../../model/scenario.js";
+import { platesWithPaths, type CheckableScenario, type EfficiencyBasis, type PlateSpec, type Scenario } from "../../model/scenario.js";
+import { unperforatedOnBasis } from "../efficiency.js";
+import { blockShearConvention } from "../../geometry/block-shear.js";
 import { factorWarnings } from "../is800-2007/joint-checks.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { unitText, type UnitText } from "./display.js";
@@ -82,6 +84,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
       ? "net section: load already transferred — each path carries only the load its plate has not yet passed to bolts ahead of it (a scenario switch)"
       : "net section: the whole plate force on every path",
     "each bolt of a group carries an equal share; holes drilled",
+    blockShearConvention(scenario.options.blockShearLoad, "block shear (J4.3)"),
   ];
   if (slipCritical) conventions.push("slip-critical: slip checked at the factored load (LRFD), and bolt shear, bearing and tearout also checked (J3.8)");
   if (joint.groups.some((g) => g.packing_mm > 0)) conventions.push(`fillers ${scenario.options.fillersDeveloped ? "developed (their extension and bolts are not checked here)" : "not developed: shear reduced over 1/4 in, over 3/4 in not allowed (J5.2)"}`);
@@ -95,18 +98,23 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   return { checks, warnings, conventions };
 }
 
+/** Design strength of the unperforated plate on an efficiency basis: 0.90·Fy·Ag (D2(a)), 0.75·Fu·Ag (D2(b) with Ae = Ag), or the lesser. */
 function unperforatedStrengthIn(u: UnitText) {
-  return (spec: PlateSpec): { value_N: number; definition: string } => {
+  return (spec: PlateSpec, basis: EfficiencyBasis = "lesser"): { value_N: number; definition: string } => {
     const m = plateStrength(spec);
     const Ag = spec.width_mm * spec.thickness_mm;
-    const y = phiPnYield(Ag, m.fy_MPa);
-    const r = phiPnRupture(Ag, m.fu_MPa);
-    return {
-      value_N: Math.min(y, r),
-      definition:
-        `efficiency = joint design strength / design strength of the unperforated thinner main plate = min(0.90·Fy·Ag, 0.75·Fu·Ag) = ` +
-        `min(0.90 × ${u.stress(m.fy_MPa)} × ${u.area(Ag)}, 0.75 × ${u.stress(m.fu_MPa)} × ${u.area(Ag)}) = ${u.force(Math.min(y, r))}`,
-    };
+    return unperforatedOnBasis(
+      {
+        yield_N: phiPnYield(Ag, m.fy_MPa),
+        rupture_N: phiPnRupture(Ag, m.fu_MPa),
+        yieldSymbols: "0.90·Fy·Ag",
+        yieldNumbers: `0.90 × ${u.stress(m.fy_MPa)} × ${u.area(Ag)}`,
+        ruptureSymbols: "0.75·Fu·Ag",
+        ruptureNumbers: `0.75 × ${u.stress(m.fu_MPa)} × ${u.area(Ag)}`,
+      },
+      basis,
+      (n) => u.force(n),
+    );
   };
 }
 

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
-import { blockShapes, governingBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -283,15 +283,17 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
 
 /**
  * Block shear of a plate for one group over every block shape the pattern forms; a block holding k of
- * the n bolts takes k/n of the plate's force. AISC 360-16 J4.3, Eq. J4-5 (Ubs = 1; net areas with the
- * B4.3b allowance). Null when the pattern has one gauge line (no tension plane; tearout covers it).
+ * the n bolts carries k/n of the plate's force (options.block_shear_load: share), or the whole plate
+ * force (full); the check reports the joint tension the block permits. AISC 360-16 J4.3, Eq. J4-5
+ * (Ubs = 1; net areas with the B4.3b allowance).
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const u = unitText(scenario);
   const holes = netHoles(joint.holes.filter((h) => h.group === connection.group), joint.boltDiameter_mm);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
-  const best = governingBlock(shapes, holes.length, plate.forceShare, (shape) => {
+  const load = scenario.options.blockShearLoad;
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => {
     const r = phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
     return { value_N: r.phiRn_N, detail: r };
   });
@@ -305,11 +307,12 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     title: "Block shear",
     component: `${plate.label}${sideText}`,
     citation: cl("J4.3", { equation: "Eq. J4-5" }),
-    formula: "F·k/n ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1",
+    formula: `${load === "full" ? "F" : "F·k/n"} ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1`,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Agv = ${u.area(s.shearGross_mm * t)}, Anv = ${u.area(s.shearNet_mm * t)}, Ant = ${u.area(s.tensionNet_mm * t)};  ` +
       `rupture 0.75 × (0.60 × ${u.stress(plate.fu_MPa)} × Anv + ${u.stress(plate.fu_MPa)} × Ant) = ${u.force(r.rupture_N)}, ` +
-      `yield 0.75 × (0.60 × ${u.stress(plate.fy_MPa)} × Agv + ${u.stress(plate.fu_MPa)} × Ant) = ${u.force(r.yield_N)};  φRn = ${u.force(r.phiRn_N)}`,
+      `yield 0.75 × (0.60 × ${u.stress(plate.fy_MPa)} × Agv + ${u.stress(plate.fu_MPa)} × Ant) = ${u.force(r.yield_N)};  φRn = R = ${u.force(r.phiRn_N)};  ` +
+      blockLoadText(best, holes.length, plate.forceShare, load, (n) => u.force(n)),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * best.ratio,
     resistance_N: r.phiRn_N,

@@ -8,7 +8,9 @@ import { PROPERTY_CLASSES } from "../../catalogue/bolts.js";
 import { en10025Grade, EN10025_NAMES, EN10025_THICKNESS_RANGE } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult, Warning } from "../../model/results.js";
-import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
+import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
+import { unperforatedOnBasis, type UnperforatedTerms } from "../efficiency.js";
+import { blockShearConvention } from "../../geometry/block-shear.js";
 import { f, kN } from "../format.js";
 import { groupLabel } from "../is800-2007/joint-checks.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
@@ -103,13 +105,13 @@ function conventionsOf(scenario: CheckableScenario, s: Ec3Settings, smallHoles: 
     factorsText(s.factors),
     `plate fy, fu: ${s.steel === "en10025-2" ? "EN 10025-2 (the product standard) by thickness" : "EN 1993-1-1 Table 3.1"} (EN 1993-1-1 3.2.1; options.steel_strengths)`,
     "bolts: nominal fub of EN 1993-1-8 Table 3.1; A = As (ISO 898-1 stress area) where the shear planes pass the threads, π d²/4 where they pass the shank",
-    `holes: clearances of EN 1090-2 Table 11${smallHoles ? "; M12/M14 in 2 mm clearance holes (3.6.1(5): Fv,Rd × 0.85 for 8.8 and 10.9, bearing of the group not below its shear)" : ""}`,
+    `holes: clearances of EN 1090-2 Table 11${smallHoles ? "; M12/M14 in 2 mm clearance holes (3.6.1(5): Fv,Rd × 0.85 for 8.8 and 10.9; allowed only where bearing governs, checked bolt by bolt: Fb,Rd ≤ Fv,Rd)" : ""}`,
     category,
     "bearing: Fb,Rd per bolt from its own coordinates — end bolts (none ahead in their strip toward the plate end) αd = e1/3d0, others p1/3d0 − 1/4; edge bolts (on an outermost gauge line) k1 from e2 and p2, others from p2, p2 the distance to the nearest other gauge line; group by 3.7",
     scenario.options.netSectionLoad === "transferred"
       ? "net section: load already transferred — each path carries only the load its plate has not yet passed to bolts ahead of it (a scenario switch; EN 1993-1-1 6.2.3 is silent)"
       : "net section: the whole plate force on every path (EN 1993-1-1 6.2.3 as written), staggered paths by 6.2.2.2",
-    "block tearing: every block loaded concentrically by its own bolts (3.10.2(2)); a block holding k of n bolts takes k/n of its plate's force",
+    `${blockShearConvention(scenario.options.blockShearLoad, "block tearing (3.10.2(2))")}; every block loaded concentrically (Veff,1,Rd)`,
     scenario.options.exposedToCorrosion
       ? "Table 3.3 maxima for members exposed to corrosion: e ≤ 4t + 40, p1,0 ≤ min(14t, 200), p1,i ≤ min(28t, 400), p2 ≤ min(14t, 200), t the thinner outer part"
       : "not exposed to corrosion: Table 3.3 sets no maximum spacing, end or edge distance for tension members (note 1)",
@@ -146,11 +148,11 @@ function boundCode(bound: Ec3Settings): DesignCode {
     const s = settingsFor(scenario);
     const checks: CheckResult[] = [];
     const groups = joint.groups.map((g) => groupOf(joint, scenario, s, g));
-    const smallHoles = groups.some((g) => g.smallHole !== 1);
+    const smallHoles = groups.some((g) => g.inSmallHoles);
     for (const g of groups) {
       if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));
       if (s.category !== "C") checks.push(boltShearCheck(joint, scenario, s, g));
-      if (g.smallHole !== 1 && s.category !== "C") checks.push(smallHoleConditionCheck(joint, scenario, s, g));
+      if (g.inSmallHoles) checks.push(smallHoleConditionCheck(joint, scenario, s, g));
     }
     const loaded = joint.plates.filter((p) => p.role !== "packing");
     for (const plate of loaded) {
@@ -166,31 +168,33 @@ function boundCode(bound: Ec3Settings): DesignCode {
     }
     checks.push(...minSpacingRules(joint), ...minEndEdgeRules(joint), ...maxRules(joint, scenario), ...centroidRule(joint));
     const conventions = conventionsOf(scenario, s, smallHoles);
-    if (groups.some((g) => new Set(g.holes.map((h) => h.y_mm)).size === 1)) {
-      conventions.push("block tearing: one gauge line, no block with a tension plane can form; tear-out is the e1 term of αd");
-    }
     return { checks, warnings: warningsOf(joint, s, groups), conventions };
   }
 
   /**
-   * Design tension resistance of the unperforated plate, the denominator of efficiency: EN 1993-1-1
-   * 6.2.3 with Anet = A — min(Npl,Rd, Nu,Rd) = min(A·fy/γM0, 0.9·A·fu/γM2); for Category C, whose net
-   * section is Anet·fy/γM0, min(Npl,Rd, Nnet,Rd) = A·fy/γM0 (so that efficiency stays at most 1).
+   * Design tension resistance of the unperforated plate on an efficiency basis (EN 1993-1-1 6.2.3 with
+   * Anet = A): Npl,Rd = A·fy/γM0, Nu,Rd = 0.9·A·fu/γM2, or the lesser. For Category C, whose net section
+   * is Anet·fy/γM0, the lesser is min(Npl,Rd, Nnet,Rd with Anet = A) = A·fy/γM0; on the rupture basis
+   * efficiency may then exceed 1.
    */
-  function unperforatedStrength(spec: PlateSpec): { value_N: number; definition: string } {
+  function unperforatedStrength(spec: PlateSpec, basis: EfficiencyBasis = "lesser"): { value_N: number; definition: string } {
     const m = strengthOf(spec);
     const A = spec.width_mm * spec.thickness_mm;
     const { gamma_M0, gamma_M2 } = bound.factors;
     const Npl = Npl_Rd(A, m.fy_MPa, gamma_M0);
+    const terms: UnperforatedTerms = {
+      yield_N: Npl,
+      rupture_N: Nu_Rd(A, m.fu_MPa, gamma_M2),
+      yieldSymbols: "Npl,Rd = A·fy/γM0",
+      yieldNumbers: `${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}`,
+      ruptureSymbols: "Nu,Rd = 0.9·A·fu/γM2",
+      ruptureNumbers: `0.9 × ${f(A)} × ${m.fu_MPa}/${f(gamma_M2, 2)}`,
+    };
     if (bound.category === "C") {
       const value = Math.min(Npl, Nnet_Rd(A, m.fy_MPa, gamma_M0));
-      return { value_N: value, definition: `efficiency = joint design strength / design tension resistance of the unperforated thinner main plate (Category C) = min(Npl,Rd, Nnet,Rd with Anet = A) = ${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)} = ${kN(value)}` };
+      terms.lesser = { value_N: value, text: `Category C: min(Npl,Rd, Nnet,Rd with Anet = A) = ${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}` };
     }
-    const Nu = Nu_Rd(A, m.fu_MPa, gamma_M2);
-    return {
-      value_N: Math.min(Npl, Nu),
-      definition: `efficiency = joint design strength / design tension resistance of the unperforated thinner main plate = min(A·fy/γM0, 0.9·A·fu/γM2) = min(${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}, 0.9 × ${f(A)} × ${m.fu_MPa}/${f(gamma_M2, 2)}) = ${kN(Math.min(Npl, Nu))}`,
-    };
+    return unperforatedOnBasis(terms, basis, (n) => kN(n));
   }
 
   return {

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
-import { blockShapes } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -33,6 +33,8 @@ export interface Ec3Group {
   beta_p: number;
   /** 0.85 for M12/M14 of class 8.8 or 10.9 in 2 mm clearance holes (3.6.1(5)), else 1. */
   smallHole: number;
+  /** M12/M14 in 2 mm clearance holes, any class: the condition of 3.6.1(5) applies. */
+  inSmallHoles: boolean;
   alpha_v: number;
   /** As where the planes pass the threads, π d²/4 where they pass the shank, mm². */
   A_mm2: number;
@@ -62,6 +64,7 @@ export function groupOf(joint: Joint, scenario: CheckableScenario, s: Ec3Setting
     beta_Lf: bLf,
     beta_p: bp,
     smallHole: small,
+    inSmallHoles: d <= 14 && clearance >= 2 - 1e-9,
     alpha_v: av,
     A_mm2: A,
     bolt,
@@ -238,40 +241,47 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Se
 }
 
 /**
- * M12/M14 bolts in 2 mm clearance holes: the group's bearing resistance must not be below its shear
- * resistance. EN 1993-1-8, 3.6.1(5) (the condition from memory). Both sides expressed as joint tension:
- * n·Fv,Rd against the least over the group's plates of ΣFb,Rd / (the plate's share of T). The check
- * limits no load (load ratio 0): it passes or fails the layout.
+ * M12/M14 bolts in 2 mm clearance holes are allowed only where bearing governs: bolt by bolt, on every
+ * plate the group joins, the design bearing resistance Fb,Rd must not exceed the design shear resistance
+ * Fv,Rd (× 0.85 for 4.8–10.9) of the planes that carry that plate's force into the bolt — the comparison
+ * 3.7 makes fastener by fastener. EN 1993-1-8, 3.6.1(5) (the condition's wording from memory: "the design
+ * resistance of the bolt group based on bearing is less than or equal to that based on bolt shear"; taken
+ * bolt by bolt, the reading that refuses more). The check limits no load (load ratio 0): it passes or
+ * fails the layout. Demand is the worst bolt's Fb,Rd, resistance its Fv,Rd.
  */
 export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group): StrengthCheck {
-  const n = g.holes.length;
-  const shear = n * g.group.shearPlanes * g.FvPlane_N;
-  let bearing = Infinity;
-  let where = "";
+  let worst: { bearing: BoltBearing; shear_N: number; plate: PlatePiece } | null = null;
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
     for (const c of plate.connections) {
       if (c.group !== g.group.id) continue;
-      const sum = boltBearings(g.holes, c, plate, scenario, s, singleLapOneLine(g.group, g.holes)).reduce((a, b) => a + b.Fb_N, 0) / plate.forceShare;
-      if (sum < bearing) {
-        bearing = sum;
-        where = plate.label;
+      const shear = planesCarrying(plate, g.group) * g.FvPlane_N;
+      for (const b of boltBearings(g.holes, c, plate, scenario, s, singleLapOneLine(g.group, g.holes))) {
+        if (!worst || b.Fb_N / shear > worst.bearing.Fb_N / worst.shear_N) worst = { bearing: b, shear_N: shear, plate };
       }
     }
   }
+  const w = worst!;
+  const d = scenario.bolts.size_mm;
+  const holds = w.bearing.Fb_N <= w.shear_N * (1 + 1e-9);
   return strength({
     id: `small-bolt-holes:${g.group.id}`,
     kind: "bolt-bearing",
-    title: "M12/M14 in 2 mm holes: bearing ≥ shear",
+    title: `M${d} in 2 mm clearance holes: bearing must govern`,
     component: groupLabel(joint, g.group),
     citation: cl("3.6.1(5)"),
-    formula: "n·Fv,Rd ≤ ΣFb,Rd / share (as joint tension, least plate)",
-    substituted: () => `n·Fv,Rd = ${n} × ${kN(g.group.shearPlanes * g.FvPlane_N, 2)} = ${kN(shear)};  bearing of the group, ${where}: ${kN(bearing)}`,
+    formula: "every bolt, every plate: Fb,Rd ≤ Fv,Rd (× 0.85) of the planes carrying that plate",
+    substituted: () =>
+      `worst: bolt ${w.bearing.hole.id} on ${w.plate.label}: Fb,Rd = ${kN(w.bearing.Fb_N, 2)} ${holds ? "≤" : ">"} Fv,Rd = ${kN(w.shear_N, 2)}` +
+      (holds ? " → bearing governs every bolt" : " → shear would govern: 2 mm clearance holes are not allowed here"),
     limitState: "ULS",
-    demand_N: shear,
-    resistance_N: bearing,
+    demand_N: w.bearing.Fb_N,
+    resistance_N: w.shear_N,
     loadRatio: 0,
-    notes: () => ["a condition on the layout: it sets no load"],
+    notes: () => [
+      "a condition on the layout: it sets no load",
+      ...(holds ? [] : [`use normal clearance holes for M${d} (options.small_bolt_clearance: 1, EN 1090-2 Table 11), thinner plies, or a bolt that bears`]),
+    ],
   });
 }
 
@@ -382,33 +392,33 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
 /**
  * Block tearing of a plate for one bolt group: the governing shape of all that can form.
  * EN 1993-1-8, 3.10.2(2), equation (3.9), concentric loading: Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0.
- * A block holding k of the group's n bolts takes k/n of the plate's force. Null for a single gauge line
- * (no block with a tension plane; the tear-out of that line is the e1 term of αd in bearing).
+ * A block holding k of the group's n bolts carries k/n of the plate's force (options.block_shear_load:
+ * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
 export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const holes = joint.holes.filter((h) => h.group === connection.group);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const { gamma_M0, gamma_M2 } = s.factors;
-  let best: { capacity: number; ratio: number; R: number; shape: (typeof shapes)[number] } | null = null;
-  for (const shape of shapes) {
-    const R = Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2);
-    const ratio = (plate.forceShare * shape.boltsInBlock) / holes.length;
-    if (!best || R / ratio < best.capacity - 1e-9) best = { capacity: R / ratio, ratio, R, shape };
-  }
+  const load = scenario.options.blockShearLoad;
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => ({
+    value_N: Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2),
+    detail: null,
+  }));
   if (!best) return null;
-  const { shape: b, R, ratio } = best;
+  const { shape: b, value_N: R, ratio } = best;
   const side = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
   return strength({
     id: `block-shear:${plate.id}:${connection.group}`,
     kind: "block-shear",
     title: "Block tearing",
     component: `${plate.label}${side}`,
-    citation: cl("3.10.2(2)", { equation: "(3.9)" }),
-    formula: "F·k/n ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0",
+    citation: cl("3.10.2(2)", { equation: "3.9" }),
+    formula: `${load === "full" ? "F" : "F·k/n"} ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0`,
     substituted: () =>
       `${b.description} (${b.boltsInBlock} of ${holes.length} bolts): Ant = ${f(b.tensionNet_mm)} × ${f(t)} = ${f(b.tensionNet_mm * t)} mm², ` +
-      `Anv = ${f(b.shearNet_mm)} × ${f(t)} = ${f(b.shearNet_mm * t)} mm²;  Veff,1,Rd = ${plate.fu_MPa} × ${f(b.tensionNet_mm * t)}/${f(gamma_M2, 2)} + ${plate.fy_MPa} × ${f(b.shearNet_mm * t)}/(√3 × ${f(gamma_M0, 2)}) = ${kN(R)}`,
+      `Anv = ${f(b.shearNet_mm)} × ${f(t)} = ${f(b.shearNet_mm * t)} mm²;  Veff,1,Rd = R = ${plate.fu_MPa} × ${f(b.tensionNet_mm * t)}/${f(gamma_M2, 2)} + ${plate.fy_MPa} × ${f(b.shearNet_mm * t)}/(√3 × ${f(gamma_M0, 2)}) = ${kN(R)};  ` +
+      blockLoadText(best, holes.length, plate.forceShare, load, (n) => kN(n)),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * ratio,
     resistance_N: R,

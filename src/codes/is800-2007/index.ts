@@ -5,7 +5,9 @@ import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult, Warning } from "../../model/results.js";
-import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
+import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
+import { unperforatedOnBasis } from "../efficiency.js";
+import { blockShearConvention } from "../../geometry/block-shear.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { f, kN } from "../format.js";
 import { PARTIAL_FACTORS } from "./factors.js";
@@ -93,8 +95,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
         : "friction grip, slip at service (γmf 1.10); bolt shear and bearing also checked at the factored load",
     );
   }
-  const singleLine = gfs.some((gf) => new Set(gf.holes.map((h) => h.y_mm)).size === 1);
-  if (singleLine) conventions.push("block shear: one gauge line, no block with a tension plane can form; tear-out is the e/3d0 term of kb");
+  conventions.push(blockShearConvention(scenario.options.blockShearLoad, "block shear (cl. 6.4.1)"));
   const warnings = factorWarnings(joint, gfs);
   const minimum = minimumDesignAction(scenario);
   if (minimum) warnings.push(minimum);
@@ -119,20 +120,25 @@ function minimumDesignAction(scenario: CheckableScenario): Warning | null {
 const unperforated = (spec: PlateSpec) => unperforatedStrength(spec).value_N;
 
 /**
- * Design tension strength of the unperforated plate: the lesser of cl. 6.2 gross yield and
- * cl. 6.3.1 rupture with An = Ag.
+ * Design tension strength of the unperforated plate on an efficiency basis: cl. 6.2 gross yield
+ * Ag·fy/γm0, cl. 6.3.1 rupture with An = Ag, 0.9·Ag·fu/γm1, or the lesser of the two.
  */
-function unperforatedStrength(spec: PlateSpec): { value_N: number; definition: string } {
+function unperforatedStrength(spec: PlateSpec, basis: EfficiencyBasis = "lesser"): { value_N: number; definition: string } {
   const m = plateStrength(spec);
   const Ag = spec.width_mm * spec.thickness_mm;
-  const yieldN = Tdg(Ag, m.fy_MPa);
-  const rupture = Tdn(Ag, m.fu_MPa);
-  return {
-    value_N: Math.min(yieldN, rupture),
-    definition:
-      `efficiency = joint design strength / design strength of the unperforated thinner main plate = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) = ` +
-      `min(${f(Ag)} × ${m.fy_MPa}/${PARTIAL_FACTORS.gamma_m0}, 0.9 × ${f(Ag)} × ${m.fu_MPa}/${PARTIAL_FACTORS.gamma_m1}) = ${kN(Math.min(yieldN, rupture))}`,
-  };
+  const { gamma_m0, gamma_m1 } = PARTIAL_FACTORS;
+  return unperforatedOnBasis(
+    {
+      yield_N: Tdg(Ag, m.fy_MPa),
+      rupture_N: Tdn(Ag, m.fu_MPa),
+      yieldSymbols: "Ag·fy/γm0",
+      yieldNumbers: `${f(Ag)} × ${m.fy_MPa}/${gamma_m0}`,
+      ruptureSymbols: "0.9·Ag·fu/γm1",
+      ruptureNumbers: `0.9 × ${f(Ag)} × ${m.fu_MPa}/${gamma_m1}`,
+    },
+    basis,
+    (n) => kN(n),
+  );
 }
 
 export const IS800_2007: DesignCode = {

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
-import { blockShapes } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
 import { holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -254,24 +254,22 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
 
 /**
  * Block shear of a plate for one bolt group: the governing shape of all that can form.
- * IS 800:2007, cl. 6.4.1. A block holding k of the group's n bolts takes k/n of the plate's force.
- * Returns null when the pattern has a single gauge line (no block with a tension plane can form; the
- * tear-out of that line is the e/3d0 term of kb in bearing).
+ * IS 800:2007, cl. 6.4.1: Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1, 0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0).
+ * A block holding k of the group's n bolts carries k/n of the plate's force (options.block_shear_load:
+ * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const holes = joint.holes.filter((h) => h.group === connection.group);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
-  if (shapes.length === 0) return null;
   const t = plate.spec.thickness_mm;
-  let best: { capacity: number; ratio: number; shape: (typeof shapes)[number]; r: ReturnType<typeof Tdb> } | null = null;
-  for (const shape of shapes) {
+  const load = scenario.options.blockShearLoad;
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => {
     const r = Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
-    const ratio = (plate.forceShare * shape.boltsInBlock) / holes.length;
-    const capacity = r.Tdb_N / ratio;
-    if (!best || capacity < best.capacity - 1e-9) best = { capacity, ratio, shape, r };
-  }
+    return { value_N: r.Tdb_N, detail: r };
+  });
   if (!best) return null;
   const s = best.shape;
+  const r = best.detail;
   const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
   return strength({
     id: `block-shear:${plate.id}:${connection.group}`,
@@ -279,14 +277,15 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     title: "Block shear",
     component: `${plate.label}${sideText}`,
     citation: cl("6.4.1"),
-    formula: "F·k/n ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)",
+    formula: `${load === "full" ? "F" : "F·k/n"} ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)`,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Avg = ${f(s.shearGross_mm)} × ${f(t)} = ${f(s.shearGross_mm * t)}, ` +
       `Avn = ${f(s.shearNet_mm)} × ${f(t)} = ${f(s.shearNet_mm * t)}, Atg = ${f(s.tensionGross_mm)} × ${f(t)} = ${f(s.tensionGross_mm * t)}, ` +
-      `Atn = ${f(s.tensionNet_mm)} × ${f(t)} = ${f(s.tensionNet_mm * t)} mm²;  Tdb1 = ${kN(best.r.Tdb1_N)}, Tdb2 = ${kN(best.r.Tdb2_N)}, Tdb = ${kN(best.r.Tdb_N)}`,
+      `Atn = ${f(s.tensionNet_mm)} × ${f(t)} = ${f(s.tensionNet_mm * t)} mm²;  Tdb1 = ${kN(r.Tdb1_N)}, Tdb2 = ${kN(r.Tdb2_N)}, Tdb = R = ${kN(r.Tdb_N)};  ` +
+      blockLoadText(best, holes.length, plate.forceShare, load, (n) => kN(n)),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * best.ratio,
-    resistance_N: best.r.Tdb_N,
+    resistance_N: r.Tdb_N,
     loadRatio: best.ratio,
     notes: () => [`governing of ${shapes.length} block shapes`],
   });

@@ -1,0 +1,38 @@
+/**
+ * The denominator of efficiency: the design tension strength of the unperforated plate, on the basis
+ * the scenario chooses (options.efficiency_basis). Offices and textbooks define it three ways: by
+ * gross yield, by rupture of the unperforated section (An = Ag), or by the lesser of the two.
+ */
+import type { EfficiencyBasis } from "../model/scenario.js";
+
+/** One code's two strengths of an unperforated plate, each with its formula in symbols and numbers. */
+export interface UnperforatedTerms {
+  yield_N: number;
+  rupture_N: number;
+  /** e.g. "Ag·fy/γm0" and "200 × 12 × 250/1.1". */
+  yieldSymbols: string;
+  yieldNumbers: string;
+  ruptureSymbols: string;
+  ruptureNumbers: string;
+  /** The value taken for "lesser" when the code defines it otherwise (EN 1993-1-8 Category C). */
+  lesser?: { value_N: number; text: string };
+}
+
+const BASIS_WORDS: Record<EfficiencyBasis, string> = {
+  lesser: "the lesser of gross yield and rupture",
+  rupture: "rupture",
+  yield: "gross yield",
+};
+
+/**
+ * The unperforated strength on a basis, with the definition every output prints beside efficiency.
+ * @param force formats a force in the output's units
+ */
+export function unperforatedOnBasis(terms: UnperforatedTerms, basis: EfficiencyBasis, force: (n: number) => string): { value_N: number; definition: string } {
+  const head = `efficiency = joint design strength / design tension strength of the unperforated thinner main plate, basis: ${BASIS_WORDS[basis]} (options.efficiency_basis: ${basis}) = `;
+  if (basis === "yield") return { value_N: terms.yield_N, definition: `${head}${terms.yieldSymbols} = ${terms.yieldNumbers} = ${force(terms.yield_N)}` };
+  if (basis === "rupture") return { value_N: terms.rupture_N, definition: `${head}${terms.ruptureSymbols} = ${terms.ruptureNumbers} = ${force(terms.rupture_N)}` };
+  if (terms.lesser) return { value_N: terms.lesser.value_N, definition: `${head}${terms.lesser.text} = ${force(terms.lesser.value_N)}` };
+  const value = Math.min(terms.yield_N, terms.rupture_N);
+  return { value_N: value, definition: `${head}min(${terms.yieldSymbols}, ${terms.ruptureSymbols}) = min(${terms.yieldNumbers}, ${terms.ruptureNumbers}) = ${force(value)}` };
+}
