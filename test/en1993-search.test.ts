@@ -15,50 +15,11 @@ import type { RankBy } from "../src/search/ranking.js";
 import { searchLayouts } from "../src/search/search.js";
 import { families, layoutOf, resolveSpace, scenarioOf, staggeredCounts } from "../src/search/space.js";
 import { ROOT, scenarioPath } from "./helpers/cli.js";
-import { rng } from "./helpers/generate.js";
+import { ec3Scenario, rng } from "./helpers/generate.js";
 
 const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
 const pick = <T>(r: () => number, xs: readonly T[]): T => xs[Math.floor(r() * xs.length)]!;
 
-/** A small EN 1993-1-8 search scenario over a reduced space (2 sizes × 2 classes, 10 mm steps, ≤ 3 lines). */
-function ec3Scenario(seed: number): { yaml: string; description: string } {
-  const r = rng(seed);
-  const type = pick(r, ["lap", "butt-single-cover", "butt-double-cover"] as const);
-  const width = pick(r, [100, 120, 140, 160, 200]);
-  const t = pick(r, [8, 10, 12, 16, 20]);
-  const grade = pick(r, ["S235", "S275", "S355"]);
-  const fy = { S235: 235, S275: 275, S355: 355 }[grade]!;
-  const category = pick(r, ["A", "A", "A", "B", "C"] as const);
-  const plates: Record<string, unknown> = { main: { width, thickness: t, grade } };
-  if (type !== "lap") {
-    if (r() < 0.4) plates.main_b = { width, thickness: t + pick(r, [2, 4, 8]), grade };
-    plates.cover = { width, thickness: pick(r, [6, 8, 10]), grade: "S275" };
-  }
-  const tension = Math.round(((width * t * fy) / 1000) * (0.15 + 0.5 * r()));
-  const scenario: Record<string, unknown> = {
-    name: `generated EC3 ${seed}`,
-    code: "en1993-1-8",
-    splice: { type },
-    plates,
-    load: { factored_tension: tension, ...(category === "B" ? { service_tension: Math.round(tension * 0.7) } : {}) },
-    search: {
-      sizes: pick(r, [[12, 16], [16, 20], [12, 20]]),
-      classes: category !== "A" ? ["8.8", "10.9"] : pick(r, [["4.6", "8.8"], ["5.6", "10.9"], ["4.6", "5.6"], ["8.8", "10.9"]]),
-      step: 10,
-      max_along: pick(r, [2, 3]),
-      ...(type !== "lap" ? { cover_thicknesses: pick(r, [[6], [8], [6, 10]]) } : {}),
-    },
-    options: {
-      net_section_load: pick(r, ["full", "transferred"]),
-      exposed_to_corrosion: r() < 0.3,
-      steel_strengths: pick(r, ["en10025-2", "en1993-1-1"]),
-      ...(r() < 0.2 ? { small_bolt_clearance: 2 } : {}),
-    },
-    ...(r() < 0.3 ? { factors: { gamma_m0: 1.05, gamma_m2: 1.1 } } : {}),
-  };
-  if (category !== "A") scenario.bolts = { size: 20, class: "8.8", type: "friction-grip", slip_factor: pick(r, [0.3, 0.5]), slip_at: category === "B" ? "service" : "ultimate" };
-  return { yaml: stringify(scenario), description: `${type}, ${width} × ${t} ${grade}, T = ${tension} kN, Category ${category}` };
-}
 
 function compare(seed: number, rankBy: RankBy, top: number) {
   const g = ec3Scenario(seed);

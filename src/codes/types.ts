@@ -19,6 +19,18 @@ export interface CodeChecks {
   conventions: string[];
 }
 
+/**
+ * How the top of a searched range is set. "rule": a code maximum — a larger value fails a check, so the
+ * range ends at the last step value at or below it. "declared": the point where the terms a larger value
+ * could raise stop growing (a stated narrowing) — the range ends at the first step value at or beyond
+ * it, never past the rule maximum given beside it.
+ */
+export interface RangeTop {
+  kind: "rule" | "declared";
+  /** For a declared top: the code's own maximum, which the rounded-up range never passes (Infinity: none). */
+  ruleMax_mm?: number;
+}
+
 /** The declared search-space limits the code sets for one bolt size and pattern, mm. */
 export interface SearchLimits {
   pitchMin_mm: number;
@@ -26,12 +38,14 @@ export interface SearchLimits {
   gaugeMin_mm: number;
   gaugeMax_mm: number;
   endMin_mm: number;
-  /** Largest end distance searched (a stated bound, not a rule). */
+  /** Largest end distance searched. */
   endMax_mm: number;
   /** Largest end distance at the butt searched (butt splices). */
   endAtButtMax_mm: number;
   edgeMin_mm: number;
   edgeMax_mm: number;
+  /** Whether each top is a code rule or a declared cap (see RangeTop). */
+  tops: { pitch: RangeTop; gauge: RangeTop; end: RangeTop; endAtButt: RangeTop };
   /** The limits in words, with their clauses, for the output. */
   statement: string;
 }

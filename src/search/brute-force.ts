@@ -4,7 +4,7 @@
  */
 import { compareKeys, type RankBy } from "./ranking.js";
 import { evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
-import { families, layoutOf, resolveSpace, type Family } from "./space.js";
+import { families, layoutOf, resolveSpace, taperedGauges, type Family } from "./space.js";
 
 /** Every tapered count vector of the declared shape: one parity, never rising from line 0, not uniform. */
 export function taperedVectors(lines: number, kmax: number): number[][] {
@@ -31,23 +31,25 @@ function narrowest(ctx: SearchContext): number {
   return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
 }
 
-function taperedGaugeList(f: Family, width: number, step: number, fixed: number | undefined): number[] {
-  if (fixed !== undefined) return [fixed];
-  const out: number[] = [];
-  const lo = Math.ceil(f.limits.gaugeMin_mm / step - 1e-9) * step;
-  for (let g = lo; g <= Math.min(f.limits.gaugeMax_mm, width - 2 * f.limits.edgeMin_mm) + 1e-9; g += step) out.push(Math.round(g * 1e6) / 1e6);
-  return out;
-}
-
 export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankBy): { results: Candidate[]; checks: number } {
   const space = resolveSpace(ctx.scenario, ctx.code, ctx.costs);
   const fams = families(ctx.scenario, ctx.code, ctx.costs, space);
   const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
   const width = narrowest(ctx);
-  const passing: Candidate[] = [];
+  // The best `top` layouts of distinct identity so far (a layout's identity leaves out its gauge).
+  const best: Candidate[] = [];
   const maxLength = space.maxSpliceLength_mm ?? Infinity;
   const keep = (c: Candidate | null) => {
-    if (c && c.joint.spliceLength_mm <= maxLength + 1e-9) passing.push(c);
+    if (!c || c.joint.spliceLength_mm > maxLength + 1e-9) return;
+    const id = identityOf(c);
+    const same = best.findIndex((b) => identityOf(b) === id);
+    if (same >= 0) {
+      if (compareKeys(c.key, best[same]!.key) >= 0) return;
+      best.splice(same, 1);
+    }
+    best.push(c);
+    best.sort((a, b) => compareKeys(a.key, b.key));
+    if (best.length > top) best.length = top;
   };
   for (const f of fams) {
     for (const p of f.pitches_mm) {
@@ -56,7 +58,7 @@ export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankB
           if (f.countsPerLine) {
             for (const g of f.gauges_mm) keep(evaluate(ctx, f, layoutOf(f, p, g, e, eb), f.countsPerLine, rankBy, stats).candidate);
           } else {
-            const gauges = taperedGaugeList(f, width, space.step_mm, space.fixedGauge_mm);
+            const gauges = taperedGauges(f, width, space);
             const gMin = gauges[0];
             if (gMin === undefined) continue;
             const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
@@ -73,15 +75,5 @@ export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankB
       }
     }
   }
-  passing.sort((a, b) => compareKeys(a.key, b.key));
-  const seen = new Set<string>();
-  const results: Candidate[] = [];
-  for (const c of passing) {
-    const id = identityOf(c);
-    if (seen.has(id)) continue;
-    seen.add(id);
-    results.push(c);
-    if (results.length === top) break;
-  }
-  return { results, checks: stats.fullChecks };
+  return { results: best, checks: stats.fullChecks };
 }

@@ -17,7 +17,7 @@ import type { CheckKind, CheckReport } from "../model/results.js";
 import type { CheckableScenario, LayoutSpec, Scenario } from "../model/scenario.js";
 import { MinHeap } from "./heap.js";
 import { compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
-import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, type Family, type SearchSpace } from "./space.js";
+import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
 import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 
 export interface Candidate {
@@ -457,15 +457,6 @@ function sidesOf(f: Family): number {
 /** Bolts in the whole joint for n per group. */
 function totalBolts(f: Family, perGroup: number): number {
   return f.base.splice.type === "lap" ? perGroup : 2 * perGroup;
-}
-
-function taperedGauges(f: Family, width: number, space: SearchSpace): number[] {
-  if (space.fixedGauge_mm !== undefined) return [space.fixedGauge_mm];
-  const out: number[] = [];
-  const step = space.step_mm;
-  const lo = Math.ceil(f.limits.gaugeMin_mm / step - 1e-9) * step;
-  for (let g = lo; g <= Math.min(f.limits.gaugeMax_mm, width - 2 * f.limits.edgeMin_mm) + 1e-9; g += step) out.push(Math.round(g * 1e6) / 1e6);
-  return out;
 }
 
 function taperedProblem(ctx: SearchContext, f: Family, kmax: number, transferred: boolean): TaperedProblem {

@@ -4,7 +4,7 @@
  */
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
 import { boltSizeText, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
-import type { DesignCode, SearchLimits } from "../codes/types.js";
+import type { DesignCode, RangeTop, SearchLimits } from "../codes/types.js";
 import type { BoltAssembly, BoltSpec, CheckableScenario, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
 
 export type SearchPattern = "grid" | "staggered" | "tapered";
@@ -72,6 +72,15 @@ export function stepRange(from_mm: number, to_mm: number, step_mm: number): numb
   return out;
 }
 
+/**
+ * The step values of a range from `from` to a top: a rule top is never passed (the last step at or below
+ * it); a declared top is reached (the first step at or beyond it), never past its rule maximum.
+ */
+export function rangeTo(from_mm: number, top_mm: number, top: RangeTop, step_mm: number): number[] {
+  if (top.kind === "rule") return stepRange(from_mm, top_mm, step_mm);
+  return stepRange(from_mm, Math.min(up(top_mm, step_mm), top.ruleMax_mm ?? Infinity), step_mm);
+}
+
 function narrowestWidth(s: Scenario): number {
   return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
 }
@@ -82,7 +91,19 @@ export function gaugesFor(G: number, width_mm: number, limits: SearchLimits, spa
   if (space.fixedGauge_mm !== undefined) return [space.fixedGauge_mm];
   const byEdgeMin = (width_mm - 2 * limits.edgeMin_mm) / (G - 1);
   const byEdgeMax = (width_mm - 2 * limits.edgeMax_mm) / (G - 1);
-  return stepRange(Math.max(limits.gaugeMin_mm, byEdgeMax), Math.min(limits.gaugeMax_mm, byEdgeMin), space.step_mm);
+  const lo = Math.max(limits.gaugeMin_mm, byEdgeMax);
+  if (byEdgeMin < limits.gaugeMax_mm) return stepRange(lo, byEdgeMin, space.step_mm); // the edge minimum is a rule
+  return rangeTo(lo, limits.gaugeMax_mm, limits.tops.gauge, space.step_mm).filter((g) => g <= byEdgeMin + 1e-9);
+}
+
+/**
+ * Gauges of a tapered family on the narrowest plate: from the code minimum to the code maximum (its
+ * top kind decides the rounding), leaving the minimum edge distance beside the widest line's two bolts.
+ */
+export function taperedGauges(f: Family, width_mm: number, space: SearchSpace): number[] {
+  if (space.fixedGauge_mm !== undefined) return [space.fixedGauge_mm];
+  const byEdgeMin = width_mm - 2 * f.limits.edgeMin_mm;
+  return rangeTo(f.limits.gaugeMin_mm, f.limits.gaugeMax_mm, f.limits.tops.gauge, space.step_mm).filter((g) => g <= byEdgeMin + 1e-9);
 }
 
 /** Resolve the declared space of a scenario. */
@@ -154,9 +175,9 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
         const base = { ...withCover(scenario, coverT), bolts: boltSpecFor(scenario, d, c, space.assembly) };
         for (const pattern of space.patterns) {
           const limits = code.searchLimits(base, d, pattern);
-          const pitches = stepRange(limits.pitchMin_mm, limits.pitchMax_mm, space.step_mm);
-          const ends = stepRange(limits.endMin_mm, Math.max(limits.endMax_mm, up(limits.endMin_mm, space.step_mm)), space.step_mm);
-          const endsAtButt: Array<number | undefined> = butt ? stepRange(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), space.step_mm) : [undefined];
+          const pitches = rangeTo(limits.pitchMin_mm, limits.pitchMax_mm, limits.tops.pitch, space.step_mm);
+          const ends = rangeTo(limits.endMin_mm, limits.endMax_mm, limits.tops.end, space.step_mm);
+          const endsAtButt: Array<number | undefined> = butt ? rangeTo(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), limits.tops.endAtButt, space.step_mm) : [undefined];
           const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
           const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
           const push = (counts: number[] | null, lines: number, across: number, G: number) => {
@@ -233,7 +254,7 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
     if (entry.seen.has(f.size_mm)) continue;
     entry.seen.add(f.size_mm);
     const span = (v: Array<number | undefined>) => (v.length && v[0] !== undefined ? `${v[0]}–${v[v.length - 1]}` : "—");
-    const pitches = stepRange(f.limits.pitchMin_mm, f.limits.pitchMax_mm, space.step_mm);
+    const pitches = rangeTo(f.limits.pitchMin_mm, f.limits.pitchMax_mm, f.limits.tops.pitch, space.step_mm);
     entry.ranges.push(`${boltSizeText(f.size_mm)}: pitch ${span(pitches)}, end ${span(f.ends_mm)}${scenario.splice.type !== "lap" ? `, at butt ${span(f.endsAtButt_mm)}` : ""}`);
   }
   for (const [pattern, entry] of byPattern) {

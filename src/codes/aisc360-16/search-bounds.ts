@@ -6,7 +6,9 @@
  */
 import { inchBoltSize } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
-import type { LayoutShape, SearchLimits, StrengthBound } from "../types.js";
+import type { LayoutShape, RangeTop, SearchLimits, StrengthBound } from "../types.js";
+
+const RULE: RangeTop = { kind: "rule" };
 import { BoundBuilder, groupGrips } from "../bound-builder.js";
 import { bearingCoefficients, phiRnBearing, phiRnTearout } from "./bearing.js";
 import { a307GripFactor, fillerFactor, longJointFactor, phiRnShear } from "./bolt-shear.js";
@@ -22,8 +24,9 @@ const loaded = (s: Scenario): PlateSpec[] => [s.plates.mainA, s.plates.mainB, ..
 /**
  * Search-space limits from J3.3–J3.5 for bolt diameter d: pitch and gauge from 2⅔ d (staggered: 1⅓ d,
  * so that the same-line spacing 2s ≥ 2⅔ d) to the J3.5 maximum spacing (staggered: half of it, the
- * same-line spacing being 2s); end and edge distances from Table J3.4 up to the J3.5 maximum; end
- * distances searched up to lc = 2 d (e = 2 d + dh/2), where tearout reaches bearing.
+ * same-line spacing being 2s); end and edge distances from Table J3.4 up to the J3.5 maximum, end
+ * distances too: tearout stops growing at lc = 2 d (e = 2 d + dh/2), block shear does not. Every top is a
+ * rule, so the space is the code's.
  */
 export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutShape["pattern"]): SearchLimits {
   const inch = inchBoltSize(d_mm) !== undefined;
@@ -39,8 +42,8 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutSh
   const covers = scenario.plates.covers;
   // Butt splices: the two holes either side of the butt lie on one gauge line of the covers at 2·e + gap (J3.5).
   const endAtButtMax = covers.length > 0 ? (Math.min(...covers.map((c) => maxSpacing_mm(c.thickness_mm, inch, scenario.options.exposedToCorrosion))) - scenario.splice.buttGap_mm) / 2 : Infinity;
-  const tearoutCap = 2 * d_mm + hole.along_mm / 2;
-  const endMax = Math.min(Math.max(edgeMin, tearoutCap), endMaxRule);
+  // End distances run to the J3.5 maximum: tearout stops growing at lc = 2d (e = 2d + dh/2), block shear does not.
+  const endMax = endMaxRule;
   return {
     pitchMin_mm: staggered ? minSpacing_mm(d_mm) / 2 : minSpacing_mm(d_mm),
     pitchMax_mm: staggered ? spacingMax / 2 : spacingMax,
@@ -51,9 +54,10 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutSh
     endAtButtMax_mm: Math.min(endMax, endAtButtMax),
     edgeMin_mm: edgeMin,
     edgeMax_mm: edgeMax,
+    tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
     statement:
       `pitch ${staggered ? "1⅓d" : "2⅔d"} … ${staggered ? "min(24t, 12 in)/2" : "min(24t, 12 in)"}; gauge ${staggered ? "1⅓d" : "2⅔d"} … min(24t, 12 in) (J3.3, J3.5); ` +
-      `end and edge from Table J3.4 to min(12t, 6 in) (J3.4, J3.5); end distances searched up to 2d + dh/2 (tearout lc = 2d reaches bearing)` +
+      `end and edge from Table J3.4 to min(12t, 6 in) (J3.4, J3.5): end distances to the maximum, since block shear still grows after tearout reaches bearing at lc = 2d; every top a code maximum` +
       (covers.length > 0 ? "; at the butt also 2·e + gap within the covers' maximum spacing" : ""),
   };
 }

@@ -6,7 +6,7 @@
  */
 import { boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
-import type { LayoutShape, SearchLimits, StrengthBound } from "../types.js";
+import type { LayoutShape, RangeTop, SearchLimits, StrengthBound } from "../types.js";
 import { BoundBuilder } from "../bound-builder.js";
 import { alpha_b, alpha_d_end, alpha_d_inner, Fb_Rd, singleLapLimit } from "./bearing.js";
 import { alpha_v, beta_Lf, beta_p, Fv_Rd, smallBoltHoleFactor } from "./bolt-shear.js";
@@ -29,9 +29,10 @@ function outerPlates(scenario: Scenario): PlateSpec[] {
  * 2.4 d0 for tapered patterns, end distance from 1.2 d0 (slots: 1.5 d0), edge distance from 1.2 d0.
  * Declared narrowings (stated in the output): grid and staggered gauges from 3 d0 and edge distances
  * from 1.5 d0, where k1 of Table 3.4 reaches its cap of 2.5, so that bearing does not change with the
- * gauge (the search's gauge sweep relies on it); end distances up to 3 d0 (αd's e1 term reaches 1);
- * pitch and gauge up to min(14t, 200 mm) — a rule where the steel is exposed to corrosion, a declared
- * bound where it is not (Table 3.3 then sets no maximum for tension members).
+ * gauge (the search's gauge sweep relies on it). Exposed to corrosion, every top is a Table 3.3 maximum:
+ * e ≤ 4t + 40, p1 and p2 ≤ min(14t, 200). Not exposed, Table 3.3 sets no maximum (note 1), so the tops are
+ * declared: end distances to the first step at or beyond 3 d0 (αd's e1 term reaches 1), pitch and gauge
+ * to the first step at or beyond min(14t, 200 mm); block tearing and staggered paths still grow past them.
  */
 export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" | "staggered" | "tapered", s: Ec3Settings): SearchLimits {
   const hole = holeDimensions(d_mm, scenario.bolts?.hole ?? "standard", scenario.bolts?.slotDirection, s.smallBoltClearance_mm);
@@ -45,11 +46,12 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
   const eMax = exposed ? 4 * tOut + 40 : Infinity;
   const capped = pattern !== "tapered";
   const endMin = factor * d0;
-  const endMax = Math.min(Math.max(endMin, 3 * d0), eMax);
+  const endMax = exposed ? eMax : Math.max(endMin, 3 * d0);
   // Butt splices exposed: the holes either side of the butt lie on the covers' outer gauge lines at
   // 2·e + gap, a p1,0 of Table 3.3.
   const covers = scenario.plates.covers.length > 0;
   const endAtButtMax = covers && exposed ? Math.min(endMax, (p1Outer - scenario.splice.buttGap_mm) / 2) : endMax;
+  const top: RangeTop = exposed ? { kind: "rule" } : { kind: "declared", ruleMax_mm: Infinity };
   return {
     pitchMin_mm: pattern === "staggered" ? 1.1 * d0 : 2.2 * d0,
     pitchMax_mm: pattern === "staggered" ? p1Outer / 2 : p1Outer,
@@ -60,11 +62,12 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     endAtButtMax_mm: endAtButtMax,
     edgeMin_mm: (capped ? Math.max(factor, 1.5) : factor) * d0 + reach,
     edgeMax_mm: eMax,
+    tops: { pitch: top, gauge: top, end: top, endAtButt: top },
     statement:
       `pitch ${pattern === "staggered" ? "1.1 d0 (2.2 d0 on a gauge line)" : "2.2 d0"} … min(14t, 200)${pattern === "staggered" ? "/2" : ""}; ` +
       `gauge ${capped ? "3 d0 (declared: k1 = 2.5, so bearing does not change with the gauge)" : "2.4 d0"} … min(14t, 200); ` +
-      `end ${factor} d0 … 3 d0 (αd's e1 term reaches 1)${exposed ? " and 4t + 40" : ""}; edge ${capped ? "1.5 d0 (declared, k1 = 2.5)" : `${factor} d0`}${exposed ? " … 4t + 40" : ""} ` +
-      `(EN 1993-1-8 Table 3.3${exposed ? ", exposed to corrosion" : "; not exposed: the maxima are declared bounds, Table 3.3 note 1 sets none"})${covers && exposed ? "; at the butt also 2·e + gap ≤ min(14t, 200)" : ""}`,
+      `end ${factor} d0 … ${exposed ? "4t + 40" : "the first step at or beyond 3 d0 (declared: αd's e1 term reaches 1; block tearing still grows)"}; edge ${capped ? "1.5 d0 (declared, k1 = 2.5)" : `${factor} d0`}${exposed ? " … 4t + 40" : ""} ` +
+      `(EN 1993-1-8 Table 3.3${exposed ? ", exposed to corrosion: every top a code maximum" : "; not exposed: Table 3.3 note 1 sets no maximum, so pitch and gauge run to the first step at or beyond min(14t, 200), a declared bound"})${covers && exposed ? "; at the butt also 2·e + gap ≤ min(14t, 200)" : ""}`,
   };
 }
 

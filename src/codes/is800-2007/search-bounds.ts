@@ -6,7 +6,7 @@
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
-import type { LayoutShape, SearchLimits, StrengthBound } from "../types.js";
+import type { LayoutShape, RangeTop, SearchLimits, StrengthBound } from "../types.js";
 import { BoundBuilder, groupGrips } from "../bound-builder.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
 import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
@@ -26,14 +26,17 @@ function outsidePlates(scenario: Scenario): PlateSpec[] {
   return scenario.plates.covers;
 }
 
+const RULE: RangeTop = { kind: "rule" };
+
 const roughEdge = (p: PlateSpec) => p.edges === "sheared" || p.edges === "hand-flame-cut";
 
 /**
  * Search-space limits from cl. 10.2 for bolt diameter d (the checker still applies every rule):
  * pitch and gauge from 2.5 d (staggered: 1.25 d, so that the same-line spacing 2s ≥ 2.5 d) to
  * min(16 t, 200) along (staggered: ×1.5 per cl. 10.2.3.4, halved to the stagger pitch) and
- * min(32 t, 300) across; end and edge distances from 1.5 d0 or 1.7 d0 (cl. 10.2.4.2) up to 3 d0, where
- * kb's e/3d0 term reaches 1, and never past 12 t ε (cl. 10.2.4.3).
+ * min(32 t, 300) across; end and edge distances from 1.5 d0 or 1.7 d0 (cl. 10.2.4.2) up to the code
+ * maximum 12 t ε (40 + 4 t exposed; cl. 10.2.4.3), so that block shear, which still grows after kb's
+ * e/3d0 term reaches 1 at 3 d0, is searched to the end. Every top is a rule: the space is the code's.
  */
 export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" | "staggered" | "tapered"): SearchLimits {
   const d0 = holeDimensions(d_mm, scenario.bolts?.hole ?? "standard", scenario.bolts?.slotDirection).along_mm;
@@ -60,13 +63,14 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     gaugeMin_mm: staggered ? 1.25 * d_mm : 2.5 * d_mm,
     gaugeMax_mm: across,
     endMin_mm: factor * d0,
-    endMax_mm: Math.min(Math.max(factor * d0, 3 * d0), maxEdge),
-    endAtButtMax_mm: Math.min(Math.max(factor * d0, 3 * d0), maxEdge, endAtButtMax),
+    endMax_mm: maxEdge,
+    endAtButtMax_mm: Math.min(maxEdge, endAtButtMax),
     edgeMin_mm: factor * d0,
     edgeMax_mm: maxEdge,
+    tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
     statement:
       `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200, 100 + 4t), 32t, 300)/2" : "min(16t, 200, 100 + 4t)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
-      `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances searched up to 3d0 (kb's e-term reaches 1)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}`,
+      `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances to the same maximum (kb's e-term stops growing at 3d0, block shear does not)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}; every top a code maximum`,
   };
 }
 
