@@ -220,7 +220,7 @@ describe("search under AISC 360-16", () => {
     expect(checked).toBeGreaterThan(100);
   });
   it("best-first search returns exactly what brute force returns on a reduced space", () => {
-    const small = base.replace("sizes: [M16, M20, M22, M24]", "sizes: [M20, M22]").replace("max_along: 6", "max_along: 3").replace("cover_thicknesses: [5/16 in, 3/8 in, 1/2 in]", "cover_thicknesses: [3/8 in]").replace("step: 1/4 in", "step: 1/2 in");
+    const small = base.replace("sizes: [5/8 in, 3/4 in, 7/8 in, 1 in]", "sizes: [3/4 in, 7/8 in]\n  max_end_distance: 2 in").replace("max_along: 6", "max_along: 3").replace("cover_thicknesses: [5/16 in, 3/8 in, 1/2 in]", "cover_thicknesses: [3/8 in]").replace("step: 1/4 in", "step: 1/2 in");
     const { scenario, code } = parseScenario(small);
     const ctx = { scenario, code, costs };
     const line = (c: { key: { numbers: number[]; text: string } }) => `${c.key.numbers.join(" ")} ${c.key.text}`;

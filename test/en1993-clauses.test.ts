@@ -223,3 +223,28 @@ describe("EN 1993-1-1 6.2.3 and EN 1993-1-8 3.10.2: plates in tension", () => {
     expect(kN(ec3.Veff_1_Rd(1005, 1230, 355, 470, 1.0, 1.25))).toBeCloseTo(377.88 + 252.1, 3);
   });
 });
+
+describe("M18 bolts (EN 1993-1-8 only) and S460 steels", () => {
+  it("M18: ISO 898-1 stress area As = 192 mm²; class 8.8 through the threads Fv,Rd = 0.6 × 800 × 192/1.25 = 73.7 kN (F); hole 20 mm (EN 1090-2 Table 11, +2 mm for M16–M24)", () => {
+    expect(As(18)).toBe(192);
+    expect(kN(FvThreads("8.8", 18))).toBeCloseTo(73.728, 3);
+    expect(ec3.holeDimensions(18, "standard", undefined, 1).across_mm).toBe(20);
+  });
+  it("S460 by the product standards (from memory): S460NL (EN 10025-3) at 20 mm fy 440, fu 540; S460M (EN 10025-4) at 70 mm fy 410, fu 510; S460Q (EN 10025-6) at 60 mm fy 440, fu 550", () => {
+    expect(en10025Strength("S460NL", 20, "en10025-2")).toMatchObject({ fy_MPa: 440, fu_MPa: 540 });
+    expect(en10025Strength("S460M", 70, "en10025-2")).toMatchObject({ fy_MPa: 410, fu_MPa: 510 });
+    expect(en10025Strength("S460Q", 60, "en10025-2")).toMatchObject({ fy_MPa: 440, fu_MPa: 550 });
+    expect(en10025Strength("S460NL", 20, "en10025-2").source).toMatch(/EN 10025-3/);
+  });
+  it("S460 by EN 1993-1-1 Table 3.1 (from memory): S460N t ≤ 40 460/540, 40–80 430/540; S460M 40–80 430/530; S460QL 460/570; plain S460 the lesser of N and M", () => {
+    expect(en10025Strength("S460N", 30, "en1993-1-1")).toMatchObject({ fy_MPa: 460, fu_MPa: 540 });
+    expect(en10025Strength("S460N", 50, "en1993-1-1")).toMatchObject({ fy_MPa: 430, fu_MPa: 540 });
+    expect(en10025Strength("S460ML", 50, "en1993-1-1")).toMatchObject({ fy_MPa: 430, fu_MPa: 530 });
+    expect(en10025Strength("S460QL", 20, "en1993-1-1")).toMatchObject({ fy_MPa: 460, fu_MPa: 570 });
+    expect(en10025Strength("S460", 50, "en1993-1-1")).toMatchObject({ fy_MPa: 430, fu_MPa: 530 });
+    expect(en10025Grade("S460QL1")).toBe("S460Q");
+  });
+  it("S460 plates below 3 mm are outside the product standards", () => {
+    expect(() => en10025Strength("S460N", 2, "en10025-2")).toThrow(RangeError);
+  });
+});

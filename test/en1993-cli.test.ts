@@ -36,7 +36,7 @@ describe("splicewright check, code: en1993-1-8", () => {
   });
 
   it.each([
-    ["grade: S355           #", "grade: S460           #", /^plates\.main\.grade: unknown EN 10025-2 grade "S460"/],
+    ["grade: S355           #", "grade: S690           #", /^plates\.main\.grade: unknown EN 10025 grade "S690"/],
     ["#   gamma_m2: 1.25", "  gamma_m2: 0.95", /^factors\.gamma_m2: must be at least 1\.0/],
     ["steel_strengths: en10025-2 ", "steel_strengths: en10025-9 ", /^options\.steel_strengths: /],
   ])("bad input %s → one line, exit 2", (from, to, message) => {

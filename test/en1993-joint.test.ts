@@ -167,7 +167,7 @@ describe("single lap joints with one transverse line (3.6.1(10))", () => {
   it("washers under head and nut are required: a warning, and the clause on the check", () => {
     const { report } = run(oneLine);
     expect(report.warnings.map((w) => w.id)).toContain("single-lap-one-line");
-    expect(strength(report, "bearing:mainB:J").citation.equation).toContain("3.6.1(10)");
+    expect(strength(report, "bearing:mainB:J").citation.also).toContain("3.6.1(10), Eq. (3.2)");
   });
   it("with two transverse lines the limit does not apply", () => {
     const { report } = run(variant({ layout: { along: 2, pitch: 60 } }, oneLine));
@@ -328,7 +328,7 @@ describe("scenario settings: national-annex factors and the steel-strength conve
 
 describe("bad input: one line naming the field and the reason", () => {
   it.each([
-    [{ plates: { main: { grade: "E250" } } }, /^plates\.main\.grade: unknown EN 10025-2 grade "E250"/],
+    [{ plates: { main: { grade: "E250" } } }, /^plates\.main\.grade: unknown EN 10025 grade "E250"/],
     [{ bolts: { class: "4.6", type: "friction-grip", slip_factor: 0.4, slip_at: "ultimate" } }, /^bolts\.class: preloaded bolts must be class 8\.8 or 10\.9/],
     [{ bolts: { class: "8.8", type: "friction-grip", slip_factor: 0.6, slip_at: "ultimate" } }, /^bolts\.slip_factor: 0\.6 exceeds 0\.5/],
     [{ bolts: { type: "friction-grip", slip_factor: 0.4, slip_at: "service" } }, /^load\.service_tension: required for Category B/],

@@ -4,7 +4,7 @@
  */
 
 /** Metric bolt sizes the catalogue knows (nominal diameter, mm). */
-export const BOLT_SIZES_MM = [12, 16, 20, 22, 24, 27, 30, 36] as const;
+export const BOLT_SIZES_MM = [12, 16, 18, 20, 22, 24, 27, 30, 36] as const;
 export type BoltSize = (typeof BOLT_SIZES_MM)[number];
 
 /**
@@ -14,6 +14,7 @@ export type BoltSize = (typeof BOLT_SIZES_MM)[number];
 export const ISO_STRESS_AREA_MM2: Record<BoltSize, number> = {
   12: 84.3,
   16: 157,
+  18: 192,
   20: 245,
   22: 303,
   24: 353,
@@ -51,7 +52,7 @@ export function boltMaterial(propertyClass: PropertyClass, d_mm: number, basis: 
       "10.9": [1000, 900],
     };
     const [fub, fyb] = nominal[propertyClass];
-    return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 nominal values (EN 1993-1-8 Table 3.1)" };
+    return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 nominal values, EN 1993-1-8 Table 3.1" };
   }
   const minimum: Record<PropertyClass, [number, number]> = {
     "4.6": [400, 240],
@@ -60,7 +61,7 @@ export function boltMaterial(propertyClass: PropertyClass, d_mm: number, basis: 
     "10.9": [1040, 940],
   };
   const [fub, fyb] = minimum[propertyClass];
-  return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 Table 3 minimum values / IS 1367-3 (from memory)" };
+  return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 Table 3 minimum values, IS 1367-3; from memory" };
 }
 
 /** Nominal shank (gross) area of the bolt, π d²/4 (mm²). */

@@ -4,15 +4,15 @@
  */
 
 /** Coarse thread pitch P. ISO 261 / ISO 262 (coarse series). */
-export const THREAD_PITCH_MM: Record<number, number> = { 12: 1.75, 16: 2, 20: 2.5, 22: 2.5, 24: 3, 27: 3, 30: 3.5, 36: 4 };
+export const THREAD_PITCH_MM: Record<number, number> = { 12: 1.75, 16: 2, 18: 2.5, 20: 2.5, 22: 2.5, 24: 3, 27: 3, 30: 3.5, 36: 4 };
 
 /**
  * Hexagon bolts (bearing type): nut height m (max) of ISO 4032 style 1 nuts, washer thickness h of
  * ISO 7089 plain washers — from memory; thread length b (reference) of ISO 4014:
  * b = 2d + 6 (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 (l > 200) — from memory.
  */
-export const HEX_NUT_HEIGHT_MM: Record<number, number> = { 12: 10.8, 16: 14.8, 20: 18, 22: 19.4, 24: 21.5, 27: 23.8, 30: 25.6, 36: 31 };
-export const PLAIN_WASHER_MM: Record<number, number> = { 12: 2.5, 16: 3, 20: 3, 22: 3, 24: 4, 27: 4, 30: 4, 36: 5 };
+export const HEX_NUT_HEIGHT_MM: Record<number, number> = { 12: 10.8, 16: 14.8, 18: 15.8, 20: 18, 22: 19.4, 24: 21.5, 27: 23.8, 30: 25.6, 36: 31 };
+export const PLAIN_WASHER_MM: Record<number, number> = { 12: 2.5, 16: 3, 18: 3, 20: 3, 22: 3, 24: 4, 27: 4, 30: 4, 36: 5 };
 
 export function iso4014ThreadLength_mm(d: number, length_mm: number): number {
   if (length_mm <= 125) return 2 * d + 6;

@@ -46,7 +46,7 @@ export const IS2062_GRADES: Record<string, SteelGrade> = {
       { upTo_mm: 40, fy_MPa: 330, label: "20 ≤ t ≤ 40 mm" },
       { upTo_mm: Infinity, fy_MPa: 320, label: "t > 40 mm" },
     ],
-    source: "IS 2062, Table 2 (from memory)",
+    source: "IS 2062, Table 2; from memory",
   },
 };
 
@@ -69,7 +69,12 @@ export function is2062Strength(grade: string, t_mm: number): SteelStrength {
 export type En10025Convention = "en10025-2" | "en1993-1-1";
 export const EN10025_CONVENTIONS: readonly En10025Convention[] = ["en10025-2", "en1993-1-1"];
 
-export type En10025Grade = "S235" | "S275" | "S355";
+/**
+ * EN 10025 grades the catalogue holds: the non-alloy steels of EN 10025-2 and the S460 fine-grain and
+ * quenched steels of EN 10025-3 (N, NL), EN 10025-4 (M, ML) and EN 10025-6 (Q, QL, QL1). A plain "S460"
+ * (no delivery condition) takes the lesser of the N and M values in every band.
+ */
+export type En10025Grade = "S235" | "S275" | "S355" | "S460N" | "S460M" | "S460Q" | "S460";
 
 interface EnBand {
   /** The band holds over_mm < t ≤ upTo_mm. */
@@ -79,64 +84,66 @@ interface EnBand {
   fu_MPa: number;
 }
 
-/** Quality (impact-test) designations of each grade; they do not change fy or fu. EN 10025-2, Table 1 (from memory). */
-const EN10025_QUALITIES: Record<En10025Grade, readonly string[]> = {
-  S235: ["JR", "J0", "J2"],
-  S275: ["JR", "J0", "J2"],
-  S355: ["JR", "J0", "J2", "K2"],
+/**
+ * Designations accepted for each grade; quality (impact-test) letters do not change fy or fu.
+ * EN 10025-2, -3, -4, -6, Table 1 of each (from memory).
+ */
+const EN10025_DESIGNATIONS: Record<En10025Grade, readonly string[]> = {
+  S235: ["S235", "S235JR", "S235J0", "S235J2"],
+  S275: ["S275", "S275JR", "S275J0", "S275J2"],
+  S355: ["S355", "S355JR", "S355J0", "S355J2", "S355K2"],
+  S460N: ["S460N", "S460NL"],
+  S460M: ["S460M", "S460ML"],
+  S460Q: ["S460Q", "S460QL", "S460QL1"],
+  S460: ["S460"],
 };
 
+/** The product standard of each grade, printed with its strengths. */
+const PRODUCT_STANDARD: Record<En10025Grade, string> = {
+  S235: "EN 10025-2",
+  S275: "EN 10025-2",
+  S355: "EN 10025-2",
+  S460N: "EN 10025-3",
+  S460M: "EN 10025-4",
+  S460Q: "EN 10025-6",
+  S460: "EN 10025-3/-4 (lesser of N and M)",
+};
+
+const bands = (rows: Array<[number, number, number, number]>): EnBand[] => rows.map(([over_mm, upTo_mm, fy_MPa, fu_MPa]) => ({ over_mm, upTo_mm, fy_MPa, fu_MPa }));
+
 /**
- * Non-alloy structural steels, EN 10025-2 (the product standard): minimum yield strength ReH by nominal
- * thickness (≤ 16, 16–40, 40–63, 63–80, 80–100 mm) and the lower limit of the tensile strength Rm for
- * 3 ≤ t ≤ 100 mm. S275 and S355 up to 40 mm and their Rm: read in the published table (see ../shared
- * check values); S235 and the bands beyond 40 mm: EN 10025-2, from memory.
+ * The product standards' values: minimum yield strength ReH by nominal thickness and the lower limit of
+ * the tensile strength Rm (3 ≤ t ≤ 100 mm). S275 and S355 up to 40 mm and their Rm: read in the published
+ * table (see ../shared check values); S235, the bands beyond 40 mm and every S460 value: from memory
+ * (EN 10025-3 S460N Rm 540 throughout; EN 10025-4 S460M Rm 540/530/510/500; EN 10025-6 S460Q ReH 460 to
+ * 50 mm, 440 to 100 mm, Rm 550).
  */
 export const EN10025_2_GRADES: Record<En10025Grade, EnBand[]> = {
-  S235: [
-    { over_mm: 0, upTo_mm: 16, fy_MPa: 235, fu_MPa: 360 },
-    { over_mm: 16, upTo_mm: 40, fy_MPa: 225, fu_MPa: 360 },
-    { over_mm: 40, upTo_mm: 63, fy_MPa: 215, fu_MPa: 360 },
-    { over_mm: 63, upTo_mm: 80, fy_MPa: 215, fu_MPa: 360 },
-    { over_mm: 80, upTo_mm: 100, fy_MPa: 215, fu_MPa: 360 },
-  ],
-  S275: [
-    { over_mm: 0, upTo_mm: 16, fy_MPa: 275, fu_MPa: 410 },
-    { over_mm: 16, upTo_mm: 40, fy_MPa: 265, fu_MPa: 410 },
-    { over_mm: 40, upTo_mm: 63, fy_MPa: 255, fu_MPa: 410 },
-    { over_mm: 63, upTo_mm: 80, fy_MPa: 245, fu_MPa: 410 },
-    { over_mm: 80, upTo_mm: 100, fy_MPa: 235, fu_MPa: 410 },
-  ],
-  S355: [
-    { over_mm: 0, upTo_mm: 16, fy_MPa: 355, fu_MPa: 470 },
-    { over_mm: 16, upTo_mm: 40, fy_MPa: 345, fu_MPa: 470 },
-    { over_mm: 40, upTo_mm: 63, fy_MPa: 335, fu_MPa: 470 },
-    { over_mm: 63, upTo_mm: 80, fy_MPa: 325, fu_MPa: 470 },
-    { over_mm: 80, upTo_mm: 100, fy_MPa: 315, fu_MPa: 470 },
-  ],
+  S235: bands([[0, 16, 235, 360], [16, 40, 225, 360], [40, 63, 215, 360], [63, 80, 215, 360], [80, 100, 215, 360]]),
+  S275: bands([[0, 16, 275, 410], [16, 40, 265, 410], [40, 63, 255, 410], [63, 80, 245, 410], [80, 100, 235, 410]]),
+  S355: bands([[0, 16, 355, 470], [16, 40, 345, 470], [40, 63, 335, 470], [63, 80, 325, 470], [80, 100, 315, 470]]),
+  S460N: bands([[0, 16, 460, 540], [16, 40, 440, 540], [40, 63, 430, 540], [63, 80, 410, 540], [80, 100, 400, 540]]),
+  S460M: bands([[0, 16, 460, 540], [16, 40, 440, 540], [40, 63, 430, 530], [63, 80, 410, 510], [80, 100, 400, 500]]),
+  S460Q: bands([[0, 50, 460, 550], [50, 100, 440, 550]]),
+  S460: bands([[0, 16, 460, 540], [16, 40, 440, 540], [40, 63, 430, 530], [63, 80, 410, 510], [80, 100, 400, 500]]),
 };
 
-/** Rm of EN 10025-2 below 3 mm (the product standard tabulates thin products apart), MPa; from memory. */
-const EN10025_2_FU_BELOW_3MM: Record<En10025Grade, number> = { S235: 360, S275: 430, S355: 510 };
+/** Rm below 3 mm (the product standard tabulates thin products apart), MPa; from memory. S460 products start at 3 mm. */
+const EN10025_2_FU_BELOW_3MM: Partial<Record<En10025Grade, number>> = { S235: 360, S275: 430, S355: 510 };
 
 /**
- * The simplified nominal values of EN 1993-1-1, Table 3.1 for the EN 10025-2 grades: t ≤ 40 mm and
- * 40 < t ≤ 80 mm. S275 and S355 for t ≤ 40 mm: read in the published table (see ../shared check values);
- * S235 and the 40–80 mm band: from memory.
+ * The simplified nominal values of EN 1993-1-1, Table 3.1: t ≤ 40 mm and 40 < t ≤ 80 mm. S275 and S355
+ * for t ≤ 40 mm: read in the published table (see ../shared check values); the rest from memory
+ * (S460N/NL 460/540, 430/540; S460M/ML 460/540, 430/530; S460Q/QL/QL1 460/570, 440/550).
  */
 export const EN1993_1_1_TABLE_3_1: Record<En10025Grade, EnBand[]> = {
-  S235: [
-    { over_mm: 0, upTo_mm: 40, fy_MPa: 235, fu_MPa: 360 },
-    { over_mm: 40, upTo_mm: 80, fy_MPa: 215, fu_MPa: 360 },
-  ],
-  S275: [
-    { over_mm: 0, upTo_mm: 40, fy_MPa: 275, fu_MPa: 430 },
-    { over_mm: 40, upTo_mm: 80, fy_MPa: 255, fu_MPa: 410 },
-  ],
-  S355: [
-    { over_mm: 0, upTo_mm: 40, fy_MPa: 355, fu_MPa: 510 },
-    { over_mm: 40, upTo_mm: 80, fy_MPa: 335, fu_MPa: 470 },
-  ],
+  S235: bands([[0, 40, 235, 360], [40, 80, 215, 360]]),
+  S275: bands([[0, 40, 275, 430], [40, 80, 255, 410]]),
+  S355: bands([[0, 40, 355, 510], [40, 80, 335, 470]]),
+  S460N: bands([[0, 40, 460, 540], [40, 80, 430, 540]]),
+  S460M: bands([[0, 40, 460, 540], [40, 80, 430, 530]]),
+  S460Q: bands([[0, 40, 460, 570], [40, 80, 440, 550]]),
+  S460: bands([[0, 40, 460, 540], [40, 80, 430, 530]]),
 };
 
 /** Thickness range each convention covers, mm (Table 3.1 stops at 80 mm). */
@@ -145,37 +152,38 @@ export const EN10025_THICKNESS_RANGE: Record<En10025Convention, { min_mm: number
   "en1993-1-1": { min_mm: 0, max_mm: 80 },
 };
 
-/** The grade of a name such as "S355" or "S355J2" (quality letters allowed, case-insensitive); undefined if unknown. */
+const DESIGNATION_TO_GRADE = new Map<string, En10025Grade>(
+  (Object.entries(EN10025_DESIGNATIONS) as Array<[En10025Grade, readonly string[]]>).flatMap(([g, names]) => names.map((n): [string, En10025Grade] => [n, g])),
+);
+
+/** The grade of a designation such as "S355", "S355J2" or "S460NL" (case-insensitive); undefined if unknown. */
 export function en10025Grade(name: string): En10025Grade | undefined {
-  const m = /^(S235|S275|S355)(JR|J0|J2|K2)?$/.exec(name.trim().toUpperCase());
-  if (!m) return undefined;
-  const grade = m[1] as En10025Grade;
-  if (m[2] && !EN10025_QUALITIES[grade].includes(m[2])) return undefined;
-  return grade;
+  return DESIGNATION_TO_GRADE.get(name.trim().toUpperCase());
 }
 
 /** Every designation `en10025Grade` accepts, for messages. */
-export const EN10025_NAMES: readonly string[] = (Object.keys(EN10025_QUALITIES) as En10025Grade[]).flatMap((g) => [g, ...EN10025_QUALITIES[g].map((q) => g + q)]);
+export const EN10025_NAMES: readonly string[] = [...DESIGNATION_TO_GRADE.keys()];
 
 /**
- * fy and fu of an EN 10025-2 plate of thickness t under a convention: the product standard's values by
+ * fy and fu of an EN 10025 plate of thickness t under a convention: the product standard's values by
  * thickness, or EN 1993-1-1 Table 3.1.
  * @throws RangeError for an unknown grade or a thickness outside the convention's range.
  */
 export function en10025Strength(name: string, t_mm: number, convention: En10025Convention): SteelStrength {
   const grade = en10025Grade(name);
-  if (!grade) throw new RangeError(`unknown EN 10025-2 grade "${name}"`);
+  if (!grade) throw new RangeError(`unknown EN 10025 grade "${name}"`);
   const range = EN10025_THICKNESS_RANGE[convention];
-  const bands = convention === "en10025-2" ? EN10025_2_GRADES[grade] : EN1993_1_1_TABLE_3_1[grade];
-  const band = t_mm > range.min_mm ? bands.find((b) => t_mm > b.over_mm && t_mm <= b.upTo_mm) : undefined;
-  if (!band) throw new RangeError(`t = ${t_mm} mm is outside ${range.min_mm}–${range.max_mm} mm for ${grade} under ${convention}`);
+  const table = convention === "en10025-2" ? EN10025_2_GRADES[grade] : EN1993_1_1_TABLE_3_1[grade];
   const thin = convention === "en10025-2" && t_mm < 3;
+  const below3 = EN10025_2_FU_BELOW_3MM[grade];
+  const band = t_mm > range.min_mm && !(thin && below3 === undefined) ? table.find((b) => t_mm > b.over_mm && t_mm <= b.upTo_mm) : undefined;
+  if (!band) throw new RangeError(`t = ${t_mm} mm is outside ${thin ? "3" : range.min_mm}–${range.max_mm} mm for ${grade} under ${convention}`);
   return {
     grade: name.trim().toUpperCase(),
     fy_MPa: band.fy_MPa,
-    fu_MPa: thin ? EN10025_2_FU_BELOW_3MM[grade] : band.fu_MPa,
+    fu_MPa: thin && below3 !== undefined ? below3 : band.fu_MPa,
     band: thin ? "t < 3 mm" : band.over_mm === 0 ? `t ≤ ${band.upTo_mm} mm` : `${band.over_mm} < t ≤ ${band.upTo_mm} mm`,
-    source: convention === "en10025-2" ? "EN 10025-2, ReH and Rm by thickness" : "EN 1993-1-1, Table 3.1",
+    source: convention === "en10025-2" ? `${PRODUCT_STANDARD[grade]}, ReH and Rm by thickness` : "EN 1993-1-1, Table 3.1",
   };
 }
 
@@ -186,8 +194,8 @@ export function en10025Strength(name: string, t_mm: number, convention: En10025C
  * values: A36 Fy 36 ksi, Fu 58 ksi; A572 Gr 50 Fy 50 ksi, Fu 65 ksi.
  */
 export const ASTM_PLATE_GRADES: Record<string, { Fy_ksi: number; Fu_ksi: number; maxThickness_in: number; source: string }> = {
-  A36: { Fy_ksi: 36, Fu_ksi: 58, maxThickness_in: 8, source: "ASTM A36 (AISC Manual Table 2-5)" },
-  "A572-50": { Fy_ksi: 50, Fu_ksi: 65, maxThickness_in: 4, source: "ASTM A572 Grade 50 (AISC Manual Table 2-5)" },
+  A36: { Fy_ksi: 36, Fu_ksi: 58, maxThickness_in: 8, source: "ASTM A36, AISC Manual Table 2-5" },
+  "A572-50": { Fy_ksi: 50, Fu_ksi: 65, maxThickness_in: 4, source: "ASTM A572 Grade 50, AISC Manual Table 2-5" },
 };
 
 /** Accepted spellings of the ASTM plate grades ("A572 Gr 50", "A572-50", "a36"). */

@@ -100,6 +100,8 @@ export interface DesignCode extends GeometryCode {
   title: string;
   /** Steel grades the code's material tables hold. */
   grades: readonly string[];
+  /** Bolt diameters the code's tables cover, mm (metric sizes, and inch sizes × 25.4 where it takes them). */
+  boltSizes_mm: readonly number[];
   /** Inputs this code cannot check (grade unknown to it, a bolt class not allowed for friction grip...). */
   scopeErrors(scenario: Scenario): ScopeError[];
   /** Run every check on the joint's geometry. */

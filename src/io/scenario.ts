@@ -55,6 +55,16 @@ function plateSpec(p: { width: number; thickness: number; grade: string; edges: 
   return { width_mm: p.width, thickness_mm: p.thickness, grade: p.grade, edges: p.edges as EdgePreparation };
 }
 
+/** Bolt sizes the scenario names (its bolts and its search) must be ones the code's tables cover. */
+function sizeScope(scenario: Scenario, code: DesignCode): void {
+  const covered = (d: number) => code.boltSizes_mm.some((c) => Math.abs(c - d) < 1e-6);
+  const list = () => code.boltSizes_mm.map((d) => (inchBoltSize(d) !== undefined ? inchSizeText(inchBoltSize(d)!) : `M${d}`)).join(", ");
+  if (scenario.bolts && !covered(scenario.bolts.size_mm)) throw new InputError("bolts.size", `${sizeText(scenario.bolts.size_mm)} is not covered under ${code.id} (sizes: ${list()})`);
+  scenario.search?.sizes_mm?.forEach((d, i) => {
+    if (!covered(d)) throw new InputError(`search.sizes[${i}]`, `${sizeText(d)} is not covered under ${code.id} (sizes: ${list()})`);
+  });
+}
+
 /** A catalogue bolt size: metric (M12–M36) or inch (½–1⅛ in), mm. */
 function knownSize(d_mm: number): boolean {
   return isBoltSize(d_mm) || inchBoltSize(d_mm) !== undefined;
@@ -242,6 +252,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     if (s.max_along !== undefined) spec.maxAlong = s.max_along;
     if (s.min_bolts !== undefined) spec.minBolts = s.min_bolts;
     if (s.max_splice_length !== undefined) spec.maxSpliceLength_mm = s.max_splice_length;
+    if (s.max_end_distance !== undefined) spec.maxEndDistance_mm = s.max_end_distance;
     if (s.max_across !== undefined) spec.maxAcross = s.max_across;
     if (s.gauge !== undefined) spec.fixedGauge_mm = s.gauge;
     if (s.cover_thicknesses !== undefined) {
@@ -250,6 +261,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     }
     scenario.search = spec;
   }
+  sizeScope(scenario, code);
   const scope = code.scopeErrors(scenario)[0];
   if (scope) throw new InputError(scope.path, scope.message);
   return { scenario, code: code.settings ? code.settings.bind(scenario) : code };

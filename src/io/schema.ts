@@ -139,6 +139,7 @@ const search = z.strictObject({
   classes: z.array(propertyClass).min(1).optional(),
   step: length(1000).optional(),
   max_splice_length: length().optional(),
+  max_end_distance: length().optional(),
   max_across: count(LIMITS.boltsAcross).optional(),
   gauge: length().optional(),
   cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).optional(),

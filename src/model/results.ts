@@ -6,8 +6,12 @@
 export interface Citation {
   standard: string;
   clause: string;
+  /** "Table 3.4", as the standard names it. */
   table?: string;
+  /** The equation number as the standard prints it: "(6.6)" (EN), "J3-1" (AISC). */
   equation?: string;
+  /** Other clauses the check applies alongside ("3.8, Eq. (3.5)"). */
+  also?: string[];
 }
 
 export type CheckKind =

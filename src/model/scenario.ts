@@ -113,6 +113,8 @@ export interface SearchSpec {
   classes?: PropertyClass[];
   step_mm?: number;
   maxSpliceLength_mm?: number;
+  /** Largest end distance (both ends) the detailer accepts: a declared narrowing below the code's maximum. */
+  maxEndDistance_mm?: number;
   maxAcross?: number;
   fixedGauge_mm?: number;
   coverThicknesses_mm?: number[];

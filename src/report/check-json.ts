@@ -2,7 +2,7 @@
  * The check report as a plain JSON-ready object (units in field names: kN, mm). Pure.
  */
 import type { Joint } from "../model/joint.js";
-import type { CheckReport } from "../model/results.js";
+import type { CheckReport, Citation } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
 import { toUnit } from "../units/units.js";
@@ -12,10 +12,17 @@ export const CAUTION =
 
 const round = (v: number, digits = 3): number | null => (Number.isFinite(v) ? Number(v.toFixed(digits)) : null);
 
-export function citationText(c: { standard: string; clause: string; table?: string; equation?: string }): string {
-  const extra = [c.table, c.equation].filter(Boolean).join(", ");
+/**
+ * A citation as one line: "EN 1993-1-1 cl. 6.2.3(2)a, Eq. (6.6)", "AISC 360-16 Sect. J3.6, Table J3.2,
+ * Eq. J3-1; with J5.2". AISC 360 numbers its provisions by section; the other codes by clause.
+ */
+export function citationText(c: Citation): string {
   if (c.standard === "general") return c.clause;
-  return `${c.standard} cl. ${c.clause}${extra ? ` (${extra})` : ""}`;
+  const word = c.standard.startsWith("AISC") ? "Sect." : "cl.";
+  const parts = [`${c.standard} ${word} ${c.clause}`];
+  if (c.table) parts.push(c.table);
+  if (c.equation) parts.push(`Eq. ${c.equation}`);
+  return parts.join(", ") + (c.also && c.also.length > 0 ? `; with ${c.also.join("; ")}` : "");
 }
 
 /**

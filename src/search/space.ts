@@ -32,6 +32,7 @@ export interface SearchSpace {
   minBolts: number;
   maxAcross?: number;
   maxSpliceLength_mm?: number;
+  maxEndDistance_mm?: number;
   fixedGauge_mm?: number;
   /** Cover plate thicknesses tried (butt splices); the scenario's own cover thickness if none listed. */
   coverThicknesses_mm: number[];
@@ -114,7 +115,7 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
   const priced = (d: number, c: PropertyClass) => boltPrice(costs, d, c) !== undefined;
   // Default sizes: the priced sizes of the scenario's own unit system (inch bolts for `units: us`).
   const catalogueSizes = [...new Set(Object.keys(costs.boltAssembly).map(sizeOfKey).filter((d): d is number => d !== undefined))]
-    .filter((d) => (inchBoltSize(d) !== undefined) === (scenario.units === "us"))
+    .filter((d) => (inchBoltSize(d) !== undefined) === (scenario.units === "us") && code.boltSizes_mm.some((c) => Math.abs(c - d) < 1e-6))
     .sort((a, b) => a - b);
   const sizes = s.sizes_mm ?? catalogueSizes;
   const classes = (s.classes ?? (["4.6", "5.6", "8.8", "10.9"] as PropertyClass[])).filter((c) => allowed.includes(c));
@@ -130,6 +131,7 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
   };
   if (s.maxAcross !== undefined) space.maxAcross = s.maxAcross;
   if (s.maxSpliceLength_mm !== undefined) space.maxSpliceLength_mm = s.maxSpliceLength_mm;
+  if (s.maxEndDistance_mm !== undefined) space.maxEndDistance_mm = s.maxEndDistance_mm;
   if (s.fixedGauge_mm !== undefined) space.fixedGauge_mm = s.fixedGauge_mm;
   return space;
 }
@@ -176,8 +178,9 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
         for (const pattern of space.patterns) {
           const limits = code.searchLimits(base, d, pattern);
           const pitches = rangeTo(limits.pitchMin_mm, limits.pitchMax_mm, limits.tops.pitch, space.step_mm);
-          const ends = rangeTo(limits.endMin_mm, limits.endMax_mm, limits.tops.end, space.step_mm);
-          const endsAtButt: Array<number | undefined> = butt ? rangeTo(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), limits.tops.endAtButt, space.step_mm) : [undefined];
+          const userMax = space.maxEndDistance_mm ?? Infinity;
+          const ends = rangeTo(limits.endMin_mm, limits.endMax_mm, limits.tops.end, space.step_mm).filter((e) => e <= userMax + 1e-9);
+          const endsAtButt: Array<number | undefined> = butt ? rangeTo(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), limits.tops.endAtButt, space.step_mm).filter((e) => e <= userMax + 1e-9) : [undefined];
           const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
           const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
           const push = (counts: number[] | null, lines: number, across: number, G: number) => {
@@ -243,6 +246,7 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
   ];
   if (scenario.splice.type !== "lap") lines.push(`cover plate thickness: ${space.coverThicknesses_mm.join(", ")} mm`);
   if (space.maxSpliceLength_mm !== undefined) lines.push(`splice length at most ${space.maxSpliceLength_mm} mm`);
+  if (space.maxEndDistance_mm !== undefined) lines.push(`end distances at most ${space.maxEndDistance_mm} mm (search.max_end_distance: a declared narrowing)`);
   // Ranges per pattern and size, from the code's limits (one line per pattern).
   const byPattern = new Map<string, { statement: string; ranges: string[]; seen: Set<number> }>();
   for (const f of fams) {

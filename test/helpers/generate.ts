@@ -47,6 +47,8 @@ export function smallSearchScenario(seed: number): Generated {
       classes: friction ? ["8.8", "10.9"] : pick(r, [["4.6", "8.8"], ["5.6", "10.9"], ["4.6", "5.6"], ["8.8", "10.9"]]),
       step: 10,
       max_along: pick(r, [2, 3]),
+      // A declared narrowing that keeps the brute-force oracles small (the code's own end range is tested in declared-space.test.ts).
+      max_end_distance: 60,
       ...(type !== "lap" ? { cover_thicknesses: pick(r, [[6], [8], [6, 10]]) } : {}),
     },
     options: { net_section_load: pick(r, ["full", "transferred"]) },
@@ -81,6 +83,8 @@ export function ec3Scenario(seed: number): { yaml: string; description: string }
       classes: category !== "A" ? ["8.8", "10.9"] : pick(r, [["4.6", "8.8"], ["5.6", "10.9"], ["4.6", "5.6"], ["8.8", "10.9"]]),
       step: 10,
       max_along: pick(r, [2, 3]),
+      // A declared narrowing that keeps the brute-force oracles small (the code's own end range is tested in declared-space.test.ts).
+      max_end_distance: 60,
       ...(type !== "lap" ? { cover_thicknesses: pick(r, [[6], [8], [6, 10]]) } : {}),
     },
     options: {

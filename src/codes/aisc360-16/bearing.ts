@@ -13,8 +13,8 @@ import { PHI } from "./factors.js";
  * AISC 360-16 J3.10(a).
  */
 export function bearingCoefficients(deformationConsidered: boolean, hole: HoleType, slot: SlotDirection | undefined): { cb: number; ct: number; equation: string } {
-  if (hole === "long-slot" && slot === "across") return { cb: 2.0, ct: 1.0, equation: "Eq. J3-6e, J3-6f" };
-  return deformationConsidered ? { cb: 2.4, ct: 1.2, equation: "Eq. J3-6a, J3-6c" } : { cb: 3.0, ct: 1.5, equation: "Eq. J3-6b, J3-6d" };
+  if (hole === "long-slot" && slot === "across") return { cb: 2.0, ct: 1.0, equation: "J3-6e, J3-6f" };
+  return deformationConsidered ? { cb: 2.4, ct: 1.2, equation: "J3-6a, J3-6c" } : { cb: 3.0, ct: 1.5, equation: "J3-6b, J3-6d" };
 }
 
 /** Design bearing strength of one bolt on one plate, φ·cb·d·t·Fu (N). AISC 360-16 J3.10(a); φ = 0.75. */

@@ -3,7 +3,8 @@
  * (LRFD), as a design-code module. Inch bolts (Table J3.3 etc.) and metric bolts (J3.3M etc.); ASTM
  * plates A36 and A572 Grade 50; ASTM F3125 A325 / A490 and A307 bolts.
  */
-import { inchBoltSize } from "../../catalogue/bolts.js";
+import { INCH_BOLT_SIZES_IN, inchBoltSize } from "../../catalogue/bolts.js";
+import { MM_PER_IN } from "./factors.js";
 import { astmPlateGrade } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult } from "../../model/results.js";
@@ -23,6 +24,7 @@ import { centroidRule, edgeRules, fillerRule, maxSpacingRule, minSpacingRule, pr
 
 export const AISC360_ID = "aisc360-16";
 
+/** Metric sizes of AISC 360-16 Tables J3.3M and J3.4M as implemented. */
 const METRIC_SIZES = [16, 20, 22, 24, 27, 30, 36];
 
 /** Inputs AISC 360-16 (as implemented here) cannot check, each with its scenario path. */
@@ -34,9 +36,6 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
   const bolts = scenario.bolts;
   if (bolts) {
     const d = bolts.size_mm;
-    if (inchBoltSize(d) === undefined && !METRIC_SIZES.includes(d)) {
-      errors.push({ path: "bolts.size", message: `M${d} is outside AISC 360-16 Tables J3.3M/J3.4M as implemented (M16–M36, or ½–1⅛ in bolts)` });
-    }
     const grade = astmGradeOf(bolts);
     if (!grade) errors.push({ path: "bolts.class", message: `class ${bolts.propertyClass} has no ASTM grade under AISC 360-16 (use A325, A490 or A307; ISO 4.6, 8.8, 10.9 are read as A307, A325, A490)` });
     if (bolts.hole !== "standard") errors.push({ path: "bolts.hole", message: `${bolts.hole} holes: the Table J3.5 edge-distance increments are not implemented for AISC 360-16; use standard holes` });
@@ -79,7 +78,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
     `LRFD; ${bolt.name}, ${bolt.group === "A307" ? "A307" : bolt.threadsIncluded ? "threads included in the shear planes (N)" : "threads excluded from the shear planes (X)"}; Ab = π d²/4 (J3.6)`,
     ...(scenario.bolts.astmGrade === undefined ? [`bolt class ${scenario.bolts.propertyClass} read as its ASTM grade of the same strength level (4.6 → A307, 8.8 → A325, 10.9 → A490)`] : []),
     `bearing and tearout per bolt with the clear distance lc; group strength Σ min(shear, bearing, tearout) (J3.6, J3.10); deformation at service ${(scenario.options.bearingDeformation ?? "considered") === "considered" ? "a design consideration (2.4 d t Fu, 1.2 lc t Fu)" : "not a design consideration (3.0 d t Fu, 1.5 lc t Fu)"}`,
-    "main plates as tension members (D2, U = 1); cover plates as connecting elements (J4.1, An ≤ 0.85 Ag); hole widths + 1/16 in in net areas (B4.3b)",
+    `main plates as tension members (D2, U = 1); cover plates as connecting elements (J4.1, An ≤ 0.85 Ag); hole widths + ${bolt.inch !== undefined ? "1/16 in" : "2 mm"} in net areas (B4.3b)`,
     scenario.options.netSectionLoad === "transferred"
       ? "net section: load already transferred — each path carries only the load its plate has not yet passed to bolts ahead of it (a scenario switch)"
       : "net section: the whole plate force on every path",
@@ -87,7 +86,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
     blockShearConvention(scenario.options.blockShearLoad, "block shear (J4.3)"),
   ];
   if (slipCritical) conventions.push("slip-critical: slip checked at the factored load (LRFD), and bolt shear, bearing and tearout also checked (J3.8)");
-  if (joint.groups.some((g) => g.packing_mm > 0)) conventions.push(`fillers ${scenario.options.fillersDeveloped ? "developed (their extension and bolts are not checked here)" : "not developed: shear reduced over 1/4 in, over 3/4 in not allowed (J5.2)"}`);
+  if (joint.groups.some((g) => g.packing_mm > 0)) conventions.push(`fillers ${scenario.options.fillersDeveloped ? "developed (their extension and bolts are not checked here)" : "not developed: shear × (1 − 0.4(t − 0.25)) over 1/4 in (J5.2(a)); over 3/4 in refused — the older text of J5.2, kept because it refuses more than 360-16 as recalled (from memory)"}`);
   // IS 800 and AISC share the eccentric single-shear warning; the long-joint texts there name IS factors, so keep only that one.
   const warnings = factorWarnings(joint, []);
   for (const gs of shears) {
@@ -123,6 +122,7 @@ function make(u: UnitText): DesignCode {
     id: AISC360_ID,
     title: "ANSI/AISC 360-16 Specification for Structural Steel Buildings — LRFD",
     grades: GRADES,
+    boltSizes_mm: [...METRIC_SIZES, ...INCH_BOLT_SIZES_IN.map((d) => d * MM_PER_IN)],
     holeDimensions,
     plateStrength,
     scopeErrors,

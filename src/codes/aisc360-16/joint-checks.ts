@@ -103,7 +103,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gs: Gr
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, gs.group),
-    citation: cl("J3.6", { table: "Table J3.2", equation: "Eq. J3-1" }),
+    citation: cl("J3.6", { table: "Table J3.2", equation: "J3-1" }),
     formula: "T ≤ n·ns·φRn;  φRn = φ·Fnv·Ab·(long joint)·(filler)·(A307 grip), φ = 0.75, Ab = π d²/4",
     substituted: () =>
       `${bolt.name}, threads ${bolt.threadsIncluded ? "included (N)" : "excluded (X)"}: Fnv = ${u.stress(bolt.Fnv_MPa)}, Ab = ${u.area(bolt.Ab_mm2)};  ` +
@@ -172,7 +172,11 @@ export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, pla
     demand_N: scenario.load.factoredTension_N * plate.forceShare,
     resistance_N: total,
     loadRatio: plate.forceShare,
-    notes: () => [considered ? "deformation at the bolt hole at service load is a design consideration (J3.10(a)(1))" : "deformation at the bolt hole at service load is not a design consideration (J3.10(a)(2))"],
+    notes: () => [
+      considered
+        ? "deformation at the bolt hole at service load is a design consideration: bearing J3.10(a)(1)(i), tearout J3.10(a)(2)(i)"
+        : "deformation at the bolt hole at service load is not a design consideration: bearing J3.10(a)(1)(ii), tearout J3.10(a)(2)(ii)",
+    ],
   });
 }
 
@@ -198,7 +202,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gs: GroupSh
     kind: "slip",
     title: "Slip resistance (slip-critical)",
     component: groupLabel(joint, gs.group),
-    citation: cl("J3.8", { table: "Table J3.1", equation: "Eq. J3-4" }),
+    citation: cl("J3.8", { table: bolt.inch !== undefined ? "Table J3.1" : "Table J3.1M", equation: "J3-4" }),
     formula: "T ≤ n·φRn;  φRn = φ·μ·Du·hf·Tb·ns, Du = 1.13",
     substituted: () =>
       `Class ${mu >= 0.5 ? "B" : "A"} μ = ${f(mu, 2)}, Tb = ${u.force(Tb)} (${group}), hf = ${f(h, 2)} (${fillers} filler${fillers === 1 ? "" : "s"}), ns = ${ns}, φ = ${f(phi, 2)};  ` +
@@ -229,7 +233,7 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
     kind: "gross-yield",
     title: "Tensile yielding (gross section)",
     component: plate.label,
-    citation: cover ? cl("J4.1(a)", { equation: "Eq. J4-1" }) : cl("D2(a)", { equation: "Eq. D2-1" }),
+    citation: cover ? cl("J4.1(a)", { equation: "J4-1" }) : cl("D2(a)", { equation: "D2-1" }),
     formula: "F ≤ φ·Fy·Ag, φ = 0.90",
     substituted: () => `φPn = 0.90 × ${u.stress(plate.fy_MPa)} × ${u.len(b)} × ${u.len(t)} = ${u.force(R)}` + (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T (covers share by area)` : ""),
     limitState: "ULS",
@@ -253,6 +257,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
   const Ag = b * t;
+  const allowance = inchBoltSize(joint.boltDiameter_mm) !== undefined ? "1/16 in" : "2 mm";
   const cover = isSplicePlate(plate);
   const Ae = cover ? spliceEffectiveArea(An, Ag) : An;
   const R = phiPnRupture(Ae, plate.fu_MPa);
@@ -263,10 +268,10 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "net-section",
     title: "Tensile rupture (net section)",
     component: plate.label,
-    citation: cover ? cl("J4.1(b)", { equation: "Eq. J4-2" }) : cl("D2(b)", { equation: "Eq. D2-2; B4.3b; D3" }),
+    citation: cover ? cl("J4.1(b)", { equation: "J4-2", also: ["B4.3b for An"] }) : cl("D2(b)", { equation: "D2-2", also: ["B4.3b for An", "D3, Table D3.1 case 1 (U = 1)"] }),
     formula: cover
-      ? "F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + 1/16 in) + Σ s²/4g)·t, φ = 0.75"
-      : "F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + 1/16 in) + Σ s²/4g)·t, φ = 0.75",
+      ? `F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + ${allowance}) + Σ s²/4g)·t, φ = 0.75`
+      : `F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + ${allowance}) + Σ s²/4g)·t, φ = 0.75`,
     substituted: () =>
       `${transferred ? "governing" : "least"} path ${pathText}: An = (${u.n(b)} − ${u.n(path.holeDeduction_mm)} + ${u.n(path.staggerAddition_mm)}) × ${u.n(t)} = ${u.area(An)}` +
       (cover ? `;  Ae = min(An, 0.85 × ${u.area(Ag)}) = ${u.area(Ae)}` : `;  Ae = 1.0 × An = ${u.area(Ae)}`) +
@@ -306,7 +311,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "block-shear",
     title: "Block shear",
     component: `${plate.label}${sideText}`,
-    citation: cl("J4.3", { equation: "Eq. J4-5" }),
+    citation: cl("J4.3", { equation: "J4-5" }),
     formula: `${load === "full" ? "F" : "F·k/n"} ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1`,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Agv = ${u.area(s.shearGross_mm * t)}, Anv = ${u.area(s.shearNet_mm * t)}, Ant = ${u.area(s.tensionNet_mm * t)};  ` +

@@ -3,7 +3,7 @@
  */
 import type { HoleType, SlotDirection } from "../../model/scenario.js";
 
-/** Mean slip coefficient μ: Class A 0.30, Class B 0.50. AISC 360-16 J3.8(a), (b). */
+/** Mean slip coefficient μ: Class A 0.30, Class B 0.50. AISC 360-16 J3.8 (definition of μ). */
 export const SLIP_CLASSES = { A: 0.3, B: 0.5 } as const;
 
 /** Ratio of mean installed to specified minimum pretension, Du = 1.13. AISC 360-16 J3.8. */

@@ -103,10 +103,14 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
       }
     }
   }
-  const formula = corrosion ? "s ≤ min(14 t, 7 in / 180 mm) (weathering steel, corrosion)" : "s ≤ min(24 t, 12 in / 305 mm)";
+  const inch = isInch(joint);
+  const cap = corrosion ? (inch ? "7 in" : "180 mm") : inch ? "12 in" : "305 mm";
+  const formula = `s ≤ min(${corrosion ? "14" : "24"} t, ${cap})${corrosion ? " (unpainted weathering steel exposed to corrosion)" : ""}`;
+  const item = corrosion ? "J3.5(b)" : "J3.5(a)";
   return [
-    ...worstRule("max-pitch", "max-pitch", "Maximum spacing along the force", cl("J3.5"), formula, "max", along),
-    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("J3.5"), formula, "max", across),
+    ...worstRule("max-pitch", "max-pitch", "Maximum spacing along the force", cl(item), formula, "max", along),
+    // J3.5 limits the longitudinal spacing; its limit is applied across the force too (the reading that refuses more).
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force (J3.5's longitudinal limit, also applied across)", cl(item), formula, "max", across),
   ];
 }
 
@@ -129,7 +133,7 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     for (const h of holes) {
       const e = half - Math.abs(h.y_mm);
       minEdge = keepWorst(minEdge, { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id}: ${u.len(e)} vs ${u.len(minLimit)}` }, "min");
-      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ 6 in → ${u.len(maxLimit)}` }, "max");
+      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${isInch(joint) ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` }, "max");
     }
     for (const c of plate.connections) {
       const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, e: c.towardEnd * (c.endX_mm - h.x_mm) }));
@@ -140,14 +144,21 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
       maxEdge = keepWorst(maxEdge, { value: nearest.e, limit: maxLimit, where: plate.label, detail: () => `hole ${nearest.h.id} to the plate end: ${u.len(nearest.e)} vs ${u.len(maxLimit)}` }, "max");
     }
   }
+  const table = isInch(joint) ? "Table J3.4" : "Table J3.4M";
   return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("J3.4", { table: "Table J3.4" }), "e ≥ Table J3.4 value", "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("J3.4", { table: "Table J3.4" }), "e ≥ Table J3.4 value", "min", minEdge),
-    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("J3.5"), "e ≤ min(12 t, 6 in / 150 mm)", "max", maxEdge),
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("J3.4", { table }), `e ≥ ${table} value`, "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("J3.4", { table }), `e ≥ ${table} value`, "min", minEdge),
+    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("J3.5"), `e ≤ min(12 t, ${isInch(joint) ? "6 in" : "150 mm"})`, "max", maxEdge),
   ];
 }
 
-/** Fillers over ¾ in (19 mm) must be developed. AISC 360-16 J5.2(b). */
+/**
+ * Undeveloped fillers not over ¾ in (19 mm). The project's reading of J5.2 (AISC 360-16): fillers over
+ * ¼ in reduce the bolt shear by 1 − 0.4(t − 0.25) (J5.2(a)), here with t capped at ¾ in and thicker
+ * fillers refused unless developed (J5.2(b), extended and secured). That follows the older wording of
+ * the provision; as recalled, 360-16 floors the factor at 0.85 and sets no ¾ in limit (from memory), so
+ * this rule refuses more than 360-16 may.
+ */
 export function fillerRule(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
   if (scenario.options.fillersDeveloped) return [];
   const u = unitText(scenario);
@@ -157,10 +168,10 @@ export function fillerRule(joint: Joint, scenario: CheckableScenario): RuleCheck
     if (g.packing_mm <= 0) continue;
     worst = keepWorst(worst, { value: g.packing_mm, limit, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `filler ${u.len(g.packing_mm)} vs ${u.len(limit)} (undeveloped)` }, "max");
   }
-  return worstRule("filler-thickness", "filler-thickness", "Undeveloped filler thickness", cl("J5.2(b)"), "t filler ≤ 3/4 in unless developed", "max", worst);
+  return worstRule("filler-thickness", "filler-thickness", "Undeveloped filler thickness (the project's limit)", cl("J5.2", { also: ["J5.2(b) for developed fillers"] }), `t filler ≤ ${isInch(joint) ? "3/4 in" : "19 mm"} unless developed (the older text of J5.2; refuses more than 360-16 as recalled)`, "max", worst);
 }
 
 /** The bolt group's centroid on the plate axis (every check assumes a concentric group). */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by every check of D2, J3 and J4" });
+  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by the AISC 360-16 checks of D2, J3 and J4" });
 }

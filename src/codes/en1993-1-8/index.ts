@@ -4,7 +4,7 @@
  * convention, M12/M14 clearance, category), because some DesignCode methods see only a plate or a bolt
  * size; `EN1993_1_8` is bound to the recommended values and `settings.bind(scenario)` gives the others.
  */
-import { PROPERTY_CLASSES } from "../../catalogue/bolts.js";
+import { BOLT_SIZES_MM, PROPERTY_CLASSES } from "../../catalogue/bolts.js";
 import { en10025Grade, EN10025_NAMES, EN10025_THICKNESS_RANGE } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult, Warning } from "../../model/results.js";
@@ -48,7 +48,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
     ...scenario.plates.covers.map((c, i): [string, PlateSpec] => [i === 0 ? "plates.cover" : "plates.cover_b", c]),
   ];
   for (const [path, spec] of plates) {
-    if (!en10025Grade(spec.grade)) errors.push({ path: `${path}.grade`, message: `unknown EN 10025-2 grade "${spec.grade}" (known: ${EN10025_NAMES.join(", ")})` });
+    if (!en10025Grade(spec.grade)) errors.push({ path: `${path}.grade`, message: `unknown EN 10025 grade "${spec.grade}" (known: ${EN10025_NAMES.join(", ")})` });
     else if (spec.thickness_mm > range.max_mm) errors.push({ path: `${path}.thickness`, message: tooThick(spec.thickness_mm) });
   }
   (scenario.search?.coverThicknesses_mm ?? []).forEach((t, i) => {
@@ -103,7 +103,7 @@ function conventionsOf(scenario: CheckableScenario, s: Ec3Settings, smallHoles: 
   const category = { A: "Category A, bearing type: bolt shear and bearing at the factored load", B: "Category B, slip-resistant at service: slip (γM3,ser) at the service tension; bolt shear and bearing at the factored load", C: "Category C, slip-resistant at the factored load: slip (γM3) and bearing at the factored load; net section Anet·fy/γM0 (EN 1993-1-1 6.2.3(4)); no bolt-shear check (Table 3.2)" }[s.category];
   return [
     factorsText(s.factors),
-    `plate fy, fu: ${s.steel === "en10025-2" ? "EN 10025-2 (the product standard) by thickness" : "EN 1993-1-1 Table 3.1"} (EN 1993-1-1 3.2.1; options.steel_strengths)`,
+    `plate fy, fu: ${s.steel === "en10025-2" ? "the product standard by thickness (EN 10025-2; S460 EN 10025-3, -4, -6)" : "EN 1993-1-1 Table 3.1"} (EN 1993-1-1 3.2.1; options.steel_strengths)`,
     "bolts: nominal fub of EN 1993-1-8 Table 3.1; A = As (ISO 898-1 stress area) where the shear planes pass the threads, π d²/4 where they pass the shank",
     `holes: clearances of EN 1090-2 Table 11${smallHoles ? "; M12/M14 in 2 mm clearance holes (3.6.1(5): Fv,Rd × 0.85 for 8.8 and 10.9; allowed only where bearing governs, checked bolt by bolt: Fb,Rd ≤ Fv,Rd)" : ""}`,
     category,
@@ -201,6 +201,7 @@ function boundCode(bound: Ec3Settings): DesignCode {
     id: EN1993_ID,
     title: "EN 1993-1-8:2005 Design of joints, with EN 1993-1-1:2005 (Eurocode 3)",
     grades: EN10025_NAMES,
+    boltSizes_mm: BOLT_SIZES_MM,
     holeDimensions: (d, hole, slot) => holeDimensions(d, hole, slot, bound.smallBoltClearance_mm),
     plateStrength: strengthOf,
     scopeErrors,

@@ -23,6 +23,12 @@ import { Npl_Rd, Nnet_Rd, Nu_Rd, Veff_1_Rd } from "./members.js";
 import type { Ec3Settings } from "./settings.js";
 import { Fp_C, Fs_Rd } from "./slip.js";
 
+/** Cross-references for a citation, the false entries (clauses that do not apply) left out. */
+function alsoOf(refs: Array<string | false>): { also?: string[] } {
+  const also = refs.filter((r): r is string => r !== false);
+  return also.length > 0 ? { also } : {};
+}
+
 /** One bolt group with its shear resistance and the reductions that set it. */
 export interface Ec3Group {
   group: BoltGroupGeometry;
@@ -94,7 +100,10 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, s: Ec3
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, g.group),
-    citation: cl("3.6.1", { table: "Table 3.4", equation: "with 3.8 and 3.6.1(12)" }),
+    citation: cl("3.6.1", {
+      table: "Table 3.4",
+      ...alsoOf([g.beta_Lf < 1 && "3.8, Eq. (3.5) (βLf)", g.beta_p < 1 && "3.6.1(12), Eq. (3.3) (βp)", g.smallHole !== 1 && "3.6.1(5) (× 0.85)"]),
+    }),
     formula: "T ≤ n·Fv,Rd;  Fv,Rd = planes · αv·fub·A/γM2 · βLf·βp",
     substituted: () =>
       `Fv,Rd = ${planes} × ${g.alpha_v} × ${g.bolt.fub_MPa} × ${f(g.A_mm2)} / ${f(s.factors.gamma_M2, 2)} × ${f(g.beta_Lf, 3)} × ${f(g.beta_p, 3)}` +
@@ -221,7 +230,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Se
     kind: "bolt-bearing",
     title: "Bolt bearing (group)",
     component: `${plate.label}${side}`,
-    citation: cl("3.7", { table: "Table 3.4", equation: oneLine ? "with 3.6.1(10)" : "Fb,Rd per bolt" }),
+    citation: cl("3.7", { table: "Table 3.4", ...alsoOf([oneLine && "3.6.1(10), Eq. (3.2)"]) }),
     formula: "F ≤ ΣFb,Rd if every Fv,Rd ≥ Fb,Rd, else n·min(Fv,Rd, Fb,Rd);  Fb,Rd = k1·αb·fu·d·t / γM2",
     substituted: () =>
       `least ${bearingText(least, fub, plate.fu_MPa, d, t, s.factors.gamma_M2, factor)};  ΣFb,Rd over ${each.length} bolts = ${kN(sum)};  ` +
@@ -307,8 +316,8 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Setti
     kind: "slip",
     title: service ? "Slip resistance at service load (Category B)" : "Slip resistance at factored load (Category C)",
     component: groupLabel(joint, g.group),
-    citation: cl("3.9.1", { table: "Tables 3.6, 3.7" }),
-    formula: `F ≤ n·Fs,Rd${service ? ",ser" : ""};  Fs,Rd = ks·n·μ·Fp,C / ${service ? "γM3,ser" : "γM3"};  Fp,C = 0.7·fub·As`,
+    citation: cl("3.9.1", { table: "Tables 3.6, 3.7", equation: "(3.6), (3.7)" }),
+    formula: service ? "F ≤ n·Fs,Rd,ser;  Fs,Rd,ser = ks·n·μ·Fp,C / γM3,ser;  Fp,C = 0.7·fub·As" : "F ≤ n·Fs,Rd;  Fs,Rd = ks·n·μ·Fp,C / γM3;  Fp,C = 0.7·fub·As",
     substituted: () =>
       `Fp,C = 0.7 × ${g.bolt.fub_MPa} × ${f(As)} = ${kN(FpC, 2)};  Fs,Rd = ${k} × ${nf} × ${f(mu, 2)} × ${kN(FpC, 2)} / ${f(gamma, 2)} = ${kN(perBolt, 2)};  ` +
       `${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}`,
@@ -370,7 +379,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
     kind: "net-section",
     title: catC ? "Net section (Category C)" : "Net-section rupture",
     component: plate.label,
-    citation: catC ? cl11("6.2.3(4)", { equation: "(6.8), Anet by 6.2.2.2" }) : cl11("6.2.3(2)b", { equation: "(6.7), Anet by 6.2.2.2" }),
+    citation: catC ? cl11("6.2.3(4)", { equation: "(6.8)", also: ["6.2.2.2 for Anet"] }) : cl11("6.2.3(2)b", { equation: "(6.7)", also: ["6.2.2.2 for Anet"] }),
     formula:
       (transferred ? "F·k/n ≤ " : "F ≤ ") +
       (catC ? "Nnet,Rd = Anet·fy / γM0" : "Nu,Rd = 0.9·Anet·fu / γM2") +
@@ -413,7 +422,7 @@ export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: 
     kind: "block-shear",
     title: "Block tearing",
     component: `${plate.label}${side}`,
-    citation: cl("3.10.2(2)", { equation: "3.9" }),
+    citation: cl("3.10.2(2)", { equation: "(3.9)" }),
     formula: `${load === "full" ? "F" : "F·k/n"} ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0`,
     substituted: () =>
       `${b.description} (${b.boltsInBlock} of ${holes.length} bolts): Ant = ${f(b.tensionNet_mm)} × ${f(t)} = ${f(b.tensionNet_mm * t)} mm², ` +

@@ -165,5 +165,5 @@ export function maxRules(joint: Joint, scenario: CheckableScenario): RuleCheck[]
 
 /** The bolt group on the plate axis: the concentric group every EN 1993-1-8 check here assumes. */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by 3.7, 3.10.2(2) and EN 1993-1-1 6.2.3" });
+  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by EN 1993-1-8 3.7, 3.10.2(2) and EN 1993-1-1 6.2.3" });
 }

@@ -62,14 +62,14 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   const gfs = joint.groups.map((g) => groupFactors(joint, g));
   const friction = scenario.bolts.assembly === "friction-grip";
   const slipAtUltimate = friction && scenario.bolts.slipAt === "ultimate";
+  // Friction-grip bolts are checked in bolt shear and bearing at the factored load whatever the slip
+  // design: no clause is relied on to waive them (from memory; the reading that refuses more).
   for (const gf of gfs) {
     if (friction) checks.push(slipCheck(joint, scenario, gf));
-    if (!slipAtUltimate) checks.push(boltShearCheck(joint, scenario, gf));
+    checks.push(boltShearCheck(joint, scenario, gf));
   }
   const loaded = joint.plates.filter((p) => p.role !== "packing");
-  if (!slipAtUltimate) {
-    for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c));
-  }
+  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c));
   for (const plate of loaded) {
     checks.push(grossYieldCheck(scenario, plate));
     checks.push(netSectionCheck(joint, scenario, plate));
@@ -81,7 +81,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   checks.push(...minSpacingRule(joint), ...maxSpacingRules(joint), ...edgeRules(joint, scenario), ...gripRule(joint), ...centroidRule(joint));
 
   const conventions: string[] = [
-    `bolt net area Anb: ${scenario.options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4 (cl. 10.3.3)" : "ISO 898-1 stress area"}`,
+    `bolt net area Anb at the threads (cl. 10.3.3, 10.4.3): ${scenario.options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4 — the approximation Indian design aids use (common practice); the clause defines Anb, it gives no factor" : "the ISO 898-1 tensile stress area"}`,
     `bolt strength: ISO 898-1 ${scenario.options.boltStrength} values`,
     scenario.options.netSectionLoad === "transferred"
       ? "net section: load already transferred — each path carries only the load its plate has not yet passed to bolts ahead of it (a scenario switch; cl. 6.3.1 is silent)"
@@ -91,7 +91,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   if (friction) {
     conventions.push(
       slipAtUltimate
-        ? "friction grip, slip at the factored load (γmf 1.25): no bolt shear or bearing (no slip)"
+        ? "friction grip, slip at the factored load (γmf 1.25); bolt shear and bearing also checked at the factored load (no clause is relied on to waive them — from memory, the reading that refuses more)"
         : "friction grip, slip at service (γmf 1.10); bolt shear and bearing also checked at the factored load",
     );
   }
@@ -145,6 +145,8 @@ export const IS800_2007: DesignCode = {
   id: "is800-2007",
   title: "IS 800:2007 General construction in steel — limit state method",
   grades: GRADES,
+  // The IS 1364 / IS 3757 sizes of the design aids; M18 (a second-choice size) is not covered.
+  boltSizes_mm: [12, 16, 20, 22, 24, 27, 30, 36],
   holeDimensions,
   plateStrength,
   scopeErrors,

@@ -68,7 +68,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
   const T = scenario.load.factoredTension_N;
   const notes = () => [
     `fub = ${mat.fub_MPa} MPa (${mat.source})`,
-    `Anb = ${f(Anb)} mm² (${options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4" : "ISO 898-1 stress area"}), Asb = π d²/4 = ${f(Asb)} mm²`,
+    `Anb = ${f(Anb)} mm² (${options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4, the design-aid approximation of the net area at the threads" : "ISO 898-1 stress area"}), Asb = π d²/4 = ${f(Asb)} mm²`,
     `lj = ${f(gf.lj_mm)} mm ${gf.lj_mm > 15 * d ? `> 15d = ${f(15 * d)} mm: βlj = 1.075 − 0.005 × ${f(gf.lj_mm)}/${d} = ${f(gf.beta_lj, 3)} (limits 0.75–1.0)` : `≤ 15d = ${f(15 * d)} mm: βlj = 1.0`}`,
     `lg = ${f(gf.group.grip_mm)} mm ${gf.group.grip_mm > 5 * d ? `> 5d: βlg = min(8/(3 + lg/d), βlj) = ${f(gf.beta_lg, 3)}` : `≤ 5d = ${f(5 * d)} mm: βlg = 1.0`}`,
     gf.group.packing_mm > 6
@@ -80,7 +80,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, gf.group),
-    citation: cl("10.3.3"),
+    citation: cl("10.3.3", reductionClauses(gf)),
     formula: "T ≤ n·Vdsb;  Vdsb = fub/√3 · (nn·Anb + ns·Asb) · βlj·βlg·βpkg / γmb",
     substituted: () =>
       `Vdsb = ${mat.fub_MPa}/√3 × (${nn} × ${f(Anb)} + ${ns} × ${f(Asb)}) × ${f(gf.beta_lj, 3)} × ${f(gf.beta_lg, 3)} × ${f(gf.beta_pkg, 3)} / ${PARTIAL_FACTORS.gamma_mb}` +
@@ -91,6 +91,16 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
     loadRatio: 1,
     notes,
   });
+}
+
+/** The reduction clauses a group's bolt shear applies (cited only when they reduce). */
+function reductionClauses(gf: GroupFactors): { also?: string[] } {
+  const also = [
+    ...(gf.beta_lj < 1 ? ["10.3.3.1 (βlj)"] : []),
+    ...(gf.beta_lg < 1 ? ["10.3.3.2 (βlg)"] : []),
+    ...(gf.beta_pkg < 1 ? ["10.3.3.3 (βpkg)"] : []),
+  ];
+  return also.length > 0 ? { also } : {};
 }
 
 /** kb of one plate for one group, from coordinates; with the e and p that set it. */
@@ -171,7 +181,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFa
     kind: "slip",
     title: slipAt === "service" ? "Slip resistance at service load" : "Slip resistance at factored load",
     component: groupLabel(joint, gf.group),
-    citation: cl("10.4.3", { table: "Table 20 (μf)" }),
+    citation: cl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf", ...(gf.beta_lj < 1 ? ["10.3.3.1 for βlj"] : [])] }),
     formula: "F ≤ n·Vdsf;  Vdsf = μf·ne·Kh·F0·βlj / γmf;  F0 = 0.7·fub·Anb",
     substituted: () =>
       `F0 = 0.7 × ${mat.fub_MPa} × ${f(Anb)} = ${kN(proof, 2)};  Vdsf = ${f(mu, 2)} × ${ne} × ${Kh} × ${kN(proof, 2)} × ${f(gf.beta_lj, 3)} / ${gamma} = ${kN(perBolt, 2)};  ` +
@@ -180,7 +190,11 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFa
     demand_N: demand,
     resistance_N: n * perBolt,
     loadRatio: slipAt === "service" ? demand / load.factoredTension_N : 1,
-    notes: () => slipAt === "service" ? ["service tension from load.service_tension"] : [],
+    notes: () => [
+      ...(slipAt === "service" ? ["service tension from load.service_tension"] : []),
+      `μf = ${f(mu, 2)} (Table 20), γmf = ${gamma} (Table 5, slip at ${slipAt === "service" ? "service" : "the factored load"})`,
+      `βlj = ${f(gf.beta_lj, 3)}: the long-joint factor of cl. 10.3.3.1 applied to slip resistance as well (from memory; the reading that refuses more)`,
+    ],
   });
 }
 

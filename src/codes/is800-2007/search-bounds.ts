@@ -96,13 +96,10 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
   // Bolt shear and slip, per group (both groups of a butt splice have n bolts; packing on one side).
   const { grips, packs } = groupGrips(scenario);
   const friction = bolts.assembly === "friction-grip";
-  const slipAtUltimate = friction && bolts.slipAt === "ultimate";
   grips.forEach((grip, i) => {
     const nn = bolts.threadsInShearPlanes ? planes : 0;
-    if (!slipAtUltimate) {
-      const v = Vdsb({ fub_MPa: mat.fub_MPa, nn, ns: planes - nn, Anb_mm2: Anb, Asb_mm2: shankArea_mm2(d), beta_lj: blj, beta_lg: beta_lg(grip, d, blj), beta_pkg: beta_pkg(packs[i] ?? 0) });
-      bound.bolt(n * v, "bolt-shear");
-    }
+    const v = Vdsb({ fub_MPa: mat.fub_MPa, nn, ns: planes - nn, Anb_mm2: Anb, Asb_mm2: shankArea_mm2(d), beta_lj: blj, beta_lg: beta_lg(grip, d, blj), beta_pkg: beta_pkg(packs[i] ?? 0) });
+    bound.bolt(n * v, "bolt-shear");
     if (friction) {
       const v = Vdsf(bolts.slipFactor ?? 0, planes, holeFactorKh(bolts.hole, bolts.slotDirection), F0(Anb, mat.fub_MPa), bolts.slipAt ?? "service", blj);
       if (bolts.slipAt === "ultimate") bound.bolt(n * v, "slip");
@@ -132,7 +129,7 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     bound.plate(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share, "gross-yield");
     const holesOnLine = options.netSectionLoad === "transferred" ? (shape.countsPerLine[p.fullLine] ?? widest) : widest;
     bound.plate(Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share, "net-section");
-    if (!slipAtUltimate && p.end !== undefined) {
+    if (p.end !== undefined) {
       // Holes on the line at the plate end have no hole ahead: their e-term is always in kb.
       let kbUpper = Math.min(p.end / (3 * hole.along_mm), mat.fub_MPa / st.fu_MPa, 1.0);
       // Grid: every second-line hole has one straight ahead at p; staggered: at 2s on its own gauge line.

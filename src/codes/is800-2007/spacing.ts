@@ -55,11 +55,13 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
   let edgeLine: Worst | null = null;
   const outside = outsidePlates(joint);
   const seen = new Set<string>();
+  let relaxedAnywhere = false;
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
     const lines = gaugeLines(holes);
     const stagger = staggerOf(holes.filter((h) => h.group === (plate.connections[0]?.group ?? h.group)));
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
+    if (relax > 1) relaxedAnywhere = true;
     // Across: adjacent gauge lines, per group.
     for (const group of new Set(holes.map((h) => h.group))) {
       const gl = gaugeLines(holes.filter((h) => h.group === group));
@@ -100,10 +102,12 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
       }
     });
   }
+  // cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners applied.
+  const relaxed = relaxedAnywhere ? { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] } : {};
   return [
     ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", across),
-    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", { equation: "with 10.2.3.4 for staggered" }), "p ≤ min(16 t, 200 mm)", "max", pitch),
-    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", { equation: "with 10.2.3.4 for staggered" }), "p ≤ min(100 + 4 t, 200 mm)", "max", edgeLine),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxed), "p ≤ min(16 t, 200 mm)", "max", pitch),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxed), "p ≤ min(100 + 4 t, 200 mm)", "max", edgeLine),
   ];
 }
 
@@ -153,8 +157,8 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     }
   }
   return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("10.2.4.2", { table: "Table 19" }), "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation", "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("10.2.4.2", { table: "Table 19" }), "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation", "min", minEdge),
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("10.2.4.2"), "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("10.2.4.2"), "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge),
     ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("10.2.4.3"), scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
   ];
 }
@@ -174,5 +178,5 @@ export function gripRule(joint: Joint): RuleCheck[] {
  * group is reported as failing rather than accepted silently.
  */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by every check of cl. 6 and 10.3" });
+  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by the IS 800:2007 checks of Section 6 and cl. 10.3, 10.4" });
 }
