@@ -141,7 +141,7 @@ export interface CheckOptions {
   steelStrengths?: En10025Convention;
   /** EN 1993-1-8 scenarios: normal-hole clearance of M12 and M14 bolts, 1 mm (EN 1090-2) or 2 mm (EN 1993-1-8, 3.6.1(5)). */
   smallBoltClearance_mm?: 1 | 2;
-  /** AISC 360-16 scenarios: deformation at the bolt hole at service load a design consideration (J3.10(a)(1)) or not ((a)(2)). */
+  /** AISC 360-16 scenarios: deformation at the bolt hole at service load a design consideration (J3.10(a)(1)(i), (a)(2)(i)) or not ((a)(1)(ii), (a)(2)(ii)). */
   bearingDeformation?: "considered" | "not-considered";
   /** AISC 360-16 scenarios: fillers (packing) developed by extension and extra bolts (J5.2(b)); default false. */
   fillersDeveloped?: boolean;
