@@ -129,7 +129,7 @@ describe("bolt lengths and the bill of materials", () => {
     expect(line!.deepestShearPlane_mm).toBe(10);
     expect(line!.length_mm).toBe(50);
     expect(line!.threadsClear).toBe(true);
-    expect(line!.note).toMatch(/lengthened from 45 to 50 mm/);
+    expect(line!.note).toMatch(/lengthened from 45 mm to 50 mm/);
   });
 });
 

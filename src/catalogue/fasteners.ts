@@ -42,15 +42,3 @@ export const HSFG_DIMENSIONS: Record<number, { nut_mm: number; washer_mm: number
 export const PREFERRED_LENGTHS_MM: readonly number[] = [
   20, 25, 30, 35, 40, 45, 50, 55, 60, 65, 70, 80, 90, 100, 110, 120, 130, 140, 150, 160, 180, 200, 220, 240, 260, 280, 300,
 ];
-
-/** Bolt end projecting past the nut: two thread pitches (common practice). */
-export function threadProjection_mm(d: number): number {
-  return 2 * (THREAD_PITCH_MM[d] ?? 3);
-}
-
-/** Nut property class matched to a bolt class (ISO 898-2, common practice): 5 for 4.6/5.6, 8 for 8.8, 10 for 10.9. */
-export function nutClassFor(boltClass: string): string {
-  if (boltClass === "10.9") return "10";
-  if (boltClass === "8.8") return "8";
-  return "5";
-}

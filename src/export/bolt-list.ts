@@ -1,22 +1,16 @@
 /**
  * Bolt lengths and the bill of materials of a checked joint. Pure.
  *
- * Length = grip (plates and packing) + washers + nut height + thread projection, rounded up to the
- * preferred length series. When the scenario declares the threads excluded from the shear planes,
+ * Length: the assembly standard's own rule for the scenario's code (catalogue/assemblies.ts) — grip
+ * (plates and packing) + washers + nut height + thread projection, or the RCSC add-to-grip values for
+ * ASTM bolts — rounded up to that standard's length series. When the scenario declares the threads excluded from the shear planes,
  * the plain shank (length − thread length) must reach past the deepest shear plane; if the rounded
  * length does not, the next length that does is taken, with extra washers under the nut so that the
  * nut still clamps; if none does, the thread check fails.
  */
 import { STEEL_DENSITY_KG_PER_MM3 } from "../catalogue/costs.js";
-import {
-  HEX_NUT_HEIGHT_MM,
-  HSFG_DIMENSIONS,
-  iso4014ThreadLength_mm,
-  nutClassFor,
-  PLAIN_WASHER_MM,
-  PREFERRED_LENGTHS_MM,
-  threadProjection_mm,
-} from "../catalogue/fasteners.js";
+import { assemblyFor, nutClassOf, type AssemblySystem } from "../catalogue/assemblies.js";
+import { ASTM_ISO_EQUIVALENT, boltSizeText, type AstmBoltGrade } from "../catalogue/bolts.js";
 import type { GroupId, Joint } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
@@ -55,52 +49,59 @@ export interface BillOfMaterials {
   notes: string[];
 }
 
-function roundUpToSeries(v: number): number | null {
-  return PREFERRED_LENGTHS_MM.find((l) => l >= v - 1e-9) ?? null;
+/** The bolt grade in the terms of the scenario's code: the ASTM grade under AISC 360, else the ISO class. */
+export function boltGradeOf(scenario: CheckableScenario): string {
+  const b = scenario.bolts;
+  if (!scenario.code.startsWith("aisc")) return b.propertyClass;
+  return b.astmGrade ?? (Object.keys(ASTM_ISO_EQUIVALENT) as AstmBoltGrade[]).find((g) => ASTM_ISO_EQUIVALENT[g] === b.propertyClass) ?? b.propertyClass;
 }
+
+/** The assembly of a scenario's bolts under its own code. */
+export function assemblyOf(scenario: CheckableScenario): AssemblySystem {
+  const b = scenario.bolts;
+  return assemblyFor({ code: scenario.code, d_mm: b.size_mm, grade: boltGradeOf(scenario), preloaded: b.assembly === "friction-grip" });
+}
+
+const roundUpTo = (series: readonly number[], v: number): number | null => series.find((l) => l >= v - 1e-6) ?? null;
 
 export function boltLengths(joint: Joint, scenario: CheckableScenario): BoltLengthLine[] {
   const b = scenario.bolts;
-  const d = b.size_mm;
-  const hsfg = b.assembly === "friction-grip";
-  const hs = HSFG_DIMENSIONS[d];
-  const washer = hsfg && hs ? hs.washer_mm : PLAIN_WASHER_MM[d] ?? 4;
-  const nut = hsfg && hs ? hs.nut_mm : HEX_NUT_HEIGHT_MM[d] ?? d;
-  const underHead = hsfg ? 1 : 0; // hardened washers under head and nut for friction grip (common practice)
-  const projection = threadProjection_mm(d);
-  const threadOf = (l: number) => (hsfg && hs ? (l < 100 ? hs.threadShort_mm : hs.threadLong_mm) : iso4014ThreadLength_mm(d, l));
-  const standard = hsfg ? "IS 3757 bolt, IS 6623 nut, IS 6649 washers (dimensions as tabulated in Indian design aids)" : "ISO 4014 bolt, ISO 4032 nut, ISO 7089 washer (dimensions from memory)";
+  const a = assemblyOf(scenario);
+  const washer = a.washer_mm;
+  const underHead = a.washersUnderHead;
+  const standard = `${a.boltStandard}, ${a.nutStandard}, ${a.washerStandard}`;
   return joint.groups.map((g) => {
     const thickness = (id: string) => joint.plates.find((p) => p.id === id)?.spec.thickness_mm ?? 0;
     const last = g.stack[g.stack.length - 1]!;
     const deepest = underHead * washer + g.grip_mm - thickness(last);
-    let washersUnderNut = 1;
-    const required = g.grip_mm + (underHead + washersUnderNut) * washer + nut + projection;
-    let length = roundUpToSeries(required);
+    let washersUnderNut = a.washersUnderNut;
+    const required = a.required_mm(g.grip_mm, underHead + washersUnderNut);
+    let length = roundUpTo(a.lengths_mm, required);
     let note = "";
     let threadsClear: boolean | null = null;
     if (length !== null && !b.threadsInShearPlanes) {
       // The plain shank must pass the deepest shear plane: length − b ≥ deepest.
       let l: number | null = length;
-      while (l !== null && l - threadOf(l) < deepest - 1e-9) l = PREFERRED_LENGTHS_MM.find((x) => x > l!) ?? null;
+      while (l !== null && l - a.threadLength_mm(l) < deepest - 1e-9) l = a.lengths_mm.find((x) => x > l! + 1e-6) ?? null;
       if (l === null) {
         threadsClear = false;
         note = "no length of the series keeps the thread out of every shear plane";
       } else {
-        // The nut must still clamp: the thread has to start before the nut's seat.
-        const seat = (w: number) => (underHead + w) * washer + g.grip_mm;
-        while (washersUnderNut <= MAX_WASHERS_UNDER_NUT && l - threadOf(l) > seat(washersUnderNut) - 1e-9) washersUnderNut++;
+        // The nut must still clamp: the thread (with the threads the system keeps below the nut) has to
+        // start before the nut's seat.
+        const seat = (w: number) => (underHead + w) * washer + g.grip_mm - a.threadBelowNut_mm;
+        while (washersUnderNut <= MAX_WASHERS_UNDER_NUT && l - a.threadLength_mm(l) > seat(washersUnderNut) - 1e-9) washersUnderNut++;
         if (washersUnderNut > MAX_WASHERS_UNDER_NUT) {
           threadsClear = false;
-          note = `a length that keeps the thread out of the shear planes (${l} mm) needs more than ${MAX_WASHERS_UNDER_NUT} washers under the nut`;
+          note = `a length that keeps the thread out of the shear planes (${a.lengthText(l)}) needs more than ${MAX_WASHERS_UNDER_NUT} washers under the nut`;
         } else {
           threadsClear = true;
-          if (l !== length) note = `lengthened from ${length} to ${l} mm so that the thread stays out of every shear plane; ${washersUnderNut} washers under the nut`;
+          if (l !== length) note = `lengthened from ${a.lengthText(length)} to ${a.lengthText(l)} so that the thread stays out of every shear plane; ${washersUnderNut} washer${washersUnderNut === 1 ? "" : "s"} under the nut`;
           length = l;
         }
       }
     }
-    if (length === null) note = `required length ${required.toFixed(1)} mm is beyond the series (max ${PREFERRED_LENGTHS_MM[PREFERRED_LENGTHS_MM.length - 1]} mm)`;
+    if (length === null) note = `required length ${a.lengthText(required)} is beyond the series (max ${a.lengthText(a.lengths_mm[a.lengths_mm.length - 1]!)})`;
     return {
       group: g.id,
       count: g.holeIds.length,
@@ -108,11 +109,11 @@ export function boltLengths(joint: Joint, scenario: CheckableScenario): BoltLeng
       washersUnderHead: underHead,
       washersUnderNut,
       washer_mm: washer,
-      nut_mm: nut,
-      projection_mm: projection,
+      nut_mm: a.nut_mm,
+      projection_mm: required - g.grip_mm - (underHead + a.washersUnderNut) * washer - a.nut_mm,
       required_mm: required,
       length_mm: length ?? NaN,
-      threadLength_mm: length === null ? NaN : threadOf(length),
+      threadLength_mm: length === null ? NaN : a.threadLength_mm(length),
       deepestShearPlane_mm: deepest,
       threadsClear,
       note,
@@ -123,9 +124,10 @@ export function boltLengths(joint: Joint, scenario: CheckableScenario): BoltLeng
 
 export function billOfMaterials(joint: Joint, scenario: CheckableScenario): BillOfMaterials {
   const b = scenario.bolts;
-  const size = `M${b.size_mm}`;
+  const a = assemblyOf(scenario);
+  const size = boltSizeText(b.size_mm);
+  const grade = boltGradeOf(scenario);
   const lengths = boltLengths(joint, scenario);
-  const hsfg = b.assembly === "friction-grip";
   const bolts = new Map<number, number>();
   const washers = new Map<number, number>();
   let nutCount = 0;
@@ -134,8 +136,6 @@ export function billOfMaterials(joint: Joint, scenario: CheckableScenario): Bill
     washers.set(l.washer_mm, (washers.get(l.washer_mm) ?? 0) + l.count * (l.washersUnderHead + l.washersUnderNut));
     nutCount += l.count;
   }
-  const standard = lengths[0]?.standard ?? "";
-  const kind = hsfg ? "high-strength friction-grip hexagon bolt" : "hexagon head bolt";
   const holeDia = joint.holes[0]?.across_mm ?? 0;
   const plates = joint.plates
     .filter((p) => p.role === "cover" || p.role === "packing")
@@ -158,9 +158,9 @@ export function billOfMaterials(joint: Joint, scenario: CheckableScenario): Bill
   const notes: string[] = [];
   for (const l of lengths) if (l.note) notes.push(`${joint.spliceType === "lap" ? "bolts" : `side ${l.group}`}: ${l.note}`);
   return {
-    bolts: [...bolts.entries()].sort((a, c) => a[0] - c[0]).map(([length, quantity]) => ({ item: `${size} × ${length} class ${b.propertyClass} ${kind}`, size, class: b.propertyClass, length_mm: length, quantity, standard })),
-    nuts: [{ item: `${size} hexagon nut, class ${hsfg ? (b.propertyClass === "10.9" ? "10" : "8") : nutClassFor(b.propertyClass)}`, size, class: nutClassFor(b.propertyClass), quantity: nutCount, standard }],
-    washers: [...washers.entries()].map(([t, quantity]) => ({ item: `${size} ${hsfg ? "hardened" : "plain"} washer, ${t} mm`, size, thickness_mm: t, quantity, standard })),
+    bolts: [...bolts.entries()].sort((x, y) => x[0] - y[0]).map(([length, quantity]) => ({ item: a.boltItem(length), size, class: grade, length_mm: length, quantity, standard: a.boltStandard })),
+    nuts: [{ item: a.nutItem, size, class: a.id.startsWith("astm") ? grade : nutClassOf(b.propertyClass), quantity: nutCount, standard: a.nutStandard }],
+    washers: [...washers.entries()].map(([t, quantity]) => ({ item: a.washerItem, size, thickness_mm: t, quantity, standard: a.washerStandard })),
     plates,
     lengths,
     ok: lengths.every((l) => Number.isFinite(l.length_mm) && l.threadsClear !== false),
