@@ -133,6 +133,43 @@ describe("bolt lengths and the bill of materials", () => {
   });
 });
 
+describe("bolt assemblies of the code in use (lengths on each standard's dimensions)", () => {
+  it("EN 1993-1-8 non-preloaded (sports hall chord): EN 15048 assembly, ISO 4014 bolt, ISO 4032 nut 18 mm, ISO 7089 washer 3 mm (from memory): 10 + 16 + 10 + 3 + 18 + 2 × 2.5 = 62 → M20 × 65", () => {
+    const { scenario, joint } = demo("sports-hall-chord-ec3.yaml");
+    const bom = billOfMaterials(joint, scenario);
+    expect(bom.lengths.map((l) => [l.grip_mm, l.required_mm, l.length_mm])).toEqual([[36, 62, 65], [36, 62, 65]]);
+    expect(bom.bolts[0]!.item).toBe("M20 × 65 hexagon head bolt, property class 8.8");
+    expect(bom.bolts[0]!.standard).toMatch(/EN 15048/);
+    expect(JSON.stringify(bom)).not.toMatch(/IS \d{3,4}/);
+  });
+  it("EN 1993-1-8 preloaded (Category B): EN 14399-3 HR assembly with EN 14399-6 washers 4 mm under head and nut (from memory): 36 + 2 × 4 + 18 + 5 = 67 → M20 × 70", () => {
+    const text = readFileSync(scenarioPath("sports-hall-chord-ec3.yaml"), "utf8")
+      .replace(/type: bearing.*\n/, "type: friction-grip\n  slip_factor: 0.4\n  slip_at: service\n")
+      .replace(/factored_tension: (.*)/, "factored_tension: $1\n  service_tension: 600 kN");
+    const { scenario, joint } = load(text);
+    const bom = billOfMaterials(joint, scenario);
+    expect(bom.lengths.map((l) => [l.required_mm, l.length_mm, l.washersUnderHead, l.washersUnderNut])).toEqual([[67, 70, 1, 1], [67, 70, 1, 1]]);
+    expect(bom.bolts[0]!.item).toBe("M20 × 70 HR 8.8 preloadable bolt (EN 14399-3)");
+    expect(bom.washers[0]!.standard).toBe("EN 14399-6 washer");
+    expect(JSON.stringify(bom)).not.toMatch(/IS 3757|IS 6623|IS 6649/);
+  });
+  it("AISC 360-16 (canopy tie, 3/4 in A325): grip 3/8 + 1/2 + 3/8 = 1-1/4 in; RCSC add-to-grip 1 in + one F436 washer 5/32 in = 2.406 in → 2-1/2 in (from memory)", () => {
+    const { scenario, joint } = demo("canopy-tie-us.yaml");
+    const bom = billOfMaterials(joint, scenario);
+    expect(bom.lengths[0]!.grip_mm / 25.4).toBeCloseTo(1.25, 9);
+    expect(bom.lengths[0]!.required_mm / 25.4).toBeCloseTo(1.25 + 1 + 5 / 32, 9);
+    expect(bom.lengths[0]!.length_mm / 25.4).toBeCloseTo(2.5, 9);
+    expect(bom.bolts[0]!.item).toBe("3/4 in × 2-1/2 in ASTM F3125 Grade A325 heavy hex structural bolt");
+    expect(bom.nuts[0]!.item).toBe("3/4 in ASTM A563 Grade C heavy hex nut");
+    expect(bom.washers[0]!.item).toBe("3/4 in ASTM F436 hardened flat washer, 5/32 in");
+    expect(JSON.stringify(bom)).not.toMatch(/ISO 4014|ISO 4032|IS 3757/);
+  });
+  it("IS 800 friction grip keeps the IS 3757 / IS 6623 / IS 6649 assembly", () => {
+    const { scenario, joint } = demo("truss-chord-staggered.yaml");
+    expect(billOfMaterials(joint, scenario).bolts[0]!.standard).toMatch(/IS 3757/);
+  });
+});
+
 describe("splicewright export", () => {
   it("writes every format into a new folder and names each file", () => {
     const dir = join(mkdtempSync(join(tmpdir(), "splicewright-export-")), "nested", "out");
