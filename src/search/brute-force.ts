@@ -5,6 +5,7 @@
 import { compareKeys, type RankBy } from "./ranking.js";
 import { evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
 import { families, layoutOf, resolveSpace, type Family } from "./space.js";
+import { countCandidates } from "./work-estimate.js";
 
 /** Every tapered count vector of the declared shape: one parity, never rising from line 0, not uniform. */
 export function taperedVectors(lines: number, kmax: number): number[][] {
@@ -42,7 +43,7 @@ function taperedGaugeList(f: Family, width: number, step: number, fixed: number 
 export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankBy): { results: Candidate[]; checks: number } {
   const space = resolveSpace(ctx.scenario, ctx.code, ctx.costs);
   const fams = families(ctx.scenario, ctx.code, ctx.costs, space);
-  const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
+  const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates: countCandidates(ctx.scenario, ctx.code, ctx.costs, space) };
   const width = narrowest(ctx);
   const passing: Candidate[] = [];
   const maxLength = space.maxSpliceLength_mm ?? Infinity;

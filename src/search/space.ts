@@ -72,7 +72,8 @@ export function stepRange(from_mm: number, to_mm: number, step_mm: number): numb
   return out;
 }
 
-function narrowestWidth(s: Scenario): number {
+/** The narrowest plate of the splice, mm. */
+export function narrowestWidth(s: Scenario): number {
   return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
 }
 
@@ -113,7 +114,8 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
   return space;
 }
 
-function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: BoltAssembly): BoltSpec {
+/** The bolt of a family: the searched size and class with the scenario's assembly, threads and holes. */
+export function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: BoltAssembly): BoltSpec {
   const given = scenario.bolts;
   const spec: BoltSpec = {
     size_mm: d,
@@ -130,7 +132,8 @@ function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: 
   return spec;
 }
 
-function withCover(scenario: Scenario, t: number | undefined): Scenario {
+/** The scenario with every cover plate at thickness t (butt splices), or as it is. */
+export function withCover(scenario: Scenario, t: number | undefined): Scenario {
   if (t === undefined) return scenario;
   const covers: PlateSpec[] = scenario.plates.covers.map((c) => ({ ...c, thickness_mm: t }));
   return { ...scenario, plates: { ...scenario.plates, covers } };
