@@ -24,13 +24,14 @@ export class SearchProgress {
     private readonly stream: ProgressStream,
     private readonly label: string,
     private readonly wanted: number,
+    private readonly after_ms: number = SEARCH_PROGRESS_AFTER_MS,
   ) {}
 
   /** Redraw the line (at most ten times a second, and only after SEARCH_PROGRESS_AFTER_MS on a terminal). */
   update = (stats: SearchStats, results: number): void => {
     if (this.stream.isTTY !== true) return;
     const now = performance.now();
-    if (now - this.t0 < SEARCH_PROGRESS_AFTER_MS || now - this.last < 100) return;
+    if (now - this.t0 < this.after_ms || now - this.last < 100) return;
     this.last = now;
     this.shown = true;
     const line = searchProgressLine(this.label, stats, results, this.wanted, (now - this.t0) / 1000);
