@@ -147,16 +147,16 @@ export const MIN_SEARCH_STEP = { si: { value: 1, text: "1 mm" }, us: { value: 25
 export const MAX_SEARCH_LIST = 20;
 
 const search = z.strictObject({
-  patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).max(MAX_SEARCH_LIST).optional(),
+  patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
   max_along: count(LIMITS.linesAlong).optional(),
   min_bolts: count(LIMITS.holes).optional(),
-  sizes: z.array(boltSize).min(1).max(MAX_SEARCH_LIST).optional(),
-  classes: z.array(propertyClass).min(1).max(MAX_SEARCH_LIST).optional(),
+  sizes: z.array(boltSize).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
+  classes: z.array(propertyClass).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
   step: quantity("length", { positive: true, max: 1000, min: () => (inputUnits === US_INPUT_UNIT ? MIN_SEARCH_STEP.us : MIN_SEARCH_STEP.si) }).optional(),
   max_splice_length: length().optional(),
   max_across: count(LIMITS.boltsAcross).optional(),
   gauge: length().optional(),
-  cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).max(MAX_SEARCH_LIST).optional(),
+  cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
 });
 
 const options = z.strictObject({
