@@ -13,6 +13,8 @@ export function decodeText(bytes: Uint8Array, file: string): string {
   if (a === 0xef && b === 0xbb && c === 0xbf) skip = 3;
   else if (a === 0xff && b === 0xfe) [encoding, skip] = ["utf-16le", 2];
   else if (a === 0xfe && b === 0xff) [encoding, skip] = ["utf-16be", 2];
+  const nul = encoding === "utf-8" ? bytes.indexOf(0) : -1;
+  if (nul >= 0) throw new InputError(file, `holds a NUL byte at offset ${nul} (a binary file, or UTF-16 text without a byte-order mark?): save it as UTF-8 text`);
   try {
     return new TextDecoder(encoding, { fatal: true, ignoreBOM: true }).decode(bytes.subarray(skip));
   } catch {
