@@ -158,6 +158,7 @@ export async function writeFileSet(files: readonly OutputFile[], force: boolean,
       s.placed = true;
       if (s !== steps[steps.length - 1]) check(`placed ${s.target}`);
     }
+    afterStep?.("committed");
   } catch (e) {
     await rollback(steps);
     for (const [signal, l] of listeners) hooks.off(signal, l);
