@@ -13,7 +13,7 @@ import { parseYaml } from "../io/yaml.js";
 import { decodeText } from "../io/decode.js";
 import { searchJson } from "../report/search-json.js";
 import { RANK_BY, type RankBy } from "../search/ranking.js";
-import { searchLayouts } from "../search/search.js";
+import { searchLayouts, type SearchContext } from "../search/search.js";
 import { checkTargets, writeFileSet } from "./files.js";
 import { EXPORT_FORMATS, exportFileNames, exportFiles, type ExportFormat } from "../export/index.js";
 import { WorkLimitError } from "../search/work-estimate.js";
@@ -95,13 +95,7 @@ function parseForDrawing(file: string) {
 function chooseLayout({ scenario, code }: ReturnType<typeof parseForDrawing>, opts: { rank?: number; costs?: string; maxCandidates?: number }) {
   const rank = opts.rank;
   if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
-  const progress = new SearchProgress(process.stderr, "searching", rank);
-  let outcome;
-  try {
-    outcome = searchLayouts({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, { top: rank, rankBy: "cost", ...searchBudget(opts.maxCandidates), onProgress: progress.update });
-  } finally {
-    progress.finish();
-  }
+  const outcome = searchWithProgress({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, rank, "cost", opts.maxCandidates);
   const chosen = outcome.results[rank - 1];
   if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
   return { checkable: chosen.scenario, code };
@@ -132,9 +126,14 @@ function today(): string {
   return new Date(Number(epoch) * 1000).toISOString().slice(0, 10);
 }
 
-/** The search's limit on its declared space: the default, or --max-candidates. */
-function searchBudget(maxCandidates: number | undefined): { maxCandidates?: number } {
-  return maxCandidates === undefined ? {} : { maxCandidates };
+/** The search, bounded by --max-candidates (or the default), with a progress line on a terminal after 2 s. */
+function searchWithProgress(ctx: SearchContext, top: number, rankBy: RankBy, maxCandidates: number | undefined) {
+  const progress = new SearchProgress(process.stderr, "searching", top);
+  try {
+    return searchLayouts(ctx, { top, rankBy, onProgress: progress.update, ...(maxCandidates === undefined ? {} : { maxCandidates }) });
+  } finally {
+    progress.finish();
+  }
 }
 
 async function run(argv: string[], io: Io): Promise<number> {
@@ -183,13 +182,7 @@ async function run(argv: string[], io: Io): Promise<number> {
       if (opts.save) checkTargets([opts.save], opts.force ?? false); // before the search, not after it
       const t0 = performance.now();
       const top = Math.max(opts.top, opts.save ? opts.rank : 1);
-      const progress = new SearchProgress(process.stderr, "searching", top);
-      let outcome;
-      try {
-        outcome = searchLayouts({ scenario, code, costs }, { top, rankBy: opts.rankBy, ...searchBudget(opts.maxCandidates), onProgress: progress.update });
-      } finally {
-        progress.finish();
-      }
+      const outcome = searchWithProgress({ scenario, code, costs }, top, opts.rankBy, opts.maxCandidates);
       const elapsed = performance.now() - t0;
       outcome.stats.elapsed_ms = Number(elapsed.toFixed(1));
       if (opts.save) {
