@@ -15,7 +15,7 @@ import { scheduleCsv, scheduleJson, orderCsv } from "../schedule/export.js";
 import { selectionLp } from "../schedule/mip.js";
 import { selectionProblem } from "../schedule/options.js";
 import { buildSchedule } from "../schedule/schedule.js";
-import { typeLabel, type SelectionRules } from "../schedule/selection.js";
+import { typeLabel, type SelectionProblem, type SelectionRules } from "../schedule/selection.js";
 import { acceptMipAnswer, chooseMethod, METHOD_REQUESTS, solveByEnumeration, type MethodRequest, type SolvedSelection } from "../schedule/solve.js";
 import { checkTargets, writeFileSet } from "./files.js";
 import { loadCosts, readScenarioText } from "./main.js";
@@ -79,6 +79,20 @@ function rulesOf(file: SelectionRules, opts: ScheduleOptions): SelectionRules {
   return rules;
 }
 
+/** The choice of bolt types by the chosen method; the bar shows the phase (and pulses while HiGHS runs in its worker). */
+async function chooseTypes(problem: SelectionProblem, opts: ScheduleOptions, bar: ProgressBar): Promise<SolvedSelection> {
+  const { method } = chooseMethod(problem, opts.method);
+  bar.phase(`schedule: choosing bolt types (${method === "enumeration" ? "enumeration" : "HiGHS integer programme"})`, 1);
+  if (method === "enumeration") return solveByEnumeration(problem);
+  const lp = selectionLp(problem);
+  const ticking = setInterval(() => bar.pulse(), 250); // the main thread is free to draw
+  try {
+    return acceptMipAnswer(problem, lp, await solveWithHighs(lp.text, opts.timeLimit));
+  } finally {
+    clearInterval(ticking);
+  }
+}
+
 export function registerSchedule(program: Command, io: Io, setExit: (code: number) => void): void {
   program
     .command("schedule")
@@ -124,13 +138,13 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
 
       const missing = project.splices.map((s, m) => ({ s, r: searches[m]! })).filter(({ r }) => r.options.length === 0);
       if (missing.length > 0) {
+        bar.finish();
         const lines = missing.map(({ s, r }) => {
           const last = r.none[r.none.length - 1];
           return `splice ${s.id}${s.mark ? ` (mark ${s.mark})` : ""}: no compliant layout with any bolt type of its space${last ? ` — with ${typeLabel(last.type)}: ${last.reason}` : ""}`;
         });
         if (opts.json) io.out(JSON.stringify({ project: project.name, scheduled: false, noCompliantLayout: missing.map(({ s, r }) => ({ id: s.id, mark: s.mark ?? "", reasons: r.none.map((n) => ({ type: typeLabel(n.type), reason: n.reason })) })) }, null, 2));
         else io.out([`No schedule: ${missing.length} splice${missing.length === 1 ? " has" : "s have"} no compliant layout.`, ...lines].join("\n"));
-        bar.finish();
         for (const l of lines) io.err(l);
         setExit(1);
         return;
@@ -138,19 +152,7 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
 
       const { problem, options } = selectionProblem(project.splices, searches, rules);
       const t1 = performance.now();
-      let selection: SolvedSelection;
-      const { method } = chooseMethod(problem, opts.method);
-      bar.phase(`schedule: choosing bolt types (${method === "enumeration" ? "enumeration" : "HiGHS integer programme"})`, 1);
-      if (method === "enumeration") selection = solveByEnumeration(problem);
-      else {
-        const lp = selectionLp(problem);
-        const ticking = setInterval(() => bar.pulse(), 250); // HiGHS runs in a worker: the main thread is free to draw
-        try {
-          selection = acceptMipAnswer(problem, lp, await solveWithHighs(lp.text, opts.timeLimit));
-        } finally {
-          clearInterval(ticking);
-        }
-      }
+      const selection = await chooseTypes(problem, opts, bar);
       const selection_ms = performance.now() - t1;
 
       if (!selection.assignment) {
