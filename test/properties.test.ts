@@ -1,83 +1,42 @@
 /**
- * Invariants over generated scenarios (fast-check), check by check. The scenarios are generated data.
+ * Invariants over generated scenarios (fast-check), check by check, under each code (the invariants
+ * live in helpers/invariants.ts; `npm run soak` runs them over thousands of scenarios per code).
+ * The scenarios are generated data.
  */
-import { readFileSync } from "node:fs";
-import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { checkScenario } from "../src/engine/check.js";
-import { parseCostTable } from "../src/io/costs.js";
 import { parseScenario } from "../src/io/scenario.js";
 import type { StrengthCheck } from "../src/model/results.js";
-import type { CheckableScenario, Scenario } from "../src/model/scenario.js";
-import { searchLayouts } from "../src/search/search.js";
-import { fromUnit, toUnit } from "../src/units/units.js";
-import { ROOT } from "./helpers/cli.js";
-import { smallSearchScenario } from "./helpers/generate.js";
+import type { CheckableScenario } from "../src/model/scenario.js";
+import { fromUnit } from "../src/units/units.js";
+import { classMonotone, CODE_CASES, loadMonotone, searchResultsPassCheck, thicknessMonotone, unitRoundTrips } from "./helpers/invariants.js";
 
-const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
-const seeds = fc.integer({ min: 1, max: 1_000_000 });
-
-function generated(seed: number) {
-  return parseScenario(smallSearchScenario(seed).yaml);
-}
-function withLoad(s: Scenario, factor: number): Scenario {
-  const load = { ...s.load, factoredTension_N: s.load.factoredTension_N * factor };
-  if (s.load.serviceTension_N !== undefined) load.serviceTension_N = s.load.serviceTension_N * factor;
-  return { ...s, load };
-}
-
-describe("search invariants", () => {
+describe("search invariants (IS 800:2007)", () => {
+  const c = CODE_CASES.is800;
   it("every layout search returns passes check on its own", () => {
-    let checked = 0;
-    fc.assert(
-      fc.property(seeds, (seed) => {
-        const { scenario, code } = generated(seed);
-        for (const c of searchLayouts({ scenario, code, costs }, { top: 3, rankBy: "cost" }).results) {
-          checked++;
-          const again = checkScenario(c.scenario, code);
-          expect(again.report.pass).toBe(true);
-          expect(again.report.jointStrength_N).toBeCloseTo(c.report.jointStrength_N, 6);
-        }
-      }),
-      { numRuns: 12, seed: 11 },
-    );
-    expect(checked).toBeGreaterThan(10); // the property was exercised, not vacuous
+    expect(searchResultsPassCheck(c, 12, 11)).toBeGreaterThan(10); // the property was exercised, not vacuous
   });
-
   it("raising the load never lowers the optimum's cost nor the least compliant bolt count", () => {
-    let compared = 0;
-    fc.assert(
-      fc.property(seeds, fc.double({ min: 1.05, max: 1.6, noNaN: true }), (seed, factor) => {
-        const { scenario, code } = generated(seed);
-        const heavier = withLoad(scenario, factor);
-        const cost = (s: Scenario) => searchLayouts({ scenario: s, code, costs }, { top: 1, rankBy: "cost" }).results[0]?.cost.total ?? Infinity;
-        const bolts = (s: Scenario) => searchLayouts({ scenario: s, code, costs }, { top: 1, rankBy: "bolts" }).results[0]?.joint.holes.length ?? Infinity;
-        const [c0, c1] = [cost(scenario), cost(heavier)];
-        if (Number.isFinite(c1)) compared++;
-        expect(c1).toBeGreaterThanOrEqual(c0 - 1e-9);
-        expect(bolts(heavier)).toBeGreaterThanOrEqual(bolts(scenario));
-      }),
-      { numRuns: 8, seed: 12 },
-    );
-    expect(compared).toBeGreaterThan(2);
+    expect(loadMonotone(c, 8, 12)).toBeGreaterThan(2);
   });
-
   it("a stronger bolt class never needs more bolts for the same size and pattern", () => {
-    let exercised = 0;
-    fc.assert(
-      fc.property(seeds, fc.constantFrom("grid", "staggered"), (seed, pattern) => {
-        const { scenario, code } = generated(seed);
-        if (scenario.bolts?.assembly === "friction-grip") return;
-        const d = scenario.search?.sizes_mm?.[1] ?? 20;
-        const least = (cls: "4.6" | "5.6" | "8.8" | "10.9") =>
-          searchLayouts({ scenario: { ...scenario, search: { ...scenario.search, sizes_mm: [d], classes: [cls], patterns: [pattern] } }, code, costs }, { top: 1, rankBy: "bolts" }).results[0]?.joint.holes.length ?? Infinity;
-        const counts = (["4.6", "5.6", "8.8", "10.9"] as const).map(least);
-        if (Number.isFinite(counts[3]!)) exercised++;
-        for (let i = 1; i < counts.length; i++) expect(counts[i]!).toBeLessThanOrEqual(counts[i - 1]!);
-      }),
-      { numRuns: 6, seed: 13 },
-    );
-    expect(exercised).toBeGreaterThan(2);
+    expect(classMonotone(c, 6, 13)).toBeGreaterThan(2);
+  });
+});
+
+// The same invariants under the other codes, on a few scenarios each (thousands in `npm run soak`).
+describe.each([
+  ["EN 1993-1-8", CODE_CASES.en1993],
+  ["AISC 360-16 (US units)", CODE_CASES.aisc360],
+])("search invariants (%s)", (_name, c) => {
+  it("every layout search returns passes check on its own", () => {
+    expect(searchResultsPassCheck(c, 6, 21)).toBeGreaterThan(5);
+  });
+  it("raising the load never lowers the optimum's cost nor the least compliant bolt count", () => {
+    expect(loadMonotone(c, 4, 22)).toBeGreaterThan(1);
+  });
+  it("a stronger bolt class never needs more bolts for the same size and pattern", () => {
+    expect(classMonotone(c, 12, 31)).toBeGreaterThan(2);
   });
 });
 
@@ -99,16 +58,13 @@ function resistances(t: number, grade = "E250", tCover = 8) {
   return { gross: r("gross-yield:mainA"), net: r("net-section:mainA"), bearing: r("bearing:mainA:A"), block: r("block-shear:mainA:A"), shear: r("bolt-shear:A") };
 }
 
-describe("plate resistances and thickness (IS 800:2007)", () => {
-  it("within one yield band (t < 20 mm, E250 fy 250) gross yield, net section, bearing and block shear never fall as the plate thickens", () => {
-    fc.assert(
-      fc.property(fc.double({ min: 6, max: 18.5, noNaN: true }), fc.double({ min: 0.1, max: 1.4, noNaN: true }), (t, dt) => {
-        const a = resistances(t);
-        const b = resistances(t + dt);
-        for (const k of ["gross", "net", "bearing", "block"] as const) expect(b[k]).toBeGreaterThanOrEqual(a[k] - 1e-6);
-      }),
-      { numRuns: 40, seed: 14 },
-    );
+describe("plate resistances and thickness", () => {
+  it("within one yield band (t < 20 mm, E250 fy 250) gross yield, net section, bearing and block shear never fall as the plate thickens (IS 800:2007)", () => {
+    thicknessMonotone(CODE_CASES.is800, 40, 14);
+  });
+  it("the same within S275's first band (t ≤ 16 mm, EN 10025-2) and for A36 (one Fy to 8 in)", () => {
+    thicknessMonotone(CODE_CASES.en1993, 10, 15);
+    thicknessMonotone(CODE_CASES.aisc360, 10, 16);
   });
 
   it("the thickness step of fy is the code's: 19.5 mm at fy 250 yields more than 20 mm at fy 240 (IS 2062 Table 2)", () => {
@@ -127,13 +83,7 @@ describe("plate resistances and thickness (IS 800:2007)", () => {
 
 describe("unit round trips", () => {
   it("kN ↔ kip, mm ↔ in, MPa ↔ ksi return what went in", () => {
-    fc.assert(
-      fc.property(fc.double({ min: 1e-3, max: 1e7, noNaN: true }), (v) => {
-        expect(fromUnit(toUnit(v, "kip", "force"), "kip", "force")).toBeCloseTo(v, 6);
-        expect(fromUnit(toUnit(v, "in", "length"), "in", "length")).toBeCloseTo(v, 6);
-        expect(fromUnit(toUnit(v, "ksi", "stress"), "ksi", "stress")).toBeCloseTo(v, 6);
-      }),
-    );
+    unitRoundTrips(100, 17);
   });
   it("1 in = 25.4 mm, 1 kip = 4.448222 kN, 1 ksi = 6.894757 MPa (exact definitions, common practice)", () => {
     expect(fromUnit(1, "in", "length")).toBe(25.4);

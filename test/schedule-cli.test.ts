@@ -224,8 +224,8 @@ describe("schedule: bad input gives one line naming the field, exit 2, nothing e
     ["an unknown schedule rule", () => small((p) => (p.schedule = { max_kinds: 2 })), [], /^splicewright: error: schedule\.max_kinds: unknown field/],
     ["no splices", () => small((p) => (p.splices = [])), [], /^splicewright: error: splices: list at least one splice/],
     ["a YAML syntax error", () => tempScenario("project: x\nsplices: [\n", "job.yaml"), [], /^splicewright: error: line \d+, column \d+: YAML syntax error/],
-    ["--max-types 0", () => small(), ["--max-types", "0"], /^splicewright: error: --max-types: must be a whole number of 1 or more/],
-    ["a negative --cost-per-type", () => small(), ["--cost-per-type", "-3"], /^splicewright: error: --cost-per-type: must be a number of 0 or more/],
+    ["--max-types 0", () => small(), ["--max-types", "0"], /^splicewright: error: --max-types: must be a whole number from 1 to 2000, got "0"/],
+    ["a negative --cost-per-type", () => small(), ["--cost-per-type", "-3"], /^splicewright: error: --cost-per-type: must be a number from 0 to 1000000000, got "-3"/],
     ["enumeration asked for with the minimum-bolts rule", () => small(), ["--method", "enumerate", "--min-bolts-per-type", "5"], /^splicewright: error: --method: enumerate cannot apply the minimum-bolts rule/],
     ["a missing file", () => "/nonexistent/job.yaml", [], /^splicewright: error: \/nonexistent\/job\.yaml: cannot read the file/],
   ];

@@ -1,6 +1,7 @@
 /**
  * Plate steels. Yield strength falls with thickness; ultimate strength does not within a grade.
  */
+import { ownEntry } from "./lookup.js";
 
 export interface SteelStrength {
   grade: string;
@@ -56,7 +57,7 @@ export const IS2062_GRADES: Record<string, SteelGrade> = {
  * @throws RangeError for an unknown grade.
  */
 export function is2062Strength(grade: string, t_mm: number): SteelStrength {
-  const steel = IS2062_GRADES[grade];
+  const steel = ownEntry(IS2062_GRADES, grade);
   if (!steel) throw new RangeError(`unknown IS 2062 grade "${grade}"`);
   // Band edges: t < 20 is the first band; 20..40 inclusive the second; above 40 the third.
   const band =

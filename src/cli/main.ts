@@ -1,6 +1,7 @@
 /**
  * The command-line shell: reads files, prints, sets exit codes. All calculation is in the pure core.
- * Exit codes: 0 all checks pass, 1 a check fails or nothing complies, 2 bad input, 3 internal error.
+ * Exit codes: 0 all checks pass, 1 a check fails or nothing complies, 2 bad input, 3 internal error,
+ * 4 the output could not be written (output.ts).
  */
 import { readFileSync, statSync } from "node:fs";
 import { fileURLToPath } from "node:url";
@@ -9,11 +10,16 @@ import type { CostTable } from "../catalogue/costs.js";
 import { applyCosts, parseCostTable, type CostFile } from "../io/costs.js";
 import { savedScenarioText } from "../io/save-scenario.js";
 import { parseYaml } from "../io/yaml.js";
+import { decodeText } from "../io/decode.js";
 import { searchJson } from "../report/search-json.js";
 import { RANK_BY, type RankBy } from "../search/ranking.js";
-import { searchLayouts } from "../search/search.js";
-import { writeFileSafely, writeFilesSafely } from "./files.js";
-import { EXPORT_FORMATS, exportFiles, type ExportFormat } from "../export/index.js";
+import { searchLayouts, type SearchContext } from "../search/search.js";
+import { checkTargets, writeFileSet } from "./files.js";
+import { EXPORT_FORMATS, exportFileNames, exportFiles, type ExportFormat } from "../export/index.js";
+import { WorkLimitError } from "../search/work-estimate.js";
+import { MAX_TOP, maxCandidatesOption, wholeNumber } from "./options.js";
+import { PROCESS_IO, terminalSafe, type Io } from "./output.js";
+import { SearchProgress } from "./search-progress.js";
 import { basename, extname, join } from "node:path";
 import { billOfMaterials } from "../export/bolt-list.js";
 import { compareChoices, compareCodes, MappingError, type CompareColumn } from "../compare/compare.js";
@@ -44,7 +50,7 @@ export function readScenarioText(file: string): string {
     throw new InputError(file, "cannot read the file (does it exist?)");
   }
   if (size > MAX_FILE_BYTES) throw new InputError(file, `file is larger than ${MAX_FILE_BYTES} bytes`);
-  return readFileSync(file, "utf8");
+  return decodeText(readFileSync(file), file);
 }
 
 function loadCheckable(file: string) {
@@ -55,8 +61,11 @@ function loadCheckable(file: string) {
 /** The bundled table of nearest equivalent materials between codes. */
 export const BUNDLED_EQUIVALENTS = fileURLToPath(new URL("../../catalogue/equivalents.yaml", import.meta.url));
 
-function splitList(text: string): string[] {
-  return text.split(",").map((s) => s.trim()).filter(Boolean);
+/** A comma-separated option value; an empty list (`--classes ,,,`) is bad input. */
+function splitList(text: string, option: string): string[] {
+  const items = text.split(",").map((s) => s.trim()).filter(Boolean);
+  if (items.length === 0) throw new InputError(option, `give at least one value (a comma-separated list), got "${text}"`);
+  return items;
 }
 
 /** The bundled cost catalogue (illustrative prices), next to the package. */
@@ -70,21 +79,23 @@ export function loadCosts(costsFile: string | undefined, scenarioCosts: unknown)
   return table;
 }
 
-function positiveInt(name: string) {
-  return (v: string) => {
-    if (!/^\d+$/.test(v) || Number(v) < 1) throw new InputError(`--${name}`, `must be a whole number of 1 or more, got "${v}"`);
-    return Number(v);
-  };
-}
+/** `--top` and `--rank`: 1 … MAX_TOP. */
+const rankNumber = (name: string) => wholeNumber(name, 1, MAX_TOP);
 
-/** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
-function chooseLayout(file: string, rank: number | undefined, costsFile: string | undefined) {
+/** A scenario for export and report (metric bolts only). */
+function parseForDrawing(file: string) {
   const { scenario, code } = parseScenario(readScenarioText(file));
   if (scenario.bolts && inchBoltSize(scenario.bolts.size_mm) !== undefined) {
     throw new InputError("bolts.size", "export and report do not cover inch bolts yet (no ASTM F3125 length, nut and washer tables): use check or search");
   }
+  return { scenario, code };
+}
+
+/** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
+function chooseLayout({ scenario, code }: ReturnType<typeof parseForDrawing>, opts: { rank?: number; costs?: string; maxCandidates?: number }) {
+  const rank = opts.rank;
   if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
-  const outcome = searchLayouts({ scenario, code, costs: loadCosts(costsFile, scenario.costs) }, { top: rank, rankBy: "cost" });
+  const outcome = searchWithProgress({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, rank, "cost", opts.maxCandidates);
   const chosen = outcome.results[rank - 1];
   if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
   return { checkable: chosen.scenario, code };
@@ -101,16 +112,28 @@ function parseFormats(text: string): ExportFormat[] {
   return out;
 }
 
-/** Today's date (ISO), or the one SOURCE_DATE_EPOCH names (reproducible output, common practice). */
+/** Latest date SOURCE_DATE_EPOCH may name: 9999-12-31 (ISO 8601 four-digit years). */
+const MAX_EPOCH_S = 253_402_300_799;
+
+/**
+ * Today's date (ISO), or the one SOURCE_DATE_EPOCH names (reproducible output, common practice): whole
+ * seconds since 1970-01-01 UTC, up to the year 9999; anything else is bad input.
+ */
 function today(): string {
   const epoch = process.env.SOURCE_DATE_EPOCH;
-  const d = epoch && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
-  return d.toISOString().slice(0, 10);
+  if (epoch === undefined || epoch === "") return new Date().toISOString().slice(0, 10);
+  if (!/^\d{1,12}$/.test(epoch) || Number(epoch) > MAX_EPOCH_S) throw new InputError("SOURCE_DATE_EPOCH", `must be whole seconds since 1970-01-01 UTC up to ${MAX_EPOCH_S} (the year 9999), got "${epoch}"`);
+  return new Date(Number(epoch) * 1000).toISOString().slice(0, 10);
 }
 
-interface Io {
-  out: (text: string) => void;
-  err: (text: string) => void;
+/** The search, bounded by --max-candidates (or the default), with a progress line on a terminal after 2 s. */
+function searchWithProgress(ctx: SearchContext, top: number, rankBy: RankBy, maxCandidates: number | undefined) {
+  const progress = new SearchProgress(process.stderr, "searching", top);
+  try {
+    return searchLayouts(ctx, { top, rankBy, onProgress: progress.update, ...(maxCandidates === undefined ? {} : { maxCandidates }) });
+  } finally {
+    progress.finish();
+  }
 }
 
 async function run(argv: string[], io: Io): Promise<number> {
@@ -144,24 +167,27 @@ async function run(argv: string[], io: Io): Promise<number> {
     .command("search")
     .description("find the best bolt layouts over the scenario's declared search space, proven optimal")
     .argument("<scenario>", "scenario file (YAML); bolts and layout are not needed")
-    .option("--top <n>", "how many layouts to show", positiveInt("top"), 10)
+    .option("--top <n>", `how many layouts to show (1 to ${MAX_TOP})`, rankNumber("top"), 10)
     .addOption(new Option("--rank-by <what>", "rank by").choices([...RANK_BY]).default("cost"))
     .option("--costs <file>", "cost catalogue (YAML) instead of the bundled illustrative one")
     .option("--save <file>", "write the chosen layout (rank 1, or --rank) as a scenario that check accepts")
-    .option("--rank <n>", "which result --save writes", positiveInt("rank"), 1)
+    .option("--rank <n>", "which result --save writes", rankNumber("rank"), 1)
     .option("--force", "let --save overwrite an existing file")
+    .option(...maxCandidatesOption)
     .option("--json", "print the results as JSON")
-    .action((file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; json?: boolean }) => {
+    .action(async (file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; maxCandidates?: number; json?: boolean }) => {
       const text = readScenarioText(file);
       const { scenario, code } = parseScenario(text);
       const costs = loadCosts(opts.costs, scenario.costs);
+      if (opts.save) checkTargets([opts.save], opts.force ?? false); // before the search, not after it
       const t0 = performance.now();
-      const outcome = searchLayouts({ scenario, code, costs }, { top: Math.max(opts.top, opts.save ? opts.rank : 1), rankBy: opts.rankBy });
+      const top = Math.max(opts.top, opts.save ? opts.rank : 1);
+      const outcome = searchWithProgress({ scenario, code, costs }, top, opts.rankBy, opts.maxCandidates);
       const elapsed = performance.now() - t0;
       outcome.stats.elapsed_ms = Number(elapsed.toFixed(1));
       if (opts.save) {
         const chosen = outcome.results[opts.rank - 1];
-        if (chosen) writeFileSafely(opts.save, savedScenarioText(parseYaml(text) as Record<string, unknown>, chosen, opts.rank), opts.force ?? false);
+        if (chosen) await writeFileSet([{ path: opts.save, content: savedScenarioText(parseYaml(text) as Record<string, unknown>, chosen, opts.rank) }], opts.force ?? false);
         else if (outcome.results.length > 0) throw new InputError("--rank", `there are only ${outcome.results.length} results`);
       }
       const shown = { ...outcome, results: outcome.results.slice(0, opts.top) };
@@ -176,16 +202,20 @@ async function run(argv: string[], io: Io): Promise<number> {
     .argument("<scenario>", "scenario file (YAML)")
     .requiredOption("--format <formats>", `one or more of ${EXPORT_FORMATS.join(", ")} (comma-separated), or all`)
     .requiredOption("--out <dir>", "folder to write into (created if missing)")
-    .option("--rank <n>", "export the n-th layout of the search instead of the scenario's own layout", positiveInt("rank"))
+    .option("--rank <n>", "export the n-th layout of the search instead of the scenario's own layout", rankNumber("rank"))
     .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
-    .option("--force", "overwrite existing files")
-    .action((file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean }) => {
+    .option("--force", "overwrite existing files (regular files only)")
+    .option(...maxCandidatesOption)
+    .action(async (file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean; maxCandidates?: number }) => {
       const formats = parseFormats(opts.format);
-      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
-      const { joint, report } = checkScenario(checkable, code);
+      const date = today();
+      const parsed = parseForDrawing(file);
       const base = basename(file, extname(file)) + (opts.rank !== undefined ? `-rank${opts.rank}` : "");
-      const { files, bom } = exportFiles({ scenario: checkable, joint, report, date: today(), base }, formats);
-      writeFilesSafely(files.map((f) => ({ path: join(opts.out, f.name), content: f.content })), opts.force ?? false);
+      checkTargets(exportFileNames(base, formats).map((n) => join(opts.out, n)), opts.force ?? false);
+      const { checkable, code } = chooseLayout(parsed, opts);
+      const { joint, report } = checkScenario(checkable, code);
+      const { files, bom } = exportFiles({ scenario: checkable, joint, report, date, base }, formats);
+      await writeFileSet(files.map((f) => ({ path: join(opts.out, f.name), content: f.content })), opts.force ?? false);
       for (const f of files) io.out(`wrote ${join(opts.out, f.name)}`);
       for (const n of bom.notes) io.err(`note: ${n}`);
       if (!report.pass) io.err(`the layout fails ${report.checks.filter((c) => !c.pass).length} check(s): see \`splicewright check ${file}\``);
@@ -198,16 +228,20 @@ async function run(argv: string[], io: Io): Promise<number> {
     .description("write a self-contained HTML calculation report (inputs, drawing, every check, verdict)")
     .argument("<scenario>", "scenario file (YAML)")
     .requiredOption("--out <file>", "the HTML file to write")
-    .option("--rank <n>", "report on the n-th layout of the search instead of the scenario's own layout", positiveInt("rank"))
+    .option("--rank <n>", "report on the n-th layout of the search instead of the scenario's own layout", rankNumber("rank"))
     .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
-    .option("--force", "overwrite an existing file")
-    .action((file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean }) => {
-      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
+    .option("--force", "overwrite an existing file (a regular file only)")
+    .option(...maxCandidatesOption)
+    .action(async (file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean; maxCandidates?: number }) => {
+      const date = today();
+      const parsed = parseForDrawing(file);
+      checkTargets([opts.out], opts.force ?? false);
+      const { checkable, code } = chooseLayout(parsed, opts);
       const { joint, report } = checkScenario(checkable, code);
       const bom = billOfMaterials(joint, checkable);
       const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
-      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date: today(), version: VERSION, origin });
-      writeFileSafely(opts.out, html, opts.force ?? false);
+      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date, version: VERSION, origin });
+      await writeFileSet([{ path: opts.out, content: html }], opts.force ?? false);
       io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
       exit = report.pass ? 0 : 1;
     });
@@ -220,38 +254,39 @@ async function run(argv: string[], io: Io): Promise<number> {
     .option("--sizes <list>", "bolt sizes, e.g. 16,20,24 or M16,M20")
     .option("--codes <list>", "design codes, e.g. is800,en1993,aisc360")
     .option("--costs <file>", "cost catalogue instead of the bundled illustrative one")
+    .option(...maxCandidatesOption)
     .option("--json", "print the comparison as JSON")
-    .action((file: string, opts: { classes?: string; sizes?: string; codes?: string; costs?: string; json?: boolean }) => {
+    .action((file: string, opts: { classes?: string; sizes?: string; codes?: string; costs?: string; maxCandidates?: number; json?: boolean }) => {
       const { scenario, code } = parseScenario(readScenarioText(file));
       const costs = loadCosts(opts.costs, scenario.costs);
-      if (!opts.classes && !opts.sizes && !opts.codes) throw new InputError("compare", "give --classes, --sizes or --codes");
-      if (opts.codes && (opts.classes || opts.sizes)) throw new InputError("--codes", "compare codes on their own (classes and sizes differ between codes)");
+      if (opts.classes === undefined && opts.sizes === undefined && opts.codes === undefined) throw new InputError("compare", "give --classes, --sizes or --codes");
+      if (opts.codes !== undefined && (opts.classes !== undefined || opts.sizes !== undefined)) throw new InputError("--codes", "compare codes on their own (classes and sizes differ between codes)");
       let columns: CompareColumn[];
-      if (opts.codes) {
-        const codes = splitList(opts.codes).map((id) => {
+      if (opts.codes !== undefined) {
+        const codes = splitList(opts.codes, "--codes").map((id) => {
           const found = findCode(id);
           if (!found) throw new InputError("--codes", `unknown design code "${id}" (known: ${codeIds().join(", ")})`);
           return found;
         });
         const table = scenario.compare !== undefined ? parseMapping(scenario.compare, "compare") : parseMappingText(readScenarioText(BUNDLED_EQUIVALENTS), "catalogue/equivalents.yaml");
         try {
-          columns = compareCodes(scenario, code, codes, costs, table);
+          columns = compareCodes(scenario, code, codes, costs, table, opts.maxCandidates);
         } catch (e) {
           if (e instanceof MappingError) throw new InputError(e.field, e.message);
           throw e;
         }
       } else {
-        const classes = opts.classes ? splitList(opts.classes).map((c) => {
+        const classes = opts.classes !== undefined ? splitList(opts.classes, "--classes").map((c) => {
           const cls = c;
           if (!isPropertyClass(cls) || !(code.classesFor(scenario.bolts?.assembly ?? "bearing") as readonly string[]).includes(cls)) throw new InputError("--classes", `unknown or not allowed property class "${c}" (allowed: ${code.classesFor(scenario.bolts?.assembly ?? "bearing").join(", ")})`);
           return cls as PropertyClass;
         }) : [];
-        const sizes = opts.sizes ? splitList(opts.sizes).map((t) => {
+        const sizes = opts.sizes !== undefined ? splitList(opts.sizes, "--sizes").map((t) => {
           const d = Number(t.replace(/^M/i, ""));
           if (!isBoltSize(d)) throw new InputError("--sizes", `unknown bolt size "${t}" (known: ${BOLT_SIZES_MM.map((x) => `M${x}`).join(", ")})`);
           return d;
         }) : [];
-        columns = compareChoices(scenario, code, costs, classes, sizes);
+        columns = compareChoices(scenario, code, costs, classes, sizes, opts.maxCandidates);
       }
       io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency), null, 2) : formatCompare(scenario.name, columns, costs.currency));
       exit = columns.some((c) => c.best) ? 0 : 1;
@@ -272,11 +307,12 @@ async function run(argv: string[], io: Io): Promise<number> {
 }
 
 /** Entry point used by bin/splicewright.js. Never lets a stack trace reach the user for bad input. */
-export async function main(argv: string[], io: Io = { out: (s) => process.stdout.write(`${s}\n`), err: (s) => process.stderr.write(`${s}\n`) }): Promise<number> {
+export async function main(argv: string[], rawIo: Io = PROCESS_IO): Promise<number> {
+  const io = terminalSafe(rawIo);
   try {
     return await run(argv, io);
   } catch (e) {
-    if (e instanceof InputError) {
+    if (e instanceof InputError || e instanceof WorkLimitError) {
       io.err(`splicewright: error: ${e.message}`);
       return 2;
     }

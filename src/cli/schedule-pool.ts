@@ -12,6 +12,8 @@ export interface PoolOptions {
   /** Worker threads; 0 runs every search on the main thread. */
   workers: number;
   onProgress?: (done: number, total: number) => void;
+  /** The limit on each splice's declared space (checked before the searches; work-estimate.ts). */
+  maxCandidates?: number;
 }
 
 export interface PoolResult {
@@ -24,7 +26,7 @@ export interface PoolResult {
 export const defaultWorkers = (): number => availableParallelism();
 
 /** A splice's identity for the search: its scenario without name and project. */
-const identity = (p: Project, m: number) => JSON.stringify({ ...p.splices[m]!.scenario, name: "", project: "" });
+export const spliceIdentity = (p: Project, m: number) => JSON.stringify({ ...p.splices[m]!.scenario, name: "", project: "" });
 
 /** The same options under another splice's name. */
 function renamed(o: SpliceOptions, name: string): SpliceOptions {
@@ -34,7 +36,7 @@ function renamed(o: SpliceOptions, name: string): SpliceOptions {
 export async function searchSplices(projectText: string, project: Project, costs: CostTable, opts: PoolOptions): Promise<PoolResult> {
   const groups = new Map<string, number[]>();
   project.splices.forEach((_, m) => {
-    const key = identity(project, m);
+    const key = spliceIdentity(project, m);
     groups.set(key, [...(groups.get(key) ?? []), m]);
   });
   const tasks = [...groups.values()];
@@ -48,7 +50,7 @@ export async function searchSplices(projectText: string, project: Project, costs
   };
   const W = Math.min(opts.workers, tasks.length);
   if (W <= 0) {
-    for (const task of tasks) store(task, spliceOptions(project.splices[task[0]!]!.scenario, project.code, costs));
+    for (const task of tasks) store(task, spliceOptions(project.splices[task[0]!]!.scenario, project.code, costs, opts.maxCandidates));
   } else {
     await new Promise<void>((resolve, reject) => {
       const workers: Worker[] = [];
@@ -66,7 +68,7 @@ export async function searchSplices(projectText: string, project: Project, costs
       };
       const byFirst = new Map(tasks.map((t) => [t[0]!, t]));
       for (let i = 0; i < W; i++) {
-        const w = new Worker(new URL("./schedule-search-worker.js", import.meta.url), { workerData: { projectText, costs } });
+        const w = new Worker(new URL("./schedule-search-worker.js", import.meta.url), { workerData: { projectText, costs, maxCandidates: opts.maxCandidates } });
         workers.push(w);
         w.on("message", (msg: { index: number; result: SpliceOptions }) => {
           store(byFirst.get(msg.index)!, msg.result);

@@ -20,6 +20,14 @@ export function progressLine(label: string, done: number, total: number, elapsed
   return `${label} [${"#".repeat(filled)}${"-".repeat(width - filled)}]${tail}`;
 }
 
+/** One line of a phase whose length is unknown: a marker that moves with the time. */
+export function pulseLine(label: string, elapsed_s: number, columns: number): string {
+  const tail = `  ${elapsed_s.toFixed(0)} s`;
+  const width = Math.max(10, Math.min(40, columns - label.length - tail.length - 4));
+  const at = Math.floor(elapsed_s * 4) % width;
+  return `${label} [${"-".repeat(at)}#${"-".repeat(width - at - 1)}]${tail}`;
+}
+
 export class ProgressBar {
   private readonly t0 = performance.now();
   private last = -Infinity;
@@ -27,10 +35,25 @@ export class ProgressBar {
 
   constructor(
     private readonly stream: ProgressStream,
-    private readonly label: string,
-    private readonly total: number,
+    private label: string,
+    private total: number,
     readonly enabled: boolean,
   ) {}
+
+  /** Move on to the next phase of the job (its own label and count); the clock keeps running. */
+  phase(label: string, total: number): void {
+    this.label = label;
+    this.total = total;
+    this.last = -Infinity;
+    this.update(0);
+  }
+
+  /** Redraw a phase of unknown length (a moving marker and the elapsed time). */
+  pulse(): void {
+    if (!this.enabled) return;
+    this.shown = true;
+    this.stream.write(`\r${pulseLine(this.label, (performance.now() - this.t0) / 1000, this.stream.columns || 80)}\u001b[K`);
+  }
 
   /** Whether a job of `splices` splices on this stream gets a bar. */
   static wanted(stream: ProgressStream, splices: number): boolean {

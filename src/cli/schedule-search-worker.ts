@@ -7,10 +7,10 @@ import type { CostTable } from "../catalogue/costs.js";
 import { parseProject } from "../io/project.js";
 import { spliceOptions } from "../schedule/options.js";
 
-const { projectText, costs } = workerData as { projectText: string; costs: CostTable };
+const { projectText, costs, maxCandidates } = workerData as { projectText: string; costs: CostTable; maxCandidates?: number };
 const project = parseProject(projectText);
 
 parentPort!.on("message", (index: number) => {
   const splice = project.splices[index]!;
-  parentPort!.postMessage({ index, result: spliceOptions(splice.scenario, project.code, costs) });
+  parentPort!.postMessage({ index, result: spliceOptions(splice.scenario, project.code, costs, maxCandidates) });
 });

@@ -1,11 +1,12 @@
 /** The job schedule as terminal text. */
-import Table from "cli-table3";
 import { CAUTION } from "../report/check-json.js";
+import { BoxTable } from "./text-table.js";
 import type { Schedule } from "../schedule/schedule.js";
 
 const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
 const pct = (part: number, whole: number) => (whole > 0 ? `${((100 * part) / whole).toFixed(1)} %` : "—");
-const table = (head: string[]) => new Table({ head, style: { head: [], border: [], compact: true } });
+/** Linear-time boxed tables (text-table.ts): a job's schedule may have thousands of rows. */
+const table = (head: string[]) => new BoxTable(head);
 
 export interface ScheduleEffort {
   searched: number;

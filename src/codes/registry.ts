@@ -1,4 +1,5 @@
 /** The design codes splicewright knows, by the id a scenario's `code:` names. */
+import { ownEntry } from "../catalogue/lookup.js";
 import { IS800_2007 } from "./is800-2007/index.js";
 import { EN1993_1_8 } from "./en1993-1-8/index.js";
 import { AISC360_16 } from "./aisc360-16/index.js";
@@ -33,5 +34,5 @@ export function codeIds(): string[] {
 
 export function findCode(id: string): DesignCode | undefined {
   const key = id.trim().toLowerCase();
-  return CODES[ALIASES[key] ?? key];
+  return ownEntry(CODES, ownEntry(ALIASES, key) ?? key);
 }

@@ -8,6 +8,8 @@ import { ASTM_ISO_EQUIVALENT, astmBoltGrade, type PropertyClass } from "../catal
 import type { DesignCode } from "../codes/types.js";
 import type { PlateSpec, Scenario } from "../model/scenario.js";
 import { searchLayouts, type Candidate, type SearchOutcome } from "../search/search.js";
+import { resolveSpace } from "../search/space.js";
+import { countCandidates, DEFAULT_MAX_CANDIDATES, workLimitError } from "../search/work-estimate.js";
 
 export interface CompareColumn {
   label: string;
@@ -26,26 +28,47 @@ export interface CodeMapping {
   bolts: Array<Record<string, string>>;
 }
 
+/** A column before its search: the choice's label, its scenario and code, what was mapped. */
+interface ColumnSpec {
+  label: string;
+  scenario: Scenario;
+  code: DesignCode;
+  mapping: string[];
+}
+
 /** One column per (class, size) choice; a list left empty keeps the scenario's own search range. */
-export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[]): CompareColumn[] {
+export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[], maxCandidates = DEFAULT_MAX_CANDIDATES): CompareColumn[] {
   const classList: Array<PropertyClass | undefined> = classes.length ? classes : [undefined];
   const sizeList: Array<number | undefined> = sizes.length ? sizes : [undefined];
-  const columns: CompareColumn[] = [];
+  const specs: ColumnSpec[] = [];
   for (const c of classList) {
     for (const d of sizeList) {
       const search = { ...(scenario.search ?? {}) };
       if (c !== undefined) search.classes = [c];
       if (d !== undefined) search.sizes_mm = [d];
-      const s: Scenario = { ...scenario, search };
       const label = [d !== undefined ? `M${d}` : "", c !== undefined ? `class ${c}` : ""].filter(Boolean).join(" ");
-      columns.push(column(label, s, code, costs, []));
+      specs.push({ label, scenario: { ...scenario, search }, code, mapping: [] });
     }
   }
-  return withDifferences(columns);
+  return searchColumns(specs, costs, maxCandidates);
 }
 
-function column(label: string, scenario: Scenario, code: DesignCode, costs: CostTable, mapping: string[]): CompareColumn {
-  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost" });
+/**
+ * Search every column, after refusing the comparison when its columns together declare more than
+ * `maxCandidates` candidate layouts (work-estimate.ts): nothing is searched then.
+ */
+function searchColumns(specs: ColumnSpec[], costs: CostTable, maxCandidates: number): CompareColumn[] {
+  const counts = specs.map((s) => countCandidates(s.scenario, s.code, costs, resolveSpace(s.scenario, s.code, costs)));
+  const total = counts.reduce((a, b) => a + b, 0);
+  if (total > maxCandidates) {
+    const largest = specs[counts.indexOf(Math.max(...counts))]!;
+    throw workLimitError(largest.scenario, largest.code, costs, total, maxCandidates, "search", "the compared columns' search spaces hold together");
+  }
+  return withDifferences(specs.map((s) => column(s, costs)));
+}
+
+function column({ label, scenario, code, mapping }: ColumnSpec, costs: CostTable): CompareColumn {
+  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost", maxCandidates: Infinity });
   return { label, code, scenario, outcome, best: outcome.results[0] ?? null, costDifference: null, mapping };
 }
 
@@ -116,12 +139,11 @@ export function mapScenario(scenario: Scenario, from: DesignCode, to: DesignCode
 }
 
 /** One column per design code, the scenario mapped to each by the table. */
-export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping): CompareColumn[] {
-  return withDifferences(
-    codes.map((to) => {
-      const { scenario: mapped, mapping } = mapScenario(scenario, from, to, table);
-      // A code with scenario settings (factors, conventions) is bound to the mapped scenario, as parsing does.
-      return column(to.id, mapped, to.settings ? to.settings.bind(mapped) : to, costs, mapping);
-    }),
-  );
+export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping, maxCandidates = DEFAULT_MAX_CANDIDATES): CompareColumn[] {
+  const specs = codes.map((to): ColumnSpec => {
+    const { scenario: mapped, mapping } = mapScenario(scenario, from, to, table);
+    // A code with scenario settings (factors, conventions) is bound to the mapped scenario, as parsing does.
+    return { label: to.id, scenario: mapped, code: to.settings ? to.settings.bind(mapped) : to, mapping };
+  });
+  return searchColumns(specs, costs, maxCandidates);
 }

@@ -8,12 +8,9 @@
 import type { Joint, PlatePiece } from "../model/joint.js";
 import { holesOfPlate } from "../geometry/joint-builder.js";
 import type { BillOfMaterials } from "./bolt-list.js";
+import { csvField, plainLine } from "../text/escape.js";
 
-const q = (v: string | number) => {
-  const s = String(v);
-  return /[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-};
-const row = (cells: Array<string | number>) => cells.map(q).join(",");
+const row = (cells: Array<string | number>) => cells.map(csvField).join(",");
 const mm = (v: number) => Number(v.toFixed(2));
 
 /** The datum of a plate's hole schedule: its end inside the splice, and its lower edge. */
@@ -24,7 +21,7 @@ export function plateDatum(p: PlatePiece): { x_mm: number; sense: 1 | -1; text: 
 
 export function holeScheduleCsv(joint: Joint, title: string): string {
   const lines: string[] = [
-    `# splicewright hole schedule: ${title}`,
+    `# splicewright hole schedule: ${plainLine(title)}`,
     "# datum per plate: x along the force from the plate end inside the splice (main plate A: its right end, measured leftward into the plate; every other plate: its left end as drawn), y across from the plate's lower edge as drawn; mm",
     row(["plate", "hole", "x_mm", "y_mm", "diameter_mm", "slot_length_mm", "datum"]),
   ];
@@ -42,7 +39,7 @@ export function holeScheduleCsv(joint: Joint, title: string): string {
 }
 
 export function billOfMaterialsCsv(bom: BillOfMaterials, title: string): string {
-  const lines: string[] = [`# splicewright bill of materials: ${title}`, row(["kind", "item", "size", "class_or_grade", "length_mm", "thickness_mm", "width_mm", "quantity", "mass_kg", "standard"])];
+  const lines: string[] = [`# splicewright bill of materials: ${plainLine(title)}`, row(["kind", "item", "size", "class_or_grade", "length_mm", "thickness_mm", "width_mm", "quantity", "mass_kg", "standard"])];
   for (const b of bom.bolts) lines.push(row(["bolt", b.item, b.size, b.class, b.length_mm, "", "", b.quantity, "", b.standard]));
   for (const n of bom.nuts) lines.push(row(["nut", n.item, n.size, n.class, "", "", "", n.quantity, "", n.standard]));
   for (const w of bom.washers) lines.push(row(["washer", w.item, w.size, "", "", w.thickness_mm, "", w.quantity, "", w.standard]));

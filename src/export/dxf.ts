@@ -10,6 +10,7 @@ import type { Joint } from "../model/joint.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
+import { dxfText } from "../text/escape.js";
 import { arrowHeadPoints, buildDrawing, formatLength, type Layer, type Point } from "./drawing.js";
 
 export const DXF_LAYERS: Record<Layer, string> = {
@@ -64,7 +65,7 @@ export function renderDxf(input: DxfInput): string {
         dxf.addCircle(p3(prim.c), prim.r * u, { layerName: DXF_LAYERS[prim.layer] });
         break;
       case "text":
-        dxf.addText(p3(prim.at), prim.height * u, prim.text, { layerName: DXF_LAYERS[prim.layer] });
+        dxf.addText(p3(prim.at), prim.height * u, dxfText(prim.text), { layerName: DXF_LAYERS[prim.layer] });
         break;
       case "arrow": {
         dxf.addLine(p3(prim.from), p3(prim.to), { layerName: DXF_LAYERS[prim.layer] });
@@ -98,6 +99,6 @@ export function renderDxf(input: DxfInput): string {
     `${input.joint.holes.length} x M${b.size_mm} class ${b.propertyClass} ${b.assembly}; joint strength ${(input.report.jointStrength_N / 1000).toFixed(1)} kN; utilisation ${input.report.maxUtilisation.toFixed(2)}; ${input.report.pass ? "PASS" : "FAIL"}`,
     `drawn for 1:${k}; dimensions in ${input.units === "in" ? "inches" : "mm"}; ${input.date}. To be verified by a qualified engineer.`,
   ];
-  lines.forEach((t, i) => dxf.addText(p3([drawing.min[0], drawing.min[1] - (8 + 6 * i) * k]), text, t, { layerName: DXF_LAYERS.text }));
+  lines.forEach((t, i) => dxf.addText(p3([drawing.min[0], drawing.min[1] - (8 + 6 * i) * k]), text, dxfText(t), { layerName: DXF_LAYERS.text }));
   return dxf.stringify();
 }

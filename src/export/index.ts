@@ -27,6 +27,12 @@ export interface ExportInput {
   base: string;
 }
 
+/** The names of the files `exportFiles` writes for these formats, in its order (known before any work). */
+export function exportFileNames(base: string, formats: readonly ExportFormat[]): string[] {
+  const names: Record<ExportFormat, string[]> = { svg: [`${base}.svg`], dxf: [`${base}.dxf`], csv: [`${base}-holes.csv`, `${base}-bom.csv`], json: [`${base}.json`] };
+  return formats.flatMap((f) => names[f]);
+}
+
 export function exportFiles(input: ExportInput, formats: readonly ExportFormat[]): { files: ExportFile[]; bom: BillOfMaterials } {
   const bom = billOfMaterials(input.joint, input.scenario);
   const svgInput = { scenario: input.scenario, joint: input.joint, report: input.report, bom, date: input.date };

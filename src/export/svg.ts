@@ -6,11 +6,13 @@ import type { Joint } from "../model/joint.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
+import { xmlText } from "../text/escape.js";
 import { arrowHeadPoints, buildDrawing, formatLength, SCALES, type Drawing, type Point, type Primitive } from "./drawing.js";
 
 export const SHEET = { width: 420, height: 297, margin: 10, titleHeight: 42 } as const;
 
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+/** Every text into the SVG goes through xmlText: well-formed XML whatever a name holds. */
+const esc = xmlText;
 const n = (v: number) => (Math.round(v * 1000) / 1000).toString();
 
 export interface SvgInput {

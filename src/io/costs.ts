@@ -6,12 +6,19 @@ import { z } from "zod";
 import type { CostTable } from "../catalogue/costs.js";
 import { sizeOfKey } from "../catalogue/bolts.js";
 import { InputError, parseYaml } from "./yaml.js";
+import { freeText } from "./text-field.js";
 
-const price = z.number().nonnegative("must not be negative");
+/**
+ * Largest price of one item (a bolt assembly, a hole, a kg of plate, a tightening): 10⁶ cost units.
+ * Prices stay finite and far below where sums of thousands of bolts lose precision or overflow.
+ */
+export const MAX_PRICE = 1_000_000;
+
+const price = z.number().nonnegative("must not be negative").max(MAX_PRICE, `must be at most ${MAX_PRICE} (a price of one item)`);
 const classPrices = z.record(z.string().regex(/^(4\.6|5\.6|8\.8|10\.9)$/, "a property class: 4.6, 5.6, 8.8 or 10.9"), price);
 
 export const costSchema = z.strictObject({
-  currency: z.string().optional(),
+  currency: freeText().optional(),
   bolt_assembly: z.record(z.string().refine((k) => sizeOfKey(k) !== undefined, "a bolt size such as M20 or 3/4 in"), classPrices).optional(),
   hole: price.optional(),
   plate_per_kg: price.optional(),

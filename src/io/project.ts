@@ -16,6 +16,10 @@ import { validateCosts, type CostFile } from "./costs.js";
 import { toScenario } from "./scenario.js";
 import { scenarioSchema, LIMITS, type ScenarioFile } from "./schema.js";
 import { InputError, parseYaml } from "./yaml.js";
+import { freeText } from "./text-field.js";
+
+/** Largest fixed cost of stocking one bolt type (cost units): finite, far beyond any real figure. */
+export const MAX_COST_PER_TYPE = 1_000_000_000;
 
 /** Most splices in one project file. */
 export const MAX_SPLICES = 5000;
@@ -25,9 +29,9 @@ const piece = scenarioSchema.shape;
 const assembly = piece.bolts.unwrap().omit({ size: true, class: true });
 
 const spliceEntry = z.strictObject({
-  id: z.string().trim().min(1, "must not be empty"),
-  mark: z.string().optional(),
-  description: z.string().optional(),
+  id: freeText().pipe(z.string().trim().min(1, "must not be empty")),
+  mark: freeText().optional(),
+  description: freeText({ lines: true }).optional(),
   quantity: z.number().int("must be a whole number").min(1, "must be at least 1").max(10_000, "must be at most 10000").default(1),
   splice: piece.splice,
   plates: piece.plates,
@@ -40,13 +44,13 @@ const spliceEntry = z.strictObject({
 
 const scheduleSection = z.strictObject({
   max_types: z.number().int("must be a whole number").min(1, "must be at least 1").max(LIMITS.holes).optional(),
-  cost_per_type: z.number().nonnegative("must not be negative").default(0),
+  cost_per_type: z.number().nonnegative("must not be negative").max(MAX_COST_PER_TYPE, `must be at most ${MAX_COST_PER_TYPE}`).default(0),
   one_class_per_diameter: z.boolean().default(false),
   min_bolts_per_type: z.number().int("must be a whole number").nonnegative("must not be negative").default(0),
 });
 
 export const projectSchema = z.strictObject({
-  project: z.string().trim().min(1, "must not be empty"),
+  project: freeText().pipe(z.string().trim().min(1, "must not be empty")),
   code: piece.code,
   costs: piece.costs,
   search: piece.search,
@@ -62,6 +66,8 @@ export interface ProjectSplice {
   description?: string;
   quantity: number;
   scenario: Scenario;
+  /** The fields of the splice's own search section (a search field's error names the section it came from). */
+  ownSearchFields: string[];
 }
 
 export interface Project {
@@ -71,6 +77,8 @@ export interface Project {
   costs?: CostFile;
   rules: SelectionRules;
   splices: ProjectSplice[];
+  /** The fields of the project's search section (the defaults). */
+  searchFields: string[];
 }
 
 const pathText = (path: ReadonlyArray<PropertyKey>) => path.reduce<string>((s, p) => (typeof p === "number" ? `${s}[${p}]` : s ? `${s}.${String(p)}` : String(p)), "");
@@ -84,6 +92,16 @@ function firstIssue(error: z.ZodError): InputError {
 
 type Raw = Record<string, unknown>;
 const rawOf = (v: unknown): Raw => (v !== null && typeof v === "object" && !Array.isArray(v) ? (v as Raw) : {});
+
+/**
+ * Where a search field of splice m is set: `splices[m].search` when the splice gives it, `search` when
+ * only the project's defaults do, and the splice's own section when neither does (the default value).
+ */
+export function searchFieldPath(project: Project, m: number, field: string): string {
+  const splice = project.splices[m]!;
+  if (!splice.ownSearchFields.includes(field) && project.searchFields.includes(field)) return `search.${field}`;
+  return `splices[${m}].search.${field}`;
+}
 
 /** Parse and validate a project file's text completely (every splice through `toScenario`). */
 export function parseProject(text: string): Project {
@@ -141,7 +159,7 @@ export function parseProject(text: string): Project {
       if (e instanceof InputError) throw new InputError(origin(e.path), e.reason);
       throw e;
     }
-    const entry: ProjectSplice = { id: s.id, quantity: s.quantity, scenario };
+    const entry: ProjectSplice = { id: s.id, quantity: s.quantity, scenario, ownSearchFields: Object.keys(rawOf(own.search)) };
     if (s.mark !== undefined) entry.mark = s.mark;
     if (s.description !== undefined) entry.description = s.description;
     return entry;
@@ -149,7 +167,7 @@ export function parseProject(text: string): Project {
   const sched = file.schedule;
   const rules: SelectionRules = { costPerType: sched.cost_per_type, oneClassPerDiameter: sched.one_class_per_diameter, minBoltsPerType: sched.min_bolts_per_type };
   if (sched.max_types !== undefined) rules.maxTypes = sched.max_types;
-  const project: Project = { name: file.project, code: code!, rules, splices };
+  const project: Project = { name: file.project, code: code!, rules, splices, searchFields: Object.keys(rawOf(raw.search)) };
   if (costs) project.costs = costs;
   return project;
 }

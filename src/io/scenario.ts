@@ -35,6 +35,7 @@ export function validateFile(value: unknown): ScenarioFile {
   if (value === null || typeof value !== "object" || Array.isArray(value)) {
     throw new InputError("", "the scenario must be a YAML mapping of fields (name, code, splice, plates, load, ...)");
   }
+  refuseUnitsForCode(value as Record<string, unknown>);
   const system = (value as Record<string, unknown>).units === "us" ? "us" : "si";
   const result = withInputUnits(system, () => scenarioSchema.safeParse(value));
   if (result.success) return result.data;
@@ -49,6 +50,21 @@ export function validateFile(value: unknown): ScenarioFile {
   }
   if (valueAt(value, issue.path) === undefined) reason = "required";
   throw new InputError(path, reason);
+}
+
+/** The reason a code-specific setting is refused under another code. */
+function notReadBy(path: string, code: DesignCode): InputError {
+  return new InputError(path, `not read by ${code.id} (a setting of ${codeIds().filter((id) => findCode(id)?.settings?.fields.includes(path)).join(", ") || "no known code"})`);
+}
+
+/**
+ * `units: us` under a code that does not read it is named before any field is read: otherwise bare
+ * numbers would be taken as inches and the first too-large width would be blamed instead.
+ */
+function refuseUnitsForCode(file: Record<string, unknown>): void {
+  if (file.units !== "us" || typeof file.code !== "string") return;
+  const code = findCode(file.code);
+  if (code && !code.settings?.fields.includes("units")) throw notReadBy("units", code);
 }
 
 function plateSpec(p: { width: number; thickness: number; grade: string; edges: string }): PlateSpec {
@@ -285,7 +301,7 @@ function codeSettingsOf(file: ScenarioFile, code: DesignCode, scenario: Scenario
     throw new InputError("bolts.class", `ASTM grade ${file.bolts.class} is not read by ${code.id} (a bolt grade of ${codeIds().filter((id) => findCode(id)?.settings?.fields.includes("bolts.class (ASTM grade)")).join(", ")}; use an ISO 898-1 class)`);
   }
   for (const [path, present] of given) {
-    if (present && !code.settings?.fields.includes(path)) throw new InputError(path, `not read by ${code.id} (a setting of ${codeIds().filter((id) => findCode(id)?.settings?.fields.includes(path)).join(", ") || "no known code"})`);
+    if (present && !code.settings?.fields.includes(path)) throw notReadBy(path, code);
   }
   if (file.options.steel_strengths !== undefined) scenario.options.steelStrengths = file.options.steel_strengths as En10025Convention;
   if (file.options.bearing_deformation !== undefined) scenario.options.bearingDeformation = file.options.bearing_deformation;

@@ -7,6 +7,7 @@ import { z } from "zod";
 import { DEFAULT_INPUT_UNIT, parseQuantity, type Quantity, UnitError, US_INPUT_UNIT } from "../units/units.js";
 import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
 import { EN10025_CONVENTIONS } from "../catalogue/steels.js";
+import { freeText } from "./text-field.js";
 
 /** Largest values accepted, to stop absurd input before it reaches the core. */
 export const LIMITS = {
@@ -33,7 +34,7 @@ export function withInputUnits<T>(system: "si" | "us", run: () => T): T {
   }
 }
 
-function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean; max?: number } = {}) {
+function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean; max?: number; min?: () => { value: number; text: string } } = {}) {
   return z.unknown().transform((value, ctx): number => {
     if (value === undefined) {
       ctx.addIssue({ code: "custom", message: "required" });
@@ -56,6 +57,11 @@ function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean
     }
     if (opts.nonNegative && v < 0) {
       ctx.addIssue({ code: "custom", message: `must not be negative, got ${String(value)}` });
+      return z.NEVER;
+    }
+    const min = opts.min?.();
+    if (min && v < min.value - 1e-9) {
+      ctx.addIssue({ code: "custom", message: `${String(value)} is below the smallest accepted value, ${min.text}` });
       return z.NEVER;
     }
     if (opts.max !== undefined && v > opts.max) {
@@ -131,18 +137,27 @@ const layout = z.strictObject({
   holes: z.array(holePoint).min(1).max(LIMITS.holes).optional(),
 });
 
+/**
+ * The smallest search step: 1 mm, or 1/16 in (1.5875 mm) for a file in US units — finer steps than a
+ * fabricator can mark only multiply the work (common practice).
+ */
+export const MIN_SEARCH_STEP = { si: { value: 1, text: "1 mm" }, us: { value: 25.4 / 16, text: "1/16 in" } } as const;
+
+/** Longest lists of the search section (sizes, classes, cover thicknesses), beyond any real choice. */
+export const MAX_SEARCH_LIST = 20;
+
 const search = z.strictObject({
-  patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).optional(),
+  patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
   max_along: count(LIMITS.linesAlong).optional(),
   min_bolts: count(LIMITS.holes).optional(),
-  sizes: z.array(boltSize).min(1).optional(),
-  classes: z.array(propertyClass).min(1).optional(),
-  step: length(1000).optional(),
+  sizes: z.array(boltSize).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
+  classes: z.array(propertyClass).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
+  step: quantity("length", { positive: true, max: 1000, min: () => (inputUnits === US_INPUT_UNIT ? MIN_SEARCH_STEP.us : MIN_SEARCH_STEP.si) }).optional(),
   max_splice_length: length().optional(),
   max_end_distance: length().optional(),
   max_across: count(LIMITS.boltsAcross).optional(),
   gauge: length().optional(),
-  cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).optional(),
+  cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
 });
 
 const options = z.strictObject({
@@ -170,8 +185,8 @@ const factors = z.strictObject({
 });
 
 export const scenarioSchema = z.strictObject({
-  name: z.string().min(1, "must not be empty"),
-  project: z.string().optional(),
+  name: freeText().pipe(z.string().min(1, "must not be empty")),
+  project: freeText().optional(),
   units: z.enum(["si", "us"]).optional(),
   code: z.string().min(1),
   splice: z.strictObject({

@@ -9,6 +9,7 @@ import type { BillOfMaterials } from "../export/bolt-list.js";
 import { renderSvg } from "../export/svg.js";
 import { boltSizeText } from "../catalogue/bolts.js";
 import { CAUTION, citationText } from "./check-json.js";
+import { xmlText } from "../text/escape.js";
 
 export interface ReportInput {
   scenario: CheckableScenario;
@@ -21,7 +22,8 @@ export interface ReportInput {
   origin: string;
 }
 
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+/** Every text into the page goes through xmlText (entities, no control characters). */
+const esc = xmlText;
 const fx = (v: number, d = 1) => (Number.isFinite(v) ? v.toFixed(d) : "∞");
 
 const SPLICE_TEXT: Record<Joint["spliceType"], string> = {

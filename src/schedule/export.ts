@@ -3,12 +3,10 @@
  */
 import { CAUTION } from "../report/check-json.js";
 import type { Schedule } from "./schedule.js";
+import { csvField, plainLine } from "../text/escape.js";
 
 const money = (v: number) => Number(v.toFixed(2));
-const cell = (v: string | number | null) => {
-  const s = v === null ? "" : String(v);
-  return /[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-};
+const cell = (v: string | number | null) => csvField(v === null ? "" : v);
 const csvLine = (cells: Array<string | number | null>) => cells.map(cell).join(",");
 
 function rulesText(s: Schedule): string[] {
@@ -72,7 +70,7 @@ export function scheduleJson(s: Schedule, meta: { code: string; currency: string
 
 export function scheduleCsv(s: Schedule): string {
   const lines = [
-    `# splicewright schedule: ${s.project}`,
+    `# splicewright schedule: ${plainLine(s.project)}`,
     `# ${rulesText(s).join("; ")}; ${s.selection.proven ? "proven optimal" : "NOT proven optimal"} (${s.selection.method})`,
     csvLine(["id", "mark", "quantity", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths_mm", "utilisation", "governing", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"]),
   ];
@@ -88,7 +86,7 @@ export function scheduleCsv(s: Schedule): string {
 }
 
 export function orderCsv(s: Schedule): string {
-  const lines = [`# splicewright bolts to order: ${s.project}`, csvLine(["type", "kind", "item", "length_mm", "quantity", "standard"])];
+  const lines = [`# splicewright bolts to order: ${plainLine(s.project)}`, csvLine(["type", "kind", "item", "length_mm", "quantity", "standard"])];
   for (const o of s.order) lines.push(csvLine([o.type, o.kind, o.item, o.length_mm, o.quantity, o.standard]));
   return lines.join("\n") + "\n";
 }

@@ -28,9 +28,10 @@ export interface SpliceOptions {
   checks: number;
 }
 
-export function spliceOptions(scenario: Scenario, code: DesignCode, costs: CostTable): SpliceOptions {
+/** One splice's best layout per bolt type; its declared space held to `maxCandidates` (work-estimate.ts). */
+export function spliceOptions(scenario: Scenario, code: DesignCode, costs: CostTable, maxCandidates?: number): SpliceOptions {
   const out: SpliceOptions = { options: [], none: [], checks: 0 };
-  for (const entry of bestPerBoltType({ scenario, code, costs })) {
+  for (const entry of bestPerBoltType({ scenario, code, costs }, maxCandidates)) {
     out.checks += entry.stats.fullChecks;
     const c = entry.best;
     if (c) out.options.push({ type: entry.type, cost: c.cost.total, bolts: c.joint.holes.length, row: resultRow(c, 1), scenario: c.scenario });

@@ -100,6 +100,8 @@ export interface ScheduleInput {
   selection: SolvedSelection & { assignment: number[] };
   code: DesignCode;
   costs: CostTable;
+  /** Called after each splice is re-checked (for a progress bar). */
+  onProgress?: (done: number, total: number) => void;
 }
 
 const near = (a: number, b: number) => Math.abs(a - b) <= COST_TOLERANCE * 1e3 * Math.max(1, Math.abs(a), Math.abs(b));
@@ -143,6 +145,7 @@ export function buildSchedule(input: ScheduleInput): Schedule {
     use.bolts += o.bolts * s.quantity;
     use.layoutCost += cost * s.quantity;
     uses.set(t, use);
+    input.onProgress?.(m + 1, input.splices.length);
     return {
       id: s.id,
       mark: s.mark ?? "",

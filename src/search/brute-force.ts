@@ -5,6 +5,7 @@
 import { compareKeys, type RankBy } from "./ranking.js";
 import { evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
 import { families, layoutOf, resolveSpace, taperedGauges, type Family } from "./space.js";
+import { countCandidates } from "./work-estimate.js";
 
 /** Every tapered count vector of the declared shape: one parity, never rising from line 0, not uniform. */
 export function taperedVectors(lines: number, kmax: number): number[][] {
@@ -34,7 +35,7 @@ function narrowest(ctx: SearchContext): number {
 export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankBy): { results: Candidate[]; checks: number } {
   const space = resolveSpace(ctx.scenario, ctx.code, ctx.costs);
   const fams = families(ctx.scenario, ctx.code, ctx.costs, space);
-  const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
+  const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates: countCandidates(ctx.scenario, ctx.code, ctx.costs, space) };
   const width = narrowest(ctx);
   // The best `top` layouts of distinct identity so far (a layout's identity leaves out its gauge).
   const best: Candidate[] = [];

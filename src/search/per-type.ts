@@ -12,6 +12,7 @@ import type { BoltAssembly } from "../model/scenario.js";
 import { searchLayouts, type Candidate, type SearchContext, type SearchStats } from "./search.js";
 import { resolveSpace } from "./space.js";
 import { boltPrice } from "../catalogue/costs.js";
+import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
 
 /** A bolt type: size + property class + assembly kind. Lengths are bill-of-materials detail. */
 export interface BoltType {
@@ -29,15 +30,20 @@ export interface TypeBest {
   stats: SearchStats;
 }
 
-/** Best layout per bolt type over the scenario's declared space, types in space order (size, then class). */
-export function bestPerBoltType(ctx: SearchContext): TypeBest[] {
+/**
+ * Best layout per bolt type over the scenario's declared space, types in space order (size, then class).
+ * The whole space is held to `maxCandidates` before the first type is searched (each type's part is
+ * smaller): a WorkLimitError otherwise.
+ */
+export function bestPerBoltType(ctx: SearchContext, maxCandidates = DEFAULT_MAX_CANDIDATES): TypeBest[] {
+  assertWithinLimit(ctx.scenario, ctx.code, ctx.costs, maxCandidates);
   const space = resolveSpace(ctx.scenario, ctx.code, ctx.costs);
   const out: TypeBest[] = [];
   for (const size of space.sizes_mm) {
     for (const propertyClass of space.classes) {
       if (boltPrice(ctx.costs, size, propertyClass) === undefined) continue;
       const scenario = { ...ctx.scenario, search: { ...(ctx.scenario.search ?? {}), sizes_mm: [size], classes: [propertyClass] } };
-      const outcome = searchLayouts({ ...ctx, scenario }, { top: 1, rankBy: "cost" });
+      const outcome = searchLayouts({ ...ctx, scenario }, { top: 1, rankBy: "cost", maxCandidates: Infinity });
       const entry: TypeBest = { type: { size_mm: size, propertyClass, assembly: space.assembly }, best: outcome.results[0] ?? null, stats: outcome.stats };
       if (!entry.best && outcome.noResultReason) entry.noResultReason = outcome.noResultReason;
       out.push(entry);

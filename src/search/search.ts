@@ -19,6 +19,7 @@ import { MinHeap } from "./heap.js";
 import { compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
 import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
+import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
 
 export interface Candidate {
   family: Family;
@@ -41,6 +42,8 @@ export interface SearchStats {
   fullChecks: number;
   integerProgrammes: number;
   enumerationFallbacks: number;
+  /** Candidate layouts of the declared space, counted before the search (work-estimate.ts). */
+  declaredCandidates: number;
   elapsed_ms?: number;
 }
 
@@ -56,7 +59,14 @@ export interface SearchOutcome {
 export interface SearchOptions {
   top: number;
   rankBy: RankBy;
+  /** Most candidate layouts the declared space may hold (default DEFAULT_MAX_CANDIDATES; work-estimate.ts). */
+  maxCandidates?: number;
+  /** Called now and then while the search runs (every PROGRESS_EVERY nodes), for a progress line. */
+  onProgress?: (stats: SearchStats, results: number) => void;
 }
+
+/** Nodes between two progress calls. */
+export const PROGRESS_EVERY = 256;
 
 /**
  * Checks whose result cannot change with the gauge, per pattern (proof in DEVELOPERS.md, "Search").
@@ -178,9 +188,11 @@ function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel
 export function searchLayouts(ctx: SearchContext, options: SearchOptions): SearchOutcome {
   const { scenario, code } = ctx;
   const space = resolveSpace(scenario, code, ctx.costs);
+  // The work is estimated from the declared space and bounded before anything is built.
+  const declaredCandidates = assertWithinLimit(scenario, code, ctx.costs, options.maxCandidates ?? DEFAULT_MAX_CANDIDATES);
   const fams = families(scenario, code, ctx.costs, space);
   const T = scenario.load.factoredTension_N;
-  const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0 };
+  const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates };
   const heap = new MinHeap<Node>((a, b) => compareKeys(a.key, b.key) < 0);
   const models = new Map<Family, LinearModel | null>();
   const streams = new Map<Family, TaperedStream>();
@@ -317,6 +329,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   while (heap.size > 0 && results.length < options.top) {
     const node = heap.pop()!;
     stats.nodes++;
+    if (options.onProgress && stats.nodes % PROGRESS_EVERY === 0) options.onProgress(stats, results.length);
     if (node.kind === "result") {
       const id = identityOf(node.c);
       if (seen.has(id)) continue;

@@ -82,7 +82,8 @@ export function rangeTo(from_mm: number, top_mm: number, top: RangeTop, step_mm:
   return stepRange(from_mm, Math.min(up(top_mm, step_mm), top.ruleMax_mm ?? Infinity), step_mm);
 }
 
-function narrowestWidth(s: Scenario): number {
+/** The narrowest plate of the splice, mm. */
+export function narrowestWidth(s: Scenario): number {
   return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
 }
 
@@ -102,9 +103,24 @@ export function gaugesFor(G: number, width_mm: number, limits: SearchLimits, spa
  * top kind decides the rounding), leaving the minimum edge distance beside the widest line's two bolts.
  */
 export function taperedGauges(f: Family, width_mm: number, space: SearchSpace): number[] {
+  return taperedGaugesFor(f.limits, width_mm, space);
+}
+
+/** Tapered gauges from the code's limits (see taperedGauges). */
+export function taperedGaugesFor(limits: SearchLimits, width_mm: number, space: SearchSpace): number[] {
   if (space.fixedGauge_mm !== undefined) return [space.fixedGauge_mm];
-  const byEdgeMin = width_mm - 2 * f.limits.edgeMin_mm;
-  return rangeTo(f.limits.gaugeMin_mm, f.limits.gaugeMax_mm, f.limits.tops.gauge, space.step_mm).filter((g) => g <= byEdgeMin + 1e-9);
+  const byEdgeMin = width_mm - 2 * limits.edgeMin_mm;
+  return rangeTo(limits.gaugeMin_mm, limits.gaugeMax_mm, limits.tops.gauge, space.step_mm).filter((g) => g <= byEdgeMin + 1e-9);
+}
+
+/** A family's dimension ranges from the code's limits: pitches, end distances, end distances at the butt. */
+export function dimensionRanges(limits: SearchLimits, space: SearchSpace, butt: boolean): { pitches: number[]; ends: number[]; endsAtButt: Array<number | undefined> } {
+  const userMax = space.maxEndDistance_mm ?? Infinity;
+  return {
+    pitches: rangeTo(limits.pitchMin_mm, limits.pitchMax_mm, limits.tops.pitch, space.step_mm),
+    ends: rangeTo(limits.endMin_mm, limits.endMax_mm, limits.tops.end, space.step_mm).filter((e) => e <= userMax + 1e-9),
+    endsAtButt: butt ? rangeTo(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), limits.tops.endAtButt, space.step_mm).filter((e) => e <= userMax + 1e-9) : [undefined],
+  };
 }
 
 /** Resolve the declared space of a scenario. */
@@ -136,7 +152,8 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
   return space;
 }
 
-function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: BoltAssembly): BoltSpec {
+/** The bolt of a family: the searched size and class with the scenario's assembly, threads and holes. */
+export function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: BoltAssembly): BoltSpec {
   const given = scenario.bolts;
   const spec: BoltSpec = {
     size_mm: d,
@@ -153,7 +170,8 @@ function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, assembly: 
   return spec;
 }
 
-function withCover(scenario: Scenario, t: number | undefined): Scenario {
+/** The scenario with every cover plate at thickness t (butt splices), or as it is. */
+export function withCover(scenario: Scenario, t: number | undefined): Scenario {
   if (t === undefined) return scenario;
   const covers: PlateSpec[] = scenario.plates.covers.map((c) => ({ ...c, thickness_mm: t }));
   return { ...scenario, plates: { ...scenario.plates, covers } };
@@ -177,10 +195,7 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
         const base = { ...withCover(scenario, coverT), bolts: boltSpecFor(scenario, d, c, space.assembly) };
         for (const pattern of space.patterns) {
           const limits = code.searchLimits(base, d, pattern);
-          const pitches = rangeTo(limits.pitchMin_mm, limits.pitchMax_mm, limits.tops.pitch, space.step_mm);
-          const userMax = space.maxEndDistance_mm ?? Infinity;
-          const ends = rangeTo(limits.endMin_mm, limits.endMax_mm, limits.tops.end, space.step_mm).filter((e) => e <= userMax + 1e-9);
-          const endsAtButt: Array<number | undefined> = butt ? rangeTo(limits.endMin_mm, Math.max(limits.endAtButtMax_mm, 0), limits.tops.endAtButt, space.step_mm).filter((e) => e <= userMax + 1e-9) : [undefined];
+          const { pitches, ends, endsAtButt } = dimensionRanges(limits, space, butt);
           const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
           const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
           const push = (counts: number[] | null, lines: number, across: number, G: number) => {

@@ -8,6 +8,7 @@
  *   1 lbf = 4.4482216152605 N  → 1 kip = 4448.2216152605 N
  *   1 ksi = 1 kip/in² = 6.894757293168 MPa
  */
+import { ownEntry } from "../catalogue/lookup.js";
 
 export type Quantity = "length" | "force" | "stress";
 
@@ -47,16 +48,19 @@ export function parseQuantity(value: unknown, quantity: Quantity, defaults: Reco
   return amount * factor;
 }
 
+/** A number, a fraction "3/4" or a mixed number "1 1/2"; a sign applies to the whole amount ("-1 1/2" is −1.5). */
 function parseAmount(text: string): number {
-  const mixed = /^([-+]?\d+)\s+(\d+)\/(\d+)$/.exec(text);
-  if (mixed) return Number(mixed[1]) + Number(mixed[2]) / Number(mixed[3]);
-  const fraction = /^([-+]?\d+)\/(\d+)$/.exec(text);
-  if (fraction) return Number(fraction[1]) / Number(fraction[2]);
+  const sign = text.startsWith("-") ? -1 : 1;
+  const unsigned = text.replace(/^[-+]/, "");
+  const mixed = /^(\d+)\s+(\d+)\/(\d+)$/.exec(unsigned);
+  if (mixed) return sign * (Number(mixed[1]) + Number(mixed[2]) / Number(mixed[3]));
+  const fraction = /^(\d+)\/(\d+)$/.exec(unsigned);
+  if (fraction) return (sign * Number(fraction[1])) / Number(fraction[2]);
   return Number(text);
 }
 
 function factorOf(unit: string, quantity: Quantity): number {
-  const factor = UNIT_FACTORS[quantity][unit];
+  const factor = ownEntry(UNIT_FACTORS[quantity], unit);
   if (factor === undefined) {
     const known = Object.keys(UNIT_FACTORS[quantity]).join(", ");
     throw new UnitError(`unknown ${quantity} unit "${unit}" (known: ${known})`);

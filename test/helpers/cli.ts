@@ -14,8 +14,9 @@ export interface CliResult {
   stderr: string;
 }
 
-export function cli(args: string[], cwd: string = ROOT): CliResult {
-  const r = spawnSync(process.execPath, [BIN, ...args], { cwd, encoding: "utf8" });
+/** Run the CLI; `env` adds variables, `uid`/`gid` run it as another user (when the tests run as root). */
+export function cli(args: string[], cwd: string = ROOT, env: Record<string, string> = {}, as: { uid?: number; gid?: number } = {}): CliResult {
+  const r = spawnSync(process.execPath, [BIN, ...args], { cwd, encoding: "utf8", env: { ...process.env, ...env }, ...as });
   return { code: r.status ?? -1, stdout: r.stdout, stderr: r.stderr };
 }
 

@@ -2,6 +2,7 @@
  * Materials under AISC 360-16: ASTM A36 and A572 Grade 50 plates; bolt groups of Table J3.2 from the
  * ASTM grade (or the ISO class of the same strength level, as the search names bolts).
  */
+import { ownEntry } from "../../catalogue/lookup.js";
 import { ASTM_ISO_EQUIVALENT, type AstmBoltGrade } from "../../catalogue/bolts.js";
 import { ASTM_PLATE_GRADES, astmPlateGrade } from "../../catalogue/steels.js";
 import type { BoltSpec, PlateSpec } from "../../model/scenario.js";
@@ -16,7 +17,7 @@ export const GRADES = Object.keys(ASTM_PLATE_GRADES);
  */
 export function plateStrength(spec: PlateSpec): { fy_MPa: number; fu_MPa: number; note: string } {
   const grade = astmPlateGrade(spec.grade);
-  const steel = grade ? ASTM_PLATE_GRADES[grade] : undefined;
+  const steel = grade ? ownEntry(ASTM_PLATE_GRADES, grade) : undefined;
   if (!grade || !steel) throw new RangeError(`unknown ASTM plate grade "${spec.grade}"`);
   return {
     fy_MPa: steel.Fy_ksi * MPA_PER_KSI,

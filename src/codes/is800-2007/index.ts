@@ -1,6 +1,7 @@
 /**
  * IS 800:2007 (limit state method) as a design-code module.
  */
+import { ownEntry } from "../../catalogue/lookup.js";
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
@@ -36,7 +37,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
     ...scenario.plates.covers.map((c, i): [string, PlateSpec] => [i === 0 ? "plates.cover" : "plates.cover_b", c]),
   ];
   for (const [path, spec] of plates) {
-    if (!IS2062_GRADES[spec.grade]) {
+    if (!ownEntry(IS2062_GRADES, spec.grade)) {
       errors.push({ path: `${path}.grade`, message: `unknown IS 2062 grade "${spec.grade}" (known: ${GRADES.join(", ")})` });
     }
   }
