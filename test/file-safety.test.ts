@@ -132,7 +132,7 @@ describe("a set of files, all or nothing", () => {
     const dir = fresh();
     // A search of some seconds: a 1 mm step at a load near the plate's strength.
     const slow = tempScenario(readFileSync(searchDemo, "utf8").replace("step: 5 mm ", "step: 1 mm ").replace("620 kN", "760 kN"));
-    const child = spawn(process.execPath, [BIN, "export", slow, "--rank", "1000", "--format", "all", "--out", join(dir, "out"), "--max-candidates", "100000000000"], { stdio: "ignore" });
+    const child = spawn(process.execPath, [BIN, "export", slow, "--rank", "1000", "--format", "all", "--out", join(dir, "out"), "--max-candidates", "1000000000000"], { stdio: "ignore" });
     await new Promise((r) => setTimeout(r, 1500));
     child.kill("SIGTERM");
     const [code, signal] = await new Promise<[number | null, string | null]>((r) => child.on("exit", (c, s) => r([c, s])));

@@ -11,7 +11,7 @@ import { parseScenario } from "../src/io/scenario.js";
 import { bruteForceLayouts, taperedVectors } from "../src/search/brute-force.js";
 import { bestPerBoltType } from "../src/search/per-type.js";
 import { searchLayouts } from "../src/search/search.js";
-import { families, resolveSpace, stepRange } from "../src/search/space.js";
+import { families, resolveSpace, stepRange, taperedGauges } from "../src/search/space.js";
 import { assertWithinLimit, countCandidates, countText, DEFAULT_MAX_CANDIDATES, stepCount, taperedVectorCount, WorkLimitError } from "../src/search/work-estimate.js";
 import { ROOT, scenarioPath } from "./helpers/cli.js";
 import { rng, smallSearchScenario } from "./helpers/generate.js";
@@ -28,7 +28,7 @@ function listedCandidates(scenario: ReturnType<typeof demo>["scenario"], code: R
     const dims = f.pitches_mm.length * f.ends_mm.length * f.endsAtButt_mm.length;
     if (f.countsPerLine) n += dims * f.gauges_mm.length;
     else {
-      const gauges = space.fixedGauge_mm !== undefined ? [space.fixedGauge_mm] : stepRange(f.limits.gaugeMin_mm, Math.min(f.limits.gaugeMax_mm, width - 2 * f.limits.edgeMin_mm), space.step_mm);
+      const gauges = taperedGauges(f, width, space);
       const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gauges[0]! + 1e-9) + 1);
       n += dims * gauges.length * taperedVectors(f.lines, kcap).length;
     }
@@ -74,7 +74,7 @@ describe("counting the declared space without listing it", () => {
     expect(bruteForceLayouts({ scenario: s, code, costs }, 1, "cost").checks).toBe(countCandidates(s, code, costs, resolveSpace(s, code, costs)));
   });
 
-  it("the bundled demos hold 6 × 10^6 to 1.1 × 10^8 candidates, below the default limit of 10^10", () => {
+  it("the bundled demos hold 1.2 × 10^8 to 2.4 × 10^8 candidates, below the default limit of 10^11", () => {
     const counts = ["footbridge-tie-search.yaml", "sports-hall-chord-ec3-search.yaml", "canopy-tie-us-search.yaml"].map((n) => {
       const { scenario, code } = demo(n);
       return countCandidates(scenario, code, costs, resolveSpace(scenario, code, costs));
@@ -106,15 +106,15 @@ describe("the limit, before any search starts", () => {
     })();
     expect(e).toBeInstanceOf(WorkLimitError);
     expect(e!.path).toBe("search.step");
-    expect(e!.reason).toMatch(/about 3\.9 × 10\^10 candidate layouts, more than the limit of 1\.0 × 10\^10; narrow it \(doubling search\.step leaves about .*\) or pass --max-candidates \d+/);
+    expect(e!.reason).toMatch(/about 1\.5 × 10\^11 candidate layouts, more than the limit of 1\.0 × 10\^11; narrow it \(doubling search\.step leaves about .*\) or pass --max-candidates \d+/);
   });
 
   it("a 5000 mm plate with 100 lines is refused by searchLayouts before its families are built, naming search.patterns", () => {
-    expect(() => searchLayouts({ ...wide, costs }, { top: 1, rankBy: "cost" })).toThrow(/^search\.patterns: the declared search space holds about 2\.6 × 10\^51/);
+    expect(() => searchLayouts({ ...wide, costs }, { top: 1, rankBy: "cost" })).toThrow(/^search\.patterns: the declared search space holds about 1\.5 × 10\^52/);
   });
 
   it("maxCandidates lifts the limit knowingly (and a tighter one refuses the demo)", () => {
-    const lifted = searchLayouts({ ...fine, costs }, { top: 1, rankBy: "cost", maxCandidates: 4e10 });
+    const lifted = searchLayouts({ ...fine, costs }, { top: 1, rankBy: "cost", maxCandidates: 2e11 });
     expect(lifted.results.length).toBe(1);
     expect(lifted.stats.declaredCandidates).toBeGreaterThan(DEFAULT_MAX_CANDIDATES);
     const d = demo("footbridge-tie-search.yaml");

@@ -37,4 +37,4 @@ export function amount(name: string, max: number) {
 }
 
 /** `--max-candidates`: the declared space a search may hold, lifted knowingly (work-estimate.ts). */
-export const maxCandidatesOption = ["--max-candidates <n>", "search a declared space of up to n candidate layouts (default 10^10; see README, Limits)", wholeNumber("max-candidates", 1, Number.MAX_SAFE_INTEGER)] as const;
+export const maxCandidatesOption = ["--max-candidates <n>", "search a declared space of up to n candidate layouts (default 10^11; see README, Limits)", wholeNumber("max-candidates", 1, Number.MAX_SAFE_INTEGER)] as const;

@@ -18,11 +18,11 @@ import type { Scenario, SearchSpec } from "../model/scenario.js";
 import { boltSpecFor, dimensionRanges, gaugesFor, narrowestWidth, resolveSpace, taperedGaugesFor, withCover, type SearchPattern, type SearchSpace } from "./space.js";
 
 /**
- * Candidate layouts a search may have in its declared space without --max-candidates: 10¹⁰. The bundled
- * demos hold 6 × 10⁶ to 1.1 × 10⁸ and a 600 mm plate with the default 12 lines about 8 × 10⁹; the
+ * Candidate layouts a search may have in its declared space without --max-candidates: 10¹¹. The bundled
+ * demos hold 1.2 × 10⁸ to 2.4 × 10⁸ and a 600 mm plate with the default 12 lines about 3.3 × 10¹⁰; the
  * best-first search checks a tiny share of them (DEVELOPERS.md, "Work bounds", has the measurements).
  */
-export const DEFAULT_MAX_CANDIDATES = 10_000_000_000;
+export const DEFAULT_MAX_CANDIDATES = 100_000_000_000;
 
 /** The search fields an engineer can narrow, in the order the message prefers them on a tie. */
 export const SEARCH_FIELDS = ["step", "max_along", "max_across", "sizes", "classes", "patterns", "cover_thicknesses"] as const;
