@@ -28,6 +28,8 @@ import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
 import { formatSheet } from "./sheet.js";
+import { styleFor } from "./style.js";
+import { MIN_WIDTH, outputWidth, PIPED_WIDTH } from "./text.js";
 import { registerSchedule } from "./schedule-command.js";
 
 export const VERSION = "0.1.0";
@@ -111,6 +113,14 @@ function today(): string {
 interface Io {
   out: (text: string) => void;
   err: (text: string) => void;
+  /** The stream `out` writes to: its width and whether it is a terminal (colour). */
+  stdout?: { isTTY?: boolean; columns?: number };
+}
+
+/** --width: a whole number of columns, at least the narrowest layout. */
+function widthOption(v: string): number {
+  if (!/^\d+$/.test(v) || Number(v) < MIN_WIDTH || Number(v) > 1000) throw new InputError("--width", `must be a whole number of columns from ${MIN_WIDTH} to 1000, got "${v}"`);
+  return Number(v);
 }
 
 async function run(argv: string[], io: Io): Promise<number> {
@@ -133,10 +143,14 @@ async function run(argv: string[], io: Io): Promise<number> {
     .description("check the scenario's bolt layout against every clause of its design code")
     .argument("<scenario>", "scenario file (YAML)")
     .option("--json", "print the results as JSON instead of a calculation sheet")
-    .action((file: string, opts: { json?: boolean }) => {
+    .option("--brief", "the summary and one line per check")
+    .option("--width <columns>", `lay the sheet out for this many columns (default: the terminal's, at least ${MIN_WIDTH}; ${PIPED_WIDTH} when piped)`, widthOption)
+    .action((file: string, opts: { json?: boolean; brief?: boolean; width?: number }) => {
       const { scenario, code } = loadCheckable(file);
       const { joint, report } = checkScenario(scenario, code);
-      io.out(opts.json ? JSON.stringify(checkReportJson(scenario, joint, report), null, 2) : formatSheet(scenario, joint, report));
+      const stream = io.stdout ?? {};
+      const sheet = () => formatSheet(scenario, joint, report, { width: outputWidth(stream, opts.width), style: styleFor(stream), brief: opts.brief ?? false });
+      io.out(opts.json ? JSON.stringify(checkReportJson(scenario, joint, report), null, 2) : sheet());
       exit = exitCodeOf(report);
     });
 
@@ -272,7 +286,7 @@ async function run(argv: string[], io: Io): Promise<number> {
 }
 
 /** Entry point used by bin/splicewright.js. Never lets a stack trace reach the user for bad input. */
-export async function main(argv: string[], io: Io = { out: (s) => process.stdout.write(`${s}\n`), err: (s) => process.stderr.write(`${s}\n`) }): Promise<number> {
+export async function main(argv: string[], io: Io = { out: (s) => process.stdout.write(`${s}\n`), err: (s) => process.stderr.write(`${s}\n`), stdout: process.stdout }): Promise<number> {
   try {
     return await run(argv, io);
   } catch (e) {
