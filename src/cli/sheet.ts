@@ -155,8 +155,6 @@ export function formatSheet(scenario: CheckableScenario, joint: Joint, report: C
 
   const summary = summarise(scenario, report);
   const rows = summaryRows(summary, u);
-  const load = rows.find((r) => r.key === "load");
-  if (load && scenario.load.serviceTension_N !== undefined) load.value += `; service tension ${forceText(scenario.load.serviceTension_N, u)}`;
   out.push(style.strong("SUMMARY"));
   out.push(...summaryLines(rows, width, style));
   out.push("");

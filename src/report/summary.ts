@@ -75,6 +75,8 @@ export interface StrengthFigures {
 }
 
 export interface Summary extends StrengthFigures {
+  /** The service tension the scenario gives, if any. */
+  serviceTension_N: number | null;
   pass: boolean;
   verdict: "PASS" | "FAIL";
   codeTitle: string;
@@ -143,8 +145,14 @@ export function summarise(scenario: CheckableScenario, report: CheckReport): Sum
       : figures.service
         ? ""
         : "none: slip is checked at the factored load (an ultimate check)";
+  if (figures.service) {
+    const id = figures.service.check.id;
+    const fold = folded.find((f) => f.members.some((m) => m.id === id));
+    if (fold) figures.service.check.component = fold.component;
+  }
   return {
     ...figures,
+    serviceTension_N: scenario.load.serviceTension_N ?? null,
     pass: report.pass,
     verdict: report.pass ? "PASS" : "FAIL",
     codeTitle: report.codeTitle,
@@ -237,7 +245,7 @@ export function summaryRows(s: Summary, units: DisplayUnits = "si"): SummaryRow[
       detail: [],
       status: s.pass ? "pass" : "fail",
     },
-    { key: "load", label: "Factored load", value: `T = ${F(s.factoredTension_N)}`, detail: [], status: "info" },
+    { key: "load", label: "Factored load", value: `T = ${F(s.factoredTension_N)}${s.serviceTension_N !== null ? `; service tension ${F(s.serviceTension_N)}` : ""}`, detail: [], status: "info" },
     { key: "strength", label: "Joint design strength", value: `${F(s.jointStrength_N)} (the least joint tension any ultimate check allows)`, detail: [], status: "info" },
     {
       key: "strength-utilisation",
