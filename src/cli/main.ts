@@ -79,14 +79,17 @@ function positiveInt(name: string) {
   };
 }
 
-/** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
-function chooseLayout(file: string, rank: number | undefined, costsFile: string | undefined) {
+/**
+ * The scenario's own layout, or (with a rank) the rank-th row of the search over its space, counted
+ * as `search` counts them (the best of each arrangement, or with `variants` every variant).
+ */
+function chooseLayout(file: string, rank: number | undefined, costsFile: string | undefined, variants = false) {
   const { scenario, code } = parseScenario(readScenarioText(file));
   if (scenario.bolts && inchBoltSize(scenario.bolts.size_mm) !== undefined) {
     throw new InputError("bolts.size", "export and report do not cover inch bolts yet (no ASTM F3125 length, nut and washer tables): use check or search");
   }
   if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
-  const outcome = searchLayouts({ scenario, code, costs: loadCosts(costsFile, scenario.costs) }, { top: rank, rankBy: "cost" });
+  const outcome = searchLayouts({ scenario, code, costs: loadCosts(costsFile, scenario.costs) }, { top: rank, rankBy: "cost", variants });
   const chosen = outcome.results[rank - 1];
   if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
   return { checkable: chosen.scenario, code };
@@ -164,13 +167,15 @@ async function run(argv: string[], io: Io): Promise<number> {
     .option("--save <file>", "write the chosen layout (rank 1, or --rank) as a scenario that check accepts")
     .option("--rank <n>", "which result --save writes", positiveInt("rank"), 1)
     .option("--force", "let --save overwrite an existing file")
+    .option("--variants", "show every variant (pitch, end distances, cover thickness) instead of the best layout of each arrangement")
     .option("--json", "print the results as JSON")
-    .action((file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; json?: boolean }) => {
+    .action((file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; json?: boolean; variants?: boolean }) => {
       const text = readScenarioText(file);
       const { scenario, code } = parseScenario(text);
       const costs = loadCosts(opts.costs, scenario.costs);
       const t0 = performance.now();
-      const outcome = searchLayouts({ scenario, code, costs }, { top: Math.max(opts.top, opts.save ? opts.rank : 1), rankBy: opts.rankBy });
+      const variants = opts.variants ?? false;
+      const outcome = searchLayouts({ scenario, code, costs }, { top: Math.max(opts.top, opts.save ? opts.rank : 1), rankBy: opts.rankBy, variants });
       const elapsed = performance.now() - t0;
       outcome.stats.elapsed_ms = Number(elapsed.toFixed(1));
       if (opts.save) {
@@ -179,7 +184,11 @@ async function run(argv: string[], io: Io): Promise<number> {
         else if (outcome.results.length > 0) throw new InputError("--rank", `there are only ${outcome.results.length} results`);
       }
       const shown = { ...outcome, results: outcome.results.slice(0, opts.top) };
-      io.out(opts.json ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency), null, 2) : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed));
+      io.out(
+        opts.json
+          ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency, { variants, efficiencyBasis: scenario.options.efficiencyBasis }), null, 2)
+          : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed, variants),
+      );
       if (opts.save && outcome.results[opts.rank - 1]) io.err(`saved result ${opts.rank} to ${opts.save}`);
       exit = outcome.results.length > 0 ? 0 : 1;
     });
@@ -192,10 +201,11 @@ async function run(argv: string[], io: Io): Promise<number> {
     .requiredOption("--out <dir>", "folder to write into (created if missing)")
     .option("--rank <n>", "export the n-th layout of the search instead of the scenario's own layout", positiveInt("rank"))
     .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
+    .option("--variants", "count --rank over every variant, as `search --variants` does")
     .option("--force", "overwrite existing files")
-    .action((file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean }) => {
+    .action((file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean; variants?: boolean }) => {
       const formats = parseFormats(opts.format);
-      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
+      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs, opts.variants ?? false);
       const { joint, report } = checkScenario(checkable, code);
       const base = basename(file, extname(file)) + (opts.rank !== undefined ? `-rank${opts.rank}` : "");
       const { files, bom } = exportFiles({ scenario: checkable, joint, report, date: today(), base }, formats);
@@ -214,12 +224,13 @@ async function run(argv: string[], io: Io): Promise<number> {
     .requiredOption("--out <file>", "the HTML file to write")
     .option("--rank <n>", "report on the n-th layout of the search instead of the scenario's own layout", positiveInt("rank"))
     .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
+    .option("--variants", "count --rank over every variant, as `search --variants` does")
     .option("--force", "overwrite an existing file")
-    .action((file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean }) => {
-      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
+    .action((file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean; variants?: boolean }) => {
+      const { checkable, code } = chooseLayout(file, opts.rank, opts.costs, opts.variants ?? false);
       const { joint, report } = checkScenario(checkable, code);
       const bom = billOfMaterials(joint, checkable);
-      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
+      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search${opts.variants ? " --variants" : ""}\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
       const html = renderReportHtml({ scenario: checkable, joint, report, bom, date: today(), version: VERSION, origin });
       writeFileSafely(opts.out, html, opts.force ?? false);
       io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
@@ -267,7 +278,8 @@ async function run(argv: string[], io: Io): Promise<number> {
         }) : [];
         columns = compareChoices(scenario, code, costs, classes, sizes);
       }
-      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency), null, 2) : formatCompare(scenario.name, columns, costs.currency));
+      const basis = scenario.options.efficiencyBasis;
+      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis));
       exit = columns.some((c) => c.best) ? 0 : 1;
     });
 

@@ -141,6 +141,7 @@ const search = z.strictObject({
   max_splice_length: length().optional(),
   max_end_distance: length().optional(),
   max_across: count(LIMITS.boltsAcross).optional(),
+  min_across: count(LIMITS.boltsAcross).optional(),
   gauge: length().optional(),
   cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).optional(),
 });

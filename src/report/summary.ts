@@ -204,16 +204,21 @@ export const RULE_SHORT: Record<CheckKind, string> = {
   "filler-thickness": "filler thickness",
 };
 
-/** The detailing state in a table cell: "all 19 pass; tightest: min. end distance, at the limit". */
+/** The tightest passing rule in a table cell: "min. end distance at limit", "max. pitch +8 mm". */
+export function tightestCell(d: DetailingState, units: DisplayUnits = "si"): string {
+  const t = d.tightest;
+  if (!t) return "—";
+  const spare = t.kind === "rule" ? (Math.abs(t.margin_mm ?? 0) < 0.005 ? "at limit" : `+${lengthText(t.margin_mm ?? 0, units)}`) : `ratio ${ratioText(t.ratio)}`;
+  return `${RULE_SHORT[t.checkKind]} ${spare}`;
+}
+
+/** The detailing state in a table cell: "all pass; min. end distance at limit", "1 fail: min. pitch 3 mm short". */
 export function detailingCell(d: DetailingState, units: DisplayUnits = "si"): string {
   if (d.failures.length > 0) {
     const f = d.failures[0]!;
     return `${d.failures.length} fail: ${RULE_SHORT[f.checkKind]}${f.kind === "rule" ? ` ${lengthText(-(f.margin_mm ?? 0), units)} ${f.bound === "min" ? "short" : "over"}` : ""}`;
   }
-  const t = d.tightest;
-  if (!t) return `all ${d.total} pass`;
-  const spare = t.kind === "rule" ? (Math.abs(t.margin_mm ?? 0) < 0.005 ? "at limit" : `+${lengthText(t.margin_mm ?? 0, units)}`) : `ratio ${ratioText(t.ratio)}`;
-  return `all pass; ${RULE_SHORT[t.checkKind]} ${spare}`;
+  return d.tightest ? `all pass; ${tightestCell(d, units)}` : `all ${d.total} pass`;
 }
 
 /** The efficiency basis in a few words, for tables that cannot print the whole definition. */
