@@ -23,14 +23,15 @@ export function visibleLength(s: string): number {
   return Array.from(s.replace(ANSI, "")).length;
 }
 
-/** A unit never starts a line: "40 mm" stays together. */
+/** A unit never starts a line ("40 mm" stays together), nor does a clause number leave its "cl.". */
 const UNIT = /^(mm|mm²|kN|kips?|in|MPa|ksi|N|%)[,;:.)]*$/;
+const GLUE_NEXT = /(^|\()(cl\.|Sect\.|Eq\.|Table|Tables)$/;
 
 function words(paragraph: string): string[] {
   const out: string[] = [];
   for (const w of paragraph.split(" ")) {
     if (w.length === 0) continue;
-    if (UNIT.test(w) && out.length > 0) out[out.length - 1] += ` ${w}`;
+    if (out.length > 0 && (UNIT.test(w) || GLUE_NEXT.test(out[out.length - 1]!))) out[out.length - 1] += ` ${w}`;
     else out.push(w);
   }
   return out;

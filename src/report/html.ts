@@ -213,6 +213,7 @@ ${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).jo
 <tr><td>Exposed to corrosion</td><td>${scenario.options.exposedToCorrosion ? "yes" : "no"}</td></tr>
 <tr><td>Bolt net area Anb</td><td>${esc(scenario.options.boltNetArea)}</td></tr>
 <tr><td>Bolt strength basis</td><td>ISO 898-1 ${esc(scenario.options.boltStrength)} values</td></tr>
+<tr><td>Efficiency basis</td><td>${esc(scenario.options.efficiencyBasis)}</td></tr>
 <tr><td>Net-section load</td><td>${scenario.options.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"}</td></tr>
 </table>
 </section>
