@@ -108,7 +108,7 @@ export function renderReportHtml(input: ReportInput): string {
     ...bom.bolts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
     ...bom.nuts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
     ...bom.washers.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
-    ...bom.plates.map((x) => `<tr><td>${esc(`${x.item} ${x.width_mm} × ${x.thickness_mm} × ${fx(x.length_mm, 0)} ${x.grade}`)}</td><td class="num">${x.quantity}</td><td>${fx(x.mass_kg, 2)} kg, ${x.holes} holes Ø${x.holeDiameter_mm}</td></tr>`),
+    ...bom.plates.map((x) => `<tr><td>${esc(`${x.item} ${lengthNumber(x.width_mm)} × ${lengthNumber(x.thickness_mm)} × ${lengthNumber(x.length_mm)} ${x.grade}`)}</td><td class="num">${x.quantity}</td><td>${fx(x.mass_kg, 2)} kg, ${x.holes} holes Ø${x.holeDiameter_mm}</td></tr>`),
   ].join("\n");
 
   return `<!DOCTYPE html>
