@@ -27,3 +27,5 @@ export { buildSchedule } from "./schedule/schedule.js";
 export { spliceOptions, selectionProblem } from "./schedule/options.js";
 export { enumerateSelection, evaluateAssignment } from "./schedule/selection.js";
 export { solveByEnumeration, chooseMethod } from "./schedule/solve.js";
+export { summarise, summaryRows, summaryJson, strengthFigures, detailingState, UTILISATION_DEFINITIONS } from "./report/summary.js";
+export { foldTwins } from "./report/twins.js";

@@ -139,7 +139,7 @@ describe("CLI in US units", () => {
     expect(sheet.code).toBe(0);
     expect(sheet.stdout).toContain("Joint design strength:  135.6 kips");
     expect(sheet.stdout).toContain("3/4 in ASTM A325");
-    expect(sheet.stdout).toContain("Fy / Fu (ksi)");
+    expect(sheet.stdout).toContain("Fy/Fu (ksi)");
     const json = cli(["check", scenarioPath("canopy-tie-us.yaml"), "--json"]);
     const j = JSON.parse(json.stdout);
     expect(j.units).toBe("us");

@@ -14,22 +14,27 @@ const demo = scenarioPath("footbridge-tie-search.yaml");
 describe("splicewright search", () => {
   const json = JSON.parse(cli(["search", demo, "--json"]).stdout);
 
-  it("shows the best 10 by cost with the declared space and the proof statement", () => {
+  it("shows the best 10 arrangements by cost with the declared space and the proof statement", () => {
     const r = cli(["search", demo]);
     expect(r.code).toBe(0);
     expect(r.stdout).toContain("Search space (declared):");
-    expect(r.stdout).toContain("Best 10 by cost");
-    expect(r.stdout).toMatch(/Proven: nothing in the declared space ranks above/);
+    expect(r.stdout).toContain("Best 10 arrangements (the best layout of each; --variants shows every variant) by cost");
+    expect(r.stdout).toMatch(/Proven over the declared space above: the best layout of each distinct arrangement/);
     expect(r.stdout).toContain("qualified engineer");
   });
 
-  it("JSON rows carry size, class, pattern, counts, dimensions, bolts, length, strength, efficiency, utilisation, cost", () => {
+  it("JSON rows carry size, class, pattern, counts, dimensions, bolts, length, strength, efficiency, both utilisations, the rules, cost", () => {
     expect(json.results).toHaveLength(10);
     expect(json.proven).toBe(true);
+    expect(json.rows).toBe("best of each arrangement");
     for (const row of json.results) {
-      for (const k of ["bolt", "pattern", "counts", "endDistance_mm", "edgeDistance_mm", "bolts", "spliceLength_mm", "jointStrength_kN", "efficiency", "utilisation", "cost"]) expect(row).toHaveProperty(k);
+      for (const k of ["bolt", "pattern", "counts", "endDistance_mm", "edgeDistance_mm", "bolts", "spliceLength_mm", "jointStrength_kN", "efficiency", "strengthUtilisation", "serviceUtilisation", "detailing", "cost"]) expect(row).toHaveProperty(k);
+      expect(row).not.toHaveProperty("utilisation");
       expect(row.jointStrength_kN).toBeGreaterThanOrEqual(620);
-      expect(row.utilisation).toBeLessThanOrEqual(1);
+      // Strength utilisation = T / joint design strength, T = 620 kN (the demo's factored tension).
+      expect(row.strengthUtilisation).toBeCloseTo(620 / row.jointStrength_kN, 3);
+      expect(row.serviceUtilisation).toBeNull();
+      expect(row.detailing.allPass).toBe(true);
     }
     const costs = json.results.map((r: { cost: number }) => r.cost);
     expect([...costs].sort((a, b) => a - b)).toEqual(costs);

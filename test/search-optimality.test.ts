@@ -1,9 +1,12 @@
 /**
  * Proof of optimality: on generated scenarios over a reduced space (2 sizes × 2 classes, 10 mm steps,
  * at most 3 lines), the best-first search returns exactly the layouts a plain brute-force enumeration
- * through the same checker returns, in the same order. The scenarios are generated data, not real jobs.
+ * through the same checker returns, in the same order — the best of each distinct arrangement (the
+ * default), every variant (--variants), and with search.min_across set. The scenarios are generated
+ * data, not real jobs.
  */
 import { readFileSync } from "node:fs";
+import { parse, stringify } from "yaml";
 import { describe, expect, it } from "vitest";
 import { parseCostTable } from "../src/io/costs.js";
 import { parseScenario } from "../src/io/scenario.js";
@@ -15,12 +18,15 @@ import { smallSearchScenario } from "./helpers/generate.js";
 
 const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
 
-function compare(seed: number, rankBy: RankBy, top: number) {
+function compare(seed: number, rankBy: RankBy, top: number, options: { variants?: boolean; minAcross?: number } = {}) {
   const g = smallSearchScenario(seed);
-  const { scenario, code } = parseScenario(g.yaml);
+  const file = parse(g.yaml) as { search: Record<string, unknown> };
+  if (options.minAcross !== undefined) file.search.min_across = options.minAcross;
+  const { scenario, code } = parseScenario(stringify(file));
   const ctx = { scenario, code, costs };
-  const fast = searchLayouts(ctx, { top, rankBy });
-  const brute = bruteForceLayouts(ctx, top, rankBy);
+  const variants = options.variants ?? false;
+  const fast = searchLayouts(ctx, { top, rankBy, variants });
+  const brute = bruteForceLayouts(ctx, top, rankBy, { variants });
   const line = (c: { key: { numbers: number[]; text: string } }) => `${c.key.numbers.join(" ")} ${c.key.text}`;
   return { g, fast: fast.results.map(line), brute: brute.results.map(line), checksFast: fast.stats.fullChecks, checksBrute: brute.checks, passAll: fast.results.every((c) => c.report.pass) };
 }
@@ -43,6 +49,27 @@ describe("search = brute force for the other rankings", () => {
     [2005, "length"],
   ] as Array<[number, RankBy]>)("seed %i by %s", (seed, rankBy) => {
     const r = compare(seed, rankBy, 4);
+    expect(r.fast, r.g.description).toEqual(r.brute);
+  });
+});
+
+describe("search = brute force, every variant (--variants)", () => {
+  it.each([3002, 3003, 3004, 3006, 3007, 3008])("seed %i", (seed) => {
+    const r = compare(seed, "cost", 5, { variants: true });
+    expect(r.fast, r.g.description).toEqual(r.brute);
+  });
+});
+
+describe("search = brute force with search.min_across", () => {
+  it.each([
+    [4001, 1],
+    [4002, 1],
+    [4003, 3],
+    [4004, 3],
+    [4005, 4],
+    [4006, 2],
+  ] as Array<[number, number]>)("seed %i, min_across %i", (seed, minAcross) => {
+    const r = compare(seed, "cost", 4, { minAcross });
     expect(r.fast, r.g.description).toEqual(r.brute);
   });
 });

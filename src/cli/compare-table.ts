@@ -3,20 +3,28 @@ import Table from "cli-table3";
 import type { CompareColumn } from "../compare/compare.js";
 import { CAUTION, citationText } from "../report/check-json.js";
 import { resultRow } from "../report/search-json.js";
+import { lengthNumber } from "../report/format.js";
+import { efficiencyBasisNote } from "../report/summary.js";
+import type { EfficiencyBasis } from "../model/scenario.js";
 
 const fx = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? "—" : v.toFixed(d));
+const dim = (v: number | null | undefined) => (v === null || v === undefined ? "—" : lengthNumber(v));
 
 export function compareRows(columns: CompareColumn[]): Array<[string, string[]]> {
+  const service = columns.some((c) => c.best && resultRow(c.best, 1).serviceUtilisation !== null);
   const rows: Array<[string, (c: CompareColumn) => string]> = [
     ["Code", (c) => c.code.id],
     ["Bolt", (c) => (c.best ? resultRow(c.best, 1).bolt : "—")],
     ["Pattern", (c) => (c.best ? c.best.family.pattern : "—")],
     ["Counts", (c) => (c.best ? resultRow(c.best, 1).counts : "—")],
-    ["Pitch / gauge (mm)", (c) => (c.best ? `${fx(resultRow(c.best, 1).pitch_mm)} / ${fx(resultRow(c.best, 1).gauge_mm)}` : "—")],
-    ["End / edge (mm)", (c) => (c.best ? `${fx(resultRow(c.best, 1).endDistance_mm)} / ${fx(resultRow(c.best, 1).edgeDistance_mm)}` : "—")],
+    ["Pitch / gauge (mm)", (c) => (c.best ? `${dim(resultRow(c.best, 1).pitch_mm)} / ${dim(resultRow(c.best, 1).gauge_mm)}` : "—")],
+    ["End / edge (mm)", (c) => (c.best ? `${dim(resultRow(c.best, 1).endDistance_mm)} / ${dim(resultRow(c.best, 1).edgeDistance_mm)}` : "—")],
     ["Bolt count", (c) => (c.best ? String(c.best.joint.holes.length) : "—")],
-    ["Splice length (mm)", (c) => (c.best ? fx(c.best.joint.spliceLength_mm) : "—")],
+    ["Splice length (mm)", (c) => (c.best ? dim(c.best.joint.spliceLength_mm) : "—")],
     ["Joint strength (kN)", (c) => (c.best ? fx(c.best.report.jointStrength_N / 1000, 1) : "—")],
+    ["Strength utilisation", (c) => (c.best ? fx(resultRow(c.best, 1).strengthUtilisation, 2) : "—")],
+    ...(service ? ([["Service utilisation", (c: CompareColumn) => (c.best ? fx(resultRow(c.best, 1).serviceUtilisation, 2) : "—")]] as Array<[string, (c: CompareColumn) => string]>) : []),
+    ["Detailing rules", (c) => (c.best ? resultRow(c.best, 1).detailingText : "—")],
     ["Efficiency", (c) => (c.best ? `${fx(c.best.report.efficiency * 100, 1)} %` : "—")],
     ["Cost", (c) => (c.best ? fx(c.best.cost.total, 1) : "—")],
     ["Cost above cheapest", (c) => (c.costDifference === null ? "—" : c.costDifference === 0 ? "cheapest" : `+${fx(c.costDifference, 1)}`)],
@@ -24,17 +32,24 @@ export function compareRows(columns: CompareColumn[]): Array<[string, string[]]>
       "Governing check",
       (c) => {
         const g = c.best?.report.checks.find((x) => x.id === c.best?.report.governing);
-        return g ? `${g.title} (${citationText(g.citation)})` : c.outcome.noResultReason ? "no compliant layout" : "—";
+        return g ? `${g.title}, ${g.component} (${citationText(g.citation)})` : c.outcome.noResultReason ? "no compliant layout" : "—";
       },
     ],
   ];
   return rows.map(([name, f]) => [name, columns.map(f)]);
 }
 
-export function formatCompare(title: string, columns: CompareColumn[], currency: string): string {
+export function formatCompare(title: string, columns: CompareColumn[], currency: string, basis: EfficiencyBasis): string {
   const table = new Table({ head: ["", ...columns.map((c) => c.label)], style: { head: [], border: [] }, wordWrap: true });
   for (const [name, cells] of compareRows(columns)) table.push([name, ...cells]);
-  const out = [`splicewright — compare: ${title}`, "", table.toString(), `Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`];
+  const out = [
+    `splicewright — compare: ${title}`,
+    "",
+    table.toString(),
+    `Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`,
+    "Strength utilisation: factored tension / joint design strength; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit and its margin.",
+    efficiencyBasisNote(basis),
+  ];
   const mapped = columns.filter((c) => c.mapping.length);
   if (mapped.length) {
     out.push("", "Mapping of materials between codes (nearest equivalents — these are not identical materials; strengths, thickness bands and testing differ):");

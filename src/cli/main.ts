@@ -34,6 +34,8 @@ import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
 import { formatSheet } from "./sheet.js";
+import { styleFor } from "./style.js";
+import { MIN_WIDTH, outputWidth, PIPED_WIDTH } from "./text.js";
 import { registerSchedule } from "./schedule-command.js";
 
 export const VERSION = "0.1.0";
@@ -92,10 +94,10 @@ function parseForDrawing(file: string) {
 }
 
 /** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
-function chooseLayout({ scenario, code }: ReturnType<typeof parseForDrawing>, opts: { rank?: number; costs?: string; maxCandidates?: number }) {
+function chooseLayout({ scenario, code }: ReturnType<typeof parseForDrawing>, opts: { rank?: number; costs?: string; maxCandidates?: number; variants?: boolean }) {
   const rank = opts.rank;
   if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
-  const outcome = searchWithProgress({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, rank, "cost", opts.maxCandidates);
+  const outcome = searchWithProgress({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, rank, "cost", opts.maxCandidates, opts.variants ?? false);
   const chosen = outcome.results[rank - 1];
   if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
   return { checkable: chosen.scenario, code };
@@ -127,13 +129,19 @@ function today(): string {
 }
 
 /** The search, bounded by --max-candidates (or the default), with a progress line on a terminal after 2 s. */
-function searchWithProgress(ctx: SearchContext, top: number, rankBy: RankBy, maxCandidates: number | undefined) {
+function searchWithProgress(ctx: SearchContext, top: number, rankBy: RankBy, maxCandidates: number | undefined, variants: boolean) {
   const progress = new SearchProgress(process.stderr, "searching", top);
   try {
-    return searchLayouts(ctx, { top, rankBy, onProgress: progress.update, ...(maxCandidates === undefined ? {} : { maxCandidates }) });
+    return searchLayouts(ctx, { top, rankBy, variants, onProgress: progress.update, ...(maxCandidates === undefined ? {} : { maxCandidates }) });
   } finally {
     progress.finish();
   }
+}
+
+/** --width: a whole number of columns, at least the narrowest layout. */
+function widthOption(v: string): number {
+  if (!/^\d+$/.test(v) || Number(v) < MIN_WIDTH || Number(v) > 1000) throw new InputError("--width", `must be a whole number of columns from ${MIN_WIDTH} to 1000, got "${v}"`);
+  return Number(v);
 }
 
 async function run(argv: string[], io: Io): Promise<number> {
@@ -156,10 +164,14 @@ async function run(argv: string[], io: Io): Promise<number> {
     .description("check the scenario's bolt layout against every clause of its design code")
     .argument("<scenario>", "scenario file (YAML)")
     .option("--json", "print the results as JSON instead of a calculation sheet")
-    .action((file: string, opts: { json?: boolean }) => {
+    .option("--brief", "the summary and one line per check")
+    .option("--width <columns>", `lay the sheet out for this many columns (default: the terminal's, at least ${MIN_WIDTH}; ${PIPED_WIDTH} when piped)`, widthOption)
+    .action((file: string, opts: { json?: boolean; brief?: boolean; width?: number }) => {
       const { scenario, code } = loadCheckable(file);
       const { joint, report } = checkScenario(scenario, code);
-      io.out(opts.json ? JSON.stringify(checkReportJson(scenario, joint, report), null, 2) : formatSheet(scenario, joint, report));
+      const stream = io.stdout ?? {};
+      const sheet = () => formatSheet(scenario, joint, report, { width: outputWidth(stream, opts.width), style: styleFor(stream), brief: opts.brief ?? false });
+      io.out(opts.json ? JSON.stringify(checkReportJson(scenario, joint, report), null, 2) : sheet());
       exit = exitCodeOf(report);
     });
 
@@ -174,15 +186,16 @@ async function run(argv: string[], io: Io): Promise<number> {
     .option("--rank <n>", "which result --save writes", rankNumber("rank"), 1)
     .option("--force", "let --save overwrite an existing file")
     .option(...maxCandidatesOption)
+    .option("--variants", "show every variant (pitch, end distances, cover thickness) instead of the best layout of each arrangement")
     .option("--json", "print the results as JSON")
-    .action(async (file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; maxCandidates?: number; json?: boolean }) => {
+    .action(async (file: string, opts: { top: number; rankBy: RankBy; costs?: string; save?: string; rank: number; force?: boolean; maxCandidates?: number; json?: boolean; variants?: boolean }) => {
       const text = readScenarioText(file);
       const { scenario, code } = parseScenario(text);
       const costs = loadCosts(opts.costs, scenario.costs);
       if (opts.save) checkTargets([opts.save], opts.force ?? false); // before the search, not after it
       const t0 = performance.now();
       const top = Math.max(opts.top, opts.save ? opts.rank : 1);
-      const outcome = searchWithProgress({ scenario, code, costs }, top, opts.rankBy, opts.maxCandidates);
+      const outcome = searchWithProgress({ scenario, code, costs }, top, opts.rankBy, opts.maxCandidates, opts.variants ?? false);
       const elapsed = performance.now() - t0;
       outcome.stats.elapsed_ms = Number(elapsed.toFixed(1));
       if (opts.save) {
@@ -191,7 +204,12 @@ async function run(argv: string[], io: Io): Promise<number> {
         else if (outcome.results.length > 0) throw new InputError("--rank", `there are only ${outcome.results.length} results`);
       }
       const shown = { ...outcome, results: outcome.results.slice(0, opts.top) };
-      io.out(opts.json ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency), null, 2) : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed));
+      const variants = opts.variants ?? false;
+      io.out(
+        opts.json
+          ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency, { variants, efficiencyBasis: scenario.options.efficiencyBasis }), null, 2)
+          : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed, variants),
+      );
       if (opts.save && outcome.results[opts.rank - 1]) io.err(`saved result ${opts.rank} to ${opts.save}`);
       exit = outcome.results.length > 0 ? 0 : 1;
     });
@@ -204,9 +222,10 @@ async function run(argv: string[], io: Io): Promise<number> {
     .requiredOption("--out <dir>", "folder to write into (created if missing)")
     .option("--rank <n>", "export the n-th layout of the search instead of the scenario's own layout", rankNumber("rank"))
     .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
+    .option("--variants", "count --rank over every variant, as `search --variants` does")
     .option("--force", "overwrite existing files (regular files only)")
     .option(...maxCandidatesOption)
-    .action(async (file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean; maxCandidates?: number }) => {
+    .action(async (file: string, opts: { format: string; out: string; rank?: number; costs?: string; force?: boolean; maxCandidates?: number; variants?: boolean }) => {
       const formats = parseFormats(opts.format);
       const date = today();
       const parsed = parseForDrawing(file);
@@ -230,16 +249,17 @@ async function run(argv: string[], io: Io): Promise<number> {
     .requiredOption("--out <file>", "the HTML file to write")
     .option("--rank <n>", "report on the n-th layout of the search instead of the scenario's own layout", rankNumber("rank"))
     .option("--costs <file>", "cost catalogue for --rank (instead of the bundled illustrative one)")
+    .option("--variants", "count --rank over every variant, as `search --variants` does")
     .option("--force", "overwrite an existing file (a regular file only)")
     .option(...maxCandidatesOption)
-    .action(async (file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean; maxCandidates?: number }) => {
+    .action(async (file: string, opts: { out: string; rank?: number; costs?: string; force?: boolean; maxCandidates?: number; variants?: boolean }) => {
       const date = today();
       const parsed = parseForDrawing(file);
       checkTargets([opts.out], opts.force ?? false);
       const { checkable, code } = chooseLayout(parsed, opts);
       const { joint, report } = checkScenario(checkable, code);
       const bom = billOfMaterials(joint, checkable);
-      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
+      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search${opts.variants ? " --variants" : ""}\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
       const html = renderReportHtml({ scenario: checkable, joint, report, bom, date, version: VERSION, origin });
       await writeFileSet([{ path: opts.out, content: html }], opts.force ?? false);
       io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
@@ -288,7 +308,8 @@ async function run(argv: string[], io: Io): Promise<number> {
         }) : [];
         columns = compareChoices(scenario, code, costs, classes, sizes, opts.maxCandidates);
       }
-      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency), null, 2) : formatCompare(scenario.name, columns, costs.currency));
+      const basis = scenario.options.efficiencyBasis;
+      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis));
       exit = columns.some((c) => c.best) ? 0 : 1;
     });
 

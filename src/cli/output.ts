@@ -5,6 +5,7 @@
  * code of its own, never one that means an engineering result (0, 1) or bad input (2).
  */
 import { terminalText } from "../text/escape.js";
+import { stripStyleMarks, styleMarksToAnsi } from "./style.js";
 
 /** Exit code when the output could not be written. */
 export const EXIT_OUTPUT_ERROR = 4;
@@ -12,11 +13,19 @@ export const EXIT_OUTPUT_ERROR = 4;
 export interface Io {
   out: (text: string) => void;
   err: (text: string) => void;
+  /** The stream `out` writes to: its width and whether it is a terminal (colour). */
+  stdout?: { isTTY?: boolean; columns?: number };
 }
 
-/** An Io whose every line is made safe for a terminal (JSON stays JSON: it holds no raw control characters). */
+/**
+ * An Io whose every line is made safe for a terminal (JSON stays JSON: it holds no raw control
+ * characters). The project's own emphasis (style.ts) travels as private-use marks and becomes colour
+ * only here, after every escape sequence in the text itself has been made visible.
+ */
 export function terminalSafe(io: Io): Io {
-  return { out: (s) => io.out(terminalText(s)), err: (s) => io.err(terminalText(s)) };
+  const safe: Io = { out: (s) => io.out(styleMarksToAnsi(terminalText(s))), err: (s) => io.err(terminalText(stripStyleMarks(s))) };
+  if (io.stdout) safe.stdout = io.stdout;
+  return safe;
 }
 
 interface StreamState {
@@ -65,4 +74,5 @@ function writeLine(stream: NodeJS.WriteStream, state: StreamState, text: string)
 export const PROCESS_IO: Io = {
   out: (s) => writeLine(process.stdout, stdoutState, s),
   err: (s) => writeLine(process.stderr, stderrState, s),
+  stdout: process.stdout,
 };

@@ -2,8 +2,12 @@
 import { CAUTION } from "../report/check-json.js";
 import { BoxTable } from "./text-table.js";
 import type { Schedule } from "../schedule/schedule.js";
+import { lengthNumber } from "../report/format.js";
+import { efficiencyBasisNote } from "../report/summary.js";
 
 const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
+/** A dimension with the precision it has (62.5 stays 62.5). */
+const dim = (mm: number | null) => (mm === null ? "—" : lengthNumber(mm));
 const pct = (part: number, whole: number) => (whole > 0 ? `${((100 * part) / whole).toFixed(1)} %` : "—");
 /** Linear-time boxed tables (text-table.ts): a job's schedule may have thousands of rows. */
 const table = (head: string[]) => new BoxTable(head);
@@ -38,21 +42,28 @@ export function formatSchedule(s: Schedule, codeTitle: string, currency: string,
   out.push(types.toString());
   out.push("");
   out.push("Splices (bolts and cost per splice; × qty for the row; counts per side of the butt for butt splices):");
-  const rows = table(["Id", "Mark", "Qty", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", "End", "Bolts", "Util.", "Cost", "Row cost", "Own optimum", "Premium"]);
+  const service = s.rows.some((r) => r.layout.serviceUtilisation !== null);
+  const rows = table(["Id", "Mark", "Qty", "Description", "Plates", "T kN", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", "End", "Cover t", "Bolts", "Str. util.", ...(service ? ["SLS util."] : []), "Tightest rule (all pass)", "Cost", "Row cost", "Own optimum", "Premium"]);
   for (const row of s.rows) {
     const l = row.layout;
     rows.push([
       row.id,
       row.mark,
       String(row.quantity),
+      row.description,
+      row.plates,
+      row.factoredTension_kN.toFixed(1),
       row.type,
       l.pattern,
       l.counts,
-      fx(l.pitch_mm),
-      fx(l.gauge_mm),
-      l.endDistanceAtButt_mm !== null ? `${fx(l.endDistance_mm)} / ${fx(l.endDistanceAtButt_mm)}` : fx(l.endDistance_mm),
+      dim(l.pitch_mm),
+      dim(l.gauge_mm),
+      l.endDistanceAtButt_mm !== null ? `${dim(l.endDistance_mm)} / ${dim(l.endDistanceAtButt_mm)}` : dim(l.endDistance_mm),
+      dim(l.coverThickness_mm),
       String(row.boltsEach),
-      fx(l.utilisation, 2),
+      fx(l.strengthUtilisation, 2),
+      ...(service ? [fx(l.serviceUtilisation, 2)] : []),
+      l.tightestRule,
       fx(row.costEach, 1),
       fx(row.cost, 1),
       `${row.ownType} ${fx(row.ownCostEach, 1)}`,
@@ -60,7 +71,13 @@ export function formatSchedule(s: Schedule, codeTitle: string, currency: string,
     ]);
   }
   out.push(rows.toString());
-  out.push(`Dimensions in mm; costs in ${currency}. End: end distance (/ at the butt). Every layout has passed every check of \`splicewright check\`, and was checked again before it was scheduled.`);
+  out.push(`Dimensions in mm; costs in ${currency}. T: factored tension. End: end distance (/ at the butt). Every layout has passed every check of \`splicewright check\`, and was checked again before it was scheduled.`);
+  out.push(
+    `Str. util.: strength utilisation = factored tension / joint design strength${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
+      "Tightest rule: every detailing rule passes; the cell names the one closest to its limit and its margin.",
+  );
+  const bases = [...new Set(s.rows.map((r) => r.efficiencyBasis))];
+  out.push(bases.length === 1 ? efficiencyBasisNote(bases[0]!) : `Efficiency bases differ between splices (${bases.join(", ")}; options.efficiency_basis).`);
   out.push("");
   out.push("Totals:");
   out.push(`  layouts ${fx(t.layoutCost, 1)} + ${t.typesUsed} type${t.typesUsed === 1 ? "" : "s"} stocked × ${r.costPerType} = ${fx(t.total, 1)}; ${t.bolts} bolts`);

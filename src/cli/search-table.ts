@@ -1,7 +1,9 @@
 /** The search results as a terminal table. */
 import Table from "cli-table3";
 import { CAUTION } from "../report/check-json.js";
-import { resultRow } from "../report/search-json.js";
+import { provenStatement, resultRow } from "../report/search-json.js";
+import { lengthNumber } from "../report/format.js";
+import { efficiencyBasisNote } from "../report/summary.js";
 import type { RankBy } from "../search/ranking.js";
 import type { SearchOutcome } from "../search/search.js";
 import type { Scenario } from "../model/scenario.js";
@@ -14,14 +16,14 @@ function displayUnits(scenario: Scenario) {
   const us = scenario.units === "us";
   return {
     us,
-    len: (mm: number | null) => (mm === null ? "—" : us ? toUnit(mm, "in", "length").toFixed(3).replace(/\.?0+$/, "") : mm.toFixed(0)),
+    len: (mm: number | null) => (mm === null ? "—" : lengthNumber(mm, us ? "us" : "si")),
     force: (kN: number) => (us ? toUnit(kN * 1000, "kip", "force").toFixed(1) : kN.toFixed(1)),
     lengthUnit: us ? "in" : "mm",
     forceUnit: us ? "kips" : "kN",
   };
 }
 
-export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy: RankBy, currency: string, codeTitle: string, elapsed_ms: number): string {
+export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy: RankBy, currency: string, codeTitle: string, elapsed_ms: number, variants = false): string {
   const out: string[] = [];
   const butt = scenario.splice.type !== "lap";
   out.push("splicewright — layout search: bolted tension splice");
@@ -36,11 +38,13 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
   if (outcome.results.length === 0) {
     out.push(`No compliant layout: ${outcome.noResultReason ?? "nothing in the space passes"}`);
   } else {
-    out.push(`Best ${outcome.results.length} by ${rankBy}${butt ? " (counts, pitch and end distances per side of the butt)" : ""}:`);
-    const head = ["#", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", butt ? "End / at butt" : "End", "Edge", ...(butt ? ["Cover t"] : []), "Bolts", "Length", `Strength ${u.forceUnit}`, "Eff.", "Util.", `Cost`];
-    const table = new Table({ head, style: { head: [], border: [] } });
-    outcome.results.forEach((c, i) => {
-      const r = resultRow(c, i + 1);
+    const what = variants ? "layouts (every variant)" : `arrangements (the best layout of each; --variants shows every variant)`;
+    out.push(`Best ${outcome.results.length} ${what} by ${rankBy}${butt ? "; counts, pitch and end distances per side of the butt" : ""}:`);
+    const rows = outcome.results.map((c, i) => resultRow(c, i + 1));
+    const service = rows.some((r) => r.serviceUtilisation !== null);
+    const head = ["#", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", butt ? "End / at butt" : "End", "Edge", ...(butt ? ["Cover t"] : []), "Bolts", "Length", `Strength ${u.forceUnit}`, "Str. util.", ...(service ? ["SLS util."] : []), "Eff.", "Tightest rule (all pass)", `Cost`];
+    const table = new Table({ head, style: { head: [], border: [], compact: true } });
+    rows.forEach((r) => {
       table.push([
         String(r.rank),
         r.bolt,
@@ -54,15 +58,22 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
         String(r.bolts),
         u.len(r.spliceLength_mm),
         u.force(r.jointStrength_kN),
+        fx(r.strengthUtilisation, 2),
+        ...(service ? [fx(r.serviceUtilisation, 2)] : []),
         `${fx(r.efficiency * 100, 1)} %`,
-        fx(r.utilisation, 2),
+        r.tightestRule,
         fx(r.cost, 1),
       ]);
     });
     out.push(table.toString());
     out.push(`Dimensions in ${u.lengthUnit}${u.us ? " (the search space above is stated in mm)" : ""}; cost in ${currency}. Every row has passed every check of \`splicewright check\` on its hole coordinates.`);
-    out.push("Proven: nothing in the declared space ranks above the rows shown — every candidate that could was checked or excluded by an admissible bound (DEVELOPERS.md).");
-    out.push("Util.: the highest utilisation of any check, spacing and edge rules included. Counts \"3/2 across\": a staggered pattern, 3 bolts on odd transverse lines and 2 on even ones.");
+    out.push(`Proven over the declared space above: ${provenStatement(variants)} (DEVELOPERS.md).`);
+    out.push(
+      `Str. util.: strength utilisation = factored tension / joint design strength (ultimate limit state)${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
+        "Tightest rule: every detailing rule (spacing, end and edge distances, grip) passes in every row; the cell names the one closest to its limit and its margin.",
+    );
+    out.push(efficiencyBasisNote(scenario.options.efficiencyBasis));
+    out.push("Counts \"3/2 across\": a staggered pattern, 3 bolts on odd transverse lines and 2 on even ones.");
     out.push("Ties: fewer bolts, then higher efficiency, then a fixed order of size, class, pattern, counts and dimensions.");
   }
   const s = outcome.stats;

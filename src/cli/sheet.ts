@@ -1,13 +1,27 @@
 /**
- * The calculation sheet as terminal tables.
+ * The calculation sheet on the terminal: the summary first, then the splice, the plates and every
+ * check (twins once), the conventions and the caution. Laid out for a width (no line wider), with
+ * PASS, FAIL and warnings emphasised when the style colours. `brief`: the summary and one line per check.
  */
-import Table from "cli-table3";
 import type { Joint } from "../model/joint.js";
 import type { CheckReport, CheckResult } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
-import { CAUTION, citationText } from "../report/check-json.js";
+import { CAUTION } from "../report/check-json.js";
+import { citationText } from "../report/citation.js";
+import { forceText, lengthNumber, lengthText, ratioText, trimmed, type DisplayUnits } from "../report/format.js";
+import { summarise, summaryRows, type SummaryRow } from "../report/summary.js";
+import { foldTwins, type FoldedCheck } from "../report/twins.js";
 import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
 import { toUnit } from "../units/units.js";
+import { PLAIN_STYLE, type Style } from "./style.js";
+import { columns, PIPED_WIDTH, wrap } from "./text.js";
+
+export interface SheetOptions {
+  width: number;
+  style: Style;
+  /** The summary and one line per check. */
+  brief?: boolean;
+}
 
 const SPLICE_TEXT: Record<Joint["spliceType"], string> = {
   lap: "lap splice (two plates, single shear)",
@@ -15,28 +29,16 @@ const SPLICE_TEXT: Record<Joint["spliceType"], string> = {
   "butt-double-cover": "butt splice, two cover plates (double shear)",
 };
 
-const fx = (v: number, d = 1) => (Number.isFinite(v) ? v.toFixed(d) : "∞");
+/** Width of the label column of the summary ("Joint design strength:" and two spaces). */
+const LABEL = 24;
 
-/** Display units of the sheet: SI (mm, kN, MPa) or, for a scenario with `units: us`, in, kips, ksi. */
-let us = false;
-const len = (mm: number) => (us ? `${fx(toUnit(mm, "in", "length"), 3)} in` : `${fx(mm)} mm`);
-const force = (N: number) => (us ? `${fx(toUnit(N, "kip", "force"), 1)} kips` : `${fx(N / 1000)} kN`);
-const stress = (MPa: number) => (us ? fx(toUnit(MPa, "ksi", "stress"), 1) : String(MPa));
 const boltName = (d_mm: number) => {
   const inch = inchBoltSize(d_mm);
   return inch !== undefined ? inchSizeText(inch) : `M${d_mm}`;
 };
 
-function demandText(c: CheckResult): string {
-  return c.type === "strength" ? force(c.demand_N) : len(c.value_mm);
-}
-
-function resistanceText(c: CheckResult): string {
-  if (c.type === "strength") return force(c.resistance_N);
-  return `${c.bound === "min" ? "≥" : "≤"} ${len(c.limit_mm)}`;
-}
-
-function layoutText(scenario: CheckableScenario, joint: Joint): string {
+function layoutText(scenario: CheckableScenario, joint: Joint, u: DisplayUnits): string {
+  const len = (mm: number) => lengthText(mm, u);
   const l = scenario.layout;
   const butt = joint.spliceType !== "lap";
   const per = butt ? " per side of the butt" : "";
@@ -57,62 +59,140 @@ function layoutText(scenario: CheckableScenario, joint: Joint): string {
   return parts.join(", ");
 }
 
-export function formatSheet(scenario: CheckableScenario, joint: Joint, report: CheckReport): string {
+/** The summary rows, label column and wrapped values; details under the value. */
+function summaryLines(rows: SummaryRow[], width: number, style: Style): string[] {
   const out: string[] = [];
-  us = scenario.units === "us";
+  const pad = " ".repeat(LABEL);
+  for (const r of rows) {
+    const label = `${r.label}:`.padEnd(LABEL);
+    let value = r.value;
+    if (r.key === "verdict") value = r.status === "fail" ? style.fail(value) : style.pass(value);
+    else if (r.status === "fail") value = style.fail(value);
+    else if (r.status === "warn") value = style.warn(value);
+    out.push(...wrap(value, width, label, pad));
+    for (const d of r.detail) out.push(...wrap(d, width, `${pad}`, `${pad}  `));
+  }
+  return out;
+}
+
+/** The plates, twins (identical plates) once. */
+function plateLines(joint: Joint, u: DisplayUnits, width: number): string[] {
+  const us = u === "us";
+  const groups: Array<{ label: string; cells: string[] }> = [];
+  for (const p of joint.plates) {
+    const cells = [
+      `${lengthNumber(p.spec.width_mm, u)} × ${lengthNumber(p.spec.thickness_mm, u)}`,
+      p.spec.grade,
+      us ? `${trimmed(toUnit(p.fy_MPa, "ksi", "stress"), 1)}/${trimmed(toUnit(p.fu_MPa, "ksi", "stress"), 1)}` : `${p.fy_MPa}/${p.fu_MPa}`,
+      p.spec.edges,
+      p.role === "packing" ? "—" : trimmed(p.forceShare, 3),
+    ];
+    const twin = groups.find((g) => g.cells.join("|") === cells.join("|") && p.role === "cover" && g.label.startsWith("cover plate"));
+    if (twin) twin.label = "both cover plates";
+    else groups.push({ label: p.label, cells });
+  }
+  const head = ["plate", `b × t (${us ? "in" : "mm"})`, "steel", `${us ? "Fy/Fu (ksi)" : "fy/fu (MPa)"}`, "edges", "share of T"];
+  const rows = [head, ...groups.map((g) => [g.label, ...g.cells.slice(0, 4), g.label === "both cover plates" ? `${g.cells[4]} each` : g.cells[4]!])];
+  const laid = columns(rows.map((r) => ["  " + r[0]!, ...r.slice(1)]), width);
+  if (laid) return laid;
+  return groups.flatMap((g) => wrap(`${g.label}: ${head.slice(1).map((h, i) => `${h} ${g.cells[i]}`).join("; ")}`, width, "  ", "    "));
+}
+
+/** The figures of a check on one line: demand against resistance, or value against limit. */
+function figureText(c: CheckResult, u: DisplayUnits): string {
+  if (c.type === "rule") return `${lengthText(c.value_mm, u)} ${c.pass ? (c.bound === "min" ? "≥" : "≤") : c.bound === "min" ? "<" : ">"} ${lengthText(c.limit_mm, u)}`;
+  const rel = c.pass ? "≤" : ">";
+  if (c.loadRatio === 0) return `${forceText(c.demand_N, u)} ${rel} ${forceText(c.resistance_N, u)} (a condition: it sets no load)`;
+  return `${forceText(c.demand_N, u)} ${rel} ${forceText(c.resistance_N, u)}, utilisation ${ratioText(c.utilisation)}${c.limitState === "SLS" ? " (service)" : ""}`;
+}
+
+function resultWord(c: CheckResult, style: Style): string {
+  return c.pass ? style.pass("pass") : style.fail("FAIL");
+}
+
+function checkBlock(f: FoldedCheck, i: number, governing: string, u: DisplayUnits, width: number, style: Style): string[] {
+  const c = f.check;
+  const number = `${String(i + 1).padStart(2)}  `;
+  const head = `${c.title} · ${f.component} · ${clauseOf(c)}`;
+  const out = wrap(style.strong(head), width, number, "      ");
+  const governs = f.members.some((m) => m.id === governing) ? " — governs" : "";
+  out.push(...wrap(`${figureText(c, u)}: ${resultWord(c, style)}${governs}`, width, "    ", "      "));
+  out.push(...wrap(c.formula, width, "    ", "      "));
+  out.push(...wrap(c.substituted, width, "    ", "      "));
+  for (const n of c.notes) out.push(...wrap(n, width, "    ", "      "));
+  return out;
+}
+
+const clauseOf = (c: CheckResult) => citationText(c.citation);
+
+/**
+ * One line per check (wrapped only when it cannot fit): result, figure, check, component and clause
+ * (without the code's own standard, which the header names).
+ */
+function briefLines(folded: FoldedCheck[], codeTitle: string, u: DisplayUnits, width: number, style: Style): string[] {
+  const out: string[] = [];
+  folded.forEach((f, i) => {
+    const c = f.check;
+    const rel = c.pass ? (c.type === "rule" && c.bound === "min" ? "≥" : "≤") : c.type === "rule" && c.bound === "min" ? "<" : ">";
+    const figure = c.type === "rule" ? `${lengthNumber(c.value_mm, u)} ${rel} ${lengthText(c.limit_mm, u)}` : c.loadRatio === 0 ? "condition" : ratioText(c.utilisation);
+    const lead = `${String(i + 1).padStart(3)}  ${resultWord(c, style)}  ${figure.padEnd(14)}  `;
+    const clause = codeTitle.startsWith(c.citation.standard) ? clauseOf(c).slice(c.citation.standard.length + 1) : clauseOf(c);
+    out.push(...wrap(`${c.title} · ${f.component} · ${clause}`, width, lead, " ".repeat(27)));
+  });
+  return out;
+}
+
+export function formatSheet(scenario: CheckableScenario, joint: Joint, report: CheckReport, options: SheetOptions = { width: PIPED_WIDTH, style: PLAIN_STYLE }): string {
+  const { width, style } = options;
+  const u: DisplayUnits = scenario.units === "us" ? "us" : "si";
+  const out: string[] = [];
+  const line = (label: string, text: string) => out.push(...wrap(text, width, label.padEnd(10), " ".repeat(10)));
+  out.push(...wrap(`splicewright — calculation sheet: bolted tension splice${options.brief ? " (brief)" : ""}`, width));
+  line("Scenario:", scenario.name);
+  if (scenario.project) line("Project:", scenario.project);
+  line("Code:", report.codeTitle);
+  out.push("");
+
+  const summary = summarise(scenario, report);
+  const rows = summaryRows(summary, u);
+  out.push(style.strong("SUMMARY"));
+  out.push(...summaryLines(rows, width, style));
+  out.push("");
+
+  const folded = foldTwins(report.checks);
+  const twins = folded.length < report.checks.length ? `; twins once ("each side", "both cover plates") — --json lists all ${report.checks.length}` : "";
+  if (options.brief) {
+    const of = folded.length < report.checks.length ? ` of ${report.checks.length}, twins once` : "";
+    out.push(...wrap(style.strong(`CHECKS (${folded.length}${of}; figure: utilisation, or value against limit)`), width));
+    out.push(...briefLines(folded, report.codeTitle, u, width, style));
+    out.push("");
+    out.push(...wrap(`CAUTION: ${CAUTION}`, width));
+    return out.join("\n");
+  }
+
   const b = scenario.bolts;
   const holeDia = joint.holes[0]?.across_mm ?? 0;
-  out.push("splicewright — calculation sheet: bolted tension splice");
-  out.push(`Scenario: ${scenario.name}${scenario.project ? `   Project: ${scenario.project}` : ""}`);
-  out.push(`Code:     ${report.codeTitle}`);
-  out.push(`Splice:   ${SPLICE_TEXT[joint.spliceType]}${joint.spliceType !== "lap" ? `; butt gap ${len(joint.buttGap_mm)}; ${joint.holes.length / 2} bolts each side of the butt` : `; ${joint.holes.length} bolts`}`);
-  out.push(`Load:     factored tension T = ${force(scenario.load.factoredTension_N)}${scenario.load.serviceTension_N !== undefined ? `; service tension ${force(scenario.load.serviceTension_N)}` : ""}`);
-  out.push(
-    `Bolts:    ${boltName(b.size_mm)} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `class ${b.propertyClass}`}, ${b.assembly === "bearing" ? "bearing type" : b.astmGrade ? `slip-critical (μ ${b.slipFactor})` : `friction grip (μf ${b.slipFactor}, slip at ${b.slipAt})`}, ` +
-      `threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes, ${b.hole} holes Ø${len(holeDia)}`,
+  out.push(style.strong("SPLICE"));
+  line("Splice:", `${SPLICE_TEXT[joint.spliceType]}${joint.spliceType !== "lap" ? `; butt gap ${lengthText(joint.buttGap_mm, u)}; ${joint.holes.length / 2} bolts each side of the butt` : `; ${joint.holes.length} bolts`}`);
+  line(
+    "Bolts:",
+    `${boltName(b.size_mm)} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `class ${b.propertyClass}`}, ${b.assembly === "bearing" ? "bearing type" : b.astmGrade ? `slip-critical (μ ${b.slipFactor})` : `friction grip (μf ${b.slipFactor}, slip at ${b.slipAt})`}, ` +
+      `threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes, ${b.hole} holes Ø${lengthText(holeDia, u)}`,
   );
-  out.push(`Layout:   ${layoutText(scenario, joint)}; splice length ${len(joint.spliceLength_mm)}`);
+  line("Layout:", `${layoutText(scenario, joint, u)}; splice length ${lengthText(joint.spliceLength_mm, u)}`);
+  out.push("Plates:");
+  out.push(...plateLines(joint, u, width));
   out.push("");
 
-  const plates = new Table({ head: ["Plate", us ? "Width × t (in)" : "Width × t (mm)", "Steel", us ? "Fy / Fu (ksi)" : "fy / fu (MPa)", "Edges", "Share of T"], style: { head: [], border: [] } });
-  const bare = (mm: number) => (us ? fx(toUnit(mm, "in", "length"), 3) : fx(mm));
-  for (const p of joint.plates) {
-    plates.push([p.label, `${bare(p.spec.width_mm)} × ${bare(p.spec.thickness_mm)}`, p.spec.grade, `${stress(p.fy_MPa)} / ${stress(p.fu_MPa)}`, p.spec.edges, p.role === "packing" ? "—" : fx(p.forceShare, 3)]);
-  }
-  out.push(plates.toString());
-  out.push("");
-
-  const checks = new Table({
-    head: ["#", "Check", "Component", "Clause", "Demand", "Resistance / limit", "Util.", "Result"],
-    style: { head: [], border: [] },
-    colWidths: [4, 26, 24, 26, 11, 19, 7, 8],
-    wordWrap: true,
-  });
-  report.checks.forEach((c, i) => {
-    checks.push([String(i + 1), c.title, c.component, citationText(c.citation), demandText(c), resistanceText(c), fx(c.utilisation, 2), c.pass ? "pass" : "FAIL"]);
-    checks.push([{ colSpan: 8, content: `    ${c.formula}\n    ${c.substituted}${c.notes.length ? `\n    ${c.notes.join("; ")}` : ""}` }]);
-  });
-  out.push(checks.toString());
-  out.push("");
-
-  const governing = report.checks.find((c) => c.id === report.governing);
-  out.push(`Joint design strength:  ${force(report.jointStrength_N)}  (governed by ${governing ? `${governing.title}, ${governing.component}, ${citationText(governing.citation)}` : "—"})`);
-  out.push(`Efficiency:             ${fx(report.efficiency * 100)} %`);
-  out.push(`                        ${report.efficiencyDefinition}`);
-  out.push(`Highest utilisation:    ${fx(report.maxUtilisation, 3)}`);
-  const failed = report.checks.filter((c) => !c.pass);
-  out.push(
-    `Verdict:                ${report.pass ? "PASS — every check passes" : `FAIL — ${failed.length} check${failed.length > 1 ? "s" : ""} fail: ${failed.map((c) => `${c.title} (${c.component})`).join("; ")}`}`,
-  );
-  if (report.warnings.length) {
+  out.push(...wrap(style.strong(`CHECKS (${folded.length}${twins})`), width));
+  folded.forEach((f, i) => {
+    out.push(...checkBlock(f, i, report.governing, u, width, style));
     out.push("");
-    out.push("Warnings:");
-    for (const w of report.warnings) out.push(`  - [${w.id}] ${w.message}`);
-  }
+  });
+
+  out.push(style.strong("CONVENTIONS"));
+  for (const c of report.conventions) out.push(...wrap(c, width, "  - ", "    "));
   out.push("");
-  out.push("Conventions:");
-  for (const c of report.conventions) out.push(`  - ${c}`);
-  out.push("");
-  out.push(`CAUTION: ${CAUTION}`);
+  out.push(...wrap(`CAUTION: ${CAUTION}`, width));
   return out.join("\n");
 }

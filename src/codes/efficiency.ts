@@ -18,7 +18,8 @@ export interface UnperforatedTerms {
   lesser?: { value_N: number; text: string };
 }
 
-const BASIS_WORDS: Record<EfficiencyBasis, string> = {
+/** The basis of efficiency in words, as every output names it. */
+export const BASIS_WORDS: Record<EfficiencyBasis, string> = {
   lesser: "the lesser of gross yield and rupture",
   rupture: "rupture",
   yield: "gross yield",

@@ -27,7 +27,7 @@ export function exportJson(scenario: CheckableScenario, joint: Joint, report: Ch
       holes: check.holes,
       coordinates: "x along the force, y across from the plate axis, mm; lap: x = 0 at plate B's end; butt: x = 0 at the middle of the butt gap",
     },
-    result: { pass: check.pass, jointStrength_kN: check.jointStrength_kN, efficiency: check.efficiency, governing: check.governing, maxUtilisation: check.maxUtilisation },
+    result: { pass: check.pass, jointStrength_kN: check.jointStrength_kN, efficiency: check.efficiency, governing: check.governing, strengthUtilisation: check.strengthUtilisation, serviceUtilisation: check.serviceUtilisation, detailing: check.detailing },
     checks: check.checks,
     boltLengths: bom.lengths.map((l) => ({ ...l, length_mm: Number.isFinite(l.length_mm) ? l.length_mm : null, threadLength_mm: Number.isFinite(l.threadLength_mm) ? l.threadLength_mm : null })),
     billOfMaterials: { bolts: bom.bolts, nuts: bom.nuts, washers: bom.washers, plates: bom.plates, ok: bom.ok, notes: bom.notes },

@@ -7,6 +7,7 @@ import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
 import { xmlText } from "../text/escape.js";
+import { detailingState, strengthFigures } from "../report/summary.js";
 import { arrowHeadPoints, buildDrawing, formatLength, SCALES, type Drawing, type Point, type Primitive } from "./drawing.js";
 
 export const SHEET = { width: 420, height: 297, margin: 10, titleHeight: 42 } as const;
@@ -46,6 +47,15 @@ export function layoutSheet(input: SvgInput): { drawing: Drawing; scale: number;
   return { drawing, scale, origin: [ox, oy] };
 }
 
+/** The title block's strength field: the strength utilisation and the detailing rules, never one number for both. */
+function titleStrengthText(input: SvgInput, verdict: string): string {
+  const f = strengthFigures(input.scenario, input.report);
+  const d = detailingState(input.report);
+  const rules = d.failures.length === 0 ? "rules all pass" : `${d.failures.length} rule${d.failures.length === 1 ? "" : "s"} fail`;
+  const service = f.service ? `; service ${f.service.utilisation.toFixed(2)}` : "";
+  return `${(f.jointStrength_N / 1000).toFixed(1)} kN for T = ${(f.factoredTension_N / 1000).toFixed(1)} kN: strength utilisation ${f.strengthUtilisation.toFixed(2)}${service}; ${rules}; ${verdict}`;
+}
+
 export function renderSvg(input: SvgInput): string {
   const { drawing, scale, origin } = layoutSheet(input);
   const P = (p: Point): Point => [origin[0] + p[0] / scale, origin[1] - p[1] / scale];
@@ -59,7 +69,7 @@ export function renderSvg(input: SvgInput): string {
     ["Scenario", input.title ?? input.scenario.name],
     ["Code", input.report.codeTitle],
     ["Bolts", `${boltSpec}; holes Ø${formatLength(input.joint.holes[0]?.across_mm ?? 0)}`],
-    ["Joint strength", `${(input.report.jointStrength_N / 1000).toFixed(1)} kN for T = ${(input.scenario.load.factoredTension_N / 1000).toFixed(1)} kN; utilisation ${input.report.maxUtilisation.toFixed(2)}; ${verdict}`],
+    ["Joint strength", titleStrengthText(input, verdict)],
     ["Scale · date", `1:${scale} on A3 · ${input.date} · dimensions in mm`],
   ];
   const tbW = 200;

@@ -270,6 +270,10 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     if (s.max_splice_length !== undefined) spec.maxSpliceLength_mm = s.max_splice_length;
     if (s.max_end_distance !== undefined) spec.maxEndDistance_mm = s.max_end_distance;
     if (s.max_across !== undefined) spec.maxAcross = s.max_across;
+    if (s.min_across !== undefined) {
+      if (s.max_across !== undefined && s.min_across > s.max_across) throw new InputError("search.min_across", `${s.min_across} is more than search.max_across (${s.max_across})`);
+      spec.minAcross = s.min_across;
+    }
     if (s.gauge !== undefined) spec.fixedGauge_mm = s.gauge;
     if (s.cover_thicknesses !== undefined) {
       if (!butt) throw new InputError("search.cover_thicknesses", "applies to butt splices only");

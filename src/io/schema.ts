@@ -156,6 +156,7 @@ const search = z.strictObject({
   max_splice_length: length().optional(),
   max_end_distance: length().optional(),
   max_across: count(LIMITS.boltsAcross).optional(),
+  min_across: count(LIMITS.boltsAcross).optional(),
   gauge: length().optional(),
   cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
 });

@@ -116,6 +116,11 @@ export interface SearchSpec {
   /** Largest end distance (both ends) the detailer accepts: a declared narrowing below the code's maximum. */
   maxEndDistance_mm?: number;
   maxAcross?: number;
+  /**
+   * Fewest bolts across on the fullest transverse line (grid: every line; staggered: the odd lines;
+   * tapered: the line at the butt). Default: 2 where the narrowest plate fits two, else 1.
+   */
+  minAcross?: number;
   fixedGauge_mm?: number;
   coverThicknesses_mm?: number[];
 }

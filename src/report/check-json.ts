@@ -2,28 +2,19 @@
  * The check report as a plain JSON-ready object (units in field names: kN, mm). Pure.
  */
 import type { Joint } from "../model/joint.js";
-import type { CheckReport, Citation } from "../model/results.js";
+import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
 import { toUnit } from "../units/units.js";
+import { citationText } from "./citation.js";
+import { summarise, summaryJson, utilisationJson } from "./summary.js";
+
+export { citationText };
 
 export const CAUTION =
   "splicewright is an aid to design. Its results must be verified by a qualified engineer against the governing edition of the design code, its national annex and local regulations. Bolt installation, corrosion and fatigue are outside the checks unless stated.";
 
 const round = (v: number, digits = 3): number | null => (Number.isFinite(v) ? Number(v.toFixed(digits)) : null);
-
-/**
- * A citation as one line: "EN 1993-1-1 cl. 6.2.3(2)a, Eq. (6.6)", "AISC 360-16 Sect. J3.6, Table J3.2,
- * Eq. J3-1; with J5.2". AISC 360 numbers its provisions by section; the other codes by clause.
- */
-export function citationText(c: Citation): string {
-  if (c.standard === "general") return c.clause;
-  const word = c.standard.startsWith("AISC") ? "Sect." : "cl.";
-  const parts = [`${c.standard} ${word} ${c.clause}`];
-  if (c.table) parts.push(c.table);
-  if (c.equation) parts.push(`Eq. ${c.equation}`);
-  return parts.join(", ") + (c.also && c.also.length > 0 ? `; with ${c.also.join("; ")}` : "");
-}
 
 /**
  * The JSON of a check. The SI fields (kN, mm) are always present; a scenario with `units: us` adds the
@@ -34,6 +25,7 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
   const kip = (N: number) => round(toUnit(N, "kip", "force"), 2);
   const inch = (mm: number) => round(toUnit(mm, "in", "length"), 4);
   const inchSize = inchBoltSize(scenario.bolts.size_mm);
+  const summary = summarise(scenario, report);
   return {
     units: us ? "us" : "si",
     scenario: scenario.name,
@@ -56,8 +48,11 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
     ...(us ? { jointStrength_kip: kip(report.jointStrength_N), factoredTension_kip: kip(scenario.load.factoredTension_N) } : {}),
     governing: report.governing,
     efficiency: round(report.efficiency, 4),
+    efficiencyBasis: scenario.options.efficiencyBasis,
     efficiencyDefinition: report.efficiencyDefinition,
-    maxUtilisation: round(report.maxUtilisation, 4),
+    ...utilisationJson(summary),
+    detailing: summaryJson(summary).detailing,
+    summary: summaryJson(summary),
     checks: report.checks.map((c) => ({
       id: c.id,
       kind: c.kind,

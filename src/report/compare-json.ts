@@ -2,11 +2,15 @@
 import type { CompareColumn } from "../compare/compare.js";
 import { CAUTION } from "./check-json.js";
 import { resultRow } from "./search-json.js";
+import { UTILISATION_DEFINITIONS } from "./summary.js";
+import type { EfficiencyBasis } from "../model/scenario.js";
 
-export function compareJson(name: string, columns: CompareColumn[], currency: string) {
+export function compareJson(name: string, columns: CompareColumn[], currency: string, basis: EfficiencyBasis) {
   return {
     scenario: name,
     currency,
+    efficiencyBasis: basis,
+    definitions: UTILISATION_DEFINITIONS,
     columns: columns.map((c) => ({
       label: c.label,
       code: c.code.id,

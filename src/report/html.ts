@@ -8,7 +8,11 @@ import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "../export/bolt-list.js";
 import { renderSvg } from "../export/svg.js";
 import { boltSizeText } from "../catalogue/bolts.js";
-import { CAUTION, citationText } from "./check-json.js";
+import { CAUTION } from "./check-json.js";
+import { citationText } from "./citation.js";
+import { lengthNumber, lengthText, trimmed } from "./format.js";
+import { summarise, summaryRows } from "./summary.js";
+import { foldTwins, type FoldedCheck } from "./twins.js";
 import { xmlText } from "../text/escape.js";
 
 export interface ReportInput {
@@ -32,38 +36,47 @@ const SPLICE_TEXT: Record<Joint["spliceType"], string> = {
   "butt-double-cover": "Butt splice with two cover plates: bolts in double shear",
 };
 
-/** Which section of the report a check belongs to. */
-function componentOf(c: CheckResult): string {
+/** Which section of the report a check belongs to (twins: the section of their folded component). */
+function componentOf(f: FoldedCheck): string {
+  const c = f.check;
   if (c.kind === "bolt-shear" || c.kind === "slip" || c.kind === "grip-length") return "Bolts";
   if (c.type === "rule") return "Spacing, end and edge rules";
-  return c.component.replace(/, side [AB]$/, "").replace(/^./, (m) => m.toUpperCase());
+  return f.component.replace(/, (each side|side [AB])$/, "").replace(/^./, (m) => m.toUpperCase());
 }
 
 function demandText(c: CheckResult): string {
-  return c.type === "strength" ? `${fx(c.demand_N / 1000)} kN` : `${fx(c.value_mm)} mm`;
+  return c.type === "strength" ? `${fx(c.demand_N / 1000)} kN` : lengthText(c.value_mm);
 }
 
 function resistanceText(c: CheckResult): string {
-  return c.type === "strength" ? `${fx(c.resistance_N / 1000)} kN` : `${c.bound === "min" ? "≥" : "≤"} ${fx(c.limit_mm)} mm`;
+  return c.type === "strength" ? `${fx(c.resistance_N / 1000)} kN` : `${c.bound === "min" ? "≥" : "≤"} ${lengthText(c.limit_mm)}`;
 }
 
+/** Strength checks: the utilisation as a bar. Rules: the margin to the limit, never a utilisation. */
 function bar(c: CheckResult): string {
+  if (c.type === "rule") {
+    const margin = c.bound === "min" ? c.value_mm - c.limit_mm : c.limit_mm - c.value_mm;
+    const text = Math.abs(margin) < 0.005 ? "at the limit" : margin > 0 ? `${lengthText(margin)} to spare` : `${lengthText(-margin)} ${c.bound === "min" ? "short" : "over"}`;
+    return `<span class="margin">${esc(text)}</span>`;
+  }
+  if (c.loadRatio === 0) return `<span class="margin">condition ${c.pass ? "holds" : "does not hold"}</span>`;
   const u = Number.isFinite(c.utilisation) ? c.utilisation : 9.99;
   const width = Math.min(100, Math.max(0, u * 100));
   return `<div class="bar${c.pass ? "" : " over"}" role="img" aria-label="utilisation ${fx(u, 2)}"><span style="width:${fx(width, 1)}%"></span></div><span class="u">${fx(u, 2)}</span>`;
 }
 
-function checkRows(checks: CheckResult[], governing: string): string {
-  return checks
+function checkRows(folded: FoldedCheck[], governing: string): string {
+  return folded
+    .map(({ check: c, members, component }) => ({ c, component, governs: members.some((m) => m.id === governing), ids: members.map((m) => m.id).join(" ") }))
     .map(
-      (c) => `<tr class="${c.pass ? "pass" : "fail"}${c.id === governing ? " governing" : ""}" data-check="${esc(c.id)}">
+      ({ c, component, governs, ids }) => `<tr class="${c.pass ? "pass" : "fail"}${governs ? " governing" : ""}" data-check="${esc(ids)}">
   <td class="clause">${esc(citationText(c.citation))}</td>
-  <td><b>${esc(c.title)}</b><br><span class="muted">${esc(c.component)}</span></td>
+  <td><b>${esc(c.title)}</b><br><span class="muted">${esc(component)}</span></td>
   <td class="formula"><div>${esc(c.formula)}</div><div class="subst">${esc(c.substituted)}</div>${c.notes.length ? `<div class="muted">${esc(c.notes.join("; "))}</div>` : ""}</td>
   <td class="num">${esc(demandText(c))}</td>
   <td class="num">${esc(resistanceText(c))}</td>
   <td class="util">${bar(c)}</td>
-  <td class="result">${c.pass ? "pass" : "FAIL"}${c.id === governing ? "<br><span class=\"muted\">governs</span>" : ""}</td>
+  <td class="result">${c.pass ? "pass" : "FAIL"}${governs ? "<br><span class=\"muted\">governs</span>" : ""}</td>
 </tr>`,
     )
     .join("\n");
@@ -73,29 +86,31 @@ export function renderReportHtml(input: ReportInput): string {
   const { scenario, joint, report, bom } = input;
   const b = scenario.bolts;
   const svg = renderSvg({ scenario, joint, report, bom, date: input.date }).replace(/^<\?xml[^>]*>\s*/, "");
-  const groups = new Map<string, CheckResult[]>();
-  for (const c of report.checks) {
-    const key = componentOf(c);
-    groups.set(key, [...(groups.get(key) ?? []), c]);
+  const folded = foldTwins(report.checks);
+  const groups = new Map<string, FoldedCheck[]>();
+  for (const f of folded) {
+    const key = componentOf(f);
+    groups.set(key, [...(groups.get(key) ?? []), f]);
   }
-  const governing = report.checks.find((c) => c.id === report.governing);
-  const failed = report.checks.filter((c) => !c.pass);
+  const summary = summarise(scenario, report);
+  const rows = summaryRows(summary);
+  const failed = folded.filter((f) => !f.check.pass);
   const verdict = report.pass ? "PASS — every check passes" : `FAIL — ${failed.length} check${failed.length > 1 ? "s" : ""} fail`;
   const plateRows = joint.plates
-    .map((p) => `<tr><td>${esc(p.label)}</td><td class="num">${fx(p.spec.width_mm)}</td><td class="num">${fx(p.spec.thickness_mm)}</td><td>${esc(p.spec.grade)}</td><td class="num">${p.fy_MPa} / ${p.fu_MPa}</td><td>${esc(p.spec.edges)}</td><td class="num">${p.role === "packing" ? "—" : fx(p.forceShare, 3)}</td></tr>`)
+    .map((p) => `<tr><td>${esc(p.label)}</td><td class="num">${lengthNumber(p.spec.width_mm)}</td><td class="num">${lengthNumber(p.spec.thickness_mm)}</td><td>${esc(p.spec.grade)}</td><td class="num">${p.fy_MPa} / ${p.fu_MPa}</td><td>${esc(p.spec.edges)}</td><td class="num">${p.role === "packing" ? "—" : trimmed(p.forceShare, 3)}</td></tr>`)
     .join("\n");
   const l = scenario.layout;
   const layoutRows: Array<[string, string]> = [["Pattern", joint.patternText + (joint.spliceType !== "lap" ? " per side of the butt" : "")]];
   if (l.kind !== "holes") {
-    layoutRows.push(["Pitch", `${fx(l.pitch_mm)} mm`], ["Gauge", `${fx(l.gauge_mm)} mm`], ["End distance", `${fx(l.endDistance_mm)} mm`]);
-    if (joint.spliceType !== "lap") layoutRows.push(["End distance at the butt", `${fx(l.endDistanceAtButt_mm)} mm`], ["Butt gap", `${fx(joint.buttGap_mm)} mm`]);
+    layoutRows.push(["Pitch", lengthText(l.pitch_mm)], ["Gauge", lengthText(l.gauge_mm)], ["End distance", lengthText(l.endDistance_mm)]);
+    if (joint.spliceType !== "lap") layoutRows.push(["End distance at the butt", lengthText(l.endDistanceAtButt_mm)], ["Butt gap", lengthText(joint.buttGap_mm)]);
   }
-  layoutRows.push(["Bolts", `${joint.holes.length}`], ["Splice length", `${fx(joint.spliceLength_mm)} mm`], ["Holes", `Ø${fx(joint.holes[0]?.across_mm ?? 0)} mm (${b.hole})`]);
+  layoutRows.push(["Bolts", `${joint.holes.length}`], ["Splice length", lengthText(joint.spliceLength_mm)], ["Holes", `Ø${lengthText(joint.holes[0]?.across_mm ?? 0)} (${b.hole})`]);
   const bomRows = [
     ...bom.bolts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
     ...bom.nuts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
     ...bom.washers.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
-    ...bom.plates.map((x) => `<tr><td>${esc(`${x.item} ${x.width_mm} × ${x.thickness_mm} × ${fx(x.length_mm, 0)} ${x.grade}`)}</td><td class="num">${x.quantity}</td><td>${fx(x.mass_kg, 2)} kg, ${x.holes} holes Ø${x.holeDiameter_mm}</td></tr>`),
+    ...bom.plates.map((x) => `<tr><td>${esc(`${x.item} ${lengthNumber(x.width_mm)} × ${lengthNumber(x.thickness_mm)} × ${lengthNumber(x.length_mm)} ${x.grade}`)}</td><td class="num">${x.quantity}</td><td>${fx(x.mass_kg, 2)} kg, ${x.holes} holes Ø${x.holeDiameter_mm}</td></tr>`),
   ].join("\n");
 
   return `<!DOCTYPE html>
@@ -118,7 +133,7 @@ export function renderReportHtml(input: ReportInput): string {
   th, td { border: 1px solid var(--rule); padding: 3px 6px; vertical-align: top; text-align: left; }
   th { background: #eee; font-weight: 600; }
   td.num { text-align: right; white-space: nowrap; }
-  td.clause { white-space: nowrap; font-size: 12px; }
+  td.clause { font-size: 12px; min-width: 8em; max-width: 13em; }
   td.formula { font-family: "DejaVu Sans Mono", "Liberation Mono", Consolas, monospace; font-size: 11px; }
   td.formula .subst { margin-top: 2px; }
   .muted { color: var(--muted); font-size: 11px; font-family: inherit; }
@@ -133,6 +148,11 @@ export function renderReportHtml(input: ReportInput): string {
   figure.drawing { margin: 0; border: 1px solid var(--rule); }
   figure.drawing svg { width: 100%; height: auto; display: block; }
   .verdict { border: 2px solid var(--ink); padding: 8px 12px; font-size: 16px; font-weight: bold; margin: 8px 0; }
+  .verdict.is-pass { border-color: #1a6b2a; color: #1a6b2a; }
+  .verdict.is-fail { border-color: #b00020; color: #b00020; border-width: 3px; }
+  table.summary tr.fail td:last-child { color: #b00020; font-weight: bold; }
+  table.summary tr.warn td:last-child { color: #8a5a00; }
+  tr.fail td.result { color: #b00020; }
   .caution { border: 1px solid var(--ink); padding: 8px 12px; font-size: 12px; margin-top: 16px; }
   footer { margin-top: 18px; font-size: 11px; color: var(--muted); }
   @page { size: A4; margin: 14mm 12mm 16mm; @bottom-right { content: "page " counter(page) " of " counter(pages); font-size: 9pt; } @bottom-left { content: "splicewright calculation report"; font-size: 9pt; } }
@@ -150,6 +170,17 @@ export function renderReportHtml(input: ReportInput): string {
   <h1>Calculation report — bolted tension splice</h1>
   <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
 </header>
+
+<section id="summary">
+<h2>Summary</h2>
+<div class="verdict ${report.pass ? "is-pass" : "is-fail"}" id="summary-verdict">${esc(rows[0]!.value)}</div>
+<table class="kv summary">
+${rows
+  .slice(1)
+  .map((r) => `<tr class="${r.status}" data-row="${r.key}"><td>${esc(r.label)}</td><td>${esc(r.value)}${r.detail.map((d) => `<br><span class="muted">${esc(d)}</span>`).join("")}</td></tr>`)
+  .join("\n")}
+</table>
+</section>
 
 <section id="project">
 <h2>1. Project and scenario</h2>
@@ -184,6 +215,7 @@ ${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).jo
 <tr><td>Exposed to corrosion</td><td>${scenario.options.exposedToCorrosion ? "yes" : "no"}</td></tr>
 <tr><td>Bolt net area Anb</td><td>${esc(scenario.options.boltNetArea)}</td></tr>
 <tr><td>Bolt strength basis</td><td>ISO 898-1 ${esc(scenario.options.boltStrength)} values</td></tr>
+<tr><td>Efficiency basis</td><td>${esc(scenario.options.efficiencyBasis)}</td></tr>
 <tr><td>Net-section load</td><td>${scenario.options.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"}</td></tr>
 </table>
 </section>
@@ -201,11 +233,12 @@ ${bom.notes.length ? `<p>${bom.notes.map(esc).join("<br>")}</p>` : ""}
 
 <section id="checks" class="page">
 <h2>4. Checks</h2>
+${folded.length < report.checks.length ? `<p class="muted">${report.checks.length} checks; twins — the same check with the same figures on each side of the butt or on both cover plates — are printed once ("each side", "both cover plates"). The JSON export lists every check.</p>` : ""}
 ${[...groups.entries()]
   .map(
     ([name, checks]) => `<h3>${esc(name)}</h3>
 <table class="checks">
-<thead><tr><th>Clause</th><th>Check</th><th>Formula and substituted values</th><th>Demand</th><th>Resistance / limit</th><th>Utilisation</th><th>Result</th></tr></thead>
+<thead><tr><th>Clause</th><th>Check</th><th>Formula and substituted values</th><th>Demand</th><th>Resistance / limit</th><th>Utilisation (rules: margin)</th><th>Result</th></tr></thead>
 <tbody>
 ${checkRows(checks, report.governing)}
 </tbody>
@@ -217,16 +250,19 @@ ${checkRows(checks, report.governing)}
 <section id="result" class="page">
 <h2>5. Result</h2>
 <table class="kv">
-<tr><td>Joint design strength</td><td>${fx(report.jointStrength_N / 1000)} kN</td></tr>
-<tr><td>Governing check</td><td>${governing ? esc(`${governing.title}, ${governing.component} — ${citationText(governing.citation)}`) : "—"}</td></tr>
+<tr><td>Joint design strength</td><td>${fx(report.jointStrength_N / 1000)} kN for a factored tension of ${fx(scenario.load.factoredTension_N / 1000)} kN</td></tr>
+<tr><td>Governing check</td><td>${summary.governing ? esc(`${summary.governing.title}, ${summary.governing.component} — ${summary.governing.clause}`) : "—"}</td></tr>
 <tr><td>Efficiency</td><td>${fx(report.efficiency * 100)} %<br><span class="muted">${esc(report.efficiencyDefinition)}</span></td></tr>
-<tr><td>Highest utilisation</td><td>${fx(report.maxUtilisation, 3)}</td></tr>
+${rows
+  .filter((r) => r.key === "strength-utilisation" || r.key === "service-utilisation" || r.key === "detailing")
+  .map((r) => `<tr><td>${esc(r.label)}</td><td>${esc(r.value)}${r.detail.map((d) => `<br><span class="muted">${esc(d)}</span>`).join("")}</td></tr>`)
+  .join("\n")}
 </table>
 ${report.warnings.length ? `<h3>Warnings</h3><ul>${report.warnings.map((w) => `<li><b>${esc(w.id)}</b>: ${esc(w.message)}</li>`).join("")}</ul>` : ""}
 <h3>Conventions</h3>
 <ul>${report.conventions.map((c) => `<li>${esc(c)}</li>`).join("")}</ul>
 <div class="verdict" id="verdict">Verdict: ${esc(verdict)}</div>
-${failed.length ? `<p>Failing: ${failed.map((c) => esc(`${c.title} (${c.component})`)).join("; ")}</p>` : ""}
+${failed.length ? `<p>Failing: ${failed.map((f) => esc(`${f.check.title} (${f.component})`)).join("; ")}</p>` : ""}
 <div class="caution"><b>Caution.</b> ${esc(CAUTION)}</div>
 </section>
 <footer>Generated by splicewright ${esc(input.version)} on ${esc(input.date)}. All dimensions in mm, forces in kN, stresses in MPa.</footer>

@@ -5,6 +5,10 @@ import type { Candidate, SearchOutcome } from "../search/search.js";
 import type { RankBy } from "../search/ranking.js";
 import { CAUTION } from "./check-json.js";
 import { boltGradeText, boltSizeText } from "../catalogue/bolts.js";
+import { citationText } from "./citation.js";
+import { foldTwins } from "./twins.js";
+import { detailingCell, detailingJson, tightestCell, detailingState, strengthFigures, UTILISATION_DEFINITIONS } from "./summary.js";
+import type { EfficiencyBasis } from "../model/scenario.js";
 
 export interface ResultRow {
   rank: number;
@@ -27,9 +31,20 @@ export interface ResultRow {
   spliceLength_mm: number;
   jointStrength_kN: number;
   efficiency: number;
-  utilisation: number;
+  /** Factored tension / joint design strength (ultimate limit state). */
+  strengthUtilisation: number;
+  /** Service tension / slip resistance at service; null without a serviceability check. */
+  serviceUtilisation: number | null;
+  /** The detailing rules and conditions (all pass in a search row): the tightest and its margin. */
+  detailing: ReturnType<typeof detailingJson>;
+  /** A short statement of the detailing state ("all pass; max. pitch +8 mm"). */
+  detailingText: string;
+  /** The rule closest to its limit with its margin ("max. pitch +8 mm"), for table cells. */
+  tightestRule: string;
   cost: number;
+  /** The id of the governing check (machine use), and its title, component and clause (for people). */
   governing: string;
+  governingCheck: { title: string; component: string; clause: string } | null;
   tapered_counts_by?: string;
 }
 
@@ -48,6 +63,11 @@ export function resultRow(c: Candidate, rank: number): ResultRow {
   const ys = c.joint.holes.map((h) => Math.abs(h.y_mm));
   const narrow = Math.min(...c.joint.plates.filter((p) => p.role !== "packing").map((p) => p.spec.width_mm));
   const butt = c.joint.spliceType !== "lap";
+  const figures = strengthFigures(c.scenario, c.report);
+  const folded = foldTwins(c.report.checks);
+  const detailing = detailingState(c.report, folded);
+  const governingFold = folded.find((f) => f.members.some((m) => m.id === c.report.governing));
+  const governing = governingFold?.check;
   const row: ResultRow = {
     rank,
     bolt: `${boltSizeText(c.family.size_mm)} ${boltGradeText(c.family.propertyClass, c.family.size_mm)}`,
@@ -68,20 +88,35 @@ export function resultRow(c: Candidate, rank: number): ResultRow {
     spliceLength_mm: r(c.joint.spliceLength_mm, 2),
     jointStrength_kN: r(c.report.jointStrength_N / 1000),
     efficiency: r(c.report.efficiency, 4),
-    utilisation: r(c.report.maxUtilisation, 4),
+    strengthUtilisation: r(figures.strengthUtilisation, 4),
+    serviceUtilisation: figures.service ? r(figures.service.utilisation, 4) : null,
+    detailing: detailingJson(detailing),
+    detailingText: detailingCell(detailing, c.scenario.units === "us" ? "us" : "si"),
+    tightestRule: tightestCell(detailing, c.scenario.units === "us" ? "us" : "si"),
     cost: r(c.cost.total),
     governing: c.report.governing,
+    governingCheck: governing ? { title: governing.title, component: governingFold!.component, clause: citationText(governing.citation) } : null,
   };
   if (c.chosenBy) row.tapered_counts_by = c.chosenBy === "ip" ? "integer programme" : "enumeration (solver fallback)";
   return row;
 }
 
-export function searchJson(name: string, outcome: SearchOutcome, rankBy: RankBy, currency: string) {
+/** What the rows of a search are, and what is proven about them. */
+export function provenStatement(variants: boolean): string {
+  return variants
+    ? "every variant (the best gauge of each): nothing in the declared search space ranks above the rows shown — every candidate that could was checked or excluded by an admissible bound"
+    : "the best layout of each distinct arrangement (bolt size and class, pattern, counts across × along): each row is the best of its arrangement over the declared search space, and no arrangement not shown has a layout ranking above the last row — every candidate that could was checked or excluded by an admissible bound";
+}
+
+export function searchJson(name: string, outcome: SearchOutcome, rankBy: RankBy, currency: string, meta: { variants: boolean; efficiencyBasis: EfficiencyBasis }) {
   return {
     scenario: name,
     rankBy,
+    rows: meta.variants ? "every variant" : "best of each arrangement",
     proven: true,
-    provenStatement: "optimal over the declared search space: every candidate that could rank above the last row shown was checked or excluded by an admissible bound",
+    provenStatement: `optimal over the declared search space: ${provenStatement(meta.variants)}`,
+    efficiencyBasis: meta.efficiencyBasis,
+    definitions: UTILISATION_DEFINITIONS,
     searchSpace: outcome.spaceText,
     currency,
     results: outcome.results.map((c, i) => resultRow(c, i + 1)),

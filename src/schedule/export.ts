@@ -4,6 +4,7 @@
 import { CAUTION } from "../report/check-json.js";
 import type { Schedule } from "./schedule.js";
 import { csvField, plainLine } from "../text/escape.js";
+import { efficiencyBasisNote, UTILISATION_DEFINITIONS } from "../report/summary.js";
 
 const money = (v: number) => Number(v.toFixed(2));
 const cell = (v: string | number | null) => csvField(v === null ? "" : v);
@@ -32,12 +33,17 @@ export function scheduleJson(s: Schedule, meta: { code: string; currency: string
     provenStatement: s.selection.statement,
     ...(s.selection.subsets !== undefined ? { subsetsEvaluated: s.selection.subsets } : {}),
     ...(s.selection.solver ? { solver: s.selection.solver } : {}),
+    definitions: UTILISATION_DEFINITIONS,
+    efficiencyNote: efficiencyNote(s),
     types: s.types.map((u) => ({ ...u, layoutCost: money(u.layoutCost) })),
     splices: s.rows.map((r) => ({
       id: r.id,
       mark: r.mark,
       description: r.description,
       quantity: r.quantity,
+      plates: r.plates,
+      factoredTension_kN: r.factoredTension_kN,
+      serviceTension_kN: r.serviceTension_kN,
       type: r.type,
       layout: r.layout,
       boltsEach: r.boltsEach,
@@ -72,17 +78,25 @@ export function scheduleCsv(s: Schedule): string {
   const lines = [
     `# splicewright schedule: ${plainLine(s.project)}`,
     `# ${rulesText(s).join("; ")}; ${s.selection.proven ? "proven optimal" : "NOT proven optimal"} (${s.selection.method})`,
-    csvLine(["id", "mark", "quantity", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths_mm", "utilisation", "governing", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"]),
+    `# strength_utilisation: factored tension / joint design strength; service_utilisation: service tension / slip resistance at service; detailing: the rules (all pass) and the one closest to its limit; ${efficiencyNote(s)}`,
+    csvLine(["id", "mark", "quantity", "description", "plates", "factored_tension_kN", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths_mm", "joint_strength_kN", "strength_utilisation", "service_utilisation", "efficiency", "detailing", "governing_check", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"]),
   ];
   for (const r of s.rows) {
     const l = r.layout;
+    const g = l.governingCheck;
     lines.push(
-      csvLine([r.id, r.mark, r.quantity, r.type, l.pattern, l.counts, l.pitch_mm, l.gauge_mm, l.endDistance_mm, l.endDistanceAtButt_mm, l.edgeDistance_mm, l.coverThickness_mm, r.boltsEach, r.bolts, r.boltLengths.map((b) => `${b.quantity}×${b.length_mm}`).join(" "), l.utilisation, l.governing, money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)]),
+      csvLine([r.id, r.mark, r.quantity, r.description, r.plates, r.factoredTension_kN, r.type, l.pattern, l.counts, l.pitch_mm, l.gauge_mm, l.endDistance_mm, l.endDistanceAtButt_mm, l.edgeDistance_mm, l.coverThickness_mm, r.boltsEach, r.bolts, r.boltLengths.map((b) => `${b.quantity}×${b.length_mm}`).join(" "), l.jointStrength_kN, l.strengthUtilisation, l.serviceUtilisation, l.efficiency, l.detailingText, g ? `${g.title}, ${g.component} (${g.clause})` : "", money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)]),
     );
   }
   const t = s.totals;
-  lines.push(csvLine(["TOTAL", "", t.splices, `${t.typesUsed} types`, "", "", "", "", "", "", "", "", "", t.bolts, "", "", "", "", money(t.layoutCost), "", money(t.own.layoutCost), "", money(t.premium)]));
+  lines.push(csvLine(["TOTAL", "", t.splices, "", "", "", `${t.typesUsed} types`, "", "", "", "", "", "", "", "", "", t.bolts, "", "", "", "", "", "", "", "", money(t.layoutCost), "", money(t.own.layoutCost), "", money(t.premium)]));
   return lines.join("\n") + "\n";
+}
+
+/** The efficiency basis of the job's splices (one line; "mixed" when splices differ). */
+function efficiencyNote(s: Schedule): string {
+  const bases = [...new Set(s.rows.map((r) => r.efficiencyBasis))];
+  return bases.length === 1 ? efficiencyBasisNote(bases[0]!) : `Eff.: efficiency bases differ between splices (${bases.join(", ")}; options.efficiency_basis)`;
 }
 
 export function orderCsv(s: Schedule): string {

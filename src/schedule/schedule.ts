@@ -8,8 +8,9 @@ import { spliceCost, type CostTable } from "../catalogue/costs.js";
 import type { DesignCode } from "../codes/types.js";
 import { checkScenario } from "../engine/check.js";
 import { billOfMaterials } from "../export/bolt-list.js";
-import type { Scenario } from "../model/scenario.js";
+import type { EfficiencyBasis, Scenario } from "../model/scenario.js";
 import type { ResultRow } from "../report/search-json.js";
+import { lengthNumber } from "../report/format.js";
 import type { TypeOption } from "./options.js";
 import { COST_TOLERANCE, evaluateAssignment, ownOptima, typeLabel, type SelectionProblem, type SelectionRules } from "./selection.js";
 import type { SolvedSelection } from "./solve.js";
@@ -29,6 +30,13 @@ export interface ScheduleRow {
   mark: string;
   description: string;
   quantity: number;
+  /** The plates as scheduled: "200 × 16 E250; 2 covers 200 × 10 E250" (the cover thickness the search chose). */
+  plates: string;
+  /** Factored tension (and service tension, if given), kN. */
+  factoredTension_kN: number;
+  serviceTension_kN: number | null;
+  /** The efficiency basis of this splice (options.efficiency_basis). */
+  efficiencyBasis: EfficiencyBasis;
   type: string;
   layout: ResultRow;
   /** Bolts in one splice, and in all of this row's splices. */
@@ -104,6 +112,16 @@ export interface ScheduleInput {
   onProgress?: (done: number, total: number) => void;
 }
 
+/** The plates of a splice in a few words: main plate(s), then cover plate(s), sizes as they are. */
+export function platesText(s: Scenario): string {
+  const plate = (p: Scenario["plates"]["mainA"]) => `${lengthNumber(p.width_mm)} × ${lengthNumber(p.thickness_mm)} ${p.grade}`;
+  const { mainA, mainB, covers } = s.plates;
+  const main = plate(mainA) === plate(mainB) ? plate(mainA) : `${plate(mainA)} / ${plate(mainB)}`;
+  if (covers.length === 0) return main;
+  const cover = covers.every((c) => plate(c) === plate(covers[0]!)) ? `${covers.length === 2 ? "2 covers" : "cover"} ${plate(covers[0]!)}` : `covers ${covers.map(plate).join(" / ")}`;
+  return `${main}; ${cover}`;
+}
+
 const near = (a: number, b: number) => Math.abs(a - b) <= COST_TOLERANCE * 1e3 * Math.max(1, Math.abs(a), Math.abs(b));
 
 export function buildSchedule(input: ScheduleInput): Schedule {
@@ -151,6 +169,10 @@ export function buildSchedule(input: ScheduleInput): Schedule {
       mark: s.mark ?? "",
       description: s.description ?? "",
       quantity: s.quantity,
+      plates: platesText(o.scenario),
+      factoredTension_kN: Number((o.scenario.load.factoredTension_N / 1000).toFixed(2)),
+      efficiencyBasis: o.scenario.options.efficiencyBasis,
+      serviceTension_kN: o.scenario.load.serviceTension_N !== undefined ? Number((o.scenario.load.serviceTension_N / 1000).toFixed(2)) : null,
       type: label,
       layout: o.row,
       boltsEach: o.bolts,

@@ -3,7 +3,7 @@
  * no bound, no lattice, no integer programme. Used by the optimality tests and the bench only.
  */
 import { compareKeys, type RankBy } from "./ranking.js";
-import { evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
+import { arrangementOf, evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
 import { families, layoutOf, resolveSpace, taperedGauges, type Family } from "./space.js";
 import { countCandidates } from "./work-estimate.js";
 
@@ -32,18 +32,25 @@ function narrowest(ctx: SearchContext): number {
   return Math.min(s.plates.mainA.width_mm, s.plates.mainB.width_mm, ...s.plates.covers.map((c) => c.width_mm));
 }
 
-export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankBy): { results: Candidate[]; checks: number } {
+/**
+ * The best `top` layouts of the declared space by `rankBy`: by default the best of each distinct
+ * arrangement (size, class, pattern, counts), with `variants` the best gauge of every variant — the
+ * same two readings as `searchLayouts`.
+ */
+export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankBy, options: { variants?: boolean } = {}): { results: Candidate[]; checks: number } {
+  const identity = options.variants ? identityOf : arrangementOf;
   const space = resolveSpace(ctx.scenario, ctx.code, ctx.costs);
   const fams = families(ctx.scenario, ctx.code, ctx.costs, space);
   const stats: SearchStats = { families: 0, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates: countCandidates(ctx.scenario, ctx.code, ctx.costs, space) };
   const width = narrowest(ctx);
-  // The best `top` layouts of distinct identity so far (a layout's identity leaves out its gauge).
+  // The best `top` layouts of distinct identity so far (variants: a layout's identity leaves out its
+  // gauge; otherwise its identity is its arrangement).
   const best: Candidate[] = [];
   const maxLength = space.maxSpliceLength_mm ?? Infinity;
   const keep = (c: Candidate | null) => {
     if (!c || c.joint.spliceLength_mm > maxLength + 1e-9) return;
-    const id = identityOf(c);
-    const same = best.findIndex((b) => identityOf(b) === id);
+    const id = identity(c);
+    const same = best.findIndex((b) => identity(b) === id);
     if (same >= 0) {
       if (compareKeys(c.key, best[same]!.key) >= 0) return;
       best.splice(same, 1);
@@ -64,7 +71,7 @@ export function bruteForceLayouts(ctx: SearchContext, top: number, rankBy: RankB
             if (gMin === undefined) continue;
             const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
             for (const counts of taperedVectors(f.lines, kcap)) {
-              if (counts.reduce((a, b) => a + b, 0) < space.minBolts) continue;
+              if (counts.reduce((a, b) => a + b, 0) < space.minBolts || counts[0]! < f.minAcross) continue;
               const widest = Math.max(...counts);
               for (const g of gauges) {
                 if (width - (widest - 1) * g < 2 * f.limits.edgeMin_mm - 1e-9) continue;

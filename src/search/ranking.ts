@@ -66,7 +66,15 @@ export function compareKeys(a: Key, b: Key): number {
 
 const pad = (v: number | undefined) => (v === undefined ? "-" : v.toFixed(1).padStart(8, "0"));
 
+/**
+ * An arrangement: bolt size and class, pattern, counts across × along — what a detailer chooses
+ * between. Its text is the head of the fixed order.
+ */
+export function arrangementText(size_mm: number, propertyClass: string, pattern: string, counts: readonly number[]): string {
+  return [pad(size_mm), propertyClass.padStart(4, "0"), pattern, counts.map((c) => String(c).padStart(2, "0")).join("-")].join("|");
+}
+
 /** The fixed order of the remaining fields, as text that sorts the same way. */
 export function fixedOrderText(f: { size_mm: number; propertyClass: string; pattern: string; counts: number[]; pitch_mm: number; gauge_mm: number; end_mm: number; endAtButt_mm: number | undefined; coverThickness_mm: number | undefined }): string {
-  return [pad(f.size_mm), f.propertyClass.padStart(4, "0"), f.pattern, f.counts.map((c) => String(c).padStart(2, "0")).join("-"), pad(f.pitch_mm), pad(f.gauge_mm), pad(f.end_mm), pad(f.endAtButt_mm), pad(f.coverThickness_mm)].join("|");
+  return [arrangementText(f.size_mm, f.propertyClass, f.pattern, f.counts), pad(f.pitch_mm), pad(f.gauge_mm), pad(f.end_mm), pad(f.endAtButt_mm), pad(f.coverThickness_mm)].join("|");
 }

@@ -16,7 +16,7 @@ import type { Joint } from "../model/joint.js";
 import type { CheckKind, CheckReport } from "../model/results.js";
 import type { CheckableScenario, LayoutSpec, Scenario } from "../model/scenario.js";
 import { MinHeap } from "./heap.js";
-import { compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
+import { arrangementText, compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
 import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
@@ -63,6 +63,11 @@ export interface SearchOptions {
   maxCandidates?: number;
   /** Called now and then while the search runs (every PROGRESS_EVERY nodes), for a progress line. */
   onProgress?: (stats: SearchStats, results: number) => void;
+  /**
+   * false (the default): the best layout of each distinct arrangement (size, class, pattern, counts);
+   * true: every variant (pitch, end distances, cover thickness), the best gauge of each.
+   */
+  variants?: boolean;
 }
 
 /** Nodes between two progress calls. */
@@ -149,6 +154,16 @@ export function identityOf(c: Candidate): string {
   const parts = c.key.text.split("|");
   parts.splice(5, 1); // drop the gauge field of the fixed order
   return parts.join("|");
+}
+
+/** The arrangement of a layout (size, class, pattern, counts): by default results keep the best of each. */
+export function arrangementOf(c: Candidate): string {
+  return arrangementText(c.family.size_mm, c.family.propertyClass, c.family.pattern, c.counts);
+}
+
+/** The arrangement of every member of a grid or staggered family (tapered families hold many). */
+function familyArrangement(f: Family): string | null {
+  return f.countsPerLine ? arrangementText(f.size_mm, f.propertyClass, f.pattern, f.countsPerLine) : null;
 }
 
 function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel | null {
@@ -309,9 +324,25 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const m = model(f, counts)!;
     const length = lengthAt(m, p, e, eb);
     if (length > maxLength + 1e-9) return; // longer in every successor too
-    const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedNmin(f);
-    const cost = costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * m.cb);
-    heap.push({ kind: "dims", f, ip, ie, ieb, key: lowerKey(rankBy, { cost, bolts: totalBolts(f, N), efficiencyUpper, length_mm: length }) });
+    const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedOpenN(f);
+    if (N === null) return; // a tapered family with nothing left to report
+    heap.push({ kind: "dims", f, ip, ie, ieb, key: dimsKey(f, m, p, e, eb, N, efficiencyUpper, length) });
+  };
+  const dimsKey = (f: Family, m: LinearModel, p: number, e: number, eb: number | undefined, N: number, efficiencyUpper: number, length: number) =>
+    lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * m.cb), bolts: totalBolts(f, N), efficiencyUpper, length_mm: length });
+
+  /**
+   * Tapered families: a lower bound on the bolts of any layout still to be reported — the family's
+   * least count, raised (distinct arrangements) to the first count vector of its stream not yet
+   * reported; null when none is left. The reported set only grows, so the bound stays valid.
+   */
+  const taperedOpenN = (f: Family): number | null => {
+    const least = taperedNmin(f);
+    const stream = streams.get(f);
+    if (variants || !stream) return least;
+    const open = stream.openLowerN((counts) => reported(f, counts));
+    if (open === null) finished.add(f);
+    return open === null ? null : Math.max(least, open);
   };
 
   let lastRejection: { check: string; value: string } | null = null;
@@ -326,17 +357,28 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }
   };
 
+  const variants = options.variants ?? false;
+  /** Tapered families with no layout left to report (no count vector, or every one reported). */
+  const finished = new Set<Family>();
+  // Distinct arrangements: a node whose every layout belongs to an arrangement already reported is
+  // dropped unexpanded — none of its layouts could be reported.
+  const reported = (f: Family, counts?: number[]) => {
+    if (variants) return false;
+    const a = counts ? arrangementText(f.size_mm, f.propertyClass, f.pattern, counts) : familyArrangement(f);
+    return a !== null && seen.has(a);
+  };
   while (heap.size > 0 && results.length < options.top) {
     const node = heap.pop()!;
     stats.nodes++;
     if (options.onProgress && stats.nodes % PROGRESS_EVERY === 0) options.onProgress(stats, results.length);
     if (node.kind === "result") {
-      const id = identityOf(node.c);
+      const id = variants ? identityOf(node.c) : arrangementOf(node.c);
       if (seen.has(id)) continue;
       seen.add(id);
       results.push(node.c);
       continue;
     }
+    if (finished.has(node.f) || (node.kind !== "tapered" && reported(node.f))) continue;
     if (node.kind === "family") {
       const effUpper = -(node.key.numbers[0] ?? 0);
       if (model(node.f, node.f.countsPerLine ?? Array(node.f.lines).fill(1))) pushDims(node.f, 0, 0, 0, rankBy === "efficiency" ? effUpper : Infinity);
@@ -344,6 +386,20 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }
     const f = node.f;
     const effUpper = rankBy === "efficiency" ? -(node.key.numbers[0] ?? 0) : Infinity;
+    if (node.kind === "dims" && !f.countsPerLine && !variants) {
+      // Distinct arrangements: the key may have risen since the node was pushed (more vectors reported).
+      const N = taperedOpenN(f);
+      if (N === null) continue;
+      const p = f.pitches_mm[node.ip]!;
+      const e = f.ends_mm[node.ie]!;
+      const eb = f.endsAtButt_mm[node.ieb];
+      const m = model(f, Array(f.lines).fill(1))!;
+      const fresh = dimsKey(f, m, p, e, eb, N, effUpper, lengthAt(m, p, e, eb));
+      if (compareKeys(fresh, node.key) > 0) {
+        heap.push({ ...node, key: fresh });
+        continue;
+      }
+    }
     if (node.kind === "dims") {
       // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing.
       pushDims(f, node.ip + 1, node.ie, node.ieb, effUpper);
@@ -362,13 +418,21 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       } else {
         // Tapered: one count-vector generator for these dimensions; each vector is tried at every gauge
         // that fits its widest line.
-        const N0 = taperedNmin(f, p, e, eb);
+        const N0dims = taperedNmin(f, p, e, eb);
         const gauges = taperedGauges(f, width, space);
         const gMin = gauges[0];
         if (gMin === undefined) continue;
         const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width - 2 * f.limits.edgeMin_mm) / gMin + 1e-9) + 1);
-        if (kcap < 2) continue;
+        if (kcap < Math.max(2, f.minAcross)) continue;
         const stream = streamFor(f, kcap);
+        // The stream does not depend on the dimensions: a family without a vector (or, for distinct
+        // arrangements, whose every vector is already reported) has no layout left to report.
+        const open = stream.at(0) === null ? null : taperedOpenN(f);
+        if (open === null) {
+          finished.add(f);
+          continue;
+        }
+        const N0 = Math.max(N0dims, open);
         const m = model(f, Array(f.lines).fill(1))!;
         heap.push({
           kind: "tapered",
@@ -378,7 +442,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
           ieb: node.ieb,
           gauges,
           stream,
-          index: 0,
+          index: variants ? 0 : stream.firstOpen, // vectors before it are all reported
           key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * m.cb, bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
         });
       }
@@ -398,6 +462,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       continue;
     }
     heap.push({ ...node, index: node.index + 1, key: vectorKey });
+    if (reported(f, answer.counts)) continue;
     const vectorBound = code.strengthBound(f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
@@ -434,6 +499,25 @@ class TaperedStream {
     this.tried = Array.from({ length: problem.kmax[0] ?? 0 }, (_, i) => Array(problem.lines).fill(i + 1));
     this.N = N0;
     this.maxN = problem.kmax.reduce((a, b) => a + b, 0);
+  }
+
+  private open = 0;
+
+  /** Index of the first vector found so far that `openLowerN`'s test did not pass over. */
+  get firstOpen(): number {
+    return this.open;
+  }
+
+  /**
+   * A lower bound on the bolt total of every vector not passing `test` (reported), without solving
+   * more programmes: the first such vector found, else the level the stream has reached; null when
+   * the stream is exhausted and every vector passes. `test` must stay true once true.
+   */
+  openLowerN(test: (counts: number[]) => boolean): number | null {
+    while (this.open < this.vectors.length && test(this.vectors[this.open]!.counts)) this.open++;
+    const v = this.vectors[this.open];
+    if (v) return v.counts.reduce((a, b) => a + b, 0);
+    return this.N > this.maxN ? null : this.N;
   }
 
   at(i: number): TaperedAnswer | null {
@@ -493,7 +577,7 @@ function taperedProblem(ctx: SearchContext, f: Family, kmax: number, transferred
     const total = areas.reduce((a, b) => a + b, 0);
     s.plates.covers.forEach((c, i) => add(c, (areas[i] ?? 0) / total, false));
   }
-  return { lines, kmax: Array(lines).fill(kmax), holeAcross_mm: hole.across_mm, tension_N: s.load.factoredTension_N, transferred, rows };
+  return { lines, kmax: Array(lines).fill(kmax), minFirst: f.minAcross, holeAcross_mm: hole.across_mm, tension_N: s.load.factoredTension_N, transferred, rows };
 }
 
 

@@ -16,6 +16,12 @@ export const SEARCH_DEFAULTS = {
   maxAlong: 12,
   /** At least two bolts in each group (common practice: a single bolt has no redundancy). */
   minBolts: 2,
+  /**
+   * At least two bolts across wherever the narrowest plate fits two at the minimum gauge and edge
+   * distance (common practice: a single gauge line on a plate wide enough for two puts the whole
+   * force through one line of holes with no redundancy across the width); 1 on narrower plates.
+   */
+  minAcross: 2,
   /** Step for a scenario in US customary units (`units: us`): ¼ in (common practice). */
   stepUs_mm: 6.35,
 } as const;
@@ -31,6 +37,8 @@ export interface SearchSpace {
   /** Fewest bolts in each bolt group (per side of the butt). */
   minBolts: number;
   maxAcross?: number;
+  /** Declared fewest bolts across (search.min_across); absent: the default rule (SEARCH_DEFAULTS.minAcross). */
+  minAcross?: number;
   maxSpliceLength_mm?: number;
   maxEndDistance_mm?: number;
   fixedGauge_mm?: number;
@@ -49,6 +57,8 @@ export interface Family {
   lines: number;
   /** Grid and staggered: the across count as the layout spec takes it. */
   across: number;
+  /** Fewest bolts on the fullest transverse line in this family (tapered: the line at the butt). */
+  minAcross: number;
   coverThickness_mm: number | undefined;
   limits: SearchLimits;
   pitches_mm: number[];
@@ -146,6 +156,7 @@ export function resolveSpace(scenario: Scenario, code: DesignCode, costs: CostTa
     coverThicknesses_mm: scenario.splice.type === "lap" ? [] : s.coverThicknesses_mm ?? [scenario.plates.covers[0]!.thickness_mm],
   };
   if (s.maxAcross !== undefined) space.maxAcross = s.maxAcross;
+  if (s.minAcross !== undefined) space.minAcross = s.minAcross;
   if (s.maxSpliceLength_mm !== undefined) space.maxSpliceLength_mm = s.maxSpliceLength_mm;
   if (s.maxEndDistance_mm !== undefined) space.maxEndDistance_mm = s.maxEndDistance_mm;
   if (s.fixedGauge_mm !== undefined) space.fixedGauge_mm = s.fixedGauge_mm;
@@ -198,6 +209,7 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
           const { pitches, ends, endsAtButt } = dimensionRanges(limits, space, butt);
           const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
           const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
+          const minAcross = minAcrossOf(space, maxAcrossByWidth);
           const push = (counts: number[] | null, lines: number, across: number, G: number) => {
             if (counts && counts.reduce((a, b) => a + b, 0) < space.minBolts) return;
             const gauges = pattern === "tapered" ? [] : gaugesFor(G, width, limits, space);
@@ -210,6 +222,7 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
               countsPerLine: counts,
               lines,
               across,
+              minAcross,
               coverThickness_mm: coverT,
               limits,
               pitches_mm: lines > 1 ? pitches : [0],
@@ -221,11 +234,11 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
           };
           for (let m = 1; m <= space.maxAlong; m++) {
             if (pattern === "grid") {
-              for (let a = 1; a <= maxAcross; a++) push(Array(m).fill(a), m, a, a);
+              for (let a = minAcross; a <= maxAcross; a++) push(Array(m).fill(a), m, a, a);
             } else if (pattern === "staggered") {
               if (m < 2) continue;
-              for (let a = 2; a <= maxAcross; a++) push(staggeredCounts(a, m), m, a, 2 * a - 1);
-            } else if (m >= 2 && maxAcross >= 2) {
+              for (let a = Math.max(2, minAcross); a <= maxAcross; a++) push(staggeredCounts(a, m), m, a, 2 * a - 1);
+            } else if (m >= 2 && maxAcross >= Math.max(2, minAcross)) {
               push(null, m, 0, 0);
             }
           }
@@ -234,6 +247,14 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
     }
   }
   return out;
+}
+
+/**
+ * Fewest bolts across for a family whose pattern fits `byWidth` across the narrowest plate: the declared
+ * search.min_across, else 2 where two fit and 1 where they do not (SEARCH_DEFAULTS.minAcross).
+ */
+export function minAcrossOf(space: SearchSpace, byWidth: number): number {
+  return space.minAcross ?? Math.min(SEARCH_DEFAULTS.minAcross, Math.max(1, byWidth));
 }
 
 /** The layout spec of a family at given dimensions. */
@@ -253,7 +274,7 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
     `bolt sizes: ${space.sizes_mm.map(boltSizeText).join(", ")}`,
     `property classes: ${space.classes.join(", ")} (${space.assembly === "bearing" ? "bearing type" : "friction grip"})`,
     `patterns: ${space.patterns.join(", ")}${space.patterns.includes("tapered") ? " (tapered: each transverse line its own count, symmetric about the plate axis, all counts odd or all even and never rising away from the butt — lap: from plate B's end)" : ""}`,
-    `bolts across: 1 up to what the narrowest plate fits with the minimum gauge and edge distance${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
+    `bolts across: ${space.minAcross !== undefined ? `at least ${space.minAcross} (search.min_across)` : "at least 2 where the narrowest plate fits two at the minimum gauge and edge distance, else 1 (search.min_across, default: common practice)"} on the fullest transverse line (tapered: the line at the butt), up to what the narrowest plate fits${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
     `transverse lines along the force: 1 … ${space.maxAlong}${scenario.splice.type !== "lap" ? " per side of the butt" : ""}`,
     `at least ${space.minBolts} bolts${scenario.splice.type !== "lap" ? " each side of the butt" : ""} (common practice)`,
     `dimensions on a ${space.step_mm} mm step; edge distances equal both sides (the group on the plate axis), so the edge distance follows from the gauge`,

@@ -11,6 +11,8 @@
  *     full:        s·T ≤ Rn·(b − d0·n_i)                    → kmax_i
  *     transferred: s·T·Σ_{l ≤ i} n_l ≤ N·Rn·(b − d0·n_i)    (lines l at or nearer the plate's end)
  *     with Rn = 0.9·t·fu/γm1 per mm of net width (the code's Tdn per mm), s the plate's share of T;
+ *   fewest bolts on line 0:    Σ_k k·x[0][k] ≥ min_across (search.min_across; line 0, at the butt, is
+ *                              the fullest line of the declared shape)
  *   no-good cuts:              Σ_i x[i][v_i] ≤ lines − 1            for every vector v already returned
  *                                                                     (uniform vectors are grid layouts)
  *   the declared tapered shape: one parity on every line, Σ_{k odd} x[i][k] = Σ_{k odd} x[0][k], and
@@ -41,6 +43,8 @@ export interface TaperedProblem {
   lines: number;
   /** Largest count each line can take (gauge and edge distance on the narrowest plate). */
   kmax: number[];
+  /** Fewest bolts on line 0, the fullest line (search.min_across); absent: 1. */
+  minFirst?: number;
   holeAcross_mm: number;
   tension_N: number;
   transferred: boolean;
@@ -59,6 +63,7 @@ const v = (i: number, k: number) => `x_${i}_${k}`;
 export function meetsConstraints(p: TaperedProblem, counts: number[]): boolean {
   const N = counts.reduce((a, b) => a + b, 0);
   for (let i = 0; i < p.lines; i++) if ((counts[i] ?? 0) < 1 || (counts[i] ?? 0) > (p.kmax[i] ?? 0)) return false;
+  if ((counts[0] ?? 0) < (p.minFirst ?? 1)) return false;
   for (let i = 1; i < p.lines; i++) if (counts[i]! > counts[i - 1]! || counts[i]! % 2 !== counts[0]! % 2) return false;
   for (const row of p.rows) {
     for (let i = 0; i < p.lines; i++) {
@@ -90,6 +95,11 @@ export function nextTaperedCounts(p: TaperedProblem, N: number, excluded: readon
       variables[name] = { obj: (i * k) / (p.lines * N), [`line_${i}`]: 1, total: k };
       binaries[name] = 1;
     }
+  }
+  if ((p.minFirst ?? 1) > 1) {
+    // the fullest line carries at least min_across bolts: Σ_k k·x[0][k] ≥ minFirst
+    constraints.first = { min: p.minFirst! };
+    for (let k = 1; k <= (p.kmax[0] ?? 0); k++) variables[v(0, k)]!.first = k;
   }
   for (let i = 1; i < p.lines; i++) {
     constraints[`parity_${i}`] = { equal: 0 };

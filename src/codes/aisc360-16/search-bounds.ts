@@ -126,7 +126,9 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     const each = Math.min(p.shear, phiRnBearing(cb, d, t, st.fu_MPa));
     const atEnd = p.end === undefined ? 0 : (shape.countsPerLine[p.endLine] ?? 0);
     const endEach = p.end === undefined ? each : Math.min(each, phiRnTearout(ct, p.end - hole.along_mm / 2, t, st.fu_MPa));
-    keep(((n - atEnd) * each + atEnd * endEach) / p.share, "bolt-bearing", "bolt");
+    // Per bolt (the tapered bolt-count bound): at most `each` whichever line a bolt is on — the share of
+    // end bolts differs between count vectors, so the average over this shape would not bound them all.
+    bound.bolt(((n - atEnd) * each + atEnd * endEach) / p.share, "bolt-bearing", each / p.share);
   }
   return bound.result;
 }

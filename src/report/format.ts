@@ -1,0 +1,43 @@
+/**
+ * Numbers for people: every shell (terminal, HTML, drawing, CSV) prints a figure the same way. Pure.
+ *
+ * Dimensions keep the precision they have and no more: 62.5 mm prints "62.5", 60 mm prints "60",
+ * 37.4 mm prints "37.4" (up to 0.01 mm; inches up to 0.001 in). Forces print to 0.1 kN or 0.1 kips.
+ */
+import { toUnit } from "../units/units.js";
+
+export type DisplayUnits = "si" | "us";
+
+/** A number to at most `digits` decimals, trailing zeros dropped ("62.5", "60", "0.125"). */
+export function trimmed(v: number, digits: number): string {
+  if (!Number.isFinite(v)) return v > 0 ? "∞" : "—";
+  const s = v.toFixed(digits);
+  const t = s.includes(".") ? s.replace(/\.?0+$/, "") : s;
+  return t === "-0" ? "0" : t;
+}
+
+/** A length without its unit: mm to 0.01, or inches to 0.001 (US display). */
+export function lengthNumber(mm: number, units: DisplayUnits = "si"): string {
+  return units === "us" ? trimmed(toUnit(mm, "in", "length"), 3) : trimmed(mm, 2);
+}
+
+/** A length with its unit: "62.5 mm", "2.5 in". */
+export function lengthText(mm: number, units: DisplayUnits = "si"): string {
+  return `${lengthNumber(mm, units)} ${units === "us" ? "in" : "mm"}`;
+}
+
+/** A force without its unit, to 0.1 kN or 0.1 kips. */
+export function forceNumber(N: number, units: DisplayUnits = "si"): string {
+  if (!Number.isFinite(N)) return "∞";
+  return units === "us" ? toUnit(N, "kip", "force").toFixed(1) : (N / 1000).toFixed(1);
+}
+
+/** A force with its unit: "620.0 kN", "135.6 kips". */
+export function forceText(N: number, units: DisplayUnits = "si"): string {
+  return `${forceNumber(N, units)} ${units === "us" ? "kips" : "kN"}`;
+}
+
+/** A utilisation (a ratio of forces) to `digits` decimals. */
+export function ratioText(v: number, digits = 2): string {
+  return Number.isFinite(v) ? v.toFixed(digits) : "∞";
+}
