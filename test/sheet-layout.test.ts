@@ -8,7 +8,7 @@ import { describe, expect, it } from "vitest";
 import { checkScenario } from "../src/engine/check.js";
 import { parseScenario, requireCheckable } from "../src/io/scenario.js";
 import { formatSheet } from "../src/cli/sheet.js";
-import { styleFor, wantsColour } from "../src/cli/style.js";
+import { styleFor, styleMarksToAnsi, wantsColour } from "../src/cli/style.js";
 import { outputWidth, visibleLength, wrap } from "../src/cli/text.js";
 import { foldTwins } from "../src/report/twins.js";
 import { cli, ROOT, scenarioPath, tempScenario } from "./helpers/cli.js";
@@ -106,7 +106,8 @@ describe("emphasis: colour only on a terminal, never with NO_COLOR", () => {
     const { scenario, code } = parseScenario(text);
     const s = requireCheckable(scenario, code);
     const { joint, report } = checkScenario(s, code);
-    const coloured = formatSheet(s, joint, report, { width: 80, style: styleFor({ isTTY: true }, {}) });
+    // The sheet carries emphasis marks; the terminal shell turns them into SGR codes after making the text safe.
+    const coloured = styleMarksToAnsi(formatSheet(s, joint, report, { width: 80, style: styleFor({ isTTY: true }, {}) }));
     expect(coloured).toMatch(/\u001b\[[0-9;]*mFAIL/);
     expect(coloured.split("\n").find((l) => l.startsWith("Verdict:"))).toMatch(/\u001b\[/);
     expect(longest(coloured)).toBeLessThanOrEqual(80);

@@ -15,7 +15,7 @@
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
 import type { DesignCode, SearchLimits } from "../codes/types.js";
 import type { Scenario, SearchSpec } from "../model/scenario.js";
-import { boltSpecFor, dimensionRanges, gaugesFor, narrowestWidth, resolveSpace, taperedGaugesFor, withCover, type SearchPattern, type SearchSpace } from "./space.js";
+import { boltSpecFor, dimensionRanges, gaugesFor, minAcrossOf, narrowestWidth, resolveSpace, taperedGaugesFor, withCover, type SearchPattern, type SearchSpace } from "./space.js";
 
 /**
  * Candidate layouts a search may have in its declared space without --max-candidates: 10¹¹. The bundled
@@ -48,13 +48,21 @@ function choose(n: number, k: number): number {
 }
 
 /**
- * Tapered count vectors of m lines with at most kcap bolts on a line: non-increasing sequences of one
- * parity (v values of that parity give C(m + v − 1, m) sequences), the uniform ones (grids) left out.
+ * Tapered count vectors of m lines with at most kcap bolts on a line and at least minFirst on line 0 (the
+ * fullest): non-increasing sequences of one parity (v values of that parity give C(m + v − 1, m)
+ * sequences), less those whose first count is below minFirst, the uniform ones (grids) left out.
  */
-export function taperedVectorCount(m: number, kcap: number): number {
-  const odd = Math.ceil(kcap / 2);
-  const even = Math.floor(kcap / 2);
-  return choose(m + odd - 1, m) - odd + (even > 0 ? choose(m + even - 1, m) - even : 0);
+export function taperedVectorCount(m: number, kcap: number, minFirst = 1): number {
+  const below = Math.max(0, minFirst - 1);
+  const parity = (offset: 0 | 1, cap: number) => Math.floor((cap + offset) / 2); // values of one parity up to cap (odd: offset 1)
+  const sequences = (v: number) => (v > 0 ? choose(m + v - 1, m) : 0);
+  let total = 0;
+  for (const offset of [1, 0] as const) {
+    const all = parity(offset, kcap);
+    const small = parity(offset, Math.min(below, kcap));
+    total += sequences(all) - sequences(small) - (all - small);
+  }
+  return total;
 }
 
 /** The dimension lattice of a family's ranges: (pitches, end distances, end distances at the butt). */
@@ -82,18 +90,19 @@ function patternCandidates({ pattern, limits, space, width_mm, butt }: PatternIn
   if (d.ends === 0 || d.endsAtButt === 0) return 0;
   const perFamily = (lines: number) => (lines > 1 ? d.pitches : 1) * d.ends * d.endsAtButt;
   const maxAcross = acrossLimit(limits, space, width_mm);
+  const minAcross = minAcrossOf(space, Math.floor((width_mm - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1);
   let total = 0;
   if (pattern === "tapered") {
-    if (maxAcross < 2) return 0;
+    if (maxAcross < Math.max(2, minAcross)) return 0;
     const gaugeList = taperedGaugesFor(limits, width_mm, space);
     const gMin = gaugeList[0] ?? Infinity;
     const gauges = gaugeList.length;
     const kcap = Math.min(space.maxAcross ?? Infinity, Math.floor((width_mm - 2 * limits.edgeMin_mm) / (space.fixedGauge_mm ?? gMin) + 1e-9) + 1);
     if (kcap < 2) return 0;
-    for (let m = 2; m <= space.maxAlong; m++) total += taperedVectorCount(m, kcap) * perFamily(m) * gauges;
+    for (let m = 2; m <= space.maxAlong; m++) total += taperedVectorCount(m, kcap, minAcross) * perFamily(m) * gauges;
     return total;
   }
-  for (let a = pattern === "grid" ? 1 : 2; a <= maxAcross; a++) {
+  for (let a = pattern === "grid" ? minAcross : Math.max(2, minAcross); a <= maxAcross; a++) {
     const gauges = gaugeCount(pattern === "grid" ? a : 2 * a - 1, width_mm, limits, space);
     if (gauges === 0) continue;
     for (let m = pattern === "grid" ? 1 : 2; m <= space.maxAlong; m++) {
