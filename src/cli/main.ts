@@ -2,11 +2,7 @@
  * The command-line shell: reads files, prints, sets exit codes. All calculation is in the pure core.
  * Exit codes: 0 all checks pass, 1 a check fails or nothing complies, 2 bad input, 3 internal error.
  */
-import { readFileSync, statSync } from "node:fs";
-import { fileURLToPath } from "node:url";
 import { Command, CommanderError, Option } from "commander";
-import type { CostTable } from "../catalogue/costs.js";
-import { applyCosts, parseCostTable, type CostFile } from "../io/costs.js";
 import { savedScenarioText } from "../io/save-scenario.js";
 import { parseYaml } from "../io/yaml.js";
 import { searchJson } from "../report/search-json.js";
@@ -14,60 +10,30 @@ import { RANK_BY, type RankBy } from "../search/ranking.js";
 import { searchLayouts } from "../search/search.js";
 import { writeFileSafely, writeFilesSafely } from "./files.js";
 import { EXPORT_FORMATS, exportFiles, type ExportFormat } from "../export/index.js";
-import { basename, extname, join } from "node:path";
+import { exportBase } from "../export/names.js";
+import { join } from "node:path";
 import { billOfMaterials } from "../export/bolt-list.js";
-import { compareChoices, compareCodes, MappingError, type CompareColumn } from "../compare/compare.js";
 import { compareJson } from "../report/compare-json.js";
 import { formatCompare } from "./compare-table.js";
-import { parseMapping, parseMappingText } from "../io/equivalents.js";
-import { codeIds, findCode } from "../codes/registry.js";
-import { BOLT_SIZES_MM, inchBoltSize, isBoltSize, isPropertyClass, type PropertyClass } from "../catalogue/bolts.js";
+import { compareRequest } from "../io/compare-request.js";
+import { layoutToExport, reportOrigin } from "../io/layout-choice.js";
 import { renderReportHtml } from "../report/html.js";
 import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
-import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
+import { InputError, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
 import { formatSheet } from "./sheet.js";
 import { registerSchedule } from "./schedule-command.js";
+import { registerApp } from "./app-command.js";
+import { BUNDLED_EQUIVALENTS, loadCosts, readScenarioText, today } from "./inputs.js";
+import { VERSION } from "../version.js";
 
-export const VERSION = "0.1.0";
-
-/** Read a scenario file's text, or throw an InputError naming the file. */
-export function readScenarioText(file: string): string {
-  let size: number;
-  try {
-    const st = statSync(file);
-    if (!st.isFile()) throw new InputError(file, "not a file");
-    size = st.size;
-  } catch (e) {
-    if (e instanceof InputError) throw e;
-    throw new InputError(file, "cannot read the file (does it exist?)");
-  }
-  if (size > MAX_FILE_BYTES) throw new InputError(file, `file is larger than ${MAX_FILE_BYTES} bytes`);
-  return readFileSync(file, "utf8");
-}
+export { VERSION };
+export { BUNDLED_COSTS, BUNDLED_EQUIVALENTS, loadCosts, readScenarioText } from "./inputs.js";
 
 function loadCheckable(file: string) {
   const { scenario, code } = parseScenario(readScenarioText(file));
   return { scenario: requireCheckable(scenario, code), code };
-}
-
-/** The bundled table of nearest equivalent materials between codes. */
-export const BUNDLED_EQUIVALENTS = fileURLToPath(new URL("../../catalogue/equivalents.yaml", import.meta.url));
-
-function splitList(text: string): string[] {
-  return text.split(",").map((s) => s.trim()).filter(Boolean);
-}
-
-/** The bundled cost catalogue (illustrative prices), next to the package. */
-export const BUNDLED_COSTS = fileURLToPath(new URL("../../catalogue/costs.yaml", import.meta.url));
-
-/** The cost table for a scenario: the bundled catalogue or --costs, with the scenario's own entries over it. */
-export function loadCosts(costsFile: string | undefined, scenarioCosts: unknown): CostTable {
-  const file = costsFile ?? BUNDLED_COSTS;
-  let table = parseCostTable(readScenarioText(file), costsFile ? file : "catalogue/costs.yaml");
-  if (scenarioCosts !== undefined) table = applyCosts(table, scenarioCosts as CostFile);
-  return table;
 }
 
 function positiveInt(name: string) {
@@ -80,14 +46,7 @@ function positiveInt(name: string) {
 /** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
 function chooseLayout(file: string, rank: number | undefined, costsFile: string | undefined) {
   const { scenario, code } = parseScenario(readScenarioText(file));
-  if (scenario.bolts && inchBoltSize(scenario.bolts.size_mm) !== undefined) {
-    throw new InputError("bolts.size", "export and report do not cover inch bolts yet (no ASTM F3125 length, nut and washer tables): use check or search");
-  }
-  if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
-  const outcome = searchLayouts({ scenario, code, costs: loadCosts(costsFile, scenario.costs) }, { top: rank, rankBy: "cost" });
-  const chosen = outcome.results[rank - 1];
-  if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
-  return { checkable: chosen.scenario, code };
+  return layoutToExport(scenario, code, rank, () => loadCosts(costsFile, scenario.costs));
 }
 
 function parseFormats(text: string): ExportFormat[] {
@@ -99,13 +58,6 @@ function parseFormats(text: string): ExportFormat[] {
   }
   if (out.length === 0) throw new InputError("--format", "give at least one format");
   return out;
-}
-
-/** Today's date (ISO), or the one SOURCE_DATE_EPOCH names (reproducible output, common practice). */
-function today(): string {
-  const epoch = process.env.SOURCE_DATE_EPOCH;
-  const d = epoch && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
-  return d.toISOString().slice(0, 10);
 }
 
 interface Io {
@@ -183,7 +135,7 @@ async function run(argv: string[], io: Io): Promise<number> {
       const formats = parseFormats(opts.format);
       const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
       const { joint, report } = checkScenario(checkable, code);
-      const base = basename(file, extname(file)) + (opts.rank !== undefined ? `-rank${opts.rank}` : "");
+      const base = exportBase(file, opts.rank);
       const { files, bom } = exportFiles({ scenario: checkable, joint, report, date: today(), base }, formats);
       writeFilesSafely(files.map((f) => ({ path: join(opts.out, f.name), content: f.content })), opts.force ?? false);
       for (const f of files) io.out(`wrote ${join(opts.out, f.name)}`);
@@ -205,8 +157,7 @@ async function run(argv: string[], io: Io): Promise<number> {
       const { checkable, code } = chooseLayout(file, opts.rank, opts.costs);
       const { joint, report } = checkScenario(checkable, code);
       const bom = billOfMaterials(joint, checkable);
-      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
-      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date: today(), version: VERSION, origin });
+      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date: today(), version: VERSION, origin: reportOrigin(opts.rank) });
       writeFileSafely(opts.out, html, opts.force ?? false);
       io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
       exit = report.pass ? 0 : 1;
@@ -224,40 +175,13 @@ async function run(argv: string[], io: Io): Promise<number> {
     .action((file: string, opts: { classes?: string; sizes?: string; codes?: string; costs?: string; json?: boolean }) => {
       const { scenario, code } = parseScenario(readScenarioText(file));
       const costs = loadCosts(opts.costs, scenario.costs);
-      if (!opts.classes && !opts.sizes && !opts.codes) throw new InputError("compare", "give --classes, --sizes or --codes");
-      if (opts.codes && (opts.classes || opts.sizes)) throw new InputError("--codes", "compare codes on their own (classes and sizes differ between codes)");
-      let columns: CompareColumn[];
-      if (opts.codes) {
-        const codes = splitList(opts.codes).map((id) => {
-          const found = findCode(id);
-          if (!found) throw new InputError("--codes", `unknown design code "${id}" (known: ${codeIds().join(", ")})`);
-          return found;
-        });
-        const table = scenario.compare !== undefined ? parseMapping(scenario.compare, "compare") : parseMappingText(readScenarioText(BUNDLED_EQUIVALENTS), "catalogue/equivalents.yaml");
-        try {
-          columns = compareCodes(scenario, code, codes, costs, table);
-        } catch (e) {
-          if (e instanceof MappingError) throw new InputError(e.field, e.message);
-          throw e;
-        }
-      } else {
-        const classes = opts.classes ? splitList(opts.classes).map((c) => {
-          const cls = c;
-          if (!isPropertyClass(cls) || !(code.classesFor(scenario.bolts?.assembly ?? "bearing") as readonly string[]).includes(cls)) throw new InputError("--classes", `unknown or not allowed property class "${c}" (allowed: ${code.classesFor(scenario.bolts?.assembly ?? "bearing").join(", ")})`);
-          return cls as PropertyClass;
-        }) : [];
-        const sizes = opts.sizes ? splitList(opts.sizes).map((t) => {
-          const d = Number(t.replace(/^M/i, ""));
-          if (!isBoltSize(d)) throw new InputError("--sizes", `unknown bolt size "${t}" (known: ${BOLT_SIZES_MM.map((x) => `M${x}`).join(", ")})`);
-          return d;
-        }) : [];
-        columns = compareChoices(scenario, code, costs, classes, sizes);
-      }
+      const columns = compareRequest(scenario, code, opts, costs, () => readScenarioText(BUNDLED_EQUIVALENTS));
       io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency), null, 2) : formatCompare(scenario.name, columns, costs.currency));
       exit = columns.some((c) => c.best) ? 0 : 1;
     });
 
   registerSchedule(program, io, (c) => (exit = c));
+  registerApp(program, io, (c) => (exit = c));
 
   try {
     await program.parseAsync(argv);

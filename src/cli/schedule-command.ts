@@ -5,18 +5,18 @@
  * layout or no choice of types meets the rules, 2 bad input.
  */
 import { existsSync } from "node:fs";
-import { basename, extname, join } from "node:path";
+import { join } from "node:path";
 import { Option, type Command } from "commander";
 import { parseProject } from "../io/project.js";
 import { InputError } from "../io/yaml.js";
 import { scheduleCsv, scheduleJson, orderCsv } from "../schedule/export.js";
-import { selectionLp } from "../schedule/mip.js";
 import { selectionProblem } from "../schedule/options.js";
 import { buildSchedule } from "../schedule/schedule.js";
-import { typeLabel, type SelectionRules } from "../schedule/selection.js";
-import { acceptMipAnswer, chooseMethod, METHOD_REQUESTS, solveByEnumeration, type MethodRequest, type SolvedSelection } from "../schedule/solve.js";
+import { chooseBoltTypes, methodRefusal, missingLayouts, noScheduleMessage, rulesWith, scheduleFileNames } from "../schedule/run.js";
+import { METHOD_REQUESTS, type MethodRequest } from "../schedule/solve.js";
+import { exportBase } from "../export/names.js";
 import { writeFilesSafely } from "./files.js";
-import { loadCosts, readScenarioText } from "./main.js";
+import { loadCosts, readScenarioText } from "./inputs.js";
 import { solveWithHighs } from "./schedule-highs.js";
 import { defaultWorkers, searchSplices } from "./schedule-pool.js";
 import { ProgressBar } from "./schedule-progress.js";
@@ -51,18 +51,6 @@ const amount = (name: string) => (v: string) => {
   return n;
 };
 
-/** The project file's rules with the command line's over them. */
-function rulesOf(file: SelectionRules, opts: ScheduleOptions): SelectionRules {
-  const rules: SelectionRules = {
-    costPerType: opts.costPerType ?? file.costPerType,
-    oneClassPerDiameter: opts.oneClassPerDiameter ?? file.oneClassPerDiameter,
-    minBoltsPerType: opts.minBoltsPerType ?? file.minBoltsPerType,
-  };
-  const K = opts.maxTypes ?? file.maxTypes;
-  if (K !== undefined) rules.maxTypes = K;
-  return rules;
-}
-
 export function registerSchedule(program: Command, io: Io, setExit: (code: number) => void): void {
   program
     .command("schedule")
@@ -84,12 +72,13 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
       const text = readScenarioText(file);
       const project = parseProject(text);
       const costs = loadCosts(opts.costs, project.costs);
-      const rules = rulesOf(project.rules, opts);
-      const base = basename(file, extname(file));
-      const targets = opts.out ? [`${base}-schedule.csv`, `${base}-order.csv`, `${base}-schedule.json`].map((n) => join(opts.out!, n)) : [];
+      const rules = rulesWith(project.rules, opts);
+      const names = scheduleFileNames(exportBase(file));
+      const targets = opts.out ? [names.schedule, names.order, names.json].map((n) => join(opts.out!, n)) : [];
       // Refuse before the long searches, not after them.
       if (!opts.force) for (const t of targets) if (existsSync(t)) throw new InputError(t, "already exists (use --force to overwrite)");
-      if (rules.minBoltsPerType > 0 && opts.method === "enumerate") throw new InputError("--method", "enumerate cannot apply the minimum-bolts rule (it links splices): use auto or mip");
+      const refusal = methodRefusal(rules, opts.method);
+      if (refusal) throw new InputError("--method", refusal);
 
       const bar = new ProgressBar(process.stderr, "schedule: searching splices", project.splices.length, ProgressBar.wanted(process.stderr, project.splices.length));
       const t0 = performance.now();
@@ -102,38 +91,27 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
       const search_ms = performance.now() - t0;
       const searches = pool.results;
 
-      const missing = project.splices.map((s, m) => ({ s, r: searches[m]! })).filter(({ r }) => r.options.length === 0);
-      if (missing.length > 0) {
-        const lines = missing.map(({ s, r }) => {
-          const last = r.none[r.none.length - 1];
-          return `splice ${s.id}${s.mark ? ` (mark ${s.mark})` : ""}: no compliant layout with any bolt type of its space${last ? ` — with ${typeLabel(last.type)}: ${last.reason}` : ""}`;
-        });
-        if (opts.json) io.out(JSON.stringify({ project: project.name, scheduled: false, noCompliantLayout: missing.map(({ s, r }) => ({ id: s.id, mark: s.mark ?? "", reasons: r.none.map((n) => ({ type: typeLabel(n.type), reason: n.reason })) })) }, null, 2));
-        else io.out([`No schedule: ${missing.length} splice${missing.length === 1 ? " has" : "s have"} no compliant layout.`, ...lines].join("\n"));
-        for (const l of lines) io.err(l);
+      const missing = missingLayouts(project, searches);
+      if (missing) {
+        io.out(opts.json ? JSON.stringify(missing.json, null, 2) : missing.text);
+        for (const l of missing.lines) io.err(l);
         setExit(1);
         return;
       }
 
       const { problem, options } = selectionProblem(project.splices, searches, rules);
       const t1 = performance.now();
-      let selection: SolvedSelection;
-      const { method } = chooseMethod(problem, opts.method);
-      if (method === "enumeration") selection = solveByEnumeration(problem);
-      else {
-        if (process.stderr.isTTY && project.splices.length > 20) process.stderr.write("schedule: choosing bolt types (HiGHS integer programme)…");
-        const lp = selectionLp(problem);
-        const answer = await solveWithHighs(lp.text, opts.timeLimit);
-        if (process.stderr.isTTY && project.splices.length > 20) process.stderr.write("\r\u001b[K");
-        selection = acceptMipAnswer(problem, lp, answer);
-      }
+      const tty = process.stderr.isTTY && project.splices.length > 20;
+      const selection = await chooseBoltTypes(problem, opts.method, opts.timeLimit, async (lp, timeLimit_s) => {
+        if (tty) process.stderr.write("schedule: choosing bolt types (HiGHS integer programme)…");
+        const answer = await solveWithHighs(lp, timeLimit_s);
+        if (tty) process.stderr.write("\r\u001b[K");
+        return answer;
+      });
       const selection_ms = performance.now() - t1;
 
       if (!selection.assignment) {
-        const fewest = selection.fewestTypes;
-        const message =
-          `No schedule: ${selection.statement}` +
-          (fewest !== undefined && fewest !== null && rules.maxTypes !== undefined && fewest > rules.maxTypes ? `; the fewest bolt types that serve every splice${rules.oneClassPerDiameter ? " with one class per diameter" : ""}: ${fewest} (--max-types ${rules.maxTypes})` : "");
+        const message = noScheduleMessage(selection, rules);
         if (opts.json) io.out(JSON.stringify({ project: project.name, scheduled: false, reason: message, method: selection.method, proven: selection.proven }, null, 2));
         else io.out(message);
         io.err(message);

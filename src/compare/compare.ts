@@ -7,7 +7,7 @@ import type { CostTable } from "../catalogue/costs.js";
 import { ASTM_ISO_EQUIVALENT, astmBoltGrade, type PropertyClass } from "../catalogue/bolts.js";
 import type { DesignCode } from "../codes/types.js";
 import type { PlateSpec, Scenario } from "../model/scenario.js";
-import { searchLayouts, type Candidate, type SearchOutcome } from "../search/search.js";
+import { searchLayouts, type Candidate, type SearchOptions, type SearchOutcome } from "../search/search.js";
 
 export interface CompareColumn {
   label: string;
@@ -26,11 +26,18 @@ export interface CodeMapping {
   bolts: Array<Record<string, string>>;
 }
 
+/** Progress of a comparison: a column finished, or a node count inside the column being searched. */
+export interface CompareProgress {
+  onColumn?: (done: number, total: number) => void;
+  onSearch?: SearchOptions["onProgress"];
+}
+
 /** One column per (class, size) choice; a list left empty keeps the scenario's own search range. */
-export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[]): CompareColumn[] {
+export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[], progress: CompareProgress = {}): CompareColumn[] {
   const classList: Array<PropertyClass | undefined> = classes.length ? classes : [undefined];
   const sizeList: Array<number | undefined> = sizes.length ? sizes : [undefined];
   const columns: CompareColumn[] = [];
+  const total = classList.length * sizeList.length;
   for (const c of classList) {
     for (const d of sizeList) {
       const search = { ...(scenario.search ?? {}) };
@@ -38,14 +45,15 @@ export function compareChoices(scenario: Scenario, code: DesignCode, costs: Cost
       if (d !== undefined) search.sizes_mm = [d];
       const s: Scenario = { ...scenario, search };
       const label = [d !== undefined ? `M${d}` : "", c !== undefined ? `class ${c}` : ""].filter(Boolean).join(" ");
-      columns.push(column(label, s, code, costs, []));
+      columns.push(column(label, s, code, costs, [], progress));
+      progress.onColumn?.(columns.length, total);
     }
   }
   return withDifferences(columns);
 }
 
-function column(label: string, scenario: Scenario, code: DesignCode, costs: CostTable, mapping: string[]): CompareColumn {
-  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost" });
+function column(label: string, scenario: Scenario, code: DesignCode, costs: CostTable, mapping: string[], progress: CompareProgress): CompareColumn {
+  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost", ...(progress.onSearch ? { onProgress: progress.onSearch } : {}) });
   return { label, code, scenario, outcome, best: outcome.results[0] ?? null, costDifference: null, mapping };
 }
 
@@ -116,12 +124,14 @@ export function mapScenario(scenario: Scenario, from: DesignCode, to: DesignCode
 }
 
 /** One column per design code, the scenario mapped to each by the table. */
-export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping): CompareColumn[] {
+export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping, progress: CompareProgress = {}): CompareColumn[] {
   return withDifferences(
-    codes.map((to) => {
+    codes.map((to, i) => {
       const { scenario: mapped, mapping } = mapScenario(scenario, from, to, table);
       // A code with scenario settings (factors, conventions) is bound to the mapped scenario, as parsing does.
-      return column(to.id, mapped, to.settings ? to.settings.bind(mapped) : to, costs, mapping);
+      const c = column(to.id, mapped, to.settings ? to.settings.bind(mapped) : to, costs, mapping, progress);
+      progress.onColumn?.(i + 1, codes.length);
+      return c;
     }),
   );
 }

@@ -56,7 +56,12 @@ export interface SearchOutcome {
 export interface SearchOptions {
   top: number;
   rankBy: RankBy;
+  /** Called every PROGRESS_NODES nodes with the counts so far (a shell shows progress; the search ignores it). */
+  onProgress?: (stats: Readonly<SearchStats>) => void;
 }
+
+/** How often, in search nodes, `onProgress` is called. */
+export const PROGRESS_NODES = 256;
 
 /**
  * Checks whose result cannot change with the gauge, per pattern (proof in DEVELOPERS.md, "Search").
@@ -317,6 +322,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   while (heap.size > 0 && results.length < options.top) {
     const node = heap.pop()!;
     stats.nodes++;
+    if (options.onProgress && stats.nodes % PROGRESS_NODES === 0) options.onProgress(stats);
     if (node.kind === "result") {
       const id = identityOf(node.c);
       if (seen.has(id)) continue;
