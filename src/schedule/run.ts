@@ -18,6 +18,22 @@ export interface HighsAnswer {
   version: string;
 }
 
+/** HiGHS's options for the selection: a relative gap of 0 (the default 1e-4 would accept an answer 0.01 % above the optimum). */
+export function highsOptions(timeLimit_s: number): { mip_rel_gap: number; time_limit: number; output_flag: boolean } {
+  return { mip_rel_gap: 0, time_limit: timeLimit_s, output_flag: false };
+}
+
+/** HiGHS's result as plain data: status, objective (null without a solution) and every column's primal value. */
+export function highsAnswerOf(r: { Status: string; ObjectiveValue: number; Columns?: Record<string, unknown> }, version: string): HighsAnswer {
+  const primal: Record<string, number> = {};
+  for (const [name, column] of Object.entries(r.Columns ?? {})) {
+    const value = (column as { Primal?: number }).Primal;
+    if (typeof value === "number") primal[name] = value;
+  }
+  const hasSolution = r.Status !== "Infeasible" && Number.isFinite(r.ObjectiveValue);
+  return { status: r.Status, objective: hasSolution ? r.ObjectiveValue : null, primal, version };
+}
+
 /** Runs one HiGHS solve of CPLEX LP text with a time limit. */
 export type HighsSolver = (lp: string, timeLimit_s: number) => Promise<HighsAnswer>;
 
