@@ -101,12 +101,6 @@ function serve(root: string, names: string[], host: string, p: number, open: boo
       else reject(new InputError("--host", `cannot listen on ${host} (${e.code ?? e.message})`));
     });
     server.listen(p, host, () => {
-      const bound = server.address();
-      const url = addressUrl(host, typeof bound === "object" && bound ? bound.port : p);
-      io.out(`splicewright workbench: ${url}`);
-      io.err("The server only serves the page's files; every calculation runs in the browser. Ctrl+C stops it.");
-      if (!LOOPBACK.has(host)) io.err(`Listening on ${host}: other machines that reach this one can open the page.`);
-      if (open) openBrowser(url, io);
       const stop = () => {
         process.off("SIGINT", stop);
         process.off("SIGTERM", stop);
@@ -115,6 +109,12 @@ function serve(root: string, names: string[], host: string, p: number, open: boo
       };
       process.on("SIGINT", stop);
       process.on("SIGTERM", stop);
+      const bound = server.address();
+      const url = addressUrl(host, typeof bound === "object" && bound ? bound.port : p);
+      io.err("The server only serves the page's files; every calculation runs in the browser. Ctrl+C stops it.");
+      if (!LOOPBACK.has(host)) io.err(`Listening on ${host}: other machines that reach this one can open the page.`);
+      io.out(`splicewright workbench: ${url}`);
+      if (open) openBrowser(url, io);
     });
   });
 }

@@ -346,7 +346,7 @@ export function valueOfInput(field: Field, input: string | boolean): unknown {
       return choice ? choice.value : text;
     }
     case "list": {
-      const items = text.split(/[,;\s]+/).filter(Boolean);
+      const items = text.split(/\s*[,;]\s*/).map((t) => t.trim()).filter(Boolean);
       return field.items === "number" ? items.map(scalar) : items.map((t) => (/^\d+(\.\d+)?$/.test(t) && !t.includes(".") ? Number(t) : t));
     }
     case "points":

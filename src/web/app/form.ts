@@ -264,6 +264,12 @@ export class ScenarioForm {
     } else {
       this.banner.hidden = false;
       this.banner.textContent = p.kind === "internal" ? `internal error: ${p.message}` : p.message;
+      // A field the form has no control for (from an opened file): offer to take it out.
+      if (p.kind === "input" && p.path && / unknown field /.test(` ${p.message} `)) {
+        const remove = h("button", { type: "button", class: "small", id: "remove-unknown" }, `Remove ${p.path} from the scenario`);
+        remove.addEventListener("click", () => this.edit(p.path.split(".").filter(Boolean), undefined));
+        this.banner.append(" ", remove);
+      }
     }
   }
 
