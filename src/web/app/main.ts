@@ -30,6 +30,9 @@ const DEMOS: Array<[string, string, string]> = [
   ["canopy-tie-us-search.yaml", "Canopy tie, layout to be found (search)", CANOPY_SEARCH],
 ];
 
+/** Most rows a search shows. */
+const MAX_TOP = 1000;
+
 const session = new WorkerClient();
 let state: LiveState | undefined;
 let costs: CatalogueText | undefined;
@@ -49,14 +52,32 @@ function edit(path: string[], value: unknown): void {
   pump();
 }
 
+/** Requests to the session not yet answered. */
+let busy = 0;
+
+/** Edits and session requests not yet answered, on the page element (tests and scripts wait for 0). */
+function markEdits(): void {
+  document.documentElement.dataset.edits = String(queued.size + busy);
+}
+
+/** A session request, counted while it is out. */
+function track<T>(p: Promise<T>): Promise<T> {
+  busy++;
+  markEdits();
+  return p.finally(() => {
+    busy--;
+    markEdits();
+  });
+}
+
 function pump(): void {
+  markEdits();
   if (inFlight || queued.size === 0) return;
   const edits = [...queued.values()];
   const since = queuedSince ?? performance.now();
   queued.clear();
   queuedSince = undefined;
-  inFlight = session
-    .request<LiveState>({ op: "edit", edits })
+  inFlight = track(session.request<LiveState>({ op: "edit", edits }))
     .then((s) => {
       show(s, false);
       const ms = performance.now() - since;
@@ -107,7 +128,7 @@ function show(s: LiveState, fill: boolean): void {
 async function open(text: string, fileName: string): Promise<void> {
   await settled();
   try {
-    show(await session.request<LiveState>({ op: "open", text, fileName }), true);
+    show(await track(session.request<LiveState>({ op: "open", text, fileName })), true);
   } catch (e) {
     reportFailure(e instanceof Failure && e.problem.kind === "input" ? new Failure({ ...e.problem, message: `${fileName}: ${e.problem.message}` }) : e);
   }
@@ -134,7 +155,7 @@ async function download(format: DownloadFormat, suffix: string): Promise<void> {
 }
 
 function wireFile(): void {
-  byId("new").addEventListener("click", () => void settled().then(() => session.request<LiveState>({ op: "blank" })).then((s) => show(s, true), reportFailure));
+  byId("new").addEventListener("click", () => void track(settled().then(() => session.request<LiveState>({ op: "blank" }))).then((s) => show(s, true), reportFailure));
   byId("open").addEventListener("click", () => void openFile());
   byId("save").addEventListener("click", () => void download("yaml", ""));
   byId("print").addEventListener("click", () => {
@@ -149,9 +170,9 @@ function wireFile(): void {
     demo.value = "";
   });
   const name = byId<HTMLInputElement>("file-name");
-  name.addEventListener("change", () => void session.request<LiveState>({ op: "rename", fileName: name.value }).then((s) => show(s, false), reportFailure));
+  name.addEventListener("change", () => void track(settled().then(() => session.request<LiveState>({ op: "rename", fileName: name.value }))).then((s) => show(s, false), reportFailure));
   const date = byId<HTMLInputElement>("date");
-  date.addEventListener("change", () => void session.request<LiveState>({ op: "date", date: date.value.trim() }).then((s) => show(s, false), reportFailure));
+  date.addEventListener("change", () => void track(settled().then(() => session.request<LiveState>({ op: "date", date: date.value.trim() }))).then((s) => show(s, false), reportFailure));
   for (const b of Array.from(byId("downloads").querySelectorAll("button"))) {
     b.addEventListener("click", () => void download(b.dataset.format as DownloadFormat, b.dataset.suffix ?? ""));
   }
@@ -243,12 +264,15 @@ async function runSearch(): Promise<void> {
   await settled();
   if (!state) return;
   const text = state.text;
-  const top = Number(byId<HTMLInputElement>("search-top").value.trim() || "10");
+  const asked = Number(byId<HTMLInputElement>("search-top").value.trim() || "10");
+  // Bounded: at most MAX_TOP rows (each is a full, checked layout kept in memory and drawn in the table).
+  const top = Number.isInteger(asked) && asked > 0 ? Math.min(asked, MAX_TOP) : 10;
+  byId<HTMLInputElement>("search-top").value = String(top);
   const rankBy = byId<HTMLSelectElement>("search-rank").value as "cost";
   const us = state.file.units === "us";
   const fileName = state.fileName;
   meter("search-meter", true);
-  const answer = await searchJob.start("search", (c, progress) => c.request<SearchAnswer>({ op: "search", text, top: Number.isInteger(top) && top > 0 ? top : 10, rankBy, ...(costs ? { costs } : {}) }, progress));
+  const answer = await searchJob.start("search", (c, progress) => c.request<SearchAnswer>({ op: "search", text, top, rankBy, ...(costs ? { costs } : {}) }, progress));
   meter("search-meter", false);
   if (answer) renderSearch(answer, us, (rank) => void open(answer.saved[rank - 1]!, fileName));
 }

@@ -73,7 +73,7 @@ function summaryParts(s: WorkbenchSummary, state: LiveState): HTMLElement[] {
 
 /** The export's own SVG, adopted as a node (scripts and handlers, which it never has, are refused anyway). */
 export function renderDrawing(state: LiveState): void {
-  const box = byId("drawing");
+  const box = byId("drawing-view");
   const svg = state.check?.svg;
   if (!svg) {
     if (state.check?.svgProblem) box.replaceChildren(h("p", { class: "pending" }, `No drawing: ${state.check.svgProblem}`));
