@@ -9,9 +9,18 @@ import { byId, downloadText, fixed, h } from "./dom.js";
 import { bar } from "./results.js";
 import { toUnit } from "../../units/units.js";
 
-/** One job at a time per panel: its worker, ended by Cancel or Escape. */
+/**
+ * One job at a time per panel: its worker, ended by Cancel or Escape. A worker that finished its job is
+ * kept as the spare for the next one (its code already compiled); a cancelled or failed one is ended.
+ */
 export class Job {
+  private static spare: WorkerClient | undefined;
   private client: WorkerClient | undefined;
+
+  /** Start the spare worker ahead of the first job. */
+  static prewarm(): void {
+    Job.spare ??= new WorkerClient();
+  }
 
   constructor(
     private readonly run: HTMLButtonElement,
@@ -32,8 +41,10 @@ export class Job {
   /** Start `work` in a fresh worker; progress goes to the status line. Resolves null when cancelled or failed. */
   async start<T>(what: string, work: (c: WorkerClient, progress: (p: Progress) => void) => Promise<T>): Promise<T | null> {
     this.stop();
-    const client = new WorkerClient();
+    const client = Job.spare ?? new WorkerClient();
+    Job.spare = undefined;
     this.client = client;
+    let keep = false;
     this.run.disabled = true;
     this.cancel.disabled = false;
     const t0 = performance.now();
@@ -55,6 +66,7 @@ export class Job {
     };
     try {
       const value = await work(client, progress);
+      keep = true;
       this.status.className = "status done";
       this.status.textContent = `${what}: done in ${fixed((performance.now() - t0) / 1000, 2)} s`;
       return value;
@@ -68,7 +80,8 @@ export class Job {
       }
       return null;
     } finally {
-      client.terminate();
+      if (keep && !Job.spare) Job.spare = client;
+      else client.terminate();
       if (this.client === client) this.client = undefined;
       this.run.disabled = false;
       this.cancel.disabled = true;

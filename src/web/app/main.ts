@@ -110,8 +110,8 @@ let firstResult = true;
 function show(s: LiveState, fill: boolean): void {
   state = s;
   form.refresh(s, fill);
-  renderSummary(s);
-  renderDrawing(s);
+  renderSummary(s, !fill);
+  renderDrawing(s, !fill);
   if (!byId("panel-checks").hidden) renderChecks(s);
   if (!byId("panel-text").hidden) byId("yaml-text").textContent = s.text;
   const name = byId<HTMLInputElement>("file-name");
@@ -122,6 +122,7 @@ function show(s: LiveState, fill: boolean): void {
   if (firstResult && s.check) {
     firstResult = false;
     document.documentElement.dataset.firstResultMs = performance.now().toFixed(0);
+    setTimeout(() => Job.prewarm(), 500);
   }
 }
 

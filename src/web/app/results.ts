@@ -28,20 +28,33 @@ function checkLine(c: SummaryCheck, units: "si" | "us"): string {
   return `${c.title} (${c.component}), ${c.clause}: ${numbers}`;
 }
 
-export function renderSummary(state: LiveState): void {
+/**
+ * The summary. After an edit that makes the input bad, the last result stays, dimmed, under the
+ * problem's line (so the page does not jump); after opening a file or New, nothing stale is kept.
+ */
+export function renderSummary(state: LiveState, keepLast: boolean): void {
   const box = byId("summary");
   const s = state.check?.summary;
+  box.querySelector(".problem-note")?.remove();
   if (!s) {
+    const problem = state.problem ? (state.problem.kind === "internal" ? `internal error: ${state.problem.message}` : state.problem.message) : "";
+    if (state.problem && keepLast && box.dataset.result === "1") {
+      box.classList.add("stale");
+      box.prepend(h("p", { class: "problem-note", role: "status" }, "No result until the input is corrected: ", h("span", { class: "problem-line" }, problem), ". Dimmed: the result before the change."));
+      return;
+    }
     const why = state.problem
-      ? h("p", { class: "pending" }, "No result until the input is corrected: ", h("span", { class: "problem-line" }, state.problem.kind === "internal" ? `internal error: ${state.problem.message}` : state.problem.message))
+      ? h("p", { class: "pending" }, "No result until the input is corrected: ", h("span", { class: "problem-line" }, problem))
       : state.searchOnly
         ? h("p", { class: "pending" }, "No bolts or layout given: this scenario is for the search. Run a search and load an arrangement into the form.")
         : h("p", { class: "pending" }, "No result.");
     box.replaceChildren(h("div", { class: "verdict none", id: "verdict" }, h("span", { class: "word" }, "—")), why);
-    box.classList.toggle("stale", Boolean(state.problem));
+    box.dataset.result = "0";
+    box.classList.remove("stale");
     return;
   }
   box.classList.remove("stale");
+  box.dataset.result = "1";
   box.replaceChildren(...summaryParts(s, state));
 }
 
@@ -72,9 +85,10 @@ function summaryParts(s: WorkbenchSummary, state: LiveState): HTMLElement[] {
 }
 
 /** The export's own SVG, adopted as a node (scripts and handlers, which it never has, are refused anyway). */
-export function renderDrawing(state: LiveState): void {
+export function renderDrawing(state: LiveState, keepLast: boolean): void {
   const box = byId("drawing-view");
   const svg = state.check?.svg;
+  if (!svg && !keepLast) box.replaceChildren();
   if (!svg) {
     if (state.check?.svgProblem) box.replaceChildren(h("p", { class: "pending" }, `No drawing: ${state.check.svgProblem}`));
     else if (!state.problem) box.replaceChildren(h("p", { class: "pending" }, state.searchOnly ? "The drawing appears once the form holds bolts and a layout." : ""));
