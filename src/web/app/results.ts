@@ -3,6 +3,7 @@
  * the detailing rules, governing check, efficiency), the drawing as `export` draws it, and the full
  * list of checks. Only figures the check produced are shown; nothing is computed here.
  */
+import { words, type Words } from "../fields.js";
 import type { LiveState } from "../protocol.js";
 import type { SummaryCheck, WorkbenchSummary } from "../summary.js";
 import { toUnit } from "../../units/units.js";
@@ -58,6 +59,10 @@ export function renderSummary(state: LiveState, keepLast: boolean): void {
   box.replaceChildren(...summaryParts(s, state));
 }
 
+/** The summary's terms in each code's words. */
+const LOAD: Words = { "is800-2007": "Factored tension T", "en1993-1-8": "Design tension NEd", "aisc360-16": "Required strength Pu (LRFD)" };
+const STRENGTH: Words = { "is800-2007": "Design strength of the joint", "en1993-1-8": "Design resistance of the joint", "aisc360-16": "Design strength φRn of the joint" };
+
 function summaryParts(s: WorkbenchSummary, state: LiveState): HTMLElement[] {
   const verdict = h(
     "div",
@@ -70,8 +75,8 @@ function summaryParts(s: WorkbenchSummary, state: LiveState): HTMLElement[] {
   const figures = h(
     "dl",
     { class: "figures" },
-    fig("Factored load", "load", force(s.load_N, s.units)),
-    fig("Joint design strength", "joint-strength", h("span", { "data-kn": String(json.jointStrength_kN) }, force(s.jointStrength_N, s.units))),
+    fig(words(LOAD, state.codeId), "load", force(s.load_N, s.units)),
+    fig(words(STRENGTH, state.codeId), "joint-strength", h("span", { "data-kn": String(json.jointStrength_kN) }, force(s.jointStrength_N, s.units))),
     fig("Strength utilisation", "strength-utilisation", h("span", { class: "num" }, fixed(s.strengthUtilisation, 3)), bar(s.strengthUtilisation), h("span", { class: "state" }, s.strengthPass ? "strength checks met" : "a strength check is not met")),
     fig("Detailing rules", "rules", s.rulesPass ? `all ${s.rules} met` : `${s.failing.filter((c) => c.figures.kind === "rule").length} of ${s.rules} not met`),
     fig("Governing check", "governing", s.governing ? `${s.governing.title} (${s.governing.component}), ${s.governing.clause}` : "—"),
