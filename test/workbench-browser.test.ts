@@ -186,6 +186,17 @@ describe.skipIf(!haveBrowser)("the workbench in headless Chromium, opened from d
     expect(await page.locator("#verdict .word").innerText()).toBe("PASS");
   }, 60_000);
 
+  it("a file with a field the form has no control for: the CLI's message above the form, and a button that removes the field", async () => {
+    const file = tempScenario(footbridge.replace("project: Canal footbridge FB-2 (demo)", "project: Canal footbridge FB-2 (demo)\ncolour: red"), "with-colour.yaml");
+    await openFile(page, file);
+    const r = cli(["check", file]);
+    expect(`splicewright: error: ${(await page.locator("#form-problem").innerText()).replace(/ Remove colour from the scenario$/, "")}`).toBe(r.stderr.trim());
+    await page.click("#remove-unknown");
+    await settled(page);
+    expect(await page.locator("#form-problem").isVisible()).toBe(false);
+    expect(await page.locator("#verdict .word").innerText()).toBe("PASS");
+  }, 60_000);
+
   it("a search in a worker gives the CLI's best arrangement; loading it checks as the CLI checks its saved scenario", async () => {
     await openFile(page, scenarioPath("footbridge-tie-search.yaml"));
     expect(await page.locator("#summary").innerText()).toContain("this scenario is for the search");
@@ -291,6 +302,16 @@ describe.skipIf(!haveBrowser)("the workbench in headless Chromium, opened from d
         expect(f.bytes.equals(readFileSync(join(out, name))), `${method}: ${name}`).toBe(true);
       }
     }
+    // A bad project file: the CLI's one line.
+    const bad = tempScenario(readFileSync(project, "utf8").replace("quantity: 5", "quantity: 0"), "bad-project.yaml");
+    const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.click("#project-open")]);
+    await chooser.setFiles(bad);
+    await page.waitForFunction(() => /bad-project/.test(document.getElementById("project-name")!.textContent ?? ""));
+    await page.click("#schedule-run");
+    await page.waitForSelector("#schedule-status.failed", { timeout: 60_000 });
+    const r = cli(["schedule", bad]);
+    expect(r.code).toBe(2);
+    expect(`splicewright: error: ${await page.locator("#schedule-status").innerText()}`).toBe(r.stderr.trim());
   }, 400_000);
 
   it("keyboard: the tabs move with the arrow keys and Alt+number; every control is a native one", async () => {
