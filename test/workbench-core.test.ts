@@ -3,9 +3,10 @@
  * filled in field by field reads back as the same scenario, the session shows what `check --json`
  * prints and writes what `export` and `report` write (byte for byte), and every bad file of the corpus
  * gives the CLI's own one-line message at a field of the form. The references outside the workbench:
- * the schema (src/io/schema.ts), the built CLI, and Node's own path module for file naming.
+ * the schema (src/io/schema.ts), the CLI (its `main`, run in this process as bin/splicewright.js runs
+ * it, to spare the machine a hundred Node start-ups; the browser test runs the built binary), and
+ * Node's own path module for file naming.
  */
-import { spawnSync } from "node:child_process";
 import { readdirSync, readFileSync, mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { basename, extname, join } from "node:path";
@@ -18,7 +19,25 @@ import { exportBase, exportDate, fileStem } from "../src/export/names.js";
 import { ScenarioDocument } from "../src/web/document.js";
 import { fieldKey, fieldOfPath, FIELDS, inputOfValue, valueAt, valueOfInput, type Field } from "../src/web/fields.js";
 import { problemOf, Session } from "../src/web/session.js";
-import { cli, cliAsync, ROOT, scenarioPath, tempScenario } from "./helpers/cli.js";
+import { main } from "../src/cli/main.js";
+import { ROOT, scenarioPath, tempScenario } from "./helpers/cli.js";
+
+/** The CLI's main, as the binary calls it, with its output captured. */
+async function cliRun(args: string[], env: Record<string, string> = {}): Promise<{ code: number; stdout: string; stderr: string }> {
+  const out: string[] = [];
+  const err: string[] = [];
+  const saved = Object.fromEntries(Object.keys(env).map((k) => [k, process.env[k]]));
+  Object.assign(process.env, env);
+  try {
+    const code = await main(["node", "splicewright", ...args], { out: (t) => out.push(t), err: (t) => err.push(t) });
+    return { code, stdout: out.map((t) => `${t}\n`).join(""), stderr: err.map((t) => `${t}\n`).join("") };
+  } finally {
+    for (const [k, v] of Object.entries(saved)) {
+      if (v === undefined) delete process.env[k];
+      else process.env[k] = v;
+    }
+  }
+}
 
 type Def = { type: string; shape?: Record<string, unknown>; innerType?: unknown };
 const defOf = (s: unknown): Def => (s as { _zod: { def: Def } })._zod.def;
@@ -133,7 +152,7 @@ describe("the session shows and writes what the CLI does", () => {
   it.each(SCENARIOS.filter((s) => !s.includes("search")))("%s: the live check is `check --json`", async (name) => {
     const session = new Session();
     const state = session.open(readFileSync(scenarioPath(name), "utf8"), name);
-    const r = await cliAsync(["check", scenarioPath(name), "--json"]);
+    const r = await cliRun(["check", scenarioPath(name), "--json"]);
     expect(state.problem).toBeUndefined();
     expect(state.check!.json).toEqual(JSON.parse(r.stdout));
     expect(state.check!.summary.pass).toBe(r.code === 0);
@@ -147,7 +166,7 @@ describe("the session shows and writes what the CLI does", () => {
     expect(state.check).toBeUndefined();
   });
 
-  it.each(["footbridge-tie.yaml", "truss-chord-staggered.yaml", "sports-hall-chord-ec3.yaml"])("%s: every download is byte for byte the CLI's export and report for the same date", (name) => {
+  it.each(["footbridge-tie.yaml", "truss-chord-staggered.yaml", "sports-hall-chord-ec3.yaml"])("%s: every download is byte for byte the CLI's export and report for the same date", async (name) => {
     const epoch = "1700000000"; // 2023-11-14T22:13:20Z
     const date = exportDate(epoch, new Date(0));
     expect(date).toBe("2023-11-14");
@@ -156,13 +175,12 @@ describe("the session shows and writes what the CLI does", () => {
     session.setDate(date);
     const out = session.download(["svg", "dxf", "csv", "json", "report", "yaml"]);
     const dir = mkdtempSync(join(tmpdir(), "splicewright-wb-"));
-    const env = { ...process.env, SOURCE_DATE_EPOCH: epoch };
-    const run = (args: string[]) => {
-      const r = spawnCli(args, env);
-      expect(r.status, r.stderr).toBe(0);
+    const run = async (args: string[]) => {
+      const r = await cliRun(args, { SOURCE_DATE_EPOCH: epoch });
+      expect(r.code, r.stderr).toBe(0);
     };
-    run(["export", scenarioPath(name), "--format", "all", "--out", dir]);
-    run(["report", scenarioPath(name), "--out", join(dir, `${exportBase(name)}-report.html`)]);
+    await run(["export", scenarioPath(name), "--format", "all", "--out", dir]);
+    await run(["report", scenarioPath(name), "--out", join(dir, `${exportBase(name)}-report.html`)]);
     const stem = exportBase(name);
     const expected = [`${stem}.svg`, `${stem}.dxf`, `${stem}-holes.csv`, `${stem}-bom.csv`, `${stem}.json`, `${stem}-report.html`];
     for (const f of expected) {
@@ -188,17 +206,13 @@ describe("the session shows and writes what the CLI does", () => {
   });
 });
 
-function spawnCli(args: string[], env: NodeJS.ProcessEnv) {
-  return spawnSync(process.execPath, [join(ROOT, "bin", "splicewright.js"), ...args], { encoding: "utf8", env });
-}
-
 describe("bad input gives the CLI's own message at a field", () => {
   const dir = join(ROOT, "test", "fixtures", "bad");
   const files = readdirSync(dir).filter((f) => f.endsWith(".yaml")).sort();
 
-  it.concurrent.each(files)("%s", async (file) => {
+  it.each(files)("%s", async (file) => {
     const text = readFileSync(join(dir, file), "utf8");
-    const r = await cliAsync(["check", join(dir, file)]);
+    const r = await cliRun(["check", join(dir, file)]);
     const line = r.stderr.trim();
     expect(r.code).toBe(2);
     let problem;
@@ -219,7 +233,7 @@ describe("bad input gives the CLI's own message at a field", () => {
     }
   });
 
-  it("a value typed into a field gives the message the CLI gives for the same value in the file", () => {
+  it("a value typed into a field gives the message the CLI gives for the same value in the file", async () => {
     const text = readFileSync(scenarioPath("footbridge-tie.yaml"), "utf8");
     for (const [path, typed, yamlLine] of [
       [["plates", "main", "width"], "-5", "    width: -5"],
@@ -231,7 +245,7 @@ describe("bad input gives the CLI's own message at a field", () => {
       session.open(text, "footbridge-tie.yaml");
       const state = session.edit([{ path, value: valueOfInput(field, typed) }]);
       const file = tempScenario(replaceFirst(text, path, yamlLine)!);
-      const r = cli(["check", file]);
+      const r = await cliRun(["check", file]);
       expect(`splicewright: error: ${state.problem!.message}`).toBe(r.stderr.trim());
       expect(state.problem!.kind === "input" && state.problem!.path).toBe(path.join("."));
     }
