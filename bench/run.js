@@ -144,3 +144,74 @@ console.log(`   overall: ${(totalBrute / totalFast).toFixed(0)}× faster than br
     console.log(`   ${name.padEnd(36)} ${est.value.toExponential(2)} candidates, counted in ${est.ms.toFixed(1)} ms`);
   }
 }
+
+// ── Browser workbench ──────────────────────────────────────────────────────────────────────────────
+{
+  const { existsSync, readdirSync, readFileSync: read, mkdtempSync } = await import("node:fs");
+  const { gzipSync } = await import("node:zlib");
+  const { tmpdir } = await import("node:os");
+  const { pathToFileURL } = await import("node:url");
+  const web = join(root, "dist", "web");
+  console.log("");
+  console.log("7. Browser workbench (dist/web, built by `npm run build` with vite; `splicewright app`)");
+  const kib = (n) => `${(n / 1024).toFixed(0)} KiB`;
+  let first = 0;
+  let firstGz = 0;
+  for (const name of readdirSync(web).sort()) {
+    const bytes = read(join(web, name));
+    const gz = gzipSync(bytes, { level: 9 }).length;
+    const lazy = name === "highs-worker.js";
+    if (!lazy && name !== "LICENSES.txt") {
+      first += bytes.length;
+      firstGz += gz;
+    }
+    console.log(`   ${name.padEnd(18)} ${kib(bytes.length).padStart(9)}  (gzip ${kib(gz)})${lazy ? "  loaded only when a schedule needs HiGHS" : ""}`);
+  }
+  console.log(`   first load (index.html, app.css, app.js with the worker inside): ${kib(first)}, gzip ${kib(firstGz)}`);
+  const CHROMIUM = "/usr/bin/chromium";
+  if (!existsSync(CHROMIUM)) {
+    console.log(`   timings skipped: ${CHROMIUM} is not installed (apt-get install chromium)`);
+  } else {
+    const { chromium } = await import("playwright-core");
+    const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"] });
+    const url = pathToFileURL(join(web, "index.html")).href;
+    const loads = [];
+    const updates = [];
+    const checks = [];
+    const searchMs = [];
+    for (let run = 0; run < 5; run++) {
+      const page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
+      await page.goto(url);
+      await page.waitForSelector("#verdict.pass, #verdict.fail", { timeout: 60_000 });
+      loads.push(Number(await page.evaluate(() => document.documentElement.dataset.firstResultMs)));
+      if (run === 4) {
+        await page.waitForFunction(() => document.documentElement.dataset.edits === "0");
+        for (let i = 0; i < 30; i++) {
+          const kN = 600 + (i % 10) * 15;
+          await page.fill("#f-load-factored_tension", `${kN} kN`);
+          await page.waitForFunction((v) => document.documentElement.dataset.edits === "0" && document.getElementById("load")?.textContent?.startsWith(String(v)), kN);
+          if (i >= 5) {
+            updates.push(Number(await page.evaluate(() => document.documentElement.dataset.updateMs)));
+            checks.push(Number(await page.locator("#timing").getAttribute("data-ms")));
+          }
+        }
+        await page.selectOption("#demo", "footbridge-tie-search.yaml");
+        await page.waitForFunction(() => document.documentElement.dataset.edits === "0" && /search/.test(document.getElementById("summary")?.textContent ?? ""));
+        await page.click("#tab-search");
+        for (let k = 0; k < 3; k++) {
+          await page.evaluate(() => document.getElementById("search-results")?.replaceChildren());
+          const t0 = performance.now();
+          await page.click("#search-run");
+          await page.waitForSelector("#search-table", { timeout: 60_000 });
+          searchMs.push(performance.now() - t0);
+        }
+      }
+      await page.close();
+    }
+    await browser.close();
+    const med = (xs) => median(xs).toFixed(0);
+    console.log(`   time to first result (page opened from disk → first verdict and drawing shown, headless chromium): median ${med(loads)} ms of ${loads.length} loads (${loads.map((x) => x.toFixed(0)).join(", ")})`);
+    console.log(`   live update (a field changed → summary, drawing and checks redrawn), footbridge demo: median ${med(updates)} ms, worst ${Math.max(...updates).toFixed(0)} ms of ${updates.length}; the check itself in the worker: median ${median(checks).toFixed(1)} ms`);
+    console.log(`   search of footbridge-tie-search.yaml in a worker (click → table shown): first ${searchMs[0].toFixed(0)} ms, then ${searchMs.slice(1).map((x) => x.toFixed(0)).join(" and ")} ms (the finished job's worker is kept, compiled, for the next)`);
+  }
+}

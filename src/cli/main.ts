@@ -3,82 +3,45 @@
  * Exit codes: 0 all checks pass, 1 a check fails or nothing complies, 2 bad input, 3 internal error,
  * 4 the output could not be written (output.ts).
  */
-import { readFileSync, statSync } from "node:fs";
-import { fileURLToPath } from "node:url";
 import { Command, CommanderError, Option } from "commander";
-import type { CostTable } from "../catalogue/costs.js";
-import { applyCosts, parseCostTable, type CostFile } from "../io/costs.js";
 import { savedScenarioText } from "../io/save-scenario.js";
 import { parseYaml } from "../io/yaml.js";
 import { decodeText } from "../io/decode.js";
 import { searchJson } from "../report/search-json.js";
 import { RANK_BY, type RankBy } from "../search/ranking.js";
-import { searchLayouts, type SearchContext } from "../search/search.js";
+import { searchLayouts } from "../search/search.js";
 import { checkTargets, writeFileSet } from "./files.js";
 import { EXPORT_FORMATS, exportFileNames, exportFiles, type ExportFormat } from "../export/index.js";
+import { exportBase } from "../export/names.js";
 import { WorkLimitError } from "../search/work-estimate.js";
 import { MAX_TOP, maxCandidatesOption, wholeNumber } from "./options.js";
 import { PROCESS_IO, terminalSafe, type Io } from "./output.js";
 import { SearchProgress } from "./search-progress.js";
-import { basename, extname, join } from "node:path";
+import { join } from "node:path";
 import { billOfMaterials } from "../export/bolt-list.js";
-import { compareChoices, compareCodes, MappingError, type CompareColumn } from "../compare/compare.js";
 import { compareJson } from "../report/compare-json.js";
 import { formatCompare } from "./compare-table.js";
-import { parseMapping, parseMappingText } from "../io/equivalents.js";
-import { codeIds, findCode } from "../codes/registry.js";
-import { BOLT_SIZES_MM, inchBoltSize, isBoltSize, isPropertyClass, type PropertyClass } from "../catalogue/bolts.js";
+import { compareRequest } from "../io/compare-request.js";
+import { layoutToExport, reportOrigin } from "../io/layout-choice.js";
 import { renderReportHtml } from "../report/html.js";
 import { formatSearch } from "./search-table.js";
 import { checkScenario, exitCodeOf } from "../engine/check.js";
-import { InputError, MAX_FILE_BYTES, parseScenario, requireCheckable } from "../io/scenario.js";
+import { InputError, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
 import { formatSheet } from "./sheet.js";
 import { styleFor } from "./style.js";
 import { MIN_WIDTH, outputWidth, PIPED_WIDTH } from "./text.js";
 import { registerSchedule } from "./schedule-command.js";
+import { registerApp } from "./app-command.js";
+import { BUNDLED_EQUIVALENTS, loadCosts, readScenarioText, today } from "./inputs.js";
+import { VERSION } from "../version.js";
 
-export const VERSION = "0.1.0";
-
-/** Read a scenario file's text, or throw an InputError naming the file. */
-export function readScenarioText(file: string): string {
-  let size: number;
-  try {
-    const st = statSync(file);
-    if (!st.isFile()) throw new InputError(file, "not a file");
-    size = st.size;
-  } catch (e) {
-    if (e instanceof InputError) throw e;
-    throw new InputError(file, "cannot read the file (does it exist?)");
-  }
-  if (size > MAX_FILE_BYTES) throw new InputError(file, `file is larger than ${MAX_FILE_BYTES} bytes`);
-  return decodeText(readFileSync(file), file);
-}
+export { VERSION };
+export { BUNDLED_COSTS, BUNDLED_EQUIVALENTS, loadCosts, readScenarioText } from "./inputs.js";
 
 function loadCheckable(file: string) {
   const { scenario, code } = parseScenario(readScenarioText(file));
   return { scenario: requireCheckable(scenario, code), code };
-}
-
-/** The bundled table of nearest equivalent materials between codes. */
-export const BUNDLED_EQUIVALENTS = fileURLToPath(new URL("../../catalogue/equivalents.yaml", import.meta.url));
-
-/** A comma-separated option value; an empty list (`--classes ,,,`) is bad input. */
-function splitList(text: string, option: string): string[] {
-  const items = text.split(",").map((s) => s.trim()).filter(Boolean);
-  if (items.length === 0) throw new InputError(option, `give at least one value (a comma-separated list), got "${text}"`);
-  return items;
-}
-
-/** The bundled cost catalogue (illustrative prices), next to the package. */
-export const BUNDLED_COSTS = fileURLToPath(new URL("../../catalogue/costs.yaml", import.meta.url));
-
-/** The cost table for a scenario: the bundled catalogue or --costs, with the scenario's own entries over it. */
-export function loadCosts(costsFile: string | undefined, scenarioCosts: unknown): CostTable {
-  const file = costsFile ?? BUNDLED_COSTS;
-  let table = parseCostTable(readScenarioText(file), costsFile ? file : "catalogue/costs.yaml");
-  if (scenarioCosts !== undefined) table = applyCosts(table, scenarioCosts as CostFile);
-  return table;
 }
 
 /** `--top` and `--rank`: 1 … MAX_TOP. */
@@ -87,20 +50,13 @@ const rankNumber = (name: string) => wholeNumber(name, 1, MAX_TOP);
 /** A scenario for export and report (metric bolts only). */
 function parseForDrawing(file: string) {
   const { scenario, code } = parseScenario(readScenarioText(file));
-  if (scenario.bolts && inchBoltSize(scenario.bolts.size_mm) !== undefined) {
-    throw new InputError("bolts.size", "export and report do not cover inch bolts yet (no ASTM F3125 length, nut and washer tables): use check or search");
-  }
   return { scenario, code };
 }
 
-/** The scenario's own layout, or (with a rank) the rank-th layout of the search over its space. */
+/** The scenario's own layout, or the rank-th row of the search over its space (io/layout-choice.ts). */
 function chooseLayout({ scenario, code }: ReturnType<typeof parseForDrawing>, opts: { rank?: number; costs?: string; maxCandidates?: number; variants?: boolean }) {
-  const rank = opts.rank;
-  if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
-  const outcome = searchWithProgress({ scenario, code, costs: loadCosts(opts.costs, scenario.costs) }, rank, "cost", opts.maxCandidates, opts.variants ?? false);
-  const chosen = outcome.results[rank - 1];
-  if (!chosen) throw new InputError("--rank", outcome.results.length === 0 ? `the search found no compliant layout: ${outcome.noResultReason ?? ""}` : `the search found only ${outcome.results.length} layouts`);
-  return { checkable: chosen.scenario, code };
+  const limit = opts.maxCandidates === undefined ? {} : { maxCandidates: opts.maxCandidates };
+  return withProgress(opts.rank ?? 1, (onProgress) => layoutToExport(scenario, code, opts.rank, () => loadCosts(opts.costs, scenario.costs), { variants: opts.variants ?? false, onProgress, ...limit }));
 }
 
 function parseFormats(text: string): ExportFormat[] {
@@ -114,25 +70,11 @@ function parseFormats(text: string): ExportFormat[] {
   return out;
 }
 
-/** Latest date SOURCE_DATE_EPOCH may name: 9999-12-31 (ISO 8601 four-digit years). */
-const MAX_EPOCH_S = 253_402_300_799;
-
-/**
- * Today's date (ISO), or the one SOURCE_DATE_EPOCH names (reproducible output, common practice): whole
- * seconds since 1970-01-01 UTC, up to the year 9999; anything else is bad input.
- */
-function today(): string {
-  const epoch = process.env.SOURCE_DATE_EPOCH;
-  if (epoch === undefined || epoch === "") return new Date().toISOString().slice(0, 10);
-  if (!/^\d{1,12}$/.test(epoch) || Number(epoch) > MAX_EPOCH_S) throw new InputError("SOURCE_DATE_EPOCH", `must be whole seconds since 1970-01-01 UTC up to ${MAX_EPOCH_S} (the year 9999), got "${epoch}"`);
-  return new Date(Number(epoch) * 1000).toISOString().slice(0, 10);
-}
-
-/** The search, bounded by --max-candidates (or the default), with a progress line on a terminal after 2 s. */
-function searchWithProgress(ctx: SearchContext, top: number, rankBy: RankBy, maxCandidates: number | undefined, variants: boolean) {
+/** A search with a progress line on a terminal after 2 s (search, and --rank of export and report). */
+function withProgress<T>(top: number, run: (onProgress: SearchProgress["update"]) => T): T {
   const progress = new SearchProgress(process.stderr, "searching", top);
   try {
-    return searchLayouts(ctx, { top, rankBy, variants, onProgress: progress.update, ...(maxCandidates === undefined ? {} : { maxCandidates }) });
+    return run(progress.update);
   } finally {
     progress.finish();
   }
@@ -195,7 +137,8 @@ async function run(argv: string[], io: Io): Promise<number> {
       if (opts.save) checkTargets([opts.save], opts.force ?? false); // before the search, not after it
       const t0 = performance.now();
       const top = Math.max(opts.top, opts.save ? opts.rank : 1);
-      const outcome = searchWithProgress({ scenario, code, costs }, top, opts.rankBy, opts.maxCandidates, opts.variants ?? false);
+      const limit = opts.maxCandidates === undefined ? {} : { maxCandidates: opts.maxCandidates };
+      const outcome = withProgress(top, (onProgress) => searchLayouts({ scenario, code, costs }, { top, rankBy: opts.rankBy, variants: opts.variants ?? false, onProgress, ...limit }));
       const elapsed = performance.now() - t0;
       outcome.stats.elapsed_ms = Number(elapsed.toFixed(1));
       if (opts.save) {
@@ -229,7 +172,7 @@ async function run(argv: string[], io: Io): Promise<number> {
       const formats = parseFormats(opts.format);
       const date = today();
       const parsed = parseForDrawing(file);
-      const base = basename(file, extname(file)) + (opts.rank !== undefined ? `-rank${opts.rank}` : "");
+      const base = exportBase(file, opts.rank);
       checkTargets(exportFileNames(base, formats).map((n) => join(opts.out, n)), opts.force ?? false);
       const { checkable, code } = chooseLayout(parsed, opts);
       const { joint, report } = checkScenario(checkable, code);
@@ -259,8 +202,7 @@ async function run(argv: string[], io: Io): Promise<number> {
       const { checkable, code } = chooseLayout(parsed, opts);
       const { joint, report } = checkScenario(checkable, code);
       const bom = billOfMaterials(joint, checkable);
-      const origin = opts.rank !== undefined ? `result ${opts.rank} of \`splicewright search${opts.variants ? " --variants" : ""}\` (ranked by cost) over the scenario's declared space` : "the scenario's own layout";
-      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date, version: VERSION, origin });
+      const html = renderReportHtml({ scenario: checkable, joint, report, bom, date, version: VERSION, origin: reportOrigin(opts.rank, opts.variants ?? false) });
       await writeFileSet([{ path: opts.out, content: html }], opts.force ?? false);
       io.out(`wrote ${opts.out} (${report.pass ? "PASS" : "FAIL"})`);
       exit = report.pass ? 0 : 1;
@@ -279,41 +221,14 @@ async function run(argv: string[], io: Io): Promise<number> {
     .action((file: string, opts: { classes?: string; sizes?: string; codes?: string; costs?: string; maxCandidates?: number; json?: boolean }) => {
       const { scenario, code } = parseScenario(readScenarioText(file));
       const costs = loadCosts(opts.costs, scenario.costs);
-      if (opts.classes === undefined && opts.sizes === undefined && opts.codes === undefined) throw new InputError("compare", "give --classes, --sizes or --codes");
-      if (opts.codes !== undefined && (opts.classes !== undefined || opts.sizes !== undefined)) throw new InputError("--codes", "compare codes on their own (classes and sizes differ between codes)");
-      let columns: CompareColumn[];
-      if (opts.codes !== undefined) {
-        const codes = splitList(opts.codes, "--codes").map((id) => {
-          const found = findCode(id);
-          if (!found) throw new InputError("--codes", `unknown design code "${id}" (known: ${codeIds().join(", ")})`);
-          return found;
-        });
-        const table = scenario.compare !== undefined ? parseMapping(scenario.compare, "compare") : parseMappingText(readScenarioText(BUNDLED_EQUIVALENTS), "catalogue/equivalents.yaml");
-        try {
-          columns = compareCodes(scenario, code, codes, costs, table, opts.maxCandidates);
-        } catch (e) {
-          if (e instanceof MappingError) throw new InputError(e.field, e.message);
-          throw e;
-        }
-      } else {
-        const classes = opts.classes !== undefined ? splitList(opts.classes, "--classes").map((c) => {
-          const cls = c;
-          if (!isPropertyClass(cls) || !(code.classesFor(scenario.bolts?.assembly ?? "bearing") as readonly string[]).includes(cls)) throw new InputError("--classes", `unknown or not allowed property class "${c}" (allowed: ${code.classesFor(scenario.bolts?.assembly ?? "bearing").join(", ")})`);
-          return cls as PropertyClass;
-        }) : [];
-        const sizes = opts.sizes !== undefined ? splitList(opts.sizes, "--sizes").map((t) => {
-          const d = Number(t.replace(/^M/i, ""));
-          if (!isBoltSize(d)) throw new InputError("--sizes", `unknown bolt size "${t}" (known: ${BOLT_SIZES_MM.map((x) => `M${x}`).join(", ")})`);
-          return d;
-        }) : [];
-        columns = compareChoices(scenario, code, costs, classes, sizes, opts.maxCandidates);
-      }
+      const columns = compareRequest(scenario, code, opts, costs, () => readScenarioText(BUNDLED_EQUIVALENTS), opts.maxCandidates === undefined ? {} : { maxCandidates: opts.maxCandidates });
       const basis = scenario.options.efficiencyBasis;
       io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis));
       exit = columns.some((c) => c.best) ? 0 : 1;
     });
 
   registerSchedule(program, io, (c) => (exit = c));
+  registerApp(program, io, (c) => (exit = c));
 
   try {
     await program.parseAsync(argv);

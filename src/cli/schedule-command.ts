@@ -4,7 +4,7 @@
  * needed, prints the schedule and writes its files. Exit codes: 0 scheduled, 1 a splice has no compliant
  * layout or no choice of types meets the rules, 2 bad input.
  */
-import { basename, extname, join } from "node:path";
+import { join } from "node:path";
 import { Option, type Command } from "commander";
 import type { CostTable } from "../catalogue/costs.js";
 import { parseProject, searchFieldPath, type Project } from "../io/project.js";
@@ -12,16 +12,17 @@ import { LIMITS } from "../io/schema.js";
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES, WorkLimitError } from "../search/work-estimate.js";
 import { InputError } from "../io/yaml.js";
 import { scheduleCsv, scheduleJson, orderCsv } from "../schedule/export.js";
-import { selectionLp } from "../schedule/mip.js";
 import { selectionProblem } from "../schedule/options.js";
 import { buildSchedule } from "../schedule/schedule.js";
-import { typeLabel, type SelectionProblem, type SelectionRules } from "../schedule/selection.js";
-import { acceptMipAnswer, chooseMethod, METHOD_REQUESTS, solveByEnumeration, type MethodRequest, type SolvedSelection } from "../schedule/solve.js";
+import type { SelectionProblem } from "../schedule/selection.js";
+import { chooseMethod, METHOD_REQUESTS, type MethodRequest, type SolvedSelection } from "../schedule/solve.js";
+import { chooseBoltTypes, methodRefusal, missingLayouts, noScheduleMessage, rulesWith, scheduleFileNames, spliceIdentity } from "../schedule/run.js";
+import { exportBase } from "../export/names.js";
 import { checkTargets, writeFileSet } from "./files.js";
-import { loadCosts, readScenarioText } from "./main.js";
+import { loadCosts, readScenarioText } from "./inputs.js";
 import { solveWithHighs } from "./schedule-highs.js";
 import { amount, MAX_AMOUNT, MAX_TIME_LIMIT_S, maxCandidatesOption, maxWorkers, wholeNumber } from "./options.js";
-import { defaultWorkers, searchSplices, spliceIdentity } from "./schedule-pool.js";
+import { defaultWorkers, searchSplices } from "./schedule-pool.js";
 import { ProgressBar } from "./schedule-progress.js";
 import { formatSchedule } from "./schedule-table.js";
 
@@ -67,30 +68,18 @@ function checkSpliceWork(project: Project, costs: CostTable, limit: number): voi
   });
 }
 
-/** The project file's rules with the command line's over them. */
-function rulesOf(file: SelectionRules, opts: ScheduleOptions): SelectionRules {
-  const rules: SelectionRules = {
-    costPerType: opts.costPerType ?? file.costPerType,
-    oneClassPerDiameter: opts.oneClassPerDiameter ?? file.oneClassPerDiameter,
-    minBoltsPerType: opts.minBoltsPerType ?? file.minBoltsPerType,
-  };
-  const K = opts.maxTypes ?? file.maxTypes;
-  if (K !== undefined) rules.maxTypes = K;
-  return rules;
-}
-
 /** The choice of bolt types by the chosen method; the bar shows the phase (and pulses while HiGHS runs in its worker). */
 async function chooseTypes(problem: SelectionProblem, opts: ScheduleOptions, bar: ProgressBar): Promise<SolvedSelection> {
   const { method } = chooseMethod(problem, opts.method);
   bar.phase(`schedule: choosing bolt types (${method === "enumeration" ? "enumeration" : "HiGHS integer programme"})`, 1);
-  if (method === "enumeration") return solveByEnumeration(problem);
-  const lp = selectionLp(problem);
-  const ticking = setInterval(() => bar.pulse(), 250); // the main thread is free to draw
-  try {
-    return acceptMipAnswer(problem, lp, await solveWithHighs(lp.text, opts.timeLimit));
-  } finally {
-    clearInterval(ticking);
-  }
+  return chooseBoltTypes(problem, opts.method, opts.timeLimit, async (lp, timeLimit_s) => {
+    const ticking = setInterval(() => bar.pulse(), 250); // the main thread is free to draw
+    try {
+      return await solveWithHighs(lp, timeLimit_s);
+    } finally {
+      clearInterval(ticking);
+    }
+  });
 }
 
 export function registerSchedule(program: Command, io: Io, setExit: (code: number) => void): void {
@@ -115,12 +104,13 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
       const text = readScenarioText(file);
       const project = parseProject(text);
       const costs = loadCosts(opts.costs, project.costs);
-      const rules = rulesOf(project.rules, opts);
-      const base = basename(file, extname(file));
-      const targets = opts.out ? [`${base}-schedule.csv`, `${base}-order.csv`, `${base}-schedule.json`].map((n) => join(opts.out!, n)) : [];
+      const rules = rulesWith(project.rules, opts);
+      const names = scheduleFileNames(exportBase(file));
+      const targets = opts.out ? [names.schedule, names.order, names.json].map((n) => join(opts.out!, n)) : [];
       // Refuse before the long searches, not after them: the files, the rules and every splice's work.
       checkTargets(targets, opts.force ?? false);
-      if (rules.minBoltsPerType > 0 && opts.method === "enumerate") throw new InputError("--method", "enumerate cannot apply the minimum-bolts rule (it links splices): use auto or mip");
+      const refusal = methodRefusal(rules, opts.method);
+      if (refusal) throw new InputError("--method", refusal);
       const maxCandidates = opts.maxCandidates ?? DEFAULT_MAX_CANDIDATES;
       checkSpliceWork(project, costs, maxCandidates);
 
@@ -136,16 +126,11 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
       const search_ms = performance.now() - t0;
       const searches = pool.results;
 
-      const missing = project.splices.map((s, m) => ({ s, r: searches[m]! })).filter(({ r }) => r.options.length === 0);
-      if (missing.length > 0) {
+      const missing = missingLayouts(project, searches);
+      if (missing) {
         bar.finish();
-        const lines = missing.map(({ s, r }) => {
-          const last = r.none[r.none.length - 1];
-          return `splice ${s.id}${s.mark ? ` (mark ${s.mark})` : ""}: no compliant layout with any bolt type of its space${last ? ` — with ${typeLabel(last.type)}: ${last.reason}` : ""}`;
-        });
-        if (opts.json) io.out(JSON.stringify({ project: project.name, scheduled: false, noCompliantLayout: missing.map(({ s, r }) => ({ id: s.id, mark: s.mark ?? "", reasons: r.none.map((n) => ({ type: typeLabel(n.type), reason: n.reason })) })) }, null, 2));
-        else io.out([`No schedule: ${missing.length} splice${missing.length === 1 ? " has" : "s have"} no compliant layout.`, ...lines].join("\n"));
-        for (const l of lines) io.err(l);
+        io.out(opts.json ? JSON.stringify(missing.json, null, 2) : missing.text);
+        for (const l of missing.lines) io.err(l);
         setExit(1);
         return;
       }
@@ -156,10 +141,7 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
       const selection_ms = performance.now() - t1;
 
       if (!selection.assignment) {
-        const fewest = selection.fewestTypes;
-        const message =
-          `No schedule: ${selection.statement}` +
-          (fewest !== undefined && fewest !== null && rules.maxTypes !== undefined && fewest > rules.maxTypes ? `; the fewest bolt types that serve every splice${rules.oneClassPerDiameter ? " with one class per diameter" : ""}: ${fewest} (--max-types ${rules.maxTypes})` : "");
+        const message = noScheduleMessage(selection, rules);
         bar.finish();
         if (opts.json) io.out(JSON.stringify({ project: project.name, scheduled: false, reason: message, method: selection.method, proven: selection.proven }, null, 2));
         else io.out(message);

@@ -3,13 +3,9 @@
  * signals) stays free. One worker per solve; the answer is plain data for `acceptMipAnswer`.
  */
 import { Worker } from "node:worker_threads";
+import type { HighsAnswer } from "../schedule/run.js";
 
-export interface HighsAnswer {
-  status: string;
-  objective: number | null;
-  primal: Record<string, number>;
-  version: string;
-}
+export type { HighsAnswer };
 
 export function solveWithHighs(lp: string, timeLimit_s: number): Promise<HighsAnswer> {
   return new Promise((resolve, reject) => {

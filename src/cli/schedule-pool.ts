@@ -7,6 +7,7 @@ import { Worker } from "node:worker_threads";
 import type { CostTable } from "../catalogue/costs.js";
 import type { Project } from "../io/project.js";
 import { spliceOptions, type SpliceOptions } from "../schedule/options.js";
+import { distinctSplices, resultsOfGroup } from "../schedule/run.js";
 
 export interface PoolOptions {
   /** Worker threads; 0 runs every search on the main thread. */
@@ -25,26 +26,13 @@ export interface PoolResult {
 
 export const defaultWorkers = (): number => availableParallelism();
 
-/** A splice's identity for the search: its scenario without name and project. */
-export const spliceIdentity = (p: Project, m: number) => JSON.stringify({ ...p.splices[m]!.scenario, name: "", project: "" });
-
-/** The same options under another splice's name. */
-function renamed(o: SpliceOptions, name: string): SpliceOptions {
-  return { ...o, options: o.options.map((x) => ({ ...x, scenario: { ...x.scenario, name } })) };
-}
-
 export async function searchSplices(projectText: string, project: Project, costs: CostTable, opts: PoolOptions): Promise<PoolResult> {
-  const groups = new Map<string, number[]>();
-  project.splices.forEach((_, m) => {
-    const key = spliceIdentity(project, m);
-    groups.set(key, [...(groups.get(key) ?? []), m]);
-  });
-  const tasks = [...groups.values()];
+  const tasks = distinctSplices(project);
   const total = project.splices.length;
   const found: Array<SpliceOptions | undefined> = Array(total);
   let done = 0;
   const store = (task: number[], result: SpliceOptions) => {
-    for (const m of task) found[m] = m === task[0] ? result : renamed(result, project.splices[m]!.id);
+    for (const [m, r] of resultsOfGroup(project, task, result)) found[m] = r;
     done += task.length;
     opts.onProgress?.(done, total);
   };

@@ -7,7 +7,7 @@ import type { CostTable } from "../catalogue/costs.js";
 import { ASTM_ISO_EQUIVALENT, astmBoltGrade, type PropertyClass } from "../catalogue/bolts.js";
 import type { DesignCode } from "../codes/types.js";
 import type { PlateSpec, Scenario } from "../model/scenario.js";
-import { searchLayouts, type Candidate, type SearchOutcome } from "../search/search.js";
+import { searchLayouts, type Candidate, type SearchOptions, type SearchOutcome } from "../search/search.js";
 import { resolveSpace } from "../search/space.js";
 import { countCandidates, DEFAULT_MAX_CANDIDATES, workLimitError } from "../search/work-estimate.js";
 
@@ -36,8 +36,16 @@ interface ColumnSpec {
   mapping: string[];
 }
 
+/** Progress of a comparison (a column finished, or a node count inside the column being searched) and its work limit. */
+export interface CompareOptions {
+  /** Most candidate layouts the columns may declare together (default DEFAULT_MAX_CANDIDATES; work-estimate.ts). */
+  maxCandidates?: number;
+  onColumn?: (done: number, total: number) => void;
+  onSearch?: SearchOptions["onProgress"];
+}
+
 /** One column per (class, size) choice; a list left empty keeps the scenario's own search range. */
-export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[], maxCandidates = DEFAULT_MAX_CANDIDATES): CompareColumn[] {
+export function compareChoices(scenario: Scenario, code: DesignCode, costs: CostTable, classes: PropertyClass[], sizes: number[], options: CompareOptions = {}): CompareColumn[] {
   const classList: Array<PropertyClass | undefined> = classes.length ? classes : [undefined];
   const sizeList: Array<number | undefined> = sizes.length ? sizes : [undefined];
   const specs: ColumnSpec[] = [];
@@ -50,25 +58,31 @@ export function compareChoices(scenario: Scenario, code: DesignCode, costs: Cost
       specs.push({ label, scenario: { ...scenario, search }, code, mapping: [] });
     }
   }
-  return searchColumns(specs, costs, maxCandidates);
+  return searchColumns(specs, costs, options);
 }
 
 /**
  * Search every column, after refusing the comparison when its columns together declare more than
- * `maxCandidates` candidate layouts (work-estimate.ts): nothing is searched then.
+ * the limit of candidate layouts (work-estimate.ts): nothing is searched then.
  */
-function searchColumns(specs: ColumnSpec[], costs: CostTable, maxCandidates: number): CompareColumn[] {
+function searchColumns(specs: ColumnSpec[], costs: CostTable, options: CompareOptions): CompareColumn[] {
+  const maxCandidates = options.maxCandidates ?? DEFAULT_MAX_CANDIDATES;
   const counts = specs.map((s) => countCandidates(s.scenario, s.code, costs, resolveSpace(s.scenario, s.code, costs)));
   const total = counts.reduce((a, b) => a + b, 0);
   if (total > maxCandidates) {
     const largest = specs[counts.indexOf(Math.max(...counts))]!;
     throw workLimitError(largest.scenario, largest.code, costs, total, maxCandidates, "search", "the compared columns' search spaces hold together");
   }
-  return withDifferences(specs.map((s) => column(s, costs)));
+  const columns = specs.map((s, i) => {
+    const c = column(s, costs, options);
+    options.onColumn?.(i + 1, specs.length);
+    return c;
+  });
+  return withDifferences(columns);
 }
 
-function column({ label, scenario, code, mapping }: ColumnSpec, costs: CostTable): CompareColumn {
-  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost", maxCandidates: Infinity });
+function column({ label, scenario, code, mapping }: ColumnSpec, costs: CostTable, options: CompareOptions): CompareColumn {
+  const outcome = searchLayouts({ scenario, code, costs }, { top: 1, rankBy: "cost", maxCandidates: Infinity, ...(options.onSearch ? { onProgress: options.onSearch } : {}) });
   return { label, code, scenario, outcome, best: outcome.results[0] ?? null, costDifference: null, mapping };
 }
 
@@ -139,11 +153,11 @@ export function mapScenario(scenario: Scenario, from: DesignCode, to: DesignCode
 }
 
 /** One column per design code, the scenario mapped to each by the table. */
-export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping, maxCandidates = DEFAULT_MAX_CANDIDATES): CompareColumn[] {
+export function compareCodes(scenario: Scenario, from: DesignCode, codes: DesignCode[], costs: CostTable, table: CodeMapping, options: CompareOptions = {}): CompareColumn[] {
   const specs = codes.map((to): ColumnSpec => {
     const { scenario: mapped, mapping } = mapScenario(scenario, from, to, table);
     // A code with scenario settings (factors, conventions) is bound to the mapped scenario, as parsing does.
     return { label: to.id, scenario: mapped, code: to.settings ? to.settings.bind(mapped) : to, mapping };
   });
-  return searchColumns(specs, costs, maxCandidates);
+  return searchColumns(specs, costs, options);
 }

@@ -65,3 +65,13 @@ export function parseCostTable(text: string, name: string): CostTable {
   }
   return applyCosts({ currency: "cost units", boltAssembly: {}, hole: 0, platePerKg: 0, frictionGripExtra: 0 }, file);
 }
+
+/**
+ * The cost table a scenario prices with: a catalogue's text (the bundled one or the user's own), with
+ * the scenario's `costs:` entries over it. Both shells call this with the text they have read.
+ */
+export function costTableFor(catalogueText: string, catalogueName: string, scenarioCosts: unknown): CostTable {
+  let table = parseCostTable(catalogueText, catalogueName);
+  if (scenarioCosts !== undefined) table = applyCosts(table, scenarioCosts as CostFile);
+  return table;
+}
