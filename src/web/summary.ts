@@ -1,14 +1,12 @@
 /**
- * The workbench's summary of a check, read from the fields the check report already carries.
- *
- * INTERIM: the core is to get its own summary of a check (verdict, load against joint strength,
- * strength utilisation apart from the detailing rules, governing check, efficiency with its basis).
- * When it lands, `workbenchSummary` is replaced by it; this is its only call site (src/web/session.ts).
- * It computes nothing a check has not: it picks and groups the report's own figures.
+ * The workbench's summary of a check: the core's own summary (src/report/summary.ts — the same the
+ * terminal sheet, the HTML report and the drawing's title block print), with the page's extras (the
+ * failing checks with their figures). It computes nothing the core has not.
  */
-import type { CheckReport, StrengthCheck, Warning } from "../model/results.js";
+import type { CheckReport, Warning } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import { citationText } from "../report/check-json.js";
+import { summarise, summaryRows, type SummaryRow } from "../report/summary.js";
 
 export interface SummaryCheck {
   id: string;
@@ -25,8 +23,12 @@ export interface WorkbenchSummary {
   units: "si" | "us";
   load_N: number;
   jointStrength_N: number;
-  /** The highest utilisation of the ultimate-limit-state strength checks (the load over the joint strength). */
+  /** T / joint design strength (the core's definition, src/report/summary.ts). */
   strengthUtilisation: number;
+  /** Service tension / slip resistance at service, where slip at service is checked; else null. */
+  serviceUtilisation: number | null;
+  /** The core's summary as labelled rows (verdict, load, strength, both utilisations, governing, efficiency, detailing, warnings). */
+  rows: SummaryRow[];
   /** Every strength check (ULS and service) passes. */
   strengthPass: boolean;
   /** Every detailing rule (spacing, edge and end distances, grip, centroid) is met. */
@@ -50,19 +52,20 @@ export function workbenchSummary(scenario: CheckableScenario, report: CheckRepor
     utilisation: c.utilisation,
     figures: c.type === "strength" ? { kind: "strength", demand_N: c.demand_N, resistance_N: c.resistance_N } : { kind: "rule", value_mm: c.value_mm, limit_mm: c.limit_mm, bound: c.bound },
   });
-  const strength = report.checks.filter((c): c is StrengthCheck => c.type === "strength");
-  const rules = report.checks.filter((c) => c.type === "rule");
+  const core = summarise(scenario, report);
+  const units = scenario.units === "us" ? "us" : "si";
   const governing = report.checks.find((c) => c.id === report.governing);
-  const load = scenario.load.factoredTension_N;
   return {
     pass: report.pass,
-    units: scenario.units === "us" ? "us" : "si",
-    load_N: load,
-    jointStrength_N: report.jointStrength_N,
-    strengthUtilisation: Math.max(0, ...strength.filter((c) => c.limitState === "ULS").map((c) => c.utilisation)),
-    strengthPass: strength.every((c) => c.pass),
-    rulesPass: rules.every((c) => c.pass),
-    rules: rules.length,
+    units,
+    load_N: core.factoredTension_N,
+    jointStrength_N: core.jointStrength_N,
+    strengthUtilisation: core.strengthUtilisation,
+    serviceUtilisation: core.service ? core.service.utilisation : null,
+    rows: summaryRows(core, units),
+    strengthPass: core.strengthChecks.failures.length === 0,
+    rulesPass: core.detailing.failures.length === 0,
+    rules: core.detailing.total,
     failing: report.checks.filter((c) => !c.pass).map(row),
     governing: governing ? row(governing) : null,
     efficiency: report.efficiency,

@@ -63,6 +63,9 @@ export function renderSummary(state: LiveState, keepLast: boolean): void {
 const LOAD: Words = { "is800-2007": "Factored tension T", "en1993-1-8": "Design tension NEd", "aisc360-16": "Required strength Pu (LRFD)" };
 const STRENGTH: Words = { "is800-2007": "Design strength of the joint", "en1993-1-8": "Design resistance of the joint", "aisc360-16": "Design strength φRn of the joint" };
 
+/** One of the core summary's rows, worded as every shell words it. */
+const row = (s: WorkbenchSummary, key: WorkbenchSummary["rows"][number]["key"]) => s.rows.find((r) => r.key === key);
+
 function summaryParts(s: WorkbenchSummary, state: LiveState): HTMLElement[] {
   const verdict = h(
     "div",
@@ -78,7 +81,8 @@ function summaryParts(s: WorkbenchSummary, state: LiveState): HTMLElement[] {
     fig(words(LOAD, state.codeId), "load", force(s.load_N, s.units)),
     fig(words(STRENGTH, state.codeId), "joint-strength", h("span", { "data-kn": String(json.jointStrength_kN) }, force(s.jointStrength_N, s.units))),
     fig("Strength utilisation", "strength-utilisation", h("span", { class: "num" }, fixed(s.strengthUtilisation, 3)), bar(s.strengthUtilisation), h("span", { class: "state" }, s.strengthPass ? "strength checks met" : "a strength check is not met")),
-    fig("Detailing rules", "rules", s.rulesPass ? `all ${s.rules} met` : `${s.failing.filter((c) => c.figures.kind === "rule").length} of ${s.rules} not met`),
+    ...(s.serviceUtilisation !== null ? [fig("Service utilisation", "service-utilisation", h("span", { class: "num" }, fixed(s.serviceUtilisation, 3)), bar(s.serviceUtilisation), h("span", { class: "state" }, row(s, "service-utilisation")?.value ?? ""))] : []),
+    fig("Detailing rules", "rules", row(s, "detailing")?.value ?? "", ...(row(s, "detailing")?.detail ?? []).map((d) => h("span", { class: "definition" }, d))),
     fig("Governing check", "governing", s.governing ? `${s.governing.title} (${s.governing.component}), ${s.governing.clause}` : "—"),
     fig("Efficiency", "efficiency", h("span", { class: "num" }, `${fixed(100 * s.efficiency, 1)} %`), h("span", { class: "definition" }, s.efficiencyDefinition)),
   );
