@@ -127,7 +127,7 @@ describe("the limit, before any search starts", () => {
 
   it("compare holds its columns together to the limit; the per-type search of a schedule holds the whole splice", () => {
     const d = demo("footbridge-tie-search.yaml");
-    expect(() => compareChoices(d.scenario, d.code, costs, ["8.8", "10.9"], [], 1000)).toThrow(/compared columns' search spaces hold together about/);
+    expect(() => compareChoices(d.scenario, d.code, costs, ["8.8", "10.9"], [], { maxCandidates: 1000 })).toThrow(/compared columns' search spaces hold together about/);
     expect(() => bestPerBoltType({ ...d, costs }, 1000)).toThrow(WorkLimitError);
   });
 });
