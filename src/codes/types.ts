@@ -55,6 +55,8 @@ export interface LayoutShape {
   pattern: "grid" | "staggered" | "tapered";
   /** Bolts on each transverse line of one group, line 0 nearest the end of main plate B. */
   countsPerLine: number[];
+  /** "compression": bound the checks of the compression sense (no net section; see DEVELOPERS.md). */
+  sense?: "tension" | "compression";
   /** Undefined: not yet chosen (the bound takes the most favourable value). */
   pitch_mm?: number;
   endDistance_mm?: number;
@@ -95,6 +97,20 @@ export interface CodeSettings {
   bind(scenario: Scenario): DesignCode;
 }
 
+/** What a code adds for a splice in compression (its bolt checks run on the reversed joint). */
+export interface CompressionChecks {
+  /**
+   * The part of the factored compression the bolts and covers carry (1 unless the butt ends bear), with
+   * the clause in words: what the contact carries and what the splice still carries.
+   */
+  spliceShare(scenario: Scenario): { value: number; text: string };
+  /**
+   * Gross section of each plate in compression, each cover as a strut across the butt, the compression
+   * pitch limits. Strength checks give loadRatio as demand per unit of the factored compression.
+   */
+  checks(joint: Joint, scenario: CheckableScenario, spliceShare: number): { checks: CheckResult[]; conventions: string[] };
+}
+
 export interface DesignCode extends GeometryCode {
   id: string;
   title: string;
@@ -120,6 +136,8 @@ export interface DesignCode extends GeometryCode {
   netStrengthPerWidth(spec: PlateSpec): number;
   /** Property classes the code allows for an assembly (friction grip: 8.8 and 10.9 under IS 800). */
   classesFor(assembly: "bearing" | "friction-grip"): readonly string[];
+  /** Checks of a splice in compression (see engine/senses.ts); absent: the code checks tension only. */
+  compression?: CompressionChecks;
   /** Scenario settings this code reads (absent: none). */
   settings?: CodeSettings;
 }

@@ -3,6 +3,8 @@
  */
 import type { DesignCode } from "../codes/types.js";
 import { buildJoint } from "../geometry/joint-builder.js";
+import { factoredOf, loadSenses, referenceLoad_N } from "../model/load.js";
+import { checksBySense } from "./senses.js";
 import type { Joint } from "../model/joint.js";
 import type { CheckReport, StrengthCheck } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
@@ -21,7 +23,7 @@ function thinnerMainPlate(scenario: CheckableScenario, code: DesignCode) {
 
 /** Check a joint already built (the search builds joints itself and calls this). */
 export function checkJoint(joint: Joint, scenario: CheckableScenario, code: DesignCode): CheckReport {
-  const { checks, warnings, conventions } = code.checkJoint(joint, scenario);
+  const { checks, warnings, conventions } = checksBySense(joint, scenario, code);
   const uls = checks.filter((c): c is StrengthCheck => c.type === "strength" && c.limitState === "ULS");
   let jointStrength = Infinity;
   let governing = "";
@@ -33,6 +35,13 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
     }
   }
   const plain = code.unperforatedStrength(thinnerMainPlate(scenario, code), scenario.options.efficiencyBasis);
+  const senses = loadSenses(scenario.load);
+  const ref = referenceLoad_N(scenario.load);
+  const bySense: { tension?: number; compression?: number } = {};
+  for (const sense of senses) {
+    const of = uls.filter((c) => (c.sense ?? "tension") === sense && c.loadRatio > 0);
+    bySense[sense] = Math.min(...of.map((c) => c.resistance_N / c.loadRatio)) * (factoredOf(scenario.load, sense) / ref);
+  }
   const maxUtilisation = checks.reduce((m, c) => Math.max(m, c.utilisation), 0);
   return {
     code: code.id,
@@ -40,6 +49,8 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
     checks,
     jointStrength_N: jointStrength,
     governing,
+    senses,
+    strengthBySense: bySense,
     efficiency: jointStrength / plain.value_N,
     efficiencyDefinition: plain.definition,
     unperforatedStrength_N: plain.value_N,

@@ -17,13 +17,13 @@ export interface TearOut {
 export function tearOutDistances(holes: readonly Hole[], connection: PlateConnection): TearOut[] {
   const u = (h: Hole) => connection.towardEnd * (connection.endX_mm - h.x_mm);
   return holes.map((h) => {
-    const uh = u(h);
-    let ahead = -Infinity;
+    // Measured from the hole itself, so that an end at infinity (a plate that continues) still sees the holes ahead.
+    let ahead = Infinity;
     for (const k of holes) {
       if (k === h) continue;
-      const uk = u(k);
-      if (uk < uh - 1e-9 && Math.abs(k.y_mm - h.y_mm) < h.across_mm) ahead = Math.max(ahead, uk);
+      const dk = connection.towardEnd * (k.x_mm - h.x_mm);
+      if (dk > 1e-9 && Math.abs(k.y_mm - h.y_mm) < h.across_mm) ahead = Math.min(ahead, dk);
     }
-    return { hole: h, toEnd_mm: uh, toHoleAhead_mm: ahead === -Infinity ? null : uh - ahead };
+    return { hole: h, toEnd_mm: u(h), toHoleAhead_mm: ahead === Infinity ? null : ahead };
   });
 }

@@ -14,6 +14,21 @@ import { validateCosts } from "./costs.js";
 import { parseMapping } from "./equivalents.js";
 import type { En10025Convention } from "../catalogue/steels.js";
 
+/** The load section: tension, compression or both (reversal), each with its service value. */
+function loadOf(file: ScenarioFile): Scenario["load"] {
+  const { factored_tension: T, service_tension: Ts, factored_compression: C, service_compression: Cs } = file.load;
+  if (T === undefined && C === undefined) throw new InputError("load.factored_tension", "required (or load.factored_compression, or both for a load that reverses)");
+  if (Ts !== undefined && T === undefined) throw new InputError("load.service_tension", "given without load.factored_tension");
+  if (Cs !== undefined && C === undefined) throw new InputError("load.service_compression", "given without load.factored_compression");
+  if (Ts !== undefined && T !== undefined && Ts > T) throw new InputError("load.service_tension", "exceeds the factored tension");
+  if (Cs !== undefined && C !== undefined && Cs > C) throw new InputError("load.service_compression", "exceeds the factored compression");
+  const load: Scenario["load"] = { factoredTension_N: T ?? 0 };
+  if (Ts !== undefined) load.serviceTension_N = Ts;
+  if (C !== undefined) load.factoredCompression_N = C;
+  if (Cs !== undefined) load.serviceCompression_N = Cs;
+  return load;
+}
+
 export { InputError, MAX_FILE_BYTES, parseYaml };
 
 /** The value at a path of the input, or undefined where the path does not exist. */
@@ -223,7 +238,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     splice: { type, buttGap_mm: butt ? file.splice.butt_gap ?? 10 : 0 },
     plates: { mainA, mainB, covers },
     packing_mm: packing,
-    load: { factoredTension_N: file.load.factored_tension },
+    load: loadOf(file),
     options: {
       exposedToCorrosion: file.options.exposed_to_corrosion,
       boltNetArea: file.options.bolt_net_area ?? code.settings?.optionDefaults.boltNetArea ?? "0.78-gross",
@@ -238,9 +253,10 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
   if (file.project !== undefined) scenario.project = file.project;
   if (file.costs !== undefined) scenario.costs = validateCosts(file.costs, "costs");
   if (file.compare !== undefined) scenario.compare = parseMapping(file.compare, "compare");
-  if (file.load.service_tension !== undefined) {
-    if (file.load.service_tension > file.load.factored_tension) throw new InputError("load.service_tension", "exceeds the factored tension");
-    scenario.load.serviceTension_N = file.load.service_tension;
+  if (file.splice.ends_in_contact !== undefined) {
+    if (!butt) throw new InputError("splice.ends_in_contact", "applies to butt splices only (the plates of a lap splice have no butt ends)");
+    if (file.load.factored_compression === undefined) throw new InputError("splice.ends_in_contact", "applies only when the splice carries compression (load.factored_compression)");
+    scenario.splice.endsInContact = file.splice.ends_in_contact;
   }
   if (file.bolts) scenario.bolts = boltSpec(file.bolts);
   if (file.layout) {

@@ -193,6 +193,7 @@ export const scenarioSchema = z.strictObject({
   splice: z.strictObject({
     type: z.enum(["lap", "butt-single-cover", "butt-double-cover"]),
     butt_gap: lengthOrZero(1000).optional(),
+    ends_in_contact: z.boolean().optional(),
   }),
   plates: z.strictObject({
     main: plate,
@@ -202,8 +203,10 @@ export const scenarioSchema = z.strictObject({
   }),
   packing: z.union([z.literal("auto"), lengthOrZero(LIMITS.thickness_mm)]).optional(),
   load: z.strictObject({
-    factored_tension: force(),
+    factored_tension: force().optional(),
     service_tension: force().optional(),
+    factored_compression: force().optional(),
+    service_compression: force().optional(),
   }),
   bolts: bolts.optional(),
   layout: layout.optional(),

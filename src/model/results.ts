@@ -30,7 +30,10 @@ export type CheckKind =
   | "min-edge-distance"
   | "max-edge-distance"
   | "group-centroid"
-  | "filler-thickness";
+  | "filler-thickness"
+  | "gross-compression"
+  | "strut-buckling"
+  | "ply-buckling";
 
 /**
  * Strength checks compare forces (N) and scale with the joint tension; rules compare lengths (mm).
@@ -47,6 +50,8 @@ export interface StrengthCheck {
   formula: string;
   substituted: string;
   limitState: "ULS" | "SLS";
+  /** The sense of the load the check is for (absent: tension, the only sense before reversal). */
+  sense?: "tension" | "compression";
   demand_N: number;
   resistance_N: number;
   loadRatio: number;
@@ -68,6 +73,8 @@ export interface RuleCheck {
   value_mm: number;
   limit_mm: number;
   bound: "min" | "max";
+  /** A rule that applies only to one sense of the load (absent: both). */
+  sense?: "tension" | "compression";
   utilisation: number;
   pass: boolean;
   notes: string[];
@@ -86,6 +93,9 @@ export interface CheckReport {
   checks: CheckResult[];
   /** Least joint tension any ULS strength check allows, N. */
   jointStrength_N: number;
+  /** The senses checked (tension, compression or both) and, per sense, the least force of that sense any ULS check allows, N. */
+  senses?: Array<"tension" | "compression">;
+  strengthBySense?: { tension?: number; compression?: number };
   /** The ULS strength check that sets jointStrength. */
   governing: string;
   /** Joint strength ÷ design tension strength of the unperforated thinner main plate. */

@@ -168,7 +168,11 @@ export interface Scenario {
   /** Input and display units (default SI); the core still works in N, mm, MPa. */
   units?: UnitSystem;
   code: string;
-  splice: { type: SpliceType; buttGap_mm: number };
+  /**
+   * endsInContact (butt splices): the butt ends are prepared for bearing (machined or sawn) and in contact;
+   * default false, when the bolts and covers carry the whole compression.
+   */
+  splice: { type: SpliceType; buttGap_mm: number; endsInContact?: boolean };
   plates: {
     mainA: PlateSpec;
     mainB: PlateSpec;
@@ -177,7 +181,11 @@ export interface Scenario {
   };
   /** Packing thickness under the thinner main plate (butt splices), mm. */
   packing_mm: number;
-  load: { factoredTension_N: number; serviceTension_N?: number };
+  /**
+   * factoredTension_N is 0 when the splice carries no tension (compression only). A compression beside a
+   * tension means reversal: every check runs for each sense and the worse governs.
+   */
+  load: { factoredTension_N: number; serviceTension_N?: number; factoredCompression_N?: number; serviceCompression_N?: number };
   bolts?: BoltSpec;
   layout?: LayoutSpec;
   search?: SearchSpec;

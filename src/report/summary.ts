@@ -202,6 +202,9 @@ export const RULE_SHORT: Record<CheckKind, string> = {
   "max-edge-distance": "max. edge distance",
   "group-centroid": "group on axis",
   "filler-thickness": "filler thickness",
+  "gross-compression": "gross section in compression",
+  "strut-buckling": "cover strut",
+  "ply-buckling": "ply buckling",
 };
 
 /** The tightest passing rule in a table cell: "min. end distance at limit", "max. pitch +8 mm". */

@@ -27,6 +27,7 @@ import { GRADES, plateStrength } from "./materials.js";
 import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule } from "./spacing.js";
 import { Tdg, Tdn } from "./tension-member.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
+import { IS800_COMPRESSION } from "./compression-splice.js";
 import { PROPERTY_CLASSES } from "../../catalogue/bolts.js";
 
 function scopeErrors(scenario: Scenario): ScopeError[] {
@@ -50,7 +51,10 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
       }
       if (bolts.slipFactor === undefined) errors.push({ path: "bolts.slip_factor", message: "required for friction-grip bolts (IS 800:2007 Table 20)" });
       else if (bolts.slipFactor > 0.55) errors.push({ path: "bolts.slip_factor", message: `${bolts.slipFactor} exceeds 0.55, the largest μf IS 800:2007 cl. 10.4.3 allows` });
-      if ((bolts.slipAt ?? "service") === "service" && scenario.load.serviceTension_N === undefined) {
+      if ((bolts.slipAt ?? "service") === "service" && scenario.load.factoredCompression_N !== undefined && scenario.load.serviceCompression_N === undefined) {
+        errors.push({ path: "load.service_compression", message: "required when friction-grip bolts are designed against slip at service (bolts.slip_at: service) and the splice carries compression" });
+      }
+      if ((bolts.slipAt ?? "service") === "service" && scenario.load.factoredTension_N > 0 && scenario.load.serviceTension_N === undefined) {
         errors.push({ path: "load.service_tension", message: "required when friction-grip bolts are designed against slip at service (bolts.slip_at: service)" });
       }
     }
@@ -155,6 +159,7 @@ export const IS800_2007: DesignCode = {
   unperforatedStrength,
   searchLimits,
   strengthBound,
+  compression: IS800_COMPRESSION,
   netStrengthPerWidth: (spec) => Tdn(spec.thickness_mm, plateStrength(spec).fu_MPa),
   classesFor: (assembly) => (assembly === "friction-grip" ? ["8.8", "10.9"] : PROPERTY_CLASSES),
 };
