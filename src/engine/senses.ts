@@ -40,14 +40,16 @@ function asLoad(scenario: CheckableScenario, factored_N: number, service_N: numb
 }
 
 /** A check labelled with its sense and its load ratio scaled from its own load to the reference load. */
-function labelled(c: CheckResult, sense: LoadSense, scale: number, reversal: boolean): CheckResult {
+function labelled(c: CheckResult, sense: LoadSense, scale: number, reversal: boolean, loadSymbol = "C"): CheckResult {
   const title = c.type === "strength" && (reversal || sense === "compression") ? `${c.title} (${sense})` : c.title;
   const id = sense === "compression" ? `compression:${c.id}` : c.id;
   const numbers: Record<string, unknown> = { ...c, id, title, sense };
   delete numbers.substituted;
   delete numbers.notes;
   if (c.type === "strength") numbers.loadRatio = c.loadRatio * scale;
-  return withLazyText(numbers as unknown as CheckResult, () => c.substituted, () => c.notes);
+  // The code's bolt checks name the force they were given T; in compression it is the compression the splice carries.
+  const text = sense === "compression" ? () => c.substituted.replace(/× T\b/g, `× ${loadSymbol}`) : () => c.substituted;
+  return withLazyText(numbers as unknown as CheckResult, text, () => c.notes);
 }
 
 /** Every check of every sense of the scenario's load. */
@@ -75,7 +77,8 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
   const carried = share.value * C;
   const serviceC = scenario.load.serviceCompression_N;
   const flipped = code.checkJoint(compressionJoint(joint), asLoad(scenario, carried, serviceC === undefined ? undefined : share.value * serviceC));
-  for (const c of flipped.checks) if (c.type === "strength" && BOLT_KINDS.has(c.kind)) checks.push(labelled(c, "compression", carried / ref, reversal));
+  const symbol = share.value === 1 ? "C" : `${share.value} C`;
+  for (const c of flipped.checks) if (c.type === "strength" && BOLT_KINDS.has(c.kind)) checks.push(labelled(c, "compression", carried / ref, reversal, symbol));
   const own = comp.checks(joint, scenario, share.value);
   for (const c of own.checks) checks.push(labelled(c, "compression", c.type === "strength" ? C / ref : 1, reversal));
   conventions.push(

@@ -331,6 +331,7 @@ function codeSettingsOf(file: ScenarioFile, code: DesignCode, scenario: Scenario
     const f = file.factors;
     const factors: NonNullable<Scenario["factors"]> = {};
     if (f.gamma_m0 !== undefined) factors.gammaM0 = f.gamma_m0;
+    if (f.gamma_m1 !== undefined) factors.gammaM1 = f.gamma_m1;
     if (f.gamma_m2 !== undefined) factors.gammaM2 = f.gamma_m2;
     if (f.gamma_m3 !== undefined) factors.gammaM3 = f.gamma_m3;
     if (f.gamma_m3_ser !== undefined) factors.gammaM3ser = f.gamma_m3_ser;

@@ -180,6 +180,7 @@ const partialFactor = () => z.number().min(1, "must be at least 1.0").max(2, "mu
 
 const factors = z.strictObject({
   gamma_m0: partialFactor().optional(),
+  gamma_m1: partialFactor().optional(),
   gamma_m2: partialFactor().optional(),
   gamma_m3: partialFactor().optional(),
   gamma_m3_ser: partialFactor().optional(),

@@ -155,6 +155,7 @@ export interface CheckOptions {
 /** Partial factors a scenario sets (a national annex); absent ones take the code's recommended values. */
 export interface PartialFactorSettings {
   gammaM0?: number;
+  gammaM1?: number;
   gammaM2?: number;
   gammaM3?: number;
   gammaM3ser?: number;

@@ -19,6 +19,7 @@ import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearin
 import { astmGradeOf, GRADES, plateStrength, Tb_N } from "./materials.js";
 import { phiPnRupture, phiPnYield } from "./tension.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
+import { AISC_COMPRESSION } from "./compression-splice.js";
 import { SLIP_CLASSES } from "./slip.js";
 import { centroidRule, edgeRules, fillerRule, maxSpacingRule, minSpacingRule, preferredSpacingWarning } from "./spacing.js";
 
@@ -130,6 +131,7 @@ function make(u: UnitText): DesignCode {
     unperforatedStrength: unperforatedStrengthIn(u),
     searchLimits,
     strengthBound,
+    compression: AISC_COMPRESSION,
     netStrengthPerWidth: (spec) => phiPnRupture(spec.thickness_mm, plateStrength(spec).fu_MPa),
     classesFor: (assembly) => (assembly === "friction-grip" ? ["8.8", "10.9"] : ["4.6", "8.8", "10.9"]),
     settings: {

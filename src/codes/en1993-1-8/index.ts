@@ -30,6 +30,7 @@ import {
 import { plateStrength } from "./materials.js";
 import { Npl_Rd, Nnet_Rd, Nu_Rd } from "./members.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
+import { en1993Compression } from "./compression-splice.js";
 import { categoryOf, factorsText, RECOMMENDED_FACTORS, settingsMatch, settingsOf, type Ec3Settings } from "./settings.js";
 import { centroidRule, maxRules, minEndEdgeRules, minSpacingRules } from "./spacing.js";
 
@@ -74,7 +75,10 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
       }
       if (bolts.slipFactor === undefined) errors.push({ path: "bolts.slip_factor", message: "required for preloaded bolts: μ of EN 1993-1-8 Table 3.7 (class A 0.5, B 0.4, C 0.3, D 0.2)" });
       else if (bolts.slipFactor > 0.5) errors.push({ path: "bolts.slip_factor", message: `${bolts.slipFactor} exceeds 0.5, the highest slip factor of EN 1993-1-8 Table 3.7 (class A)` });
-      if (bolts.slipAt !== "ultimate" && scenario.load.serviceTension_N === undefined) {
+      if (bolts.slipAt !== "ultimate" && scenario.load.factoredCompression_N !== undefined && scenario.load.serviceCompression_N === undefined) {
+        errors.push({ path: "load.service_compression", message: "required for Category B (slip at service, bolts.slip_at: service) when the splice carries compression" });
+      }
+      if (bolts.slipAt !== "ultimate" && scenario.load.factoredTension_N > 0 && scenario.load.serviceTension_N === undefined) {
         errors.push({ path: "load.service_tension", message: "required for Category B (slip at service, bolts.slip_at: service): the slip check uses the service tension" });
       }
     }
@@ -209,6 +213,7 @@ function boundCode(bound: Ec3Settings): DesignCode {
     unperforatedStrength,
     searchLimits: (scenario, d, pattern) => searchLimits(scenario, d, pattern, settingsFor(scenario)),
     strengthBound: (scenario, shape) => strengthBound(scenario, shape, settingsFor(scenario), strengthOf),
+    compression: en1993Compression(bound.factors),
     netStrengthPerWidth: (spec) => {
       const m = strengthOf(spec);
       const t = spec.thickness_mm;

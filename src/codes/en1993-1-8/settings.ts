@@ -9,6 +9,8 @@ import type { BoltSpec, Scenario } from "../../model/scenario.js";
 export interface PartialFactors {
   /** Resistance of cross-sections (gross yield; Category C net section), γM0. EN 1993-1-1, 6.1. */
   gamma_M0: number;
+  /** Resistance of members to instability (buckling of a cover strut or a ply in compression), γM1. EN 1993-1-1, 6.1. */
+  gamma_M1: number;
   /** Net-section rupture, bolts, plates in bearing, γM2. EN 1993-1-1, 6.1; EN 1993-1-8, Table 2.1. */
   gamma_M2: number;
   /** Slip resistance at the ultimate limit state (Category C), γM3. EN 1993-1-8, Table 2.1. */
@@ -22,7 +24,7 @@ export interface PartialFactors {
  * NOTE, Table 2.1 (γM2 1.25, γM3 1.25, γM3,ser 1.10); see ../shared check values. A national annex may
  * set others (scenario section `factors:`).
  */
-export const RECOMMENDED_FACTORS: PartialFactors = { gamma_M0: 1.0, gamma_M2: 1.25, gamma_M3: 1.25, gamma_M3_ser: 1.1 };
+export const RECOMMENDED_FACTORS: PartialFactors = { gamma_M0: 1.0, gamma_M1: 1.0, gamma_M2: 1.25, gamma_M3: 1.25, gamma_M3_ser: 1.1 };
 
 /**
  * Categories of bolted connections loaded in shear. EN 1993-1-8, 3.4.1: A bearing type; B slip-resistant
@@ -50,6 +52,7 @@ export function settingsOf(scenario: Scenario): Ec3Settings {
   return {
     factors: {
       gamma_M0: f.gammaM0 ?? RECOMMENDED_FACTORS.gamma_M0,
+      gamma_M1: f.gammaM1 ?? RECOMMENDED_FACTORS.gamma_M1,
       gamma_M2: f.gammaM2 ?? RECOMMENDED_FACTORS.gamma_M2,
       gamma_M3: f.gammaM3 ?? RECOMMENDED_FACTORS.gamma_M3,
       gamma_M3_ser: f.gammaM3ser ?? RECOMMENDED_FACTORS.gamma_M3_ser,
@@ -69,6 +72,7 @@ export function settingsMatch(s: Ec3Settings, scenario: Scenario): boolean {
   const r = RECOMMENDED_FACTORS;
   return (
     (f?.gammaM0 ?? r.gamma_M0) === s.factors.gamma_M0 &&
+    (f?.gammaM1 ?? r.gamma_M1) === s.factors.gamma_M1 &&
     (f?.gammaM2 ?? r.gamma_M2) === s.factors.gamma_M2 &&
     (f?.gammaM3 ?? r.gamma_M3) === s.factors.gamma_M3 &&
     (f?.gammaM3ser ?? r.gamma_M3_ser) === s.factors.gamma_M3_ser &&
@@ -82,6 +86,7 @@ export function settingsMatch(s: Ec3Settings, scenario: Scenario): boolean {
 export function factorsText(f: PartialFactors): string {
   const recommended =
     f.gamma_M0 === RECOMMENDED_FACTORS.gamma_M0 &&
+    f.gamma_M1 === RECOMMENDED_FACTORS.gamma_M1 &&
     f.gamma_M2 === RECOMMENDED_FACTORS.gamma_M2 &&
     f.gamma_M3 === RECOMMENDED_FACTORS.gamma_M3 &&
     f.gamma_M3_ser === RECOMMENDED_FACTORS.gamma_M3_ser;
