@@ -8,6 +8,7 @@ import type { RankBy } from "../search/ranking.js";
 import type { SearchOutcome } from "../search/search.js";
 import type { Scenario } from "../model/scenario.js";
 import { toUnit } from "../units/units.js";
+import { loadWords } from "../model/load.js";
 
 const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
 
@@ -30,7 +31,7 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
   out.push(`Scenario: ${scenario.name}${scenario.project ? `   Project: ${scenario.project}` : ""}`);
   out.push(`Code:     ${codeTitle}`);
   const u = displayUnits(scenario);
-  out.push(`Load:     factored tension T = ${u.force(scenario.load.factoredTension_N / 1000)} ${u.forceUnit}${scenario.load.serviceTension_N !== undefined ? `; service tension ${u.force(scenario.load.serviceTension_N / 1000)} ${u.forceUnit}` : ""}`);
+  out.push(`Load:     ${scenario.load.factoredCompression_N === undefined ? "factored tension " : ""}${loadWords(scenario.load, (N) => `${u.force(N / 1000)} ${u.forceUnit}`)}`);
   out.push("");
   out.push("Search space (declared):");
   for (const line of outcome.spaceText) out.push(`  - ${line}`);

@@ -37,6 +37,8 @@ export interface Drawing {
 export interface DrawingOptions {
   scale: number;
   loadText: string;
+  /** The senses of the load: arrows point away from the splice in tension, toward it in compression, both ways for reversal (default tension). */
+  senses?: ReadonlyArray<"tension" | "compression">;
 }
 
 const fx = (v: number) => (Math.abs(v - Math.round(v)) < 1e-6 ? String(Math.round(v)) : v.toFixed(1));
@@ -157,7 +159,9 @@ export function buildDrawing(joint: Joint, lengths: readonly BoltLengthLine[], o
     const [x0, x1] = drawnExtent(p, ext);
     const dir = p.continues === "left" ? -1 : 1;
     const xe = (dir < 0 ? x0 : x1) + dir * (0.06 * W + 2 * k); // clear of the break line
-    prims.push({ kind: "arrow", layer: "text", from: [xe, 0], to: [xe + dir * 18 * k, 0] });
+    const senses = options.senses ?? ["tension"];
+    if (senses.includes("tension")) prims.push({ kind: "arrow", layer: "text", from: [xe, 0], to: [xe + dir * 18 * k, 0] });
+    if (senses.includes("compression")) prims.push({ kind: "arrow", layer: "text", from: [xe + dir * 18 * k, 0], to: [xe, 0] });
     prims.push({ kind: "text", layer: "text", at: [xe, 2.5 * k], height: text, text: options.loadText, anchor: dir < 0 ? "end" : "start" });
   }
   // Plate labels.

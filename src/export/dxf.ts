@@ -13,6 +13,7 @@ import type { BillOfMaterials } from "./bolt-list.js";
 import { dxfText } from "../text/escape.js";
 import { detailingState, strengthFigures } from "../report/summary.js";
 import { arrowHeadPoints, buildDrawing, formatLength, type Layer, type Point } from "./drawing.js";
+import { loadLabel, loadSenses } from "../model/load.js";
 
 export const DXF_LAYERS: Record<Layer, string> = {
   outlines: "OUTLINES",
@@ -38,7 +39,7 @@ export interface DxfInput {
 
 export function renderDxf(input: DxfInput): string {
   const k = input.scale;
-  const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText: `T = ${(input.scenario.load.factoredTension_N / 1000).toFixed(0)} kN` });
+  const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText: loadLabel(input.scenario.load), senses: loadSenses(input.scenario.load) });
   const dxf = new DxfWriter();
   const u = input.units === "in" ? 1 / 25.4 : 1; // model mm → drawing units
   dxf.setUnits(input.units === "in" ? Units.Inches : Units.Millimeters);

@@ -9,6 +9,7 @@ import type { BillOfMaterials } from "./bolt-list.js";
 import { xmlText } from "../text/escape.js";
 import { detailingState, strengthFigures } from "../report/summary.js";
 import { arrowHeadPoints, buildDrawing, formatLength, SCALES, type Drawing, type Point, type Primitive } from "./drawing.js";
+import { loadLabel, loadSenses } from "../model/load.js";
 
 export const SHEET = { width: 420, height: 297, margin: 10, titleHeight: 42 } as const;
 
@@ -29,10 +30,11 @@ export interface SvgInput {
 export function layoutSheet(input: SvgInput): { drawing: Drawing; scale: number; origin: Point } {
   const areaW = SHEET.width - 2 * SHEET.margin - 10;
   const areaH = SHEET.height - 2 * SHEET.margin - SHEET.titleHeight - 10;
-  const loadText = `T = ${(input.scenario.load.factoredTension_N / 1000).toFixed(0)} kN`;
+  const loadText = loadLabel(input.scenario.load);
+  const senses = loadSenses(input.scenario.load);
   let chosen: { drawing: Drawing; scale: number } | null = null;
   for (const k of SCALES) {
-    const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText });
+    const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText, senses });
     const w = (drawing.max[0] - drawing.min[0]) / k;
     const h = (drawing.max[1] - drawing.min[1]) / k;
     chosen = { drawing, scale: k };
@@ -53,7 +55,8 @@ function titleStrengthText(input: SvgInput, verdict: string): string {
   const d = detailingState(input.report);
   const rules = d.failures.length === 0 ? "rules all pass" : `${d.failures.length} rule${d.failures.length === 1 ? "" : "s"} fail`;
   const service = f.service ? `; service ${f.service.utilisation.toFixed(2)}` : "";
-  return `${(f.jointStrength_N / 1000).toFixed(1)} kN for T = ${(f.factoredTension_N / 1000).toFixed(1)} kN: strength utilisation ${f.strengthUtilisation.toFixed(2)}${service}; ${rules}; ${verdict}`;
+  const load = f.strengthBySense ? loadLabel(input.scenario.load) : `T = ${(f.factoredTension_N / 1000).toFixed(1)} kN`;
+  return `${(f.jointStrength_N / 1000).toFixed(1)} kN for ${load}: strength utilisation ${f.strengthUtilisation.toFixed(2)}${service}; ${rules}; ${verdict}`;
 }
 
 export function renderSvg(input: SvgInput): string {

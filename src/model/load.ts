@@ -35,3 +35,12 @@ export function loadWords(load: Scenario["load"], F: (N: number) => string): str
   if (C !== undefined && C > 0) parts.push(`C = ${F(C)}${load.serviceCompression_N !== undefined ? `; service compression ${F(load.serviceCompression_N)}` : ""}`);
   return parts.join("; ") + (parts.length === 2 ? " (load reverses: each check in both senses)" : "");
 }
+
+/** The load as a drawing labels it: "T = 620 kN", "C = 500 kN", or "T = 620 kN / C = 500 kN" (reversal). */
+export function loadLabel(load: Scenario["load"]): string {
+  const kN = (N: number) => `${(N / 1000).toFixed(0)} kN`;
+  const parts: string[] = [];
+  if (load.factoredTension_N > 0) parts.push(`T = ${kN(load.factoredTension_N)}`);
+  if ((load.factoredCompression_N ?? 0) > 0) parts.push(`C = ${kN(load.factoredCompression_N ?? 0)}`);
+  return parts.join(" / ");
+}

@@ -14,6 +14,7 @@ import { lengthNumber, lengthText, trimmed } from "./format.js";
 import { summarise, summaryRows } from "./summary.js";
 import { foldTwins, type FoldedCheck } from "./twins.js";
 import { xmlText } from "../text/escape.js";
+import { loadLabel } from "../model/load.js";
 
 export interface ReportInput {
   scenario: CheckableScenario;
@@ -197,8 +198,11 @@ ${rows
 <h2>2. Inputs</h2>
 <h3>Load</h3>
 <table class="kv">
-<tr><td>Factored tension T</td><td>${fx(scenario.load.factoredTension_N / 1000)} kN</td></tr>
+${scenario.load.factoredTension_N > 0 ? `<tr><td>Factored tension T</td><td>${fx(scenario.load.factoredTension_N / 1000)} kN</td></tr>` : ""}
 ${scenario.load.serviceTension_N !== undefined ? `<tr><td>Service tension</td><td>${fx(scenario.load.serviceTension_N / 1000)} kN</td></tr>` : ""}
+${scenario.load.factoredCompression_N !== undefined ? `<tr><td>Factored compression C</td><td>${fx(scenario.load.factoredCompression_N / 1000)} kN${scenario.load.factoredTension_N > 0 ? " (the load reverses: every check in both senses)" : ""}</td></tr>` : ""}
+${scenario.load.serviceCompression_N !== undefined ? `<tr><td>Service compression</td><td>${fx(scenario.load.serviceCompression_N / 1000)} kN</td></tr>` : ""}
+${scenario.load.factoredCompression_N !== undefined && scenario.splice.type !== "lap" ? `<tr><td>Butt ends</td><td>${scenario.splice.endsInContact ? "in contact (prepared for bearing)" : "not in contact: the bolts and covers carry the whole compression"}</td></tr>` : ""}
 </table>
 <h3>Plates</h3>
 <table>
@@ -250,7 +254,7 @@ ${checkRows(checks, report.governing)}
 <section id="result" class="page">
 <h2>5. Result</h2>
 <table class="kv">
-<tr><td>Joint design strength</td><td>${fx(report.jointStrength_N / 1000)} kN for a factored tension of ${fx(scenario.load.factoredTension_N / 1000)} kN</td></tr>
+<tr><td>Joint design strength</td><td>${report.strengthBySense && scenario.load.factoredCompression_N !== undefined ? esc(Object.entries(report.strengthBySense).map(([k, v]) => `in ${k} ${fx(v / 1000)} kN`).join("; ") + ` for ${loadLabel(scenario.load)}`) : `${fx(report.jointStrength_N / 1000)} kN for a factored tension of ${fx(scenario.load.factoredTension_N / 1000)} kN`}</td></tr>
 <tr><td>Governing check</td><td>${summary.governing ? esc(`${summary.governing.title}, ${summary.governing.component} — ${summary.governing.clause}`) : "—"}</td></tr>
 <tr><td>Efficiency</td><td>${fx(report.efficiency * 100)} %<br><span class="muted">${esc(report.efficiencyDefinition)}</span></td></tr>
 ${rows

@@ -17,6 +17,7 @@
  *   margin in mm, and never enter either utilisation.
  */
 import { BASIS_WORDS } from "../codes/efficiency.js";
+import { loadWords, referenceLoad_N } from "../model/load.js";
 import type { CheckKind, CheckReport, CheckResult, StrengthCheck, Warning } from "../model/results.js";
 import type { CheckableScenario, EfficiencyBasis } from "../model/scenario.js";
 import { citationText } from "./citation.js";
@@ -67,6 +68,12 @@ export interface ServiceFigure {
 
 export interface StrengthFigures {
   factoredTension_N: number;
+  /** The factored compression (compression or reversal), else null. */
+  factoredCompression_N: number | null;
+  /** Per sense, the least force of that sense any ultimate check allows (compression or reversal), else null. */
+  strengthBySense: { tension?: number; compression?: number } | null;
+  /** The load of both senses, as the scenario gives it (worded by model/load.ts). */
+  load: CheckableScenario["load"];
   jointStrength_N: number;
   /** T / joint design strength (ultimate limit state). */
   strengthUtilisation: number;
@@ -101,16 +108,22 @@ function refOf(c: CheckResult, component = c.component): CheckRef {
 
 /** Strength and service utilisation of a checked layout (cheap: the search calls it for every row). */
 export function strengthFigures(scenario: CheckableScenario, report: CheckReport): StrengthFigures {
-  const T = scenario.load.factoredTension_N;
+  const T = referenceLoad_N(scenario.load);
   const strength = report.jointStrength_N;
+  const C = scenario.load.factoredCompression_N ?? null;
   let service: ServiceFigure | null = null;
   for (const c of report.checks) {
     if (c.type !== "strength" || c.limitState !== "SLS" || !(c.loadRatio > 0)) continue;
     if (service && c.utilisation <= service.utilisation) continue;
-    const Ts = scenario.load.serviceTension_N ?? c.demand_N;
+    const Ts = c.sense === "compression" ? c.demand_N : (scenario.load.serviceTension_N ?? c.demand_N);
     service = { utilisation: c.utilisation, serviceTension_N: Ts, resistance_N: c.utilisation > 0 ? Ts / c.utilisation : Infinity, check: refOf(c) };
   }
-  return { factoredTension_N: T, jointStrength_N: strength, strengthUtilisation: Number.isFinite(strength) && strength > 0 ? T / strength : 0, service };
+  return {
+    factoredTension_N: scenario.load.factoredTension_N,
+    factoredCompression_N: C,
+    strengthBySense: C !== null ? (report.strengthBySense ?? null) : null,
+    load: scenario.load,
+    jointStrength_N: strength, strengthUtilisation: Number.isFinite(strength) && strength > 0 ? T / strength : 0, service };
 }
 
 function detailingItem(f: FoldedCheck): DetailingItem {
@@ -241,6 +254,17 @@ export interface SummaryRow {
   status: "pass" | "fail" | "warn" | "info";
 }
 
+/** The joint design strength in words: one figure in tension, one per sense with compression. */
+function strengthWords(s: StrengthFigures, F: (N: number) => string): string {
+  const b = s.strengthBySense;
+  if (!b) return `${F(s.jointStrength_N)} (the least joint tension any ultimate check allows)`;
+  const parts = [
+    ...(b.tension !== undefined ? [`in tension ${F(b.tension)}`] : []),
+    ...(b.compression !== undefined ? [`in compression ${F(b.compression)}`] : []),
+  ];
+  return `${parts.join("; ")} (the least force of each sense any ultimate check allows)`;
+}
+
 /** The summary as labelled rows, worded once for every shell (terminal, HTML, browser). */
 export function summaryRows(s: Summary, units: DisplayUnits = "si"): SummaryRow[] {
   const F = (N: number) => forceText(N, units);
@@ -253,12 +277,12 @@ export function summaryRows(s: Summary, units: DisplayUnits = "si"): SummaryRow[
       detail: [],
       status: s.pass ? "pass" : "fail",
     },
-    { key: "load", label: "Factored load", value: `T = ${F(s.factoredTension_N)}${s.serviceTension_N !== null ? `; service tension ${F(s.serviceTension_N)}` : ""}`, detail: [], status: "info" },
-    { key: "strength", label: "Joint design strength", value: `${F(s.jointStrength_N)} (the least joint tension any ultimate check allows)`, detail: [], status: "info" },
+    { key: "load", label: "Factored load", value: loadWords(s.load, F), detail: [], status: "info" },
+    { key: "strength", label: "Joint design strength", value: strengthWords(s, F), detail: [], status: "info" },
     {
       key: "strength-utilisation",
       label: "Strength utilisation",
-      value: `${ratioText(s.strengthUtilisation, 3)} = T / joint design strength (${s.strengthChecks.passing} of ${s.strengthChecks.total} strength checks pass)`,
+      value: `${ratioText(s.strengthUtilisation, 3)} = ${s.strengthBySense ? "the highest demand/resistance of either sense" : "T / joint design strength"} (${s.strengthChecks.passing} of ${s.strengthChecks.total} strength checks pass)`,
       detail: s.strengthChecks.failures.map((f) => `fails: ${f.title}, ${f.component} (${f.clause}): utilisation ${ratioText(f.utilisation, 3)}`),
       status: s.strengthUtilisation > 1 + 1e-9 || s.strengthChecks.failures.length > 0 ? "fail" : "pass",
     },
@@ -346,12 +370,22 @@ export function utilisationJson(f: StrengthFigures) {
   };
 }
 
+/** Compression or reversal: the compression and each sense's strength, kN. */
+function senseJson(s: StrengthFigures) {
+  const b = s.strengthBySense ?? {};
+  return {
+    factoredCompression_kN: r2((s.factoredCompression_N ?? 0) / 1000),
+    strengthBySense_kN: { ...(b.tension !== undefined ? { tension: r2(b.tension / 1000) } : {}), ...(b.compression !== undefined ? { compression: r2(b.compression / 1000) } : {}) },
+  };
+}
+
 /** The summary as JSON (kN), beside the full check list. */
 export function summaryJson(s: Summary) {
   return {
     verdict: s.verdict,
     factoredTension_kN: r2(s.factoredTension_N / 1000),
     jointStrength_kN: r2(s.jointStrength_N / 1000),
+    ...(s.strengthBySense ? senseJson(s) : {}),
     ...utilisationJson(s),
     service: s.service ? { utilisation: r4(s.service.utilisation), serviceTension_kN: r2(s.service.serviceTension_N / 1000), slipResistance_kN: r2(s.service.resistance_N / 1000), check: s.service.check } : null,
     serviceNote: s.serviceNote || null,
