@@ -20,6 +20,8 @@ import { arrangementText, compareKeys, fixedOrderText, lowerKey, rankKey, type K
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
 import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
+import { loadBound } from "../codes/sense-bound.js";
+import { referenceLoad_N } from "../model/load.js";
 
 export interface Candidate {
   family: Family;
@@ -206,7 +208,8 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   // The work is estimated from the declared space and bounded before anything is built.
   const declaredCandidates = assertWithinLimit(scenario, code, ctx.costs, options.maxCandidates ?? DEFAULT_MAX_CANDIDATES);
   const fams = families(scenario, code, ctx.costs, space);
-  const T = scenario.load.factoredTension_N;
+  // The reference load: every bound and joint strength is in its terms (model/load.ts).
+  const T = referenceLoad_N(scenario.load);
   const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates };
   const heap = new MinHeap<Node>((a, b) => compareKeys(a.key, b.key) < 0);
   const models = new Map<Family, LinearModel | null>();
@@ -242,7 +245,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
 
   // No layout can carry more than the unperforated main plate (every joint strength is at most its gross
   // yield and its net rupture, each at most the unperforated strength): say so at once.
-  if (T > unperforated * (1 + 1e-9)) {
+  if (scenario.load.factoredTension_N > unperforated * (1 + 1e-9)) {
     return { space, spaceText: describeSpace(space, fams, scenario), results: [], stats, noResultReason: explainNothing(ctx, unperforated, new Map(), null, space) };
   }
 
@@ -272,7 +275,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const taperedPlateBound = (f: Family): number => {
     const counts = Array(f.lines).fill(1);
     if (!transferred) counts[0] = 2;
-    return code.strengthBound(f.base as CheckableScenario, shapeOf(f, counts)).plates_N;
+    return loadBound(code, f.base as CheckableScenario, shapeOf(f, counts)).plates_N;
   };
 
   /** Tapered lower bound on the bolt count from the per-bolt capacity (dimensions most favourable). */
@@ -280,7 +283,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const taperedNmin = (f: Family, p?: number, e?: number, eb?: number): number => {
     const known = p === undefined ? familyNmin.get(f) : undefined;
     if (known !== undefined) return known;
-    const b = code.strengthBound(f.base as CheckableScenario, shapeOf(f, Array(f.lines).fill(1), p, e, eb));
+    const b = loadBound(code, f.base as CheckableScenario, shapeOf(f, Array(f.lines).fill(1), p, e, eb));
     const N = Math.max(f.lines, space.minBolts, Math.ceil(T / b.perBolt_N - 1e-9));
     if (p === undefined) familyNmin.set(f, N);
     return N;
@@ -290,7 +293,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   for (const f of fams) {
     if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
     const counts = f.countsPerLine ?? Array(f.lines).fill(1);
-    const bound = f.countsPerLine ? code.strengthBound(f.base as CheckableScenario, shapeOf(f, counts)) : null;
+    const bound = f.countsPerLine ? loadBound(code, f.base as CheckableScenario, shapeOf(f, counts)) : null;
     const infeasible = bound ? bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk : taperedPlateBound(f) < T * (1 - 1e-9);
     if (infeasible) {
       stats.familiesSkippedByBound++;
@@ -303,7 +306,9 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     // The joint strength is at most the thinner plate's gross yield and its net rupture, each at most the
     // unperforated strength (the lesser); grid and staggered families have a tighter bound. Efficiency
     // divides it by the basis's strength of the thinner plate, never below `denominator`.
-    const efficiencyUpper = Math.min(unperforated, bound ? bound.jointStrength_N : taperedPlateBound(f)) / denominator;
+    // In compression alone the joint strength can pass the unperforated tension strength (no net section).
+    const cap = scenario.load.factoredTension_N > 0 ? unperforated : Infinity;
+    const efficiencyUpper = Math.min(cap, bound ? bound.jointStrength_N : taperedPlateBound(f)) / denominator;
     heap.push({
       kind: "family",
       f,
@@ -409,7 +414,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       const e = f.ends_mm[node.ie]!;
       const eb = f.endsAtButt_mm[node.ieb];
       if (f.countsPerLine) {
-        const bound = code.strengthBound(f.base as CheckableScenario, shapeOf(f, f.countsPerLine, p, e, eb));
+        const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, f.countsPerLine, p, e, eb));
         if (bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk) {
           stats.candidatesSkippedByBound++;
           continue;
@@ -463,7 +468,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }
     heap.push({ ...node, index: node.index + 1, key: vectorKey });
     if (reported(f, answer.counts)) continue;
-    const vectorBound = code.strengthBound(f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
+    const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
       continue;

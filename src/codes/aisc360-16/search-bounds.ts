@@ -120,7 +120,8 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     keep(phiPnYield(Ag, st.fy_MPa) / p.share, "gross-yield", "plate");
     const holesOnLine = options.netSectionLoad === "transferred" ? (shape.countsPerLine[p.fullLine] ?? widest) : widest;
     const An = (p.spec.width_mm - holesOnLine * (hole.across_mm + allowance)) * t;
-    keep(phiPnRupture(p.cover ? spliceEffectiveArea(An, Ag) : An, st.fu_MPa) / p.share, "net-section", "plate");
+    // No net-section rupture in compression (the compression bound: DEVELOPERS.md).
+    if (shape.sense !== "compression") keep(phiPnRupture(p.cover ? spliceEffectiveArea(An, Ag) : An, st.fu_MPa) / p.share, "net-section", "plate");
     // Each bolt gives at most min(shear, bearing); the bolts on the line at the plate end have no hole
     // ahead, so their tearout has lc = e − dh/2 exactly.
     const each = Math.min(p.shear, phiRnBearing(cb, d, t, st.fu_MPa));

@@ -146,7 +146,8 @@ export function strengthBound(
     bound.plate(Npl_Rd(A, st.fy_MPa, gamma_M0) / p.share, "gross-yield");
     const holesOnLine = scenario.options.netSectionLoad === "transferred" ? (counts[p.fullLine] ?? widest) : widest;
     const Anet = (p.spec.width_mm - holesOnLine * hole.across_mm) * t;
-    bound.plate((s.category === "C" ? Nnet_Rd(Anet, st.fy_MPa, gamma_M0) : Nu_Rd(Anet, st.fu_MPa, gamma_M2)) / p.share, "net-section");
+    // No net-section resistance in compression (the compression bound: DEVELOPERS.md).
+    if (shape.sense !== "compression") bound.plate((s.category === "C" ? Nnet_Rd(Anet, st.fy_MPa, gamma_M0) : Nu_Rd(Anet, st.fu_MPa, gamma_M2)) / p.share, "net-section");
     // Bearing: each bolt's Fb,Rd is at most 2.5·αb·fu·d·t/γM2 with αb ≤ min(fub/fu, 1); the bolts on the
     // line at the plate end have no bolt ahead (αd = e1/3d0); in a grid every other bolt has one straight
     // ahead at p; in a staggered pattern, from the third line on, one on its own gauge line at 2s.

@@ -128,7 +128,8 @@ export function strengthBound(scenario: CheckableScenario, shape: LayoutShape): 
     const t = p.spec.thickness_mm;
     bound.plate(Tdg(p.spec.width_mm * t, st.fy_MPa) / p.share, "gross-yield");
     const holesOnLine = options.netSectionLoad === "transferred" ? (shape.countsPerLine[p.fullLine] ?? widest) : widest;
-    bound.plate(Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share, "net-section");
+    // No net-section rupture in compression (the compression bound: DEVELOPERS.md).
+    if (shape.sense !== "compression") bound.plate(Tdn((p.spec.width_mm - holesOnLine * hole.across_mm) * t, st.fu_MPa) / p.share, "net-section");
     if (p.end !== undefined) {
       // Holes on the line at the plate end have no hole ahead: their e-term is always in kb.
       let kbUpper = Math.min(p.end / (3 * hole.along_mm), mat.fub_MPa / st.fu_MPa, 1.0);

@@ -1,0 +1,40 @@
+/**
+ * The search's strength bound for every sense of the load (DEVELOPERS.md, "Admissible bounds under
+ * compression and reversal"). Tension: the code's own bound. Compression: the code's bound of the
+ * compression sense — the same bolt-shear and slip terms, the bearing terms without the end distances
+ * (in compression the bolts bear away from the plate ends), gross yield (the same formula as the
+ * compression cross-section with holes filled) and no net section — at the force the splice carries,
+ * scaled to the reference load as the checker scales its compression checks (model/load.ts).
+ */
+import type { DesignCode, LayoutShape, StrengthBound } from "./types.js";
+import type { CheckableScenario } from "../model/scenario.js";
+import { factoredOf, loadSenses, referenceLoad_N } from "../model/load.js";
+
+export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: LayoutShape): StrengthBound {
+  const senses = loadSenses(scenario.load);
+  if (!senses.includes("compression") || !code.compression) return code.strengthBound(scenario, shape);
+  const ref = referenceLoad_N(scenario.load);
+  const share = code.compression.spliceShare(scenario).value;
+  const carried = share * factoredOf(scenario.load, "compression");
+  const Cs = scenario.load.serviceCompression_N;
+  const asCompression: CheckableScenario = { ...scenario, load: { factoredTension_N: carried, ...(Cs !== undefined ? { serviceTension_N: share * Cs } : {}) } };
+  const { endDistance_mm: _e, endDistanceAtButt_mm: _eb, ...rest } = shape;
+  const c = code.strengthBound(asCompression, { ...rest, sense: "compression" });
+  const scale = ref / carried;
+  const inRef: StrengthBound = {
+    jointStrength_N: c.jointStrength_N * scale,
+    check: `${c.check} (compression)`,
+    serviceOk: c.serviceOk,
+    perBolt_N: c.perBolt_N * scale,
+    plates_N: c.plates_N * scale,
+  };
+  if (!senses.includes("tension")) return inRef;
+  const t = code.strengthBound(scenario, shape);
+  return {
+    jointStrength_N: Math.min(t.jointStrength_N, inRef.jointStrength_N),
+    check: t.jointStrength_N <= inRef.jointStrength_N ? t.check : inRef.check,
+    serviceOk: t.serviceOk && inRef.serviceOk,
+    perBolt_N: Math.min(t.perBolt_N, inRef.perBolt_N),
+    plates_N: Math.min(t.plates_N, inRef.plates_N),
+  };
+}
