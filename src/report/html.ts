@@ -168,7 +168,7 @@ export function renderReportHtml(input: ReportInput): string {
 </head>
 <body>
 <header class="sheet">
-  <h1>Calculation report — bolted tension splice</h1>
+  <h1>Calculation report — bolted ${scenario.load.factoredCompression_N !== undefined ? (scenario.load.factoredTension_N > 0 ? "splice under reversing load" : "splice in compression") : "tension splice"}</h1>
   <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
 </header>
 
