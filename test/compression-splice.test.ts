@@ -199,3 +199,44 @@ describe("AISC 360-16: canopy-tie-us.yaml in compression", () => {
     expect(r.limit_mm / 25.4).toBeCloseTo(0.75 * 0.375 * Math.sqrt(29000 / 50), 2);
   });
 });
+
+describe("outputs show the senses of the load", () => {
+  const text = readFileSync(scenarioPath("truss-top-chord-reversal.yaml"), "utf8");
+
+  it("the drawing's load arrows: away from the splice in tension, toward it in compression, both ways for reversal (two main plates, an arrow per sense each)", async () => {
+    const { buildDrawing } = await import("../src/export/drawing.js");
+    const { boltLengths } = await import("../src/export/bolt-list.js");
+    const { scenario, joint } = runText(text);
+    const arrows = (senses: Array<"tension" | "compression">) =>
+      buildDrawing(joint, boltLengths(joint, scenario), { scale: 5, loadText: "x", senses }).primitives.filter((p) => p.kind === "arrow") as Array<{ from: [number, number]; to: [number, number] }>;
+    // An arrow points away from the splice when its tip is farther from x = 0 than its tail.
+    const away = (a: { from: [number, number]; to: [number, number] }) => Math.abs(a.to[0]) > Math.abs(a.from[0]);
+    expect(arrows(["tension"]).map(away)).toEqual([true, true]);
+    expect(arrows(["compression"]).map(away)).toEqual([false, false]);
+    const both = arrows(["tension", "compression"]);
+    expect(both).toHaveLength(4);
+    expect(both.filter(away)).toHaveLength(2);
+  });
+
+  it("check --json, the sheet and the report carry both senses and list the compression checks", async () => {
+    const { cli } = await import("./helpers/cli.js");
+    const json = JSON.parse(cli(["check", scenarioPath("truss-top-chord-reversal.yaml"), "--json"]).stdout) as { senses: string[]; factoredCompression_kN: number; summary: { strengthBySense_kN: Record<string, number> }; checks: Array<{ id: string; sense?: string }> };
+    expect(json.senses).toEqual(["tension", "compression"]);
+    expect(json.factoredCompression_kN).toBe(420);
+    expect(json.summary.strengthBySense_kN.compression).toBeCloseTo(545.45, 1); // 2400 × 250/1.1, cl. 7.1.2 (hand calc)
+    expect(json.checks.find((c) => c.id === "compression:cover-strut:coverA")?.sense).toBe("compression");
+    const sheet = cli(["check", scenarioPath("truss-top-chord-reversal.yaml")]).stdout;
+    expect(sheet).toMatch(/Factored load: +T = 260\.0 kN; C = 420\.0 kN \(load reverses/);
+    expect(sheet).toMatch(/Cover plate as a strut across the butt \(compression\)/);
+  });
+
+  it("a search under reversal: every row passes check in both senses (the built CLI)", async () => {
+    const { cli, tempScenario } = await import("./helpers/cli.js");
+    const file = tempScenario(readFileSync(scenarioPath("footbridge-tie-search.yaml"), "utf8").replace(/^(  factored_tension:.*)$/m, "$1\n  factored_compression: 480 kN"));
+    const r = cli(["search", file, "--top", "2", "--json"]);
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout) as { results: Array<{ strengthUtilisation: number }> };
+    expect(out.results.length).toBeGreaterThan(0);
+    for (const row of out.results) expect(row.strengthUtilisation).toBeLessThanOrEqual(1 + 1e-9);
+  });
+});

@@ -25,8 +25,8 @@ const within3sf = (value: number, printed: number) => {
 };
 
 describe("partial factors, EN 1993-1-1 6.1 and EN 1993-1-8 Table 2.1 (recommended values; check values, T)", () => {
-  it("γM0 1.00, γM2 1.25, γM3 1.25, γM3,ser 1.10", () => {
-    expect(ec3.RECOMMENDED_FACTORS).toEqual({ gamma_M0: 1.0, gamma_M2: 1.25, gamma_M3: 1.25, gamma_M3_ser: 1.1 });
+  it("γM0 1.00, γM1 1.00 (EN 1993-1-1 6.1(1) NOTE 2B, recommended; national annexes may differ), γM2 1.25, γM3 1.25, γM3,ser 1.10", () => {
+    expect(ec3.RECOMMENDED_FACTORS).toEqual({ gamma_M0: 1.0, gamma_M1: 1.0, gamma_M2: 1.25, gamma_M3: 1.25, gamma_M3_ser: 1.1 });
   });
 });
 
