@@ -240,3 +240,13 @@ describe("outputs show the senses of the load", () => {
     for (const row of out.results) expect(row.strengthUtilisation).toBeLessThanOrEqual(1 + 1e-9);
   });
 });
+
+describe("schedule takes splices in compression and under reversal", () => {
+  it("the built CLI schedules a lap under reversal and a butt splice in compression; each scheduled layout passes check in both senses (exit 0)", async () => {
+    const { cli } = await import("./helpers/cli.js");
+    const r = cli(["schedule", "test/fixtures/compression-project.yaml", "--json"]);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stdout).toMatch(/BR-1/);
+    expect(r.stdout).toMatch(/TC-1/);
+  });
+});
