@@ -237,7 +237,7 @@ describe("US-unit scenarios", () => {
   });
 
   it("export refuses inch bolts with one line (no ASTM length, nut and washer tables yet)", () => {
-    const r = cli(["export", scenarioPath("canopy-tie-us.yaml"), "--format", "svg", "--out", tmpdir()]);
+    const r = cli(["export", scenarioPath("canopy-tie-us.yaml"), "--format", "svg", "--out", mkdtempSync(join(tmpdir(), "sw-us-"))]);
     expect(r.code).toBe(2);
     expect(r.stderr.trim()).toMatch(/^splicewright: error: bolts\.size: export and report do not cover inch bolts yet/);
   });

@@ -15,6 +15,9 @@ import { costSchema } from "../src/io/costs.js";
 import { mappingSchema } from "../src/io/equivalents.js";
 import { scenarioSchema } from "../src/io/schema.js";
 import { parseScenario, parseYaml } from "../src/io/scenario.js";
+import { costTableFor } from "../src/io/costs.js";
+import { compareRequest } from "../src/io/compare-request.js";
+import { searchLayouts } from "../src/search/search.js";
 import { exportBase, exportDate, fileStem } from "../src/export/names.js";
 import { ScenarioDocument } from "../src/web/document.js";
 import { fieldKey, fieldOfPath, FIELDS, inputOfValue, valueAt, valueOfInput, type Field } from "../src/web/fields.js";
@@ -210,7 +213,41 @@ describe("bad input gives the CLI's own message at a field", () => {
   const dir = join(ROOT, "test", "fixtures", "bad");
   const files = readdirSync(dir).filter((f) => f.endsWith(".yaml")).sort();
 
-  it.each(files)("%s", async (file) => {
+  /** A fixture's "# command:" line: the command and its options (the file goes after the command's name). */
+  const commandOf = (text: string): string[] => {
+    const m = /^# command: (\S+)(.*)$/m.exec(text.split("\n").slice(0, 3).join("\n"));
+    return m ? [m[1]!, ...m[2]!.trim().split(/\s+/).filter(Boolean)] : ["check"];
+  };
+  const checkFiles = files.filter((f) => commandOf(readFileSync(join(dir, f), "utf8"))[0] === "check");
+  const jobFiles = files.filter((f) => !checkFiles.includes(f));
+
+  it.each(jobFiles)("%s: the file opens, and the job the page runs refuses it with the CLI's line", async (file) => {
+    const text = readFileSync(join(dir, file), "utf8");
+    const [command, ...options] = commandOf(text);
+    const r = await cliRun([command!, join(dir, file), ...options]);
+    expect(r.code).toBe(2);
+    const state = new Session().open(text, file);
+    expect(state.problem, file).toBeUndefined();
+    const { scenario, code } = parseScenario(text);
+    const costs = costTableFor(readFileSync(join(ROOT, "catalogue", "costs.yaml"), "utf8"), "catalogue/costs.yaml", scenario.costs);
+    const value = (name: string) => options[options.indexOf(name) + 1];
+    let refused: unknown;
+    try {
+      if (command === "search") {
+        // --top and --max-candidates are the CLI's options: the page's search has its own bounded top and the default limit.
+        if (options.length > 0) return expect(options[0]).toMatch(/^--(top|max-candidates)$/);
+        searchLayouts({ scenario, code, costs }, { top: 5 });
+      } else {
+        compareRequest(scenario, code, { classes: value("--classes"), sizes: value("--sizes") }, costs, () => "");
+      }
+    } catch (e) {
+      refused = e;
+    }
+    expect(refused, file).toBeInstanceOf(Error);
+    expect(`splicewright: error: ${problemOf(refused).message}`).toBe(r.stderr.trim());
+  });
+
+  it.each(checkFiles)("%s", async (file) => {
     const text = readFileSync(join(dir, file), "utf8");
     const r = await cliRun(["check", join(dir, file)]);
     const line = r.stderr.trim();

@@ -13,6 +13,7 @@ import { layoutToExport, reportOrigin } from "../io/layout-choice.js";
 import { InputError, parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
 import { renderReportHtml } from "../report/html.js";
+import { WorkLimitError } from "../search/work-estimate.js";
 import { VERSION } from "../version.js";
 import { ScenarioDocument } from "./document.js";
 import { CODE_IDS, type CodeId } from "./fields.js";
@@ -21,6 +22,8 @@ import { workbenchSummary } from "./summary.js";
 
 export function problemOf(e: unknown): Problem {
   if (e instanceof InputError) return { kind: "input", path: e.path, message: e.message };
+  // A search refused for its size is bad input of the field it names, as in the CLI.
+  if (e instanceof WorkLimitError) return { kind: "input", path: e.path, message: e.message };
   return { kind: "internal", message: `${e instanceof Error ? e.message : String(e)} (please report it with the scenario file)` };
 }
 
