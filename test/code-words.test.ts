@@ -16,6 +16,9 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { main } from "../src/cli/main.js";
+import { parseScenario } from "../src/io/scenario.js";
+import { assemblyOf } from "../src/export/bolt-list.js";
+import type { CheckableScenario } from "../src/model/scenario.js";
 import { scenarioPath } from "./helpers/cli.js";
 
 async function run(args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
@@ -140,4 +143,48 @@ describe("compare across codes: each column in its own code's words and assembli
     expect(text).toMatch(/Mapping of materials between codes \(nearest equivalents/);
     expect(text).toMatch(/Bolt type/);
   }, 120_000);
+});
+
+describe("the code's own words as input: one internal meaning", () => {
+  const en = readFileSync(scenarioPath("sports-hall-chord-ec3.yaml"), "utf8").replace(/factored_tension: (.*)/, "factored_tension: $1\n  service_tension: 600 kN");
+  const us = readFileSync(scenarioPath("canopy-tie-us.yaml"), "utf8").replace(/ +threads_in_shear_planes: .*\n/, "");
+  const is = readFileSync(scenarioPath("footbridge-tie.yaml"), "utf8");
+  const bolts = (text: string) => parseScenario(text).scenario.bolts!;
+  const withBolts = (text: string, extra: string) => text.replace(/( +)type: bearing.*\n/, (_m, sp: string) => extra.split("\n").map((l) => `${sp}${l}\n`).join(""));
+  const error = (text: string) => {
+    try {
+      parseScenario(text);
+    } catch (e) {
+      return (e as Error).message;
+    }
+    return "";
+  };
+
+  it("EN 1993-1-8 3.4.1: category B is friction-grip with slip at service, C at ultimate, A bearing type — as the shared spelling", () => {
+    expect(bolts(withBolts(en, "category: B\nslip_factor: 0.4"))).toEqual(bolts(withBolts(en, "type: friction-grip\nslip_at: service\nslip_factor: 0.4")));
+    expect(bolts(withBolts(en, "category: C\nslip_factor: 0.4"))).toEqual(bolts(withBolts(en, "type: friction-grip\nslip_at: ultimate\nslip_factor: 0.4")));
+    expect(bolts(withBolts(en, "category: A"))).toEqual(bolts(withBolts(en, "type: bearing")));
+    expect(bolts(withBolts(en, "preloaded: true\nslip_factor: 0.4"))).toEqual(bolts(withBolts(en, "type: friction-grip\nslip_factor: 0.4")));
+  });
+  it("EN 1993-1-8 3.1.2 / 3.4.1: Category A with preloaded bolts keeps the bearing checks and takes the EN 14399 assembly", () => {
+    const p = parseScenario(withBolts(en, "category: A\npreloaded: true"));
+    expect(p.scenario.bolts!.assembly).toBe("bearing");
+    expect(assemblyOf(p.scenario as CheckableScenario).boltStandard).toMatch(/EN 14399-3/);
+    expect(error(withBolts(en, "category: B\npreloaded: false\nslip_factor: 0.4"))).toMatch(/^bolts\.preloaded: Category B needs preloaded bolts/);
+    expect(error(withBolts(en, "category: B\ntype: bearing"))).toMatch(/^bolts\.category: disagrees with bolts\.type: bearing/);
+    expect(error(withBolts(en.replace('class: "8.8"', 'class: "4.6"'), "category: A\npreloaded: true"))).toMatch(/^bolts\.class: preloaded bolts must be class 8\.8 or 10\.9/);
+  });
+  it("AISC 360-16 J3.1, J3.8, Table J3.2: joint slip-critical is friction-grip; threads X is threads excluded; pretensioned keeps bearing-type", () => {
+    expect(bolts(withBolts(us, "joint: slip-critical\nslip_factor: 0.30"))).toEqual(bolts(withBolts(us, "type: friction-grip\nslip_factor: 0.30")));
+    expect(bolts(withBolts(us, "threads: X")).threadsInShearPlanes).toBe(false);
+    expect(bolts(withBolts(us, "joint: snug-tight\nthreads: N"))).toEqual(bolts(withBolts(us, "type: bearing")));
+    const p = bolts(withBolts(us, "joint: pretensioned"));
+    expect([p.assembly, p.preloaded]).toEqual(["bearing", true]);
+    expect(error(withBolts(us, "threads: X\nthreads_in_shear_planes: true"))).toMatch(/^bolts\.threads: disagrees with bolts\.threads_in_shear_planes: true/);
+  });
+  it("a code's own words are refused under another code, naming the field", () => {
+    expect(error(withBolts(is, "category: B"))).toMatch(/^bolts\.category: not read by is800-2007/);
+    expect(error(withBolts(en, "joint: slip-critical"))).toMatch(/^bolts\.joint: not read by en1993-1-8/);
+    expect(error(withBolts(us, "preloaded: true"))).toMatch(/^bolts\.preloaded: not read by aisc360-16/);
+  });
 });

@@ -7,7 +7,7 @@ import type { BoltAssembly, BoltSpec } from "../model/scenario.js";
 
 export interface BoltWords {
   /** The bolt type in full, with its slip setting: "Category B: slip-resistant at serviceability, preloaded (μ 0.4)". */
-  boltType(b: Pick<BoltSpec, "assembly" | "slipAt" | "slipFactor">): string;
+  boltType(b: Pick<BoltSpec, "assembly" | "slipAt" | "slipFactor" | "preloaded">): string;
   /** The bolt type without slip setting, for a search space or a bolt type of a schedule: "bearing type". */
   assembly(a: BoltAssembly): string;
   /** A short tag after size and grade in a table cell ("" for the plain bearing bolt): "HSFG", "preloaded", "SC". */

@@ -175,6 +175,7 @@ export function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, ass
     hole: given?.hole ?? "standard",
   };
   if (given?.slotDirection) spec.slotDirection = given.slotDirection;
+  if (assembly === "bearing" && given?.assembly === "bearing" && given.preloaded) spec.preloaded = true;
   if (assembly === "friction-grip") {
     if (given?.slipFactor !== undefined) spec.slipFactor = given.slipFactor;
     spec.slipAt = given?.slipAt ?? "service";

@@ -6,7 +6,7 @@
 import type { BoltWords } from "../words-types.js";
 
 export const AISC360_WORDS: BoltWords = {
-  boltType: (b) => (b.assembly === "bearing" ? "bearing-type, snug-tight" : `slip-critical, pretensioned (μ ${b.slipFactor ?? "?"})`),
+  boltType: (b) => (b.assembly === "bearing" ? `bearing-type, ${b.preloaded ? "pretensioned" : "snug-tight"}` : `slip-critical, pretensioned (μ ${b.slipFactor ?? "?"})`),
   assembly: (a) => (a === "bearing" ? "bearing-type" : "slip-critical"),
   tag: (a) => (a === "bearing" ? "" : "SC"),
   threads: (inPlanes) => (inPlanes ? "threads included in the shear planes (N)" : "threads excluded from the shear planes (X)"),

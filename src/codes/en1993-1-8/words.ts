@@ -8,7 +8,7 @@ import type { BoltWords } from "../words-types.js";
 export const EN1993_WORDS: BoltWords = {
   boltType: (b) =>
     b.assembly === "bearing"
-      ? "Category A: bearing type"
+      ? `Category A: bearing type${b.preloaded ? ", preloaded bolts" : ""}`
       : b.slipAt === "ultimate"
         ? `Category C: slip-resistant at ultimate limit state, preloaded bolts (μ ${b.slipFactor ?? "?"})`
         : `Category B: slip-resistant at serviceability limit state, preloaded bolts (μ ${b.slipFactor ?? "?"})`,
