@@ -278,6 +278,7 @@ export const SECTIONS: readonly Section[] = [
       { path: ["search", "max_along"], kind: "count", label: "Most transverse lines (per side)", blank: "12" },
       { path: ["search", "min_bolts"], kind: "count", label: "Fewest bolts per group", blank: "2" },
       { path: ["search", "max_across"], kind: "count", label: "Most bolts across", blank: "what the width fits" },
+      { path: ["search", "min_across"], kind: "count", label: "Fewest bolts across", blank: "2 where the narrowest plate fits two, else 1" },
       { path: ["search", "max_splice_length"], kind: "quantity", quantity: "length", label: "Longest splice" },
       { path: ["search", "max_end_distance"], kind: "quantity", quantity: "length", label: "Largest end distance" },
       { path: ["search", "gauge"], kind: "quantity", quantity: "length", label: "Fixed gauge" },
