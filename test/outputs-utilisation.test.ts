@@ -26,7 +26,7 @@ describe("check", () => {
     const r = cli(["check", AT_LIMIT]);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(new RegExp(`Strength utilisation: +${U.toFixed(3)} = T / joint design strength`));
-    expect(r.stdout).toMatch(/Service utilisation: +none: bearing-type bolts/);
+    expect(r.stdout).toMatch(/Service utilisation: +none: bearing type bolts have no service slip check/);
     expect(r.stdout).toMatch(/tightest: Minimum end distance, .*27 mm ≥ 27 mm, at\s+the limit/s);
     expect(r.stdout).not.toMatch(/Highest utilisation|Util\./);
   });

@@ -5,16 +5,33 @@ import { CAUTION, citationText } from "../report/check-json.js";
 import { resultRow } from "../report/search-json.js";
 import { lengthNumber } from "../report/format.js";
 import { efficiencyBasisNote } from "../report/summary.js";
-import type { EfficiencyBasis } from "../model/scenario.js";
+import type { CheckableScenario, EfficiencyBasis } from "../model/scenario.js";
+import { boltWordsOf } from "../codes/words.js";
+import { assemblyOf } from "../export/bolt-list.js";
 
 const fx = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? "—" : v.toFixed(d));
 const dim = (v: number | null | undefined) => (v === null || v === undefined ? "—" : lengthNumber(v));
+
+/** A column's bolt type and threads in the words of the column's own code. */
+function boltTypeCell(c: CompareColumn): string {
+  const words = boltWordsOf(c.code.id);
+  const b = c.best?.scenario.bolts ?? c.scenario.bolts;
+  return b ? `${words.boltType(b)}; ${words.threads(b.threadsInShearPlanes)}` : words.assembly("bearing");
+}
+
+/** The bolt, nut and washer standards of a column's assembly under its own code. */
+function assemblyText(scenario: CheckableScenario): string {
+  const a = assemblyOf(scenario);
+  return `${a.boltStandard}; ${a.nutStandard}; ${a.washerStandard}`;
+}
 
 export function compareRows(columns: CompareColumn[]): Array<[string, string[]]> {
   const service = columns.some((c) => c.best && resultRow(c.best, 1).serviceUtilisation !== null);
   const rows: Array<[string, (c: CompareColumn) => string]> = [
     ["Code", (c) => c.code.id],
     ["Bolt", (c) => (c.best ? resultRow(c.best, 1).bolt : "—")],
+    ["Bolt type", (c) => boltTypeCell(c)],
+    ["Assembly", (c) => (c.best ? assemblyText(c.best.scenario) : "—")],
     ["Pattern", (c) => (c.best ? c.best.family.pattern : "—")],
     ["Counts", (c) => (c.best ? resultRow(c.best, 1).counts : "—")],
     ["Pitch / gauge (mm)", (c) => (c.best ? `${dim(resultRow(c.best, 1).pitch_mm)} / ${dim(resultRow(c.best, 1).gauge_mm)}` : "—")],

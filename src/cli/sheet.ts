@@ -4,6 +4,7 @@
  * PASS, FAIL and warnings emphasised when the style colours. `brief`: the summary and one line per check.
  */
 import type { Joint } from "../model/joint.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { CheckReport, CheckResult } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import { CAUTION } from "../report/check-json.js";
@@ -176,8 +177,8 @@ export function formatSheet(scenario: CheckableScenario, joint: Joint, report: C
   line("Splice:", `${SPLICE_TEXT[joint.spliceType]}${joint.spliceType !== "lap" ? `; butt gap ${lengthText(joint.buttGap_mm, u)}; ${joint.holes.length / 2} bolts each side of the butt` : `; ${joint.holes.length} bolts`}`);
   line(
     "Bolts:",
-    `${boltName(b.size_mm)} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `class ${b.propertyClass}`}, ${b.assembly === "bearing" ? "bearing type" : b.astmGrade ? `slip-critical (μ ${b.slipFactor})` : `friction grip (μf ${b.slipFactor}, slip at ${b.slipAt})`}, ` +
-      `threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes, ${b.hole} holes Ø${lengthText(holeDia, u)}`,
+    `${boltName(b.size_mm)} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `class ${b.propertyClass}`}, ${boltWordsOf(scenario.code).boltType(b)}, ` +
+      `${boltWordsOf(scenario.code).threads(b.threadsInShearPlanes)}, ${b.hole} holes Ø${lengthText(holeDia, u)}`,
   );
   line("Layout:", `${layoutText(scenario, joint, u)}; splice length ${lengthText(joint.spliceLength_mm, u)}`);
   out.push("Plates:");

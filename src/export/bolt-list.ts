@@ -59,7 +59,7 @@ export function boltGradeOf(scenario: CheckableScenario): string {
 /** The assembly of a scenario's bolts under its own code. */
 export function assemblyOf(scenario: CheckableScenario): AssemblySystem {
   const b = scenario.bolts;
-  return assemblyFor({ code: scenario.code, d_mm: b.size_mm, grade: boltGradeOf(scenario), preloaded: b.assembly === "friction-grip" });
+  return assemblyFor({ code: scenario.code, d_mm: b.size_mm, grade: boltGradeOf(scenario), preloaded: b.assembly === "friction-grip" || b.preloaded === true });
 }
 
 const roundUpTo = (series: readonly number[], v: number): number | null => series.find((l) => l >= v - 1e-6) ?? null;

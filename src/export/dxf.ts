@@ -6,6 +6,7 @@
  * ($INSUNITS: inches). Pure: returns the DXF text.
  */
 import { DxfWriter, point3d, Units, Colors } from "@tarikjabiri/dxf";
+import { boltWordsOf } from "../codes/words.js";
 import type { Joint } from "../model/joint.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
@@ -98,7 +99,7 @@ export function renderDxf(input: DxfInput): string {
   const lines = [
     `splicewright - bolted tension splice: ${input.scenario.name}`,
     `${input.report.codeTitle}`,
-    `${input.joint.holes.length} x M${b.size_mm} class ${b.propertyClass} ${b.assembly}; joint strength ${(input.report.jointStrength_N / 1000).toFixed(1)} kN; strength utilisation ${strengthFigures(input.scenario, input.report).strengthUtilisation.toFixed(2)}; detailing rules ${detailingState(input.report).failures.length === 0 ? "all pass" : `${detailingState(input.report).failures.length} fail`}; ${input.report.pass ? "PASS" : "FAIL"}`,
+    `${input.joint.holes.length} x M${b.size_mm} class ${b.propertyClass} ${boltWordsOf(input.scenario.code).assembly(b.assembly)}; joint strength ${(input.report.jointStrength_N / 1000).toFixed(1)} kN; strength utilisation ${strengthFigures(input.scenario, input.report).strengthUtilisation.toFixed(2)}; detailing rules ${detailingState(input.report).failures.length === 0 ? "all pass" : `${detailingState(input.report).failures.length} fail`}; ${input.report.pass ? "PASS" : "FAIL"}`,
     `drawn for 1:${k}; dimensions in ${input.units === "in" ? "inches" : "mm"}; ${input.date}. To be verified by a qualified engineer.`,
   ];
   lines.forEach((t, i) => dxf.addText(p3([drawing.min[0], drawing.min[1] - (8 + 6 * i) * k]), text, dxfText(t), { layerName: DXF_LAYERS.text }));

@@ -3,6 +3,7 @@
  * returns the SVG text. Paper units are millimetres (width="420mm"), so a print at 100 % is to scale.
  */
 import type { Joint } from "../model/joint.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
@@ -66,7 +67,7 @@ export function renderSvg(input: SvgInput): string {
   for (const prim of drawing.primitives) body.push(renderPrimitive(prim, P, scale));
   const b = input.scenario.bolts;
   const lengths = [...new Set(input.bom.lengths.map((l) => l.length_mm))].filter(Number.isFinite);
-  const boltSpec = `${input.joint.holes.length} × M${b.size_mm} × ${lengths.join("/")} class ${b.propertyClass} ${b.assembly === "bearing" ? "bearing type" : "friction grip"}`;
+  const boltSpec = `${input.joint.holes.length} × M${b.size_mm} × ${lengths.join("/")} class ${b.propertyClass} ${boltWordsOf(input.scenario.code).assembly(b.assembly)}`;
   const verdict = input.report.pass ? "PASS" : "FAIL";
   const rows: Array<[string, string]> = [
     ["Scenario", input.title ?? input.scenario.name],

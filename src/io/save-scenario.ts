@@ -15,6 +15,10 @@ export function savedScenarioText(original: Record<string, unknown>, c: Candidat
   const b = c.scenario.bolts;
   const inch = inchBoltSize(b.size_mm);
   const bolts: Record<string, unknown> = { size: inch !== undefined ? inchSizeText(inch) : `M${b.size_mm}`, class: b.astmGrade ?? (inch !== undefined ? boltGradeText(b.propertyClass, b.size_mm) : b.propertyClass), type: b.assembly, threads_in_shear_planes: b.threadsInShearPlanes, hole: b.hole };
+  if (b.preloaded) {
+    if (c.scenario.code.startsWith("aisc")) bolts.joint = "pretensioned";
+    else bolts.preloaded = true;
+  }
   if (b.slipFactor !== undefined) bolts.slip_factor = b.slipFactor;
   if (b.slipAt !== undefined) bolts.slip_at = b.slipAt;
   if (b.slotDirection !== undefined) bolts.slot_direction = b.slotDirection;

@@ -11,6 +11,7 @@ import type { BoltSpec, CheckableScenario, EdgePreparation, HoleType, LayoutSpec
 import { scenarioSchema, withInputUnits, type ScenarioFile } from "./schema.js";
 import { InputError, MAX_FILE_BYTES, parseYaml } from "./yaml.js";
 import { validateCosts } from "./costs.js";
+import { boltTypeOf } from "./bolt-words.js";
 import { parseMapping } from "./equivalents.js";
 import type { En10025Convention } from "../catalogue/steels.js";
 
@@ -108,11 +109,12 @@ function sizeText(d_mm: number): string {
 
 const KNOWN_SIZES = `${BOLT_SIZES_MM.map((d) => `M${d}`).join(", ")}; ${INCH_BOLT_SIZES_IN.map((d) => inchSizeText(d)).join(", ")}`;
 
-function boltSpec(b: NonNullable<ScenarioFile["bolts"]>): BoltSpec {
+function boltSpec(b: NonNullable<ScenarioFile["bolts"]>, codeId: string): BoltSpec {
   if (!knownSize(b.size)) throw new InputError("bolts.size", `${sizeText(b.size)} is not in the catalogue (known: ${KNOWN_SIZES})`);
   const astm = astmBoltGrade(b.class);
   if (!isPropertyClass(b.class) && !astm) throw new InputError("bolts.class", `unknown property class "${b.class}" (known: ${PROPERTY_CLASSES.join(", ")}; ASTM grades ${ASTM_BOLT_GRADES.join(", ")})`);
-  if (b.type === "bearing" && (b.slip_factor !== undefined || b.slip_at !== undefined)) {
+  const meaning = boltTypeOf(b, codeId);
+  if (meaning.assembly === "bearing" && (b.slip_factor !== undefined || b.slip_at !== undefined)) {
     throw new InputError(b.slip_factor !== undefined ? "bolts.slip_factor" : "bolts.slip_at", "applies to friction-grip bolts only (bolts.type: friction-grip)");
   }
   if ((b.hole === "short-slot" || b.hole === "long-slot") && !b.slot_direction) {
@@ -121,13 +123,14 @@ function boltSpec(b: NonNullable<ScenarioFile["bolts"]>): BoltSpec {
   const spec: BoltSpec = {
     size_mm: b.size,
     propertyClass: astm ? ASTM_ISO_EQUIVALENT[astm] : (b.class as PropertyClass),
-    assembly: b.type as BoltSpec["assembly"],
-    threadsInShearPlanes: b.threads_in_shear_planes,
+    assembly: meaning.assembly,
+    threadsInShearPlanes: meaning.threadsInShearPlanes,
     hole: b.hole as HoleType,
   };
   if (astm) spec.astmGrade = astm;
   if (b.slip_factor !== undefined) spec.slipFactor = b.slip_factor;
-  if (b.type === "friction-grip") spec.slipAt = b.slip_at ?? "service";
+  if (meaning.assembly === "friction-grip") spec.slipAt = meaning.slipAt ?? "service";
+  else if (meaning.preloaded) spec.preloaded = true;
   if (b.slot_direction) spec.slotDirection = b.slot_direction;
   return spec;
 }
@@ -258,7 +261,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
     if (file.load.factored_compression === undefined) throw new InputError("splice.ends_in_contact", "applies only when the splice carries compression (load.factored_compression)");
     scenario.splice.endsInContact = file.splice.ends_in_contact;
   }
-  if (file.bolts) scenario.bolts = boltSpec(file.bolts);
+  if (file.bolts) scenario.bolts = boltSpec(file.bolts, code.id);
   if (file.layout) {
     if (!file.bolts) throw new InputError("bolts", "required when a layout is given");
     const narrowest = Math.min(mainA.width_mm, mainB.width_mm, ...covers.map((c) => c.width_mm));

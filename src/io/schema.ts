@@ -111,10 +111,19 @@ const propertyClass = z.union([z.number(), z.string()]).transform((v) => (typeof
 const bolts = z.strictObject({
   size: boltSize,
   class: propertyClass,
-  type: z.enum(["bearing", "friction-grip"]).default("bearing"),
+  // No default: the bolt type may be given in the code's own words instead (src/io/bolt-words.ts).
+  type: z.enum(["bearing", "friction-grip"]).optional(),
+  /** EN 1993-1-8 3.4.1: Category A (bearing type), B (slip-resistant at SLS), C (slip-resistant at ULS). */
+  category: z.enum(["A", "B", "C"]).optional(),
+  /** EN 1993-1-8 3.1.2: preloaded bolts. */
+  preloaded: z.boolean().optional(),
+  /** AISC 360-16 J3.1, J3.8: a snug-tight, pretensioned or slip-critical joint. */
+  joint: z.enum(["snug-tight", "pretensioned", "slip-critical"]).optional(),
+  /** AISC 360-16 Table J3.2: threads not excluded (N) or excluded (X) from the shear planes. */
+  threads: z.enum(["N", "X"]).optional(),
   slip_factor: z.number().gt(0, "must be greater than zero").optional(),
   slip_at: z.enum(["service", "ultimate"]).optional(),
-  threads_in_shear_planes: z.boolean().default(true),
+  threads_in_shear_planes: z.boolean().optional(),
   hole: z.enum(HOLE_TYPES as [string, ...string[]]).default("standard"),
   slot_direction: z.enum(["along", "across"]).optional(),
 });

@@ -48,6 +48,12 @@ export interface BoltSpec {
    */
   astmGrade?: AstmBoltGrade;
   assembly: BoltAssembly;
+  /**
+   * Bearing-type bolts tightened to their preload (EN 1993-1-8 Category A with preloaded bolts; AISC
+   * 360-16 pretensioned bearing-type): the same checks, the preloaded assembly. Friction-grip bolts are
+   * preloaded anyway and leave this out.
+   */
+  preloaded?: boolean;
   /** Slip factor μf (friction-grip only), IS 800:2007 Table 20. */
   slipFactor?: number;
   /** Friction-grip joints: design against slip at the service or at the factored load (γmf 1.10 / 1.25). */

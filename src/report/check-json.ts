@@ -2,6 +2,7 @@
  * The check report as a plain JSON-ready object (units in field names: kN, mm). Pure.
  */
 import type { Joint } from "../model/joint.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
@@ -39,6 +40,8 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
       class: scenario.bolts.propertyClass,
       ...(scenario.bolts.astmGrade ? { astmGrade: scenario.bolts.astmGrade } : {}),
       assembly: scenario.bolts.assembly,
+      boltType: boltWordsOf(scenario.code).boltType(scenario.bolts),
+      threads: boltWordsOf(scenario.code).threads(scenario.bolts.threadsInShearPlanes),
       count: joint.holes.length,
     },
     spliceLength_mm: round(joint.spliceLength_mm, 1),

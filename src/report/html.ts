@@ -3,6 +3,7 @@
  * fonts, no network requests), laid out as a plain calculation sheet that prints cleanly to A4. Pure.
  */
 import type { Joint } from "../model/joint.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { CheckReport, CheckResult } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "../export/bolt-list.js";
@@ -211,7 +212,7 @@ ${scenario.load.factoredCompression_N !== undefined && scenario.splice.type !== 
 </table>
 <h3>Bolts and layout</h3>
 <table class="kv">
-<tr><td>Bolts</td><td>${esc(boltSizeText(b.size_mm))} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `property class ${b.propertyClass} (ISO 898-1)`}, ${b.assembly === "bearing" ? "bearing type" : `friction grip, μf ${b.slipFactor}, slip designed at ${b.slipAt} load`}; threads ${b.threadsInShearPlanes ? "in" : "excluded from"} the shear planes</td></tr>
+<tr><td>Bolts</td><td>${esc(boltSizeText(b.size_mm))} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `property class ${b.propertyClass} (ISO 898-1)`}, ${esc(boltWordsOf(scenario.code).boltType(b))}; ${esc(boltWordsOf(scenario.code).threads(b.threadsInShearPlanes))}</td></tr>
 ${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n")}
 </table>
 <h3>Options</h3>

@@ -2,6 +2,7 @@
  * Search results as plain rows (units in field names). Pure.
  */
 import type { Candidate, SearchOutcome } from "../search/search.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { RankBy } from "../search/ranking.js";
 import { CAUTION } from "./check-json.js";
 import { boltGradeText, boltSizeText } from "../catalogue/bolts.js";
@@ -16,6 +17,8 @@ export interface ResultRow {
   size_mm: number;
   class: string;
   assembly: string;
+  /** The bolt type in the words of the row's code. */
+  boltType: string;
   pattern: string;
   /** "3 across × 4 along", per side of the butt for butt splices. */
   counts: string;
@@ -74,6 +77,7 @@ export function resultRow(c: Candidate, rank: number): ResultRow {
     size_mm: c.family.size_mm,
     class: c.family.propertyClass,
     assembly: c.family.base.bolts.assembly,
+    boltType: boltWordsOf(c.scenario.code).boltType(c.family.base.bolts),
     pattern: c.family.pattern,
     counts: countsText(c),
     acrossPerLine: c.counts,

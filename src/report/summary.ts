@@ -18,6 +18,7 @@
  */
 import { BASIS_WORDS } from "../codes/efficiency.js";
 import { loadWords, referenceLoad_N } from "../model/load.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { CheckKind, CheckReport, CheckResult, StrengthCheck, Warning } from "../model/results.js";
 import type { CheckableScenario, EfficiencyBasis } from "../model/scenario.js";
 import { citationText } from "./citation.js";
@@ -154,7 +155,7 @@ export function summarise(scenario: CheckableScenario, report: CheckReport): Sum
   const b = scenario.bolts;
   const serviceNote =
     b.assembly === "bearing"
-      ? "none: bearing-type bolts have no service slip check"
+      ? `none: ${boltWordsOf(scenario.code).noServiceSlip}`
       : figures.service
         ? ""
         : "none: slip is checked at the factored load (an ultimate check)";
@@ -403,6 +404,6 @@ export function summaryJson(s: Summary) {
 /** The definitions every JSON output carries beside the figures. */
 export const UTILISATION_DEFINITIONS = {
   strengthUtilisation: "factored tension / joint design strength (the least joint tension any loaded ultimate-limit-state check allows); the highest demand/resistance of those checks",
-  serviceUtilisation: "service tension / the joint's slip resistance at service (friction-grip bolts designed against slip at service); null where the bolts have no serviceability check",
+  serviceUtilisation: "service tension / the joint's slip resistance at service (bolts designed against slip at service); null where the bolts have no serviceability check",
   detailing: "spacing, end and edge distance, grip and bolt-group rules (mm against limits) and conditions that set no load: pass or fail by a margin, never part of either utilisation",
 } as const;

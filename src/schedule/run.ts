@@ -96,12 +96,12 @@ export function missingLayouts(project: Job, searches: readonly SpliceOptions[])
   if (missing.length === 0) return null;
   const lines = missing.map(({ s, r }) => {
     const last = r.none[r.none.length - 1];
-    return `splice ${s.id}${s.mark ? ` (mark ${s.mark})` : ""}: no compliant layout with any bolt type of its space${last ? ` — with ${typeLabel(last.type)}: ${last.reason}` : ""}`;
+    return `splice ${s.id}${s.mark ? ` (mark ${s.mark})` : ""}: no compliant layout with any bolt type of its space${last ? ` — with ${typeLabel(last.type, s.scenario.code)}: ${last.reason}` : ""}`;
   });
   return {
     lines,
     text: [`No schedule: ${missing.length} splice${missing.length === 1 ? " has" : "s have"} no compliant layout.`, ...lines].join("\n"),
-    json: { project: project.name, scheduled: false, noCompliantLayout: missing.map(({ s, r }) => ({ id: s.id, mark: s.mark ?? "", reasons: r.none.map((n) => ({ type: typeLabel(n.type), reason: n.reason })) })) },
+    json: { project: project.name, scheduled: false, noCompliantLayout: missing.map(({ s, r }) => ({ id: s.id, mark: s.mark ?? "", reasons: r.none.map((n) => ({ type: typeLabel(n.type, s.scenario.code), reason: n.reason })) })) },
   };
 }
 

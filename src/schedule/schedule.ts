@@ -150,7 +150,7 @@ export function buildSchedule(input: ScheduleInput): Schedule {
     if (!report.pass) throw new Error(`the layout scheduled for splice ${s.id} fails ${report.governing} on re-check`);
     const cost = spliceCost(joint, costs, o.type.propertyClass, o.type.assembly).total;
     if (!near(cost, o.cost)) throw new Error(`the cost of splice ${s.id} is ${cost} on re-check, not ${o.cost}`);
-    const label = typeLabel(o.type);
+    const label = typeLabel(o.type, code.id);
     const bom = billOfMaterials(joint, o.scenario);
     for (const n of bom.notes) notes.push(`${s.id}: ${n}`);
     if (!bom.ok) notes.push(`${s.id}: no valid bolt length for every group (see \`splicewright export\` of this layout)`);
@@ -180,7 +180,7 @@ export function buildSchedule(input: ScheduleInput): Schedule {
       boltLengths: bom.bolts.map((b) => ({ length_mm: b.length_mm, quantity: b.quantity })),
       costEach: cost,
       cost: cost * s.quantity,
-      ownType: typeLabel(mine.type),
+      ownType: typeLabel(mine.type, code.id),
       ownCostEach: mine.cost,
       premiumEach: cost - mine.cost,
       premium: (cost - mine.cost) * s.quantity,

@@ -14,6 +14,7 @@
  * every answer is re-checked by, whichever method found it.
  */
 import { boltSizeText } from "../catalogue/bolts.js";
+import { boltWordsOf } from "../codes/words.js";
 import type { BoltType } from "../search/per-type.js";
 
 export interface SelectionRules {
@@ -54,7 +55,11 @@ export interface Evaluation {
 export const COST_TOLERANCE = 1e-9;
 const tol = (v: number) => (Number.isFinite(v) ? COST_TOLERANCE * Math.max(1, Math.abs(v)) : 0);
 
-export const typeLabel = (t: BoltType): string => `${boltSizeText(t.size_mm)} ${t.propertyClass}${t.assembly === "friction-grip" ? " friction-grip" : ""}`;
+/** A bolt type as the schedule names it, in the words of the job's code (its tag: HSFG, preloaded, SC). */
+export const typeLabel = (t: BoltType, codeId = "is800-2007"): string => {
+  const tag = boltWordsOf(codeId).tag(t.assembly);
+  return `${boltSizeText(t.size_mm)} ${t.propertyClass}${tag ? ` ${tag}` : ""}`;
+};
 
 /** The one cost evaluator: total cost of an assignment and every rule it breaks. */
 export function evaluateAssignment(p: SelectionProblem, a: Assignment): Evaluation {

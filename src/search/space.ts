@@ -3,6 +3,7 @@
  * search section, the cost catalogue and the design code's own limits. The output states it in full.
  */
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
+import { boltWordsOf } from "../codes/words.js";
 import { boltSizeText, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
 import type { DesignCode, RangeTop, SearchLimits } from "../codes/types.js";
 import type { BoltAssembly, BoltSpec, CheckableScenario, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
@@ -174,6 +175,7 @@ export function boltSpecFor(scenario: Scenario, d: number, c: PropertyClass, ass
     hole: given?.hole ?? "standard",
   };
   if (given?.slotDirection) spec.slotDirection = given.slotDirection;
+  if (assembly === "bearing" && given?.assembly === "bearing" && given.preloaded) spec.preloaded = true;
   if (assembly === "friction-grip") {
     if (given?.slipFactor !== undefined) spec.slipFactor = given.slipFactor;
     spec.slipAt = given?.slipAt ?? "service";
@@ -272,7 +274,7 @@ export function scenarioOf(f: Family, layout: LayoutSpec): CheckableScenario {
 export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scenario): string[] {
   const lines = [
     `bolt sizes: ${space.sizes_mm.map(boltSizeText).join(", ")}`,
-    `property classes: ${space.classes.join(", ")} (${space.assembly === "bearing" ? "bearing type" : "friction grip"})`,
+    `property classes: ${space.classes.join(", ")} (${boltWordsOf(scenario.code).assembly(space.assembly)})`,
     `patterns: ${space.patterns.join(", ")}${space.patterns.includes("tapered") ? " (tapered: each transverse line its own count, symmetric about the plate axis, all counts odd or all even and never rising away from the butt — lap: from plate B's end)" : ""}`,
     `bolts across: ${space.minAcross !== undefined ? `at least ${space.minAcross} (search.min_across)` : "at least 2 where the narrowest plate fits two at the minimum gauge and edge distance, else 1 (search.min_across, default: common practice)"} on the fullest transverse line (tapered: the line at the butt), up to what the narrowest plate fits${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
     `transverse lines along the force: 1 … ${space.maxAlong}${scenario.splice.type !== "lap" ? " per side of the butt" : ""}`,

@@ -84,7 +84,9 @@ const str = (c: FieldContext, path: readonly string[]) => {
 };
 const butt = (c: FieldContext) => str(c, ["splice", "type"]) !== "lap";
 const doubleCover = (c: FieldContext) => str(c, ["splice", "type"]) === "butt-double-cover";
-const frictionGrip = (c: FieldContext) => str(c, ["bolts", "type"]) === "friction-grip";
+/** Friction-grip bolts in the shared spelling or the code's own words (src/io/bolt-words.ts). */
+const frictionGrip = (c: FieldContext) =>
+  str(c, ["bolts", "type"]) === "friction-grip" || ["B", "C"].includes(str(c, ["bolts", "category"]) ?? "") || str(c, ["bolts", "joint"]) === "slip-critical" || at(c.file, ["bolts", "preloaded"]) === true;
 const pattern = (...p: string[]) => (c: FieldContext) => p.includes(str(c, ["layout", "pattern"]) ?? "");
 const code = (...ids: CodeId[]) => (c: FieldContext) => c.codeId !== undefined && ids.includes(c.codeId);
 const slotted = (c: FieldContext) => ["short-slot", "long-slot"].includes(str(c, ["bolts", "hole"]) ?? "");
@@ -200,6 +202,42 @@ export const SECTIONS: readonly Section[] = [
         ],
         blank: { "is800-2007": "bearing type", "en1993-1-8": "bearing type (Category A)", "aisc360-16": "bearing-type" },
       },
+      {
+        path: ["bolts", "category"],
+        kind: "choice",
+        label: "Category (EN 1993-1-8 3.4.1)",
+        choices: [
+          { value: "A", text: "A: bearing type" },
+          { value: "B", text: "B: slip-resistant at serviceability" },
+          { value: "C", text: "C: slip-resistant at ultimate" },
+        ],
+        blank: "from the assembly",
+        when: code("en1993-1-8"),
+      },
+      { path: ["bolts", "preloaded"], kind: "flag", blank: false, label: "Preloaded bolts in Category A (3.1.2)", when: (c) => code("en1993-1-8")(c) && str(c, ["bolts", "category"]) === "A" },
+      {
+        path: ["bolts", "joint"],
+        kind: "choice",
+        label: "Joint (AISC 360-16 J3.1, J3.8)",
+        choices: [
+          { value: "snug-tight", text: "snug-tight" },
+          { value: "pretensioned", text: "pretensioned" },
+          { value: "slip-critical", text: "slip-critical" },
+        ],
+        blank: "from the assembly",
+        when: code("aisc360-16"),
+      },
+      {
+        path: ["bolts", "threads"],
+        kind: "choice",
+        label: "Threads (Table J3.2)",
+        choices: [
+          { value: "N", text: "N: not excluded from the shear planes" },
+          { value: "X", text: "X: excluded from the shear planes" },
+        ],
+        blank: "from the threads flag",
+        when: code("aisc360-16"),
+      },
       { path: ["bolts", "slip_factor"], kind: "number", label: { "is800-2007": "Slip factor μf (Table 20)", "en1993-1-8": "Slip factor μ (Table 3.7)", "aisc360-16": "Mean slip coefficient μ (J3.8)" }, when: frictionGrip },
       {
         path: ["bolts", "slip_at"],
@@ -212,7 +250,7 @@ export const SECTIONS: readonly Section[] = [
         blank: "service",
         when: frictionGrip,
       },
-      { path: ["bolts", "threads_in_shear_planes"], kind: "flag", blank: true, label: { "is800-2007": "Threads in the shear planes", "en1993-1-8": "Shear planes through the threaded portion", "aisc360-16": "Threads not excluded from the shear planes (N)" } },
+      { path: ["bolts", "threads_in_shear_planes"], kind: "flag", blank: true, when: (c) => str(c, ["bolts", "threads"]) === undefined, label: { "is800-2007": "Threads in the shear planes", "en1993-1-8": "Shear planes through the threaded portion", "aisc360-16": "Threads not excluded from the shear planes (N)" } },
       { path: ["bolts", "hole"], kind: "choice", label: "Holes", choices: HOLES, blank: { "is800-2007": "standard clearance", "en1993-1-8": "normal round", "aisc360-16": "standard (STD)" } },
       { path: ["bolts", "slot_direction"], kind: "choice", label: "Slots run", choices: [{ value: "along", text: "along the force" }, { value: "across", text: "across the force" }], when: slotted },
     ],
@@ -256,6 +294,7 @@ export const SECTIONS: readonly Section[] = [
       { path: ["search", "min_bolts"], kind: "count", label: "Fewest bolts per group", blank: "2" },
       { path: ["search", "min_across"], kind: "count", label: "Fewest bolts across", blank: "2 where the width fits two" },
       { path: ["search", "max_across"], kind: "count", label: "Most bolts across", blank: "what the width fits" },
+      { path: ["search", "min_across"], kind: "count", label: "Fewest bolts across", blank: "2 where the narrowest plate fits two, else 1" },
       { path: ["search", "max_splice_length"], kind: "quantity", quantity: "length", label: "Longest splice" },
       { path: ["search", "max_end_distance"], kind: "quantity", quantity: "length", label: "Largest end distance" },
       { path: ["search", "gauge"], kind: "quantity", quantity: "length", label: "Fixed gauge" },

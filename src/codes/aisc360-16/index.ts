@@ -40,6 +40,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
     const grade = astmGradeOf(bolts);
     if (!grade) errors.push({ path: "bolts.class", message: `class ${bolts.propertyClass} has no ASTM grade under AISC 360-16 (use A325, A490 or A307; ISO 4.6, 8.8, 10.9 are read as A307, A325, A490)` });
     if (bolts.hole !== "standard") errors.push({ path: "bolts.hole", message: `${bolts.hole} holes: the Table J3.5 edge-distance increments are not implemented for AISC 360-16; use standard holes` });
+    if (bolts.preloaded && grade === "A307") errors.push({ path: "bolts.class", message: "A307 bolts cannot be pretensioned (AISC 360-16 J3.1: pretensioned joints take Group A or B bolts)" });
     if (bolts.assembly === "friction-grip") {
       if (grade === "A307") errors.push({ path: "bolts.class", message: "A307 bolts cannot be slip-critical (AISC 360-16 J3.1: pretensioned Group A or B bolts)" });
       const mu = bolts.slipFactor;

@@ -69,6 +69,9 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
     if (scenario.options.smallBoltClearance_mm === 2 && bolts.hole !== "standard") {
       errors.push({ path: "options.small_bolt_clearance", message: `applies to normal (standard) holes, not ${bolts.hole} holes` });
     }
+    if (bolts.preloaded && bolts.propertyClass !== "8.8" && bolts.propertyClass !== "10.9") {
+      errors.push({ path: "bolts.class", message: `preloaded bolts must be class 8.8 or 10.9 (EN 1993-1-8, 3.1.2(1)), got ${bolts.propertyClass}` });
+    }
     if (bolts.assembly === "friction-grip") {
       if (bolts.propertyClass !== "8.8" && bolts.propertyClass !== "10.9") {
         errors.push({ path: "bolts.class", message: `preloaded bolts must be class 8.8 or 10.9 (EN 1993-1-8, 3.1.2(1)), got ${bolts.propertyClass}` });
