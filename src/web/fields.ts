@@ -292,7 +292,6 @@ export const SECTIONS: readonly Section[] = [
       { path: ["search", "step"], kind: "quantity", quantity: "length", label: "Fabrication step for pitch, gauge and end distances", blank: "5 mm" },
       { path: ["search", "max_along"], kind: "count", label: "Most transverse lines (per side)", blank: "12" },
       { path: ["search", "min_bolts"], kind: "count", label: "Fewest bolts per group", blank: "2" },
-      { path: ["search", "min_across"], kind: "count", label: "Fewest bolts across", blank: "2 where the width fits two" },
       { path: ["search", "max_across"], kind: "count", label: "Most bolts across", blank: "what the width fits" },
       { path: ["search", "min_across"], kind: "count", label: "Fewest bolts across", blank: "2 where the narrowest plate fits two, else 1" },
       { path: ["search", "max_splice_length"], kind: "quantity", quantity: "length", label: "Longest splice" },
