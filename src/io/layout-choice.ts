@@ -1,9 +1,8 @@
 /**
  * Which layout `export` and `report` write: the scenario's own, or the rank-th of the search over its
- * space. Both shells call this. Throws InputError for inch bolts (no length tables yet) and for a rank
- * the search does not reach.
+ * space. Both shells call this. Throws InputError for a rank the search does not
+ * reach.
  */
-import { inchBoltSize } from "../catalogue/bolts.js";
 import type { CostTable } from "../catalogue/costs.js";
 import type { DesignCode } from "../codes/types.js";
 import type { CheckableScenario, Scenario } from "../model/scenario.js";
@@ -16,9 +15,6 @@ export type RankSearch = Pick<SearchOptions, "maxCandidates" | "variants" | "onP
 
 /** `costs` is called only when a rank asks for a search; the rank counts rows as `search` does. */
 export function layoutToExport(scenario: Scenario, code: DesignCode, rank: number | undefined, costs: () => CostTable, search: RankSearch = {}): { checkable: CheckableScenario; code: DesignCode } {
-  if (scenario.bolts && inchBoltSize(scenario.bolts.size_mm) !== undefined) {
-    throw new InputError("bolts.size", "export and report do not cover inch bolts yet (no ASTM F3125 length, nut and washer tables): use check or search");
-  }
   if (rank === undefined) return { checkable: requireCheckable(scenario, code), code };
   const outcome = searchLayouts({ scenario, code, costs: costs() }, { top: rank, rankBy: "cost", ...search });
   const chosen = outcome.results[rank - 1];

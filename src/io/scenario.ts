@@ -7,7 +7,7 @@ import type { DesignCode } from "../codes/types.js";
 import { isBoltSize, isPropertyClass, BOLT_SIZES_MM, PROPERTY_CLASSES, type PropertyClass, ASTM_BOLT_GRADES, ASTM_ISO_EQUIVALENT, astmBoltGrade, inchBoltSize, INCH_BOLT_SIZES_IN, inchSizeText } from "../catalogue/bolts.js";
 import { buildJoint } from "../geometry/joint-builder.js";
 import { geometryErrors } from "../geometry/validate.js";
-import type { BoltSpec, CheckableScenario, EdgePreparation, HoleType, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
+import type { BoltSpec, CheckableScenario, DocumentInfo, EdgePreparation, HoleType, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
 import { scenarioSchema, withInputUnits, type ScenarioFile } from "./schema.js";
 import { InputError, MAX_FILE_BYTES, parseYaml } from "./yaml.js";
 import { validateCosts } from "./costs.js";
@@ -254,6 +254,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
   if (file.units === "us") scenario.units = "us";
   codeSettingsOf(file, code, scenario);
   if (file.project !== undefined) scenario.project = file.project;
+  if (file.document !== undefined) scenario.document = documentInfoOf(file.document);
   if (file.costs !== undefined) scenario.costs = validateCosts(file.costs, "costs");
   if (file.compare !== undefined) scenario.compare = parseMapping(file.compare, "compare");
   if (file.splice.ends_in_contact !== undefined) {
@@ -355,4 +356,18 @@ export function requireCheckable(scenario: Scenario, code: DesignCode): Checkabl
   const problem = geometryErrors(buildJoint(checkable, code))[0];
   if (problem) throw new InputError(problem.path, problem.message);
   return checkable;
+}
+
+/** The document block in the core's names; absent fields stay absent. */
+function documentInfoOf(d: NonNullable<ScenarioFile["document"]>): DocumentInfo {
+  const info: DocumentInfo = {};
+  if (d.job !== undefined) info.job = d.job;
+  if (d.drawing_number !== undefined) info.drawingNumber = d.drawing_number;
+  if (d.calculation_number !== undefined) info.calculationNumber = d.calculation_number;
+  if (d.revision !== undefined) info.revision = d.revision;
+  if (d.drawn_by !== undefined) info.drawnBy = d.drawn_by;
+  if (d.prepared_by !== undefined) info.preparedBy = d.prepared_by;
+  if (d.checked_by !== undefined) info.checkedBy = d.checked_by;
+  if (d.date !== undefined) info.date = d.date;
+  return info;
 }

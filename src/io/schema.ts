@@ -195,9 +195,22 @@ const factors = z.strictObject({
   gamma_m3_ser: partialFactor().optional(),
 });
 
+/** The document fields a drawing's title block and a report's sign-off block carry (all optional, free text). */
+const documentInfo = z.strictObject({
+  job: freeText().optional(),
+  drawing_number: freeText().optional(),
+  calculation_number: freeText().optional(),
+  revision: freeText().optional(),
+  drawn_by: freeText().optional(),
+  prepared_by: freeText().optional(),
+  checked_by: freeText().optional(),
+  date: freeText().optional(),
+});
+
 export const scenarioSchema = z.strictObject({
   name: freeText().pipe(z.string().min(1, "must not be empty")),
   project: freeText().optional(),
+  document: documentInfo.optional(),
   units: z.enum(["si", "us"]).optional(),
   code: z.string().min(1),
   splice: z.strictObject({

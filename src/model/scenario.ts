@@ -205,6 +205,21 @@ export interface Scenario {
   costs?: unknown;
   /** Free text the engineer wants carried into the output (project, member mark). */
   project?: string;
+  /** Title-block and sign-off fields (job, drawing and calculation numbers, revision, names, date). */
+  document?: DocumentInfo;
+}
+
+/** Title-block and sign-off fields, free text as the office writes them; each optional. */
+export interface DocumentInfo {
+  job?: string;
+  drawingNumber?: string;
+  calculationNumber?: string;
+  revision?: string;
+  drawnBy?: string;
+  preparedBy?: string;
+  checkedBy?: string;
+  /** The document's date as the office writes it; the run's date is used when absent. */
+  date?: string;
 }
 
 /** A scenario ready for `check`: bolts and layout present. */

@@ -41,3 +41,43 @@ export function forceText(N: number, units: DisplayUnits = "si"): string {
 export function ratioText(v: number, digits = 2): string {
   return Number.isFinite(v) ? v.toFixed(digits) : "∞";
 }
+
+/** Sixteenths of an inch in a length, rounded to the nearest (US shop drawings dimension to 1/16 in: common practice). */
+function sixteenthsOf(mm: number): number {
+  return Math.round(toUnit(mm, "in", "length") * 16);
+}
+
+/** Whole inches and a reduced fraction of sixteenths, "5 1/2", "3/4", "12", "0". */
+function inchesAndFraction(sixteenths: number): string {
+  const whole = Math.floor(sixteenths / 16);
+  let numerator = sixteenths % 16;
+  let denominator = 16;
+  while (numerator > 0 && numerator % 2 === 0) {
+    numerator /= 2;
+    denominator /= 2;
+  }
+  if (numerator === 0) return String(whole);
+  return whole > 0 ? `${whole} ${numerator}/${denominator}` : `${numerator}/${denominator}`;
+}
+
+/**
+ * A length as a US shop drawing writes it, to the nearest 1/16 in: below 12 in in inches with a fraction
+ * (`5 1/2"`, `3/4"`), from 12 in in feet and inches (`1'-6 1/2"`, `2'-0"`) (common practice).
+ */
+export function usDimensionText(mm: number): string {
+  const sixteenths = sixteenthsOf(Math.abs(mm));
+  const sign = mm < 0 && sixteenths > 0 ? "-" : "";
+  if (sixteenths < 12 * 16) return `${sign}${inchesAndFraction(sixteenths)}"`;
+  const feet = Math.floor(sixteenths / (12 * 16));
+  return `${sign}${feet}'-${inchesAndFraction(sixteenths - feet * 12 * 16)}"`;
+}
+
+/** A dimension for a drawing or a bill of materials: mm as `lengthNumber` gives it, or US feet-inches-fractions. */
+export function dimensionText(mm: number, units: DisplayUnits = "si"): string {
+  return units === "us" ? usDimensionText(mm) : lengthNumber(mm, "si");
+}
+
+/** A stress with its unit: "410 MPa" or "58 ksi" (to 0.1). */
+export function stressText(MPa: number, units: DisplayUnits = "si"): string {
+  return units === "us" ? `${trimmed(toUnit(MPa, "ksi", "stress"), 1)} ksi` : `${trimmed(MPa, 1)} MPa`;
+}

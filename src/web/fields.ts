@@ -126,6 +126,14 @@ export const SECTIONS: readonly Section[] = [
     fields: [
       { path: ["name"], kind: "text", label: "Name", hint: "printed on the sheet and the drawing" },
       { path: ["project"], kind: "text", label: "Project" },
+      { path: ["document", "job"], kind: "text", label: "Job number", hint: "title block and report sign-off" },
+      { path: ["document", "drawing_number"], kind: "text", label: "Drawing number" },
+      { path: ["document", "calculation_number"], kind: "text", label: "Calculation number" },
+      { path: ["document", "revision"], kind: "text", label: "Revision" },
+      { path: ["document", "drawn_by"], kind: "text", label: "Drawn by" },
+      { path: ["document", "prepared_by"], kind: "text", label: "Prepared by" },
+      { path: ["document", "checked_by"], kind: "text", label: "Checked by" },
+      { path: ["document", "date"], kind: "text", label: "Document date", hint: "as the office writes it; the run's date when blank" },
       {
         path: ["code"],
         kind: "choice",
