@@ -123,3 +123,23 @@ describe("search in US units with inch bolts (AISC 360-16)", () => {
     expect(readFileSync(file, "utf8")).toMatch(/class: A(325|490)/);
   });
 });
+
+describe("search of a US customary scenario speaks inches and ASTM grades", () => {
+  it("the declared space is stated in inches with the ASTM F3125 grades (AISC 360-16 J3.1), with no mm anywhere", () => {
+    const r = cli(["search", scenarioPath("canopy-tie-us-search.yaml")]);
+    expect(r.code).toBe(0);
+    // The demo declares a 1/4 in step and 5/16, 3/8, 1/2 in cover plates; A325/A490 are the F3125 grades of 8.8/10.9 strength (AISC 360-16 Table J3.2).
+    expect(r.stdout).toContain("dimensions on a 0.25 in step");
+    expect(r.stdout).toMatch(/bolt grades \(ASTM F3125 \/ A307\): A325, A490/);
+    expect(r.stdout).not.toMatch(/property classes/);
+    expect(r.stdout).not.toMatch(/\d\s?mm\b|\(mm\)/);
+  });
+});
+
+describe("search under load reversal words the utilisation for both senses", () => {
+  it("the footnote does not call the demand factored tension", () => {
+    const r = cli(["search", scenarioPath("truss-top-chord-reversal.yaml")]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain("strength utilisation = the highest demand/resistance of either sense of the load");
+  });
+});

@@ -8,6 +8,7 @@ import { efficiencyBasisNote } from "../report/summary.js";
 import type { CheckableScenario, EfficiencyBasis } from "../model/scenario.js";
 import { boltWordsOf } from "../codes/words.js";
 import { assemblyOf } from "../export/bolt-list.js";
+import { strengthUtilisationWords } from "./text.js";
 
 const fx = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? "—" : v.toFixed(d));
 const dim = (v: number | null | undefined) => (v === null || v === undefined ? "—" : lengthNumber(v));
@@ -56,7 +57,7 @@ export function compareRows(columns: CompareColumn[]): Array<[string, string[]]>
   return rows.map(([name, f]) => [name, columns.map(f)]);
 }
 
-export function formatCompare(title: string, columns: CompareColumn[], currency: string, basis: EfficiencyBasis): string {
+export function formatCompare(title: string, columns: CompareColumn[], currency: string, basis: EfficiencyBasis, load: { factoredCompression_N?: number } = {}): string {
   const table = new Table({ head: ["", ...columns.map((c) => c.label)], style: { head: [], border: [] }, wordWrap: true });
   for (const [name, cells] of compareRows(columns)) table.push([name, ...cells]);
   const out = [
@@ -64,7 +65,7 @@ export function formatCompare(title: string, columns: CompareColumn[], currency:
     "",
     table.toString(),
     `Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`,
-    "Strength utilisation: factored tension / joint design strength; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit and its margin.",
+    `Strength utilisation: ${strengthUtilisationWords(load)}; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit and its margin.`,
     efficiencyBasisNote(basis),
   ];
   const mapped = columns.filter((c) => c.mapping.length);

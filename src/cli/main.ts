@@ -223,7 +223,7 @@ async function run(argv: string[], io: Io): Promise<number> {
       const costs = loadCosts(opts.costs, scenario.costs);
       const columns = compareRequest(scenario, code, opts, costs, () => readScenarioText(BUNDLED_EQUIVALENTS), opts.maxCandidates === undefined ? {} : { maxCandidates: opts.maxCandidates });
       const basis = scenario.options.efficiencyBasis;
-      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis));
+      io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis, scenario.load));
       exit = columns.some((c) => c.best) ? 0 : 1;
     });
 

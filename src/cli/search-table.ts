@@ -9,6 +9,7 @@ import type { SearchOutcome } from "../search/search.js";
 import type { Scenario } from "../model/scenario.js";
 import { toUnit } from "../units/units.js";
 import { loadWords } from "../model/load.js";
+import { strengthUtilisationWords } from "./text.js";
 
 const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
 
@@ -67,10 +68,10 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
       ]);
     });
     out.push(table.toString());
-    out.push(`Dimensions in ${u.lengthUnit}${u.us ? " (the search space above is stated in mm)" : ""}; cost in ${currency}. Every row has passed every check of \`splicewright check\` on its hole coordinates.`);
+    out.push(`Dimensions in ${u.lengthUnit}; cost in ${currency}. Every row has passed every check of \`splicewright check\` on its hole coordinates.`);
     out.push(`Proven over the declared space above: ${provenStatement(variants)} (DEVELOPERS.md).`);
     out.push(
-      `Str. util.: strength utilisation = factored tension / joint design strength (ultimate limit state)${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
+      `Str. util.: strength utilisation = ${strengthUtilisationWords(scenario.load)} (ultimate limit state)${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
         "Tightest rule: every detailing rule (spacing, end and edge distances, grip) passes in every row; the cell names the one closest to its limit and its margin.",
     );
     out.push(efficiencyBasisNote(scenario.options.efficiencyBasis));

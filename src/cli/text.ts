@@ -86,3 +86,10 @@ export function columns(rows: string[][], width: number, gap = 2): string[] | nu
       .replace(/ +$/, ""),
   );
 }
+
+/** What the strength utilisation divides, in words: tension alone, or the worse sense under compression or reversal. */
+export function strengthUtilisationWords(load: { factoredCompression_N?: number }): string {
+  return load.factoredCompression_N === undefined
+    ? "factored tension / joint design strength"
+    : "the highest demand/resistance of either sense of the load (tension and compression checked separately)";
+}

@@ -4,7 +4,8 @@
  */
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
 import { boltWordsOf } from "../codes/words.js";
-import { boltSizeText, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
+import { boltGradeText, boltSizeText, INCH_BOLT_SIZES_IN, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
+import { lengthNumber, lengthText } from "../report/format.js";
 import type { DesignCode, RangeTop, SearchLimits } from "../codes/types.js";
 import type { BoltAssembly, BoltSpec, CheckableScenario, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
 
@@ -271,20 +272,32 @@ export function scenarioOf(f: Family, layout: LayoutSpec): CheckableScenario {
   return { ...f.base, layout };
 }
 
+/** The declared bolt strengths in the code's words: ISO property classes, or ASTM grades under AISC 360-16. */
+function classesText(space: SearchSpace, scenario: Scenario): string {
+  const assembly = boltWordsOf(scenario.code).assembly(space.assembly);
+  if (scenario.code !== "aisc360-16") return `property classes: ${space.classes.join(", ")} (${assembly})`;
+  const metric = space.sizes_mm.every((d) => inchBoltSize(d) === undefined);
+  const grades = space.classes.map((c) => `${boltGradeText(c, INCH_BOLT_SIZES_IN[0] * 25.4)}${metric ? "M" : ""}`);
+  return `bolt grades (ASTM F3125 / A307): ${grades.join(", ")} (${assembly})`;
+}
+
 export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scenario): string[] {
+  const units = scenario.units === "us" ? "us" : "si";
+  const len = (mm: number) => lengthText(mm, units);
+  const num = (mm: number) => lengthNumber(mm, units);
   const lines = [
     `bolt sizes: ${space.sizes_mm.map(boltSizeText).join(", ")}`,
-    `property classes: ${space.classes.join(", ")} (${boltWordsOf(scenario.code).assembly(space.assembly)})`,
+    classesText(space, scenario),
     `patterns: ${space.patterns.join(", ")}${space.patterns.includes("tapered") ? " (tapered: each transverse line its own count, symmetric about the plate axis, all counts odd or all even and never rising away from the butt — lap: from plate B's end)" : ""}`,
     `bolts across: ${space.minAcross !== undefined ? `at least ${space.minAcross} (search.min_across)` : "at least 2 where the narrowest plate fits two at the minimum gauge and edge distance, else 1 (search.min_across, default: common practice)"} on the fullest transverse line (tapered: the line at the butt), up to what the narrowest plate fits${space.maxAcross !== undefined ? `, at most ${space.maxAcross}` : ""}`,
     `transverse lines along the force: 1 … ${space.maxAlong}${scenario.splice.type !== "lap" ? " per side of the butt" : ""}`,
     `at least ${space.minBolts} bolts${scenario.splice.type !== "lap" ? " each side of the butt" : ""} (common practice)`,
-    `dimensions on a ${space.step_mm} mm step; edge distances equal both sides (the group on the plate axis), so the edge distance follows from the gauge`,
-    space.fixedGauge_mm !== undefined ? `gauge fixed at ${space.fixedGauge_mm} mm` : "gauge: every step value whose edge distance lies within the code's limits",
+    `dimensions on a ${len(space.step_mm)} step; edge distances equal both sides (the group on the plate axis), so the edge distance follows from the gauge`,
+    space.fixedGauge_mm !== undefined ? `gauge fixed at ${len(space.fixedGauge_mm)}` : "gauge: every step value whose edge distance lies within the code's limits",
   ];
-  if (scenario.splice.type !== "lap") lines.push(`cover plate thickness: ${space.coverThicknesses_mm.join(", ")} mm`);
-  if (space.maxSpliceLength_mm !== undefined) lines.push(`splice length at most ${space.maxSpliceLength_mm} mm`);
-  if (space.maxEndDistance_mm !== undefined) lines.push(`end distances at most ${space.maxEndDistance_mm} mm (search.max_end_distance: a declared narrowing)`);
+  if (scenario.splice.type !== "lap") lines.push(`cover plate thickness: ${space.coverThicknesses_mm.map(num).join(", ")} ${units === "us" ? "in" : "mm"}`);
+  if (space.maxSpliceLength_mm !== undefined) lines.push(`splice length at most ${len(space.maxSpliceLength_mm)}`);
+  if (space.maxEndDistance_mm !== undefined) lines.push(`end distances at most ${len(space.maxEndDistance_mm)} (search.max_end_distance: a declared narrowing)`);
   // Ranges per pattern and size, from the code's limits (one line per pattern).
   const byPattern = new Map<string, { statement: string; ranges: string[]; seen: Set<number> }>();
   for (const f of fams) {
@@ -295,13 +308,13 @@ export function describeSpace(space: SearchSpace, fams: Family[], scenario: Scen
     }
     if (entry.seen.has(f.size_mm)) continue;
     entry.seen.add(f.size_mm);
-    const span = (v: Array<number | undefined>) => (v.length && v[0] !== undefined ? `${v[0]}–${v[v.length - 1]}` : "—");
+    const span = (v: Array<number | undefined>) => (v.length && v[0] !== undefined ? `${num(v[0])}–${num(v[v.length - 1]!)}` : "—");
     const pitches = rangeTo(f.limits.pitchMin_mm, f.limits.pitchMax_mm, f.limits.tops.pitch, space.step_mm);
     entry.ranges.push(`${boltSizeText(f.size_mm)}: pitch ${span(pitches)}, end ${span(f.ends_mm)}${scenario.splice.type !== "lap" ? `, at butt ${span(f.endsAtButt_mm)}` : ""}`);
   }
   for (const [pattern, entry] of byPattern) {
     lines.push(`${pattern}: ${entry.statement}`);
-    lines.push(`${pattern} ranges (mm): ${entry.ranges.join("; ")}`);
+    lines.push(`${pattern} ranges (${units === "us" ? "in" : "mm"}): ${entry.ranges.join("; ")}`);
   }
   return lines;
 }
