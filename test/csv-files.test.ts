@@ -20,6 +20,7 @@ import { join } from "node:path";
 import { parse } from "csv-parse/sync";
 import { parse as parseYaml } from "yaml";
 import { beforeAll, describe, expect, it } from "vitest";
+import { csvDocument } from "../src/export/csv.js";
 import { usDimensionText } from "../src/report/format.js";
 import { cliAsync, ROOT, scenarioPath } from "./helpers/cli.js";
 
@@ -295,6 +296,15 @@ describe("values by hand from the scenario files", () => {
     expect(usDimensionText(18.5 * IN)).toBe("1'-6 1/2\"");
     expect(usDimensionText(5.5 * IN)).toBe('5 1/2"');
     expect(usDimensionText(0.75 * IN)).toBe('3/4"');
+  });
+});
+
+describe("the CSV form", () => {
+  it("text a spreadsheet would run as a formula is made inert; numbers, negative ones too, stay numbers", () => {
+    const f = readCsv("t", Buffer.from(csvDocument(["a_mm", "b", "c"], [[-12.5, "=HYPERLINK(\"x\")", "@SUM(1)"], [3, "+1", "plain, with comma"]], ["a note, with comma"]), "utf8"));
+    expect(f.data).toEqual([["-12.5", "'=HYPERLINK(\"x\")", "'@SUM(1)"], ["3", "'+1", "plain, with comma"]]);
+    expect(f.notes).toEqual(["a note, with comma"]);
+    expect(() => csvDocument(["a"], [[1, 2]], [])).toThrow(/2 cells under a header of 1/);
   });
 });
 

@@ -28,6 +28,15 @@ export const UTF8_BOM = "\ufeff";
 export type CsvCell = string | number | null;
 
 /**
+ * A text cell a spreadsheet will not run as a formula: one that begins with =, +, -, @, a tab or a
+ * carriage return gets a leading apostrophe (OWASP "CSV injection" advice; common practice). Numbers
+ * are written as numbers and never altered.
+ */
+function inert(text: string): string {
+  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+}
+
+/**
  * A CSV document: BOM, header, data rows, then one note row per note ("#", the note on one line).
  * Every row is padded or checked to the header's width.
  */
@@ -35,7 +44,7 @@ export function csvDocument(header: readonly string[], rows: readonly CsvCell[][
   const width = header.length;
   const line = (cells: readonly CsvCell[]) => {
     if (cells.length > width) throw new Error(`CSV row of ${cells.length} cells under a header of ${width}`);
-    return [...cells, ...Array<CsvCell>(width - cells.length).fill(null)].map((c) => csvField(c === null ? "" : c)).join(",");
+    return [...cells, ...Array<CsvCell>(width - cells.length).fill(null)].map((c) => csvField(c === null ? "" : typeof c === "string" ? inert(c) : c)).join(",");
   };
   const lines = [line(header), ...rows.map(line), ...notes.map((n) => line(["#", plainLine(n)]))];
   return UTF8_BOM + lines.join("\r\n") + "\r\n";
@@ -54,6 +63,7 @@ export function plateHoles(joint: Joint, p: PlatePiece) {
     .sort((a, b) => a.x_mm - b.x_mm || a.y_mm - b.y_mm);
 }
 
+const LENGTHS_NOTE: Record<DisplayUnits, string> = { si: "units: lengths in mm", us: "units: lengths in decimal inches" };
 const UNITS_NOTE: Record<DisplayUnits, string> = {
   si: "units: lengths in mm, masses in kg",
   us: "units: lengths in decimal inches, masses in lb",
@@ -73,7 +83,7 @@ export function holeScheduleCsv(joint: Joint, title: string, units: DisplayUnits
     `hole schedule: ${title}`,
     "datum, every plate: x from the plate's left end as drawn on the plan (increasing rightward), y from the plate's lower edge as drawn (increasing upward)",
     ...continuing,
-    UNITS_NOTE[units],
+    LENGTHS_NOTE[units],
     `caution: ${CAUTION}`,
   ]);
 }
