@@ -22,7 +22,7 @@ import { parse as parseYaml } from "yaml";
 import { beforeAll, describe, expect, it } from "vitest";
 import { csvDocument } from "../src/export/csv.js";
 import { usDimensionText } from "../src/report/format.js";
-import { cliAsync, ROOT, scenarioPath } from "./helpers/cli.js";
+import { cliAsync, ROOT, scenarioPath, tempScenario } from "./helpers/cli.js";
 
 const IN = 25.4; // mm, exact
 const LB = 0.45359237; // kg, exact
@@ -256,7 +256,7 @@ describe("values by hand from the scenario files", () => {
     const { bom, holes } = exported.get("canopy-tie-us.yaml")!;
     // Cover length = 2 × (end 1.5 + pitch 3 + end at butt 1.5) + gap 0.375 = 12.375 in.
     const covers = bom.data.filter((r) => r[0] === "plate");
-    expect(covers.map((r) => r[2])).toEqual(['PL 3/8" × 8" × 1\'-0 3/8"', 'PL 3/8" × 8" × 1\'-0 3/8"']);
+    expect(covers.map(col(bom, "size"))).toEqual(['PL 3/8" × 8" × 1\'-0 3/8"', 'PL 3/8" × 8" × 1\'-0 3/8"']);
     expect(covers.map((r) => Number(r[bom.header.indexOf("length_in")]))).toEqual([12.375, 12.375]);
     // 12.375 × 8 × 0.375 in³ × (0.0254 m)³ × 7850 kg/m³ / 0.45359237 kg/lb = 10.53 lb.
     const lb = (12.375 * 8 * 0.375 * 0.0254 ** 3 * 7850) / 0.45359237;
@@ -266,28 +266,49 @@ describe("values by hand from the scenario files", () => {
     expect(bom.data.find((r) => r[0] === "bolt")![1]).toMatch(/ASTM F3125 Grade A325/);
     expect(bom.data.find((r) => r[0] === "nut")![1]).toMatch(/ASTM A563/);
     expect(bom.data.find((r) => r[0] === "washer")![1]).toMatch(/ASTM F436/);
+    const x = col(holes, "x_from_left_end_in");
+    const y = col(holes, "y_from_lower_edge_in");
     const cover = holes.data.filter((r) => r[0] === "coverA");
-    expect([...new Set(cover.map((r) => Number(r[3])))]).toEqual([1.5, 4.5, 6 + 0.375 + 1.5, 6 + 0.375 + 4.5]);
+    expect([...new Set(cover.map((r) => Number(x(r))))]).toEqual([1.5, 4.5, 6 + 0.375 + 1.5, 6 + 0.375 + 4.5]);
     // Gauge 4 in centred on the 8 in plate: 2 and 6 in from the lower edge.
-    expect([...new Set(cover.map((r) => Number(r[4])))].sort()).toEqual([2, 6]);
-    expect(new Set(holes.data.map((r) => r[5]))).toEqual(new Set(["0.8125"]));
+    expect([...new Set(cover.map((r) => Number(y(r))))].sort()).toEqual([2, 6]);
+    expect(new Set(holes.data.map(col(holes, "hole_diameter_in")))).toEqual(new Set(["0.8125"]));
     // Main plate A: its length within the splice is 6 in; its end (at the butt) at x = 6, holes 1.5 in from it.
     const mainA = holes.data.filter((r) => r[0] === "mainA");
-    expect([...new Set(mainA.map((r) => Number(r[3])))]).toEqual([1.5, 4.5]);
-    expect(new Set(mainA.map((r) => r[7]))).toEqual(new Set(["6"]));
+    expect([...new Set(mainA.map((r) => Number(x(r))))]).toEqual([1.5, 4.5]);
+    expect(new Set(mainA.map(col(holes, "plate_length_in")))).toEqual(new Set(["6"]));
   });
 
   it("footbridge-tie.yaml: covers PL 10 × 220 × 300 E250, 5.18 kg; M20 holes Ø22; main plate A measured rightward", () => {
     const { bom, holes } = exported.get("footbridge-tie.yaml")!;
     // 0.300 × 0.220 × 0.010 m³ × 7850 kg/m³ = 5.181 kg.
     const covers = bom.data.filter((r) => r[0] === "plate");
-    expect(covers.map((r) => [r[2], r[3], Number(r[8])])).toEqual([["PL 10 × 220 × 300", "E250", 5.18], ["PL 10 × 220 × 300", "E250", 5.18]]);
-    expect(new Set(holes.data.map((r) => r[5]))).toEqual(new Set(["22"]));
+    expect(covers.map((r) => [col(bom, "size")(r), col(bom, "class_or_grade")(r), Number(col(bom, "mass_kg")(r))])).toEqual([["PL 10 × 220 × 300", "E250", 5.18], ["PL 10 × 220 × 300", "E250", 5.18]]);
+    expect(new Set(holes.data.map(col(holes, "hole_diameter_mm")))).toEqual(new Set(["22"]));
     // Main plate A's length within the splice: (300 − 10) / 2 = 145 mm; the butt end at x = 145, the holes
     // 40 mm from it (end distance at the butt) and 65 mm apart (pitch): x = 40 and 105, rightward.
     const mainA = holes.data.filter((r) => r[0] === "mainA");
-    expect([...new Set(mainA.map((r) => Number(r[3])))]).toEqual([40, 105]);
-    expect(new Set(mainA.map((r) => r[7]))).toEqual(new Set(["145"]));
+    expect([...new Set(mainA.map((r) => Number(col(holes, "x_from_left_end_mm")(r))))]).toEqual([40, 105]);
+    expect(new Set(mainA.map(col(holes, "plate_length_mm")))).toEqual(new Set(["145"]));
+  });
+
+  it.each(["along", "across"])("slotted holes (%s the force): the slot's length and direction in its own columns, the width as the diameter", async (direction) => {
+    const text = readFileSync(scenarioPath("footbridge-tie.yaml"), "utf8").replace(/hole: standard[^\n]*/, `hole: short-slot\n  slot_direction: ${direction}`);
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-csv-slot-"));
+    const r = await cliAsync(["export", tempScenario(text, "slotted.yaml"), "--format", "csv,json", "--out", dir]);
+    expect(r.code, r.stderr).toBeLessThan(2);
+    const f = readCsv("slotted-holes.csv", readFileSync(join(dir, "slotted-holes.csv")));
+    const json = JSON.parse(readFileSync(join(dir, "slotted.json"), "utf8")) as { layout: { holes: Array<{ across_mm: number; along_mm: number }> } };
+    const h0 = json.layout.holes[0]!;
+    expect(f.data.length).toBeGreaterThan(0);
+    for (const row of f.data) {
+      expect(col(f, "slot_direction")(row)).toBe(`${direction} the force`);
+      // The slot runs the way it is declared: longer along the force for "along", across for "across".
+      expect(direction === "along" ? h0.along_mm > h0.across_mm : h0.across_mm > h0.along_mm).toBe(true);
+      expect(num(f, "slot_length_mm")(row)).toBeCloseTo(Math.max(h0.along_mm, h0.across_mm), 2);
+      // M20: the slot's width is the standard hole, 22 mm (IS 800:2007 Table 19).
+      expect(num(f, "hole_diameter_mm")(row)).toBe(22);
+    }
   });
 
   it("US shop dimension text (common practice): 1'-0 3/8\", 1'-0\", 5 1/2\", 3/4\"", () => {

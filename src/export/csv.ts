@@ -59,7 +59,19 @@ export function plateDatum(p: PlatePiece): { x_mm: number; y_mm: number; length_
 export function plateHoles(joint: Joint, p: PlatePiece) {
   const d = plateDatum(p);
   return holesOfPlate(joint, p)
-    .map((h) => ({ id: h.id, group: h.group, x_mm: h.x_mm - d.x_mm, y_mm: h.y_mm - d.y_mm, diameter_mm: Math.min(h.across_mm, h.along_mm), slotLength_mm: Math.abs(h.along_mm - h.across_mm) > 1e-9 ? Math.max(h.along_mm, h.across_mm) : null }))
+    .map((h) => {
+      const slotted = Math.abs(h.along_mm - h.across_mm) > 1e-9;
+      return {
+        id: h.id,
+        group: h.group,
+        x_mm: h.x_mm - d.x_mm,
+        y_mm: h.y_mm - d.y_mm,
+        diameter_mm: Math.min(h.across_mm, h.along_mm),
+        slotLength_mm: slotted ? Math.max(h.along_mm, h.across_mm) : null,
+        /** The slot's long axis: along the force (x) or across it (y); null for a round hole. */
+        slotDirection: slotted ? (h.along_mm > h.across_mm ? ("along" as const) : ("across" as const)) : null,
+      };
+    })
     .sort((a, b) => a.x_mm - b.x_mm || a.y_mm - b.y_mm);
 }
 
@@ -72,11 +84,11 @@ const UNITS_NOTE: Record<DisplayUnits, string> = {
 export function holeScheduleCsv(joint: Joint, title: string, units: DisplayUnits = "si"): string {
   const u = unitSuffix("length", units);
   const len = (v: number) => lengthValue(v, units);
-  const header = ["plate", "plate_name", "hole", `x_from_left_end_${u}`, `y_from_lower_edge_${u}`, `hole_diameter_${u}`, `slot_length_${u}`, `plate_length_${u}`, `plate_width_${u}`];
+  const header = ["plate", "plate_name", "hole", `x_from_left_end_${u}`, `y_from_lower_edge_${u}`, `hole_diameter_${u}`, `slot_length_${u}`, "slot_direction", `plate_length_${u}`, `plate_width_${u}`];
   const rows: CsvCell[][] = [];
   for (const p of joint.plates) {
     const d = plateDatum(p);
-    for (const h of plateHoles(joint, p)) rows.push([p.id, p.label, h.id, len(h.x_mm), len(h.y_mm), len(h.diameter_mm), h.slotLength_mm === null ? null : len(h.slotLength_mm), len(d.length_mm), len(p.spec.width_mm)]);
+    for (const h of plateHoles(joint, p)) rows.push([p.id, p.label, h.id, len(h.x_mm), len(h.y_mm), len(h.diameter_mm), h.slotLength_mm === null ? null : len(h.slotLength_mm), h.slotDirection === null ? null : `${h.slotDirection} the force`, len(d.length_mm), len(p.spec.width_mm)]);
   }
   const continuing = joint.plates.filter((p) => p.continues === "left").map((p) => `${p.label} continues leftward beyond the splice: its left end as drawn is the left end of its length within the splice, its own end lies at x = plate_length`);
   return csvDocument(header, rows, [

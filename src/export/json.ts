@@ -33,7 +33,7 @@ function plateJson(joint: Joint, p: PlatePiece) {
     forceShare: p.forceShare,
     length_mm: r2(d.length_mm),
     datum: { x_mm: d.x_mm, y_mm: d.y_mm },
-    holes: plateHoles(joint, p).map((h) => ({ id: h.id, x_from_left_end_mm: r2(h.x_mm), y_from_lower_edge_mm: r2(h.y_mm), diameter_mm: r2(h.diameter_mm), slotLength_mm: h.slotLength_mm === null ? null : r2(h.slotLength_mm) })),
+    holes: plateHoles(joint, p).map((h) => ({ id: h.id, x_from_left_end_mm: r2(h.x_mm), y_from_lower_edge_mm: r2(h.y_mm), diameter_mm: r2(h.diameter_mm), slotLength_mm: h.slotLength_mm === null ? null : r2(h.slotLength_mm), slotDirection: h.slotDirection })),
   };
 }
 
