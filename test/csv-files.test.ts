@@ -236,6 +236,11 @@ describe.each(DEMOS)("%s: hole schedule and bill of materials", (file) => {
     }
   });
 
+  it("the JSON's plates, bolt lengths and bill of materials carry no float noise (9.524999999999999)", () => {
+    const j = get().json as unknown as { layout: { plates: unknown }; boltLengths: unknown; billOfMaterials: unknown };
+    for (const part of [j.layout.plates, j.boltLengths, j.billOfMaterials]) expect(JSON.stringify(part)).not.toMatch(/\d\.\d*(9{6,}|0{6,}[1-9])\d*/);
+  });
+
   it("an inch CSV says no mm anywhere; a metric one no inches", () => {
     const { holes, bom } = get();
     for (const f of [holes, bom]) {

@@ -17,6 +17,17 @@ export const PLATE_DATUM_TEXT =
 
 const r2 = (v: number) => Number(v.toFixed(2));
 
+/**
+ * Lengths without float noise (9.524999999999999 → 9.525): every number of a plain object rounded to
+ * 1e-6 mm, far below any tolerance, so inch-derived sizes read as written. Non-finite numbers are kept.
+ */
+function denoised<T>(value: T): T {
+  if (typeof value === "number") return (Number.isFinite(value) ? Number(value.toFixed(6)) : value) as T;
+  if (Array.isArray(value)) return value.map(denoised) as T;
+  if (value && typeof value === "object") return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, denoised(v)])) as T;
+  return value;
+}
+
 /** A plate of the layout: its extent in the joint coordinates, and its holes in its own datum (the hole schedule's). */
 function plateJson(joint: Joint, p: PlatePiece) {
   const d = plateDatum(p);
@@ -49,16 +60,16 @@ export function exportJson(scenario: CheckableScenario, joint: Joint, report: Ch
       spliceType: joint.spliceType,
       pattern: joint.patternText,
       spliceLength_mm: joint.spliceLength_mm,
-      buttGap_mm: joint.buttGap_mm,
-      plates: joint.plates.map((p) => plateJson(joint, p)),
+      buttGap_mm: denoised(joint.buttGap_mm),
+      plates: joint.plates.map((p) => denoised(plateJson(joint, p))),
       holes: check.holes,
       coordinates: "x along the force, y across from the plate axis, mm; lap: x = 0 at plate B's end; butt: x = 0 at the middle of the butt gap",
       plateDatum: PLATE_DATUM_TEXT,
     },
     result: { pass: check.pass, jointStrength_kN: check.jointStrength_kN, efficiency: check.efficiency, governing: check.governing, strengthUtilisation: check.strengthUtilisation, serviceUtilisation: check.serviceUtilisation, detailing: check.detailing },
     checks: check.checks,
-    boltLengths: bom.lengths.map((l) => ({ ...l, length_mm: Number.isFinite(l.length_mm) ? l.length_mm : null, threadLength_mm: Number.isFinite(l.threadLength_mm) ? l.threadLength_mm : null })),
-    billOfMaterials: { bolts: bom.bolts, nuts: bom.nuts, washers: bom.washers, plates: bom.plates, ok: bom.ok, notes: bom.notes },
+    boltLengths: bom.lengths.map((l) => denoised({ ...l, length_mm: Number.isFinite(l.length_mm) ? l.length_mm : null, threadLength_mm: Number.isFinite(l.threadLength_mm) ? l.threadLength_mm : null })),
+    billOfMaterials: denoised({ bolts: bom.bolts, nuts: bom.nuts, washers: bom.washers, plates: bom.plates, ok: bom.ok, notes: bom.notes }),
     warnings: check.warnings,
     caution: check.caution,
   };
