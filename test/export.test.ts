@@ -180,9 +180,10 @@ describe("splicewright export", () => {
     expect(json.schema).toBe("splicewright-export/1");
     expect(json.layout.holes).toHaveLength(12);
     const csv = readFileSync(join(dir, "footbridge-tie-holes.csv"), "utf8");
-    expect(csv).toMatch(/^# splicewright hole schedule/);
+    // header on the first row, after the UTF-8 byte-order mark (test/csv-files.test.ts parses every CSV)
+    expect(csv).toMatch(/^\ufeffplate,plate_name,hole,x_from_left_end_mm,y_from_lower_edge_mm,/);
     // cover plate A's first hole in drilling order: x = 40 from the cover's left end, y = 40 from its lower edge
-    expect(csv.split("\n")[3]).toMatch(/^coverA,A4,40,40,22,/);
+    expect(csv.split("\r\n")[1]).toMatch(/^coverA,cover plate A,A4,40,40,22,/);
   });
 
   it("refuses to overwrite without --force and writes nothing then", () => {
@@ -205,8 +206,9 @@ describe("splicewright export", () => {
   });
 
   it("an unknown format and a scenario without a layout are bad input (exit 2)", () => {
-    expect(cli(["export", scenarioPath("footbridge-tie.yaml"), "--format", "pdf", "--out", tmpdir()]).stderr).toMatch(/--format: unknown format "pdf"/);
-    const r = cli(["export", scenarioPath("footbridge-tie-search.yaml"), "--format", "svg", "--out", tmpdir()]);
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-export-"));
+    expect(cli(["export", scenarioPath("footbridge-tie.yaml"), "--format", "pdf", "--out", dir]).stderr).toMatch(/--format: unknown format "pdf"/);
+    const r = cli(["export", scenarioPath("footbridge-tie-search.yaml"), "--format", "svg", "--out", dir]);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/bolts: required for check/);
   });

@@ -163,11 +163,11 @@ describe("hostile names into every writer (library calls; the CLI refuses such n
     expect(dxf.trimEnd().endsWith("EOF")).toBe(true);
     expect(parsed.entities.some((e) => e.type === "TEXT" && e.text?.includes("alert(1)"))).toBe(true);
   });
-  it("CSV: the comment stays one line and the rows are those of a clean name", () => {
+  it("CSV: the note row naming the scenario stays one line and the rows are those of a clean name", () => {
     for (const name of ["t-holes.csv", "t-bom.csv"]) {
-      const lines = file(name).split("\n");
-      expect(lines.length).toBe(clean.find((f) => f.name === name)!.content.split("\n").length);
-      expect(lines[0]).toMatch(/^# splicewright .*alert\(1\)/);
+      const lines = file(name).split("\r\n");
+      expect(lines.length).toBe(clean.find((f) => f.name === name)!.content.split("\r\n").length);
+      expect(lines.find((l) => l.includes("alert(1)"))).toMatch(/^#,"[a-z ]+: T1 .*alert\(1\)/);
       expect(file(name)).not.toMatch(/[\u0000\u001b]/);
     }
   });

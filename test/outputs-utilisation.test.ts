@@ -135,7 +135,7 @@ describe("schedule: description, plates, load, cover thickness, both figures; no
   it("the CSV: the new columns, the governing check by title and component, and no internal id", () => {
     const csv = readFileSync(join(dir, "job-schedule.csv"), "utf8");
     expect(csv).not.toMatch(CHECK_ID);
-    const lines = csv.trim().split("\n");
+    const lines = csv.replace(/^\ufeff/, "").trim().split("\r\n");
     const head = lines.find((l) => l.startsWith("id,"))!.split(",");
     for (const k of ["description", "plates", "factored_tension_kN", "cover_thickness_mm", "joint_strength_kN", "strength_utilisation", "service_utilisation", "detailing", "governing_check"]) expect(head).toContain(k);
     const rowC = lines.find((l) => l.startsWith("C,"))!;

@@ -155,8 +155,8 @@ describe("schedule: results and files", () => {
     const r = run([file, "--out", dir]);
     expect(r.code).toBe(0);
     expect(readdirSync(dir).sort()).toEqual(["job-order.csv", "job-schedule.csv", "job-schedule.json"]);
-    const csv = readFileSync(join(dir, "job-schedule.csv"), "utf8").trim().split("\n");
-    expect(csv.find((l) => l.startsWith("id,"))).toMatch(/^id,mark,quantity,description,plates,factored_tension_kN,type,/);
+    const csv = readFileSync(join(dir, "job-schedule.csv"), "utf8").replace(/^\ufeff/, "").trim().split("\r\n");
+    expect(csv[0]).toMatch(/^id,mark,quantity,description,plates,factored_tension_kN,type,/);
     expect(csv.filter((l) => /^[ABC],/.test(l))).toHaveLength(3);
     const order = readFileSync(join(dir, "job-order.csv"), "utf8");
     expect(order).toMatch(/,bolt,M\d+ × \d+ class/);

@@ -45,6 +45,8 @@ export interface AssemblySystem {
   boltItem(length_mm: number): string;
   nutItem: string;
   washerItem: string;
+  /** The nut's grade where the nut standard names its own (ASTM A563 Grade C / DH, A563M 8S / 10S); else the ISO nut class of the bolt class applies. */
+  nutClass?: string;
 }
 
 /** What the assembly is chosen from. */
@@ -205,6 +207,7 @@ function astmF3125(d_in: number, grade: string, pretensioned: boolean): Assembly
     lengthText: inchFractionText,
     boltItem: (l) => `${size} × ${inchFractionText(l)} ${boltName}${pretensioned ? ", pretensioned" : ""}`,
     nutItem: `${size} ASTM A563 Grade ${nutGrade} heavy hex nut`,
+    nutClass: nutGrade,
     washerItem: `${size} ASTM F436 hardened flat washer, 5/32 in`,
   };
 }
@@ -234,6 +237,7 @@ function astmF3125M(d: number, grade: string, pretensioned: boolean): AssemblySy
     lengthText: mmText,
     boltItem: (l) => `M${d} × ${l} ASTM F3125 Grade ${grade}M heavy hex structural bolt${pretensioned ? ", pretensioned" : ""}`,
     nutItem: `M${d} ASTM A563M Class ${grade === "A490" ? "10S" : "8S"} heavy hex nut`,
+    nutClass: grade === "A490" ? "10S" : "8S",
     washerItem: `M${d} ASTM F436M hardened washer, ${washer} mm`,
   };
 }

@@ -206,3 +206,18 @@ export function astmPlateGrade(name: string): string | undefined {
   if (/^(ASTM )?A572[- ]?(GR\.? ?|GRADE ?)?50$/.test(key)) return "A572-50";
   return undefined;
 }
+
+/**
+ * The product standard a plate of this grade is ordered to, for the bill of materials: IS 2062 for the
+ * IS grades, EN 10025-2/-3/-4/-6 for the EN grades, ASTM A36 / A572 for the ASTM grades; undefined for
+ * a grade the catalogue does not hold.
+ */
+export function plateProductStandard(grade: string): string | undefined {
+  if (ownEntry(IS2062_GRADES, grade.trim().toUpperCase())) return "IS 2062";
+  const en = en10025Grade(grade);
+  if (en) return PRODUCT_STANDARD[en];
+  const astm = astmPlateGrade(grade);
+  if (astm === "A36") return "ASTM A36";
+  if (astm === "A572-50") return "ASTM A572";
+  return undefined;
+}

@@ -11,6 +11,7 @@
 import { STEEL_DENSITY_KG_PER_MM3 } from "../catalogue/costs.js";
 import { assemblyFor, nutClassOf, type AssemblySystem } from "../catalogue/assemblies.js";
 import { ASTM_ISO_EQUIVALENT, boltSizeText, type AstmBoltGrade } from "../catalogue/bolts.js";
+import { plateProductStandard } from "../catalogue/steels.js";
 import type { GroupId, Joint } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
@@ -42,7 +43,12 @@ export interface BillOfMaterials {
   bolts: Array<{ item: string; size: string; class: string; length_mm: number; quantity: number; standard: string }>;
   nuts: Array<{ item: string; size: string; class: string; quantity: number; standard: string }>;
   washers: Array<{ item: string; size: string; thickness_mm: number; quantity: number; standard: string }>;
-  plates: Array<{ id: string; item: string; grade: string; width_mm: number; thickness_mm: number; length_mm: number; quantity: number; mass_kg: number; holes: number; holeDiameter_mm: number }>;
+  /**
+   * The plates the splice supplies (cover plates, packing): length along the force, width, thickness,
+   * mass at 7850 kg/m³ (common practice), holes drilled, and the product standard of the grade (when
+   * the catalogue holds it). The main plates are the members being spliced, not listed here.
+   */
+  plates: Array<{ id: string; item: string; grade: string; width_mm: number; thickness_mm: number; length_mm: number; quantity: number; mass_kg: number; holes: number; holeDiameter_mm: number; standard: string }>;
   lengths: BoltLengthLine[];
   /** True when every group has a valid bolt length (and, where required, threads clear). */
   ok: boolean;
@@ -153,13 +159,14 @@ export function billOfMaterials(joint: Joint, scenario: CheckableScenario): Bill
         mass_kg: Number((length * p.spec.width_mm * p.spec.thickness_mm * STEEL_DENSITY_KG_PER_MM3).toFixed(2)),
         holes: joint.holes.filter((h) => groups.has(h.group)).length,
         holeDiameter_mm: holeDia,
+        standard: plateProductStandard(p.spec.grade) ?? "",
       };
     });
   const notes: string[] = [];
   for (const l of lengths) if (l.note) notes.push(`${joint.spliceType === "lap" ? "bolts" : `side ${l.group}`}: ${l.note}`);
   return {
     bolts: [...bolts.entries()].sort((x, y) => x[0] - y[0]).map(([length, quantity]) => ({ item: a.boltItem(length), size, class: grade, length_mm: length, quantity, standard: a.boltStandard })),
-    nuts: [{ item: a.nutItem, size, class: a.id.startsWith("astm") ? grade : nutClassOf(b.propertyClass), quantity: nutCount, standard: a.nutStandard }],
+    nuts: [{ item: a.nutItem, size, class: a.nutClass ?? nutClassOf(b.propertyClass), quantity: nutCount, standard: a.nutStandard }],
     washers: [...washers.entries()].map(([t, quantity]) => ({ item: a.washerItem, size, thickness_mm: t, quantity, standard: a.washerStandard })),
     plates,
     lengths,

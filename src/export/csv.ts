@@ -1,49 +1,132 @@
 /**
- * Hole schedule and bill of materials as CSV (RFC 4180 quoting). Pure.
+ * Hole schedule and bill of materials as CSV for a spreadsheet, and the CSV document form every CSV of
+ * splicewright shares (the schedule and order list too). Pure. docs/csv.md lists the columns.
  *
- * Hole schedule datum, per plate: x from the plate's left end as drawn in the plan (for a main plate
- * that continues, from its end inside the splice, measured into the plate), y from the plate's lower
- * edge as drawn. Every hole of a plate is listed, with its diameter (and slot length where slotted).
+ * Document form: UTF-8 with a byte-order mark (so a spreadsheet reads × and Ø as written), RFC 4180
+ * quoting, CRLF line ends; the header on the first row; one row per item, every row as many cells as
+ * the header; numbers in numeric columns only, rounded (mm to 0.01, inches to 0.0001, masses to 0.01);
+ * after the data, note rows (scenario, datum, units, caution): "#" alone in the first cell, the note in
+ * the second, empty cells after it — a parser's comment option ("#") drops them, a spreadsheet shows
+ * them below the table.
+ *
+ * Hole schedule datum, the same for every plate and the same as the drawing's: x from the plate's left
+ * end as drawn on the plan, increasing rightward; y from the plate's lower edge as drawn, increasing
+ * upward. Main plate A continues leftward beyond the splice: its left end as drawn is the left end of
+ * its length within the splice (plate_length), and its own end, in the splice, lies at x = plate_length.
  */
 import type { Joint, PlatePiece } from "../model/joint.js";
 import { holesOfPlate } from "../geometry/joint-builder.js";
 import type { BillOfMaterials } from "./bolt-list.js";
 import { csvField, plainLine } from "../text/escape.js";
+import { lengthValue, massValue, unitSuffix, usDimensionText, type DisplayUnits } from "../report/format.js";
+import { CAUTION } from "../report/check-json.js";
+import { STEEL_DENSITY_KG_PER_MM3 } from "../catalogue/costs.js";
 
-const row = (cells: Array<string | number>) => cells.map(csvField).join(",");
-const mm = (v: number) => Number(v.toFixed(2));
+/** The byte-order mark that tells a spreadsheet the file is UTF-8. */
+export const UTF8_BOM = "\ufeff";
 
-/** The datum of a plate's hole schedule: its end inside the splice, and its lower edge. */
-export function plateDatum(p: PlatePiece): { x_mm: number; sense: 1 | -1; text: string } {
-  if (p.continues === "left") return { x_mm: p.x1_mm, sense: -1, text: "x from the plate's end in the splice (its right end as drawn), measured into the plate" };
-  return { x_mm: p.x0_mm, sense: 1, text: "x from the plate's left end as drawn" };
+export type CsvCell = string | number | null;
+
+/**
+ * A text cell a spreadsheet will not run as a formula: one that begins with =, +, -, @, a tab or a
+ * carriage return gets a leading apostrophe (OWASP "CSV injection" advice; common practice). Numbers
+ * are written as numbers and never altered.
+ */
+function inert(text: string): string {
+  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
 }
 
-export function holeScheduleCsv(joint: Joint, title: string): string {
-  const lines: string[] = [
-    `# splicewright hole schedule: ${plainLine(title)}`,
-    "# datum per plate: x along the force from the plate end inside the splice (main plate A: its right end, measured leftward into the plate; every other plate: its left end as drawn), y across from the plate's lower edge as drawn; mm",
-    row(["plate", "hole", "x_mm", "y_mm", "diameter_mm", "slot_length_mm", "datum"]),
-  ];
+/**
+ * A CSV document: BOM, header, data rows, then one note row per note ("#", the note on one line).
+ * Every row is padded or checked to the header's width.
+ */
+export function csvDocument(header: readonly string[], rows: readonly CsvCell[][], notes: readonly string[]): string {
+  const width = header.length;
+  const line = (cells: readonly CsvCell[]) => {
+    if (cells.length > width) throw new Error(`CSV row of ${cells.length} cells under a header of ${width}`);
+    return [...cells, ...Array<CsvCell>(width - cells.length).fill(null)].map((c) => csvField(c === null ? "" : typeof c === "string" ? inert(c) : c)).join(",");
+  };
+  const lines = [line(header), ...rows.map(line), ...notes.map((n) => line(["#", plainLine(n)]))];
+  return UTF8_BOM + lines.join("\r\n") + "\r\n";
+}
+
+/** The datum in words, for a drawing's note or a report. */
+export const PLATE_DATUM_WORDS = "x from the plate's left end as drawn, y from its lower edge as drawn";
+
+/**
+ * The datum of a plate's hole schedule, in the joint's coordinates: its left end as drawn (x_mm) and its
+ * lower edge (y_mm); the plate's length from that end; `sense` is +1 for every plate (measured rightward).
+ */
+export function plateDatum(p: PlatePiece): { x_mm: number; y_mm: number; length_mm: number; sense: 1; text: string } {
+  return { x_mm: p.x0_mm, y_mm: -p.spec.width_mm / 2, length_mm: p.x1_mm - p.x0_mm, sense: 1, text: PLATE_DATUM_WORDS };
+}
+
+/** Every hole of a plate in the plate's datum, in drilling order (along the plate, then up). */
+export function plateHoles(joint: Joint, p: PlatePiece) {
+  const d = plateDatum(p);
+  return holesOfPlate(joint, p)
+    .map((h) => {
+      const slotted = Math.abs(h.along_mm - h.across_mm) > 1e-9;
+      return {
+        id: h.id,
+        group: h.group,
+        x_mm: h.x_mm - d.x_mm,
+        y_mm: h.y_mm - d.y_mm,
+        diameter_mm: Math.min(h.across_mm, h.along_mm),
+        slotLength_mm: slotted ? Math.max(h.along_mm, h.across_mm) : null,
+        /** The slot's long axis: along the force (x) or across it (y); null for a round hole. */
+        slotDirection: slotted ? (h.along_mm > h.across_mm ? ("along" as const) : ("across" as const)) : null,
+      };
+    })
+    .sort((a, b) => a.x_mm - b.x_mm || a.y_mm - b.y_mm);
+}
+
+const LENGTHS_NOTE: Record<DisplayUnits, string> = { si: "units: lengths in mm", us: "units: lengths in decimal inches" };
+const UNITS_NOTE: Record<DisplayUnits, string> = {
+  si: "units: lengths in mm, masses in kg",
+  us: "units: lengths in decimal inches, masses in lb",
+};
+
+export function holeScheduleCsv(joint: Joint, title: string, units: DisplayUnits = "si"): string {
+  const u = unitSuffix("length", units);
+  const len = (v: number) => lengthValue(v, units);
+  const header = ["plate", "plate_name", "hole", `x_from_left_end_${u}`, `y_from_lower_edge_${u}`, `hole_diameter_${u}`, `slot_length_${u}`, "slot_direction", `plate_length_${u}`, `plate_width_${u}`];
+  const rows: CsvCell[][] = [];
   for (const p of joint.plates) {
-    const datum = plateDatum(p);
-    const holes = holesOfPlate(joint, p)
-      .map((h) => ({ h, x: datum.sense * (h.x_mm - datum.x_mm), y: h.y_mm + p.spec.width_mm / 2 }))
-      .sort((a, b) => a.x - b.x || a.y - b.y); // in drilling order along the plate
-    for (const { h, x, y } of holes) {
-      const slot = Math.abs(h.along_mm - h.across_mm) > 1e-9 ? mm(Math.max(h.along_mm, h.across_mm)) : "";
-      lines.push(row([p.id, h.id, mm(x), mm(y), mm(Math.min(h.across_mm, h.along_mm)), slot, datum.text]));
-    }
+    const d = plateDatum(p);
+    for (const h of plateHoles(joint, p)) rows.push([p.id, p.label, h.id, len(h.x_mm), len(h.y_mm), len(h.diameter_mm), h.slotLength_mm === null ? null : len(h.slotLength_mm), h.slotDirection === null ? null : `${h.slotDirection} the force`, len(d.length_mm), len(p.spec.width_mm)]);
   }
-  return lines.join("\n") + "\n";
+  const continuing = joint.plates.filter((p) => p.continues === "left").map((p) => `${p.label} continues leftward beyond the splice: its left end as drawn is the left end of its length within the splice, its own end lies at x = plate_length`);
+  return csvDocument(header, rows, [
+    `hole schedule: ${title}`,
+    "datum, every plate: x from the plate's left end as drawn on the plan (increasing rightward), y from the plate's lower edge as drawn (increasing upward)",
+    ...continuing,
+    LENGTHS_NOTE[units],
+    `caution: ${CAUTION}`,
+  ]);
 }
 
-export function billOfMaterialsCsv(bom: BillOfMaterials, title: string): string {
-  const lines: string[] = [`# splicewright bill of materials: ${plainLine(title)}`, row(["kind", "item", "size", "class_or_grade", "length_mm", "thickness_mm", "width_mm", "quantity", "mass_kg", "standard"])];
-  for (const b of bom.bolts) lines.push(row(["bolt", b.item, b.size, b.class, b.length_mm, "", "", b.quantity, "", b.standard]));
-  for (const n of bom.nuts) lines.push(row(["nut", n.item, n.size, n.class, "", "", "", n.quantity, "", n.standard]));
-  for (const w of bom.washers) lines.push(row(["washer", w.item, w.size, "", "", w.thickness_mm, "", w.quantity, "", w.standard]));
-  for (const p of bom.plates) lines.push(row(["plate", p.item, "", p.grade, mm(p.length_mm), p.thickness_mm, p.width_mm, p.quantity, p.mass_kg, `${p.holes} holes Ø${p.holeDiameter_mm}`]));
-  for (const n of bom.notes) lines.push(row(["note", n, "", "", "", "", "", "", "", ""]));
-  return lines.join("\n") + "\n";
+/** A plate as a bill of materials lists it: PL thickness × width × length (US: `PL 3/8" × 8" × 1'-0 3/8"`). */
+export function plateSizeText(p: { thickness_mm: number; width_mm: number; length_mm: number }, units: DisplayUnits = "si"): string {
+  const t = (v: number) => (units === "us" ? usDimensionText(v) : String(lengthValue(v, "si")));
+  return `PL ${t(p.thickness_mm)} × ${t(p.width_mm)} × ${t(p.length_mm)}`;
+}
+
+export function billOfMaterialsCsv(bom: BillOfMaterials, title: string, units: DisplayUnits = "si"): string {
+  const u = unitSuffix("length", units);
+  const m = unitSuffix("mass", units);
+  const len = (v: number) => lengthValue(v, units);
+  const header = ["kind", "item", "size", "class_or_grade", `length_${u}`, `width_${u}`, `thickness_${u}`, "quantity", `mass_${m}`, "holes", `hole_diameter_${u}`, "standard"];
+  const rows: CsvCell[][] = [];
+  for (const b of bom.bolts) rows.push(["bolt", b.item, b.size, b.class, Number.isFinite(b.length_mm) ? len(b.length_mm) : null, null, null, b.quantity, null, null, null, b.standard]);
+  for (const n of bom.nuts) rows.push(["nut", n.item, n.size, n.class, null, null, null, n.quantity, null, null, null, n.standard]);
+  for (const w of bom.washers) rows.push(["washer", w.item, w.size, null, null, null, len(w.thickness_mm), w.quantity, null, null, null, w.standard]);
+  for (const p of bom.plates) rows.push([p.id === "packing" ? "packing" : "plate", p.item, plateSizeText(p, units), p.grade, len(p.length_mm), len(p.width_mm), len(p.thickness_mm), p.quantity, massValue(p.length_mm * p.width_mm * p.thickness_mm * STEEL_DENSITY_KG_PER_MM3, units), p.holes, len(p.holeDiameter_mm), p.standard || null]);
+  return csvDocument(header, rows, [
+    `bill of materials: ${title}`,
+    ...bom.notes,
+    "the main plates are the members being spliced and are not listed; plate masses at 7850 kg/m³",
+    UNITS_NOTE[units],
+    `caution: ${CAUTION}`,
+  ]);
 }

@@ -41,8 +41,9 @@ export function exportFiles(input: ExportInput, formats: readonly ExportFormat[]
     if (f === "svg") files.push({ name: `${input.base}.svg`, content: renderSvg(svgInput) });
     if (f === "dxf") files.push({ name: `${input.base}.dxf`, content: renderDxf({ ...svgInput, scale: layoutSheet(svgInput).scale, units: input.scenario.units === "us" ? "in" : "mm" }) });
     if (f === "csv") {
-      files.push({ name: `${input.base}-holes.csv`, content: holeScheduleCsv(input.joint, input.scenario.name) });
-      files.push({ name: `${input.base}-bom.csv`, content: billOfMaterialsCsv(bom, input.scenario.name) });
+      const units = input.scenario.units === "us" ? "us" : "si";
+      files.push({ name: `${input.base}-holes.csv`, content: holeScheduleCsv(input.joint, input.scenario.name, units) });
+      files.push({ name: `${input.base}-bom.csv`, content: billOfMaterialsCsv(bom, input.scenario.name, units) });
     }
     if (f === "json") files.push({ name: `${input.base}.json`, content: JSON.stringify(exportJson(input.scenario, input.joint, input.report, bom, input.date), null, 2) + "\n" });
   }

@@ -69,7 +69,9 @@ export function usDimensionText(mm: number): string {
   const sign = mm < 0 && sixteenths > 0 ? "-" : "";
   if (sixteenths < 12 * 16) return `${sign}${inchesAndFraction(sixteenths)}"`;
   const feet = Math.floor(sixteenths / (12 * 16));
-  return `${sign}${feet}'-${inchesAndFraction(sixteenths - feet * 12 * 16)}"`;
+  const rest = sixteenths - feet * 12 * 16;
+  // Under an inch, the inches still show: 1'-0 3/8" (common practice).
+  return `${sign}${feet}'-${rest > 0 && rest < 16 ? "0 " : ""}${inchesAndFraction(rest)}"`;
 }
 
 /** A dimension for a drawing or a bill of materials: mm as `lengthNumber` gives it, or US feet-inches-fractions. */
@@ -80,4 +82,29 @@ export function dimensionText(mm: number, units: DisplayUnits = "si"): string {
 /** A stress with its unit: "410 MPa" or "58 ksi" (to 0.1). */
 export function stressText(MPa: number, units: DisplayUnits = "si"): string {
   return units === "us" ? `${trimmed(toUnit(MPa, "ksi", "stress"), 1)} ksi` : `${trimmed(MPa, 1)} MPa`;
+}
+
+/** Kilograms in one avoirdupois pound: 0.45359237 kg exactly (international yard and pound, 1959). */
+export const KG_PER_LB = 0.45359237;
+
+/** A rounded number for a data file: `digits` decimals, no float noise, never -0. */
+export function roundedNumber(v: number, digits: number): number {
+  const r = Number(v.toFixed(digits));
+  return r === 0 ? 0 : r;
+}
+
+/** A length as a number for a data file (CSV): mm to 0.01, or decimal inches to 0.0001 (US). */
+export function lengthValue(mm: number, units: DisplayUnits = "si"): number {
+  return units === "us" ? roundedNumber(toUnit(mm, "in", "length"), 4) : roundedNumber(mm, 2);
+}
+
+/** A mass as a number for a data file: kg, or lb (US), to 0.01. */
+export function massValue(kg: number, units: DisplayUnits = "si"): number {
+  return roundedNumber(units === "us" ? kg / KG_PER_LB : kg, 2);
+}
+
+/** The unit suffix of a data file's column: "mm" or "in" for lengths, "kg" or "lb" for masses. */
+export function unitSuffix(quantity: "length" | "mass", units: DisplayUnits = "si"): string {
+  if (quantity === "mass") return units === "us" ? "lb" : "kg";
+  return units === "us" ? "in" : "mm";
 }

@@ -1,14 +1,13 @@
 /**
- * The schedule as JSON and CSV (RFC 4180 quoting). Pure: text out, the CLI writes the files.
+ * The schedule as JSON and CSV (the CSV form of export/csv.ts, docs/csv.md). Pure: text out, the CLI writes the files.
  */
 import { CAUTION } from "../report/check-json.js";
 import type { Schedule } from "./schedule.js";
-import { csvField, plainLine } from "../text/escape.js";
+import { csvDocument, type CsvCell } from "../export/csv.js";
+import { roundedNumber } from "../report/format.js";
 import { efficiencyBasisNote, UTILISATION_DEFINITIONS } from "../report/summary.js";
 
 const money = (v: number) => Number(v.toFixed(2));
-const cell = (v: string | number | null) => csvField(v === null ? "" : v);
-const csvLine = (cells: Array<string | number | null>) => cells.map(cell).join(",");
 
 function rulesText(s: Schedule): string[] {
   const r = s.rules;
@@ -74,23 +73,34 @@ export function scheduleJson(s: Schedule, meta: { code: string; currency: string
   };
 }
 
+const SCHEDULE_HEADER = ["id", "mark", "quantity", "description", "plates", "factored_tension_kN", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths", "joint_strength_kN", "strength_utilisation", "service_utilisation", "efficiency", "detailing", "governing_check", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"] as const;
+
+const mm = (v: number | null) => (v === null ? null : roundedNumber(v, 2));
+const kN = (v: number | null) => (v === null ? null : roundedNumber(v, 2));
+const ratio = (v: number | null) => (v === null || !Number.isFinite(v) ? null : roundedNumber(v, 4));
+
+/** One splice row of the schedule CSV. */
+function scheduleRow(r: Schedule["rows"][number]): CsvCell[] {
+  const l = r.layout;
+  const g = l.governingCheck;
+  const lengths = r.boltLengths.map((b) => `${b.quantity} × ${b.length_mm} mm`).join("; ");
+  return [r.id, r.mark, r.quantity, r.description, r.plates, kN(r.factoredTension_kN), r.type, l.pattern, l.counts, mm(l.pitch_mm), mm(l.gauge_mm), mm(l.endDistance_mm), mm(l.endDistanceAtButt_mm), mm(l.edgeDistance_mm), mm(l.coverThickness_mm), r.boltsEach, r.bolts, lengths, kN(l.jointStrength_kN), ratio(l.strengthUtilisation), ratio(l.serviceUtilisation), ratio(l.efficiency), l.detailingText, g ? `${g.title}, ${g.component} (${g.clause})` : "", money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)];
+}
+
+/**
+ * The schedule as CSV (docs/csv.md): one row per splice of the project file, then the TOTAL row, then
+ * note rows (project, rules and proof, definitions, caution).
+ */
 export function scheduleCsv(s: Schedule): string {
-  const lines = [
-    `# splicewright schedule: ${plainLine(s.project)}`,
-    `# ${rulesText(s).join("; ")}; ${s.selection.proven ? "proven optimal" : "NOT proven optimal"} (${s.selection.method})`,
-    `# strength_utilisation: factored tension / joint design strength; service_utilisation: service tension / slip resistance at service; detailing: the rules (all pass) and the one closest to its limit; ${efficiencyNote(s)}`,
-    csvLine(["id", "mark", "quantity", "description", "plates", "factored_tension_kN", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths_mm", "joint_strength_kN", "strength_utilisation", "service_utilisation", "efficiency", "detailing", "governing_check", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"]),
-  ];
-  for (const r of s.rows) {
-    const l = r.layout;
-    const g = l.governingCheck;
-    lines.push(
-      csvLine([r.id, r.mark, r.quantity, r.description, r.plates, r.factoredTension_kN, r.type, l.pattern, l.counts, l.pitch_mm, l.gauge_mm, l.endDistance_mm, l.endDistanceAtButt_mm, l.edgeDistance_mm, l.coverThickness_mm, r.boltsEach, r.bolts, r.boltLengths.map((b) => `${b.quantity}×${b.length_mm}`).join(" "), l.jointStrength_kN, l.strengthUtilisation, l.serviceUtilisation, l.efficiency, l.detailingText, g ? `${g.title}, ${g.component} (${g.clause})` : "", money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)]),
-    );
-  }
   const t = s.totals;
-  lines.push(csvLine(["TOTAL", "", t.splices, "", "", "", `${t.typesUsed} types`, "", "", "", "", "", "", "", "", "", t.bolts, "", "", "", "", "", "", "", "", money(t.layoutCost), "", money(t.own.layoutCost), "", money(t.premium)]));
-  return lines.join("\n") + "\n";
+  const total: CsvCell[] = ["TOTAL", null, t.splices, null, null, null, `${t.typesUsed} types`, null, null, null, null, null, null, null, null, null, t.bolts, null, null, null, null, null, null, null, null, money(t.layoutCost), null, money(t.own.layoutCost), null, money(t.premium)];
+  return csvDocument(SCHEDULE_HEADER, [...s.rows.map(scheduleRow), total], [
+    `schedule: ${s.project}`,
+    `${rulesText(s).join("; ")}; ${s.selection.proven ? "proven optimal" : "NOT proven optimal"} (${s.selection.method})`,
+    `strength_utilisation: factored tension / joint design strength; service_utilisation: service tension / slip resistance at service; detailing: the rules (all pass) and the one closest to its limit; ${efficiencyNote(s)}`,
+    "TOTAL row: quantity = splices, bolts = bolts of the job, cost = layout cost of the job, own_optimum_cost_each = the job at every splice's own optimum, premium = the rationalisation premium",
+    `caution: ${CAUTION}`,
+  ]);
 }
 
 /** The efficiency basis of the job's splices (one line; "mixed" when splices differ). */
@@ -99,8 +109,8 @@ function efficiencyNote(s: Schedule): string {
   return bases.length === 1 ? efficiencyBasisNote(bases[0]!) : `Eff.: efficiency bases differ between splices (${bases.join(", ")}; options.efficiency_basis)`;
 }
 
+/** The bolts, nuts and washers to order per bolt type, as CSV (docs/csv.md). */
 export function orderCsv(s: Schedule): string {
-  const lines = [`# splicewright bolts to order: ${plainLine(s.project)}`, csvLine(["type", "kind", "item", "length_mm", "quantity", "standard"])];
-  for (const o of s.order) lines.push(csvLine([o.type, o.kind, o.item, o.length_mm, o.quantity, o.standard]));
-  return lines.join("\n") + "\n";
+  const rows: CsvCell[][] = s.order.map((o) => [o.type, o.kind, o.item, mm(o.length_mm), o.quantity, o.standard]);
+  return csvDocument(["type", "kind", "item", "length_mm", "quantity", "standard"], rows, [`bolts to order: ${s.project}`, `caution: ${CAUTION}`]);
 }
