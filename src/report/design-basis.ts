@@ -96,7 +96,7 @@ function boltStandards(scenario: CheckableScenario, bom: BillOfMaterials): strin
   const b = scenario.bolts;
   const grade = scenario.code.startsWith("aisc") ? `ASTM F3125 Grade ${b.astmGrade ?? b.propertyClass}` : `property class ${b.propertyClass} (ISO 898-1)`;
   const assembly = [...new Set([...bom.bolts, ...bom.nuts, ...bom.washers].map((x) => x.standard))];
-  return [grade, ...assembly.map((s) => `assembly: ${s}`)];
+  return [grade, `assembly: ${assembly.join(", ")}`];
 }
 
 /** The design basis of a checked layout (the factors listed are those its checks use). */

@@ -108,8 +108,7 @@ function signOff(scenario: CheckableScenario, runDate: string, x: Ctx): string {
   const cell = (v: string | undefined, key: string) => (v && v.trim() ? `<td data-field="${key}">${x.t(v)}</td>` : `<td data-field="${key}" class="blank"></td>`);
   return `<table class="signoff" id="sign-off">
 <tr><th>Job</th>${cell(d.job, "job")}<th>Calculation no.</th>${cell(d.calculationNumber, "calculation")}<th>Revision</th>${cell(d.revision, "revision")}</tr>
-<tr><th>Prepared by</th>${cell(d.preparedBy, "prepared")}<th>Checked by</th>${cell(d.checkedBy, "checked")}<th>Date</th>${cell(d.date ?? runDate, "date")}</tr>
-<tr class="sign"><th>Signature</th><td class="blank"></td><th>Signature</th><td class="blank"></td><th>Date checked</th><td class="blank"></td></tr>
+<tr class="sign"><th>Prepared by<br><span class="muted">name, signature</span></th>${cell(d.preparedBy, "prepared")}<th>Checked by<br><span class="muted">name, signature</span></th>${cell(d.checkedBy, "checked")}<th>Date</th>${cell(d.date ?? runDate, "date")}</tr>
 </table>`;
 }
 
@@ -132,7 +131,7 @@ function designBasisSection(input: ReportInput, x: Ctx): string {
 <tr><td>Design code</td><td>${esc(report.codeTitle)}</td></tr>
 <tr><td>${esc(basis.factorsTitle)}</td><td><table class="factors" id="factors"><tbody>${factorRows}</tbody></table><span class="muted">${esc(basis.factorsNote)}</span></td></tr>
 <tr><td>Plate material</td><td>${basis.plates.map((p) => esc(p)).join("<br>")}</td></tr>
-<tr><td>Bolts</td><td>${basis.bolts.map((p) => esc(p)).join("<br>")}</td></tr>
+<tr><td>Bolts</td><td>${esc(basis.bolts.join("; "))}</td></tr>
 <tr><td>Units</td><td>${x.u === "us" ? "lengths in inches, forces in kips, stresses in ksi (US customary); the checks compute in SI units and convert exactly (1 in = 25.4 × 10⁻³ m)" : "lengths in mm, forces in kN, stresses in MPa"}</td></tr>
 <tr><td>Conventions</td><td><ul class="conventions">${report.conventions.map((c) => `<li>${x.t(c)}</li>`).join("")}</ul></td></tr>
 </table>

@@ -82,9 +82,9 @@ export const REPORT_CSS = `  :root { --ink: #111; --muted: #555; --rule: #999; }
   header.sheet .scenario { grid-column: 1 / span 2; padding: 5px 10px; }
   table.signoff { margin: 0 0 8px; border: 1.5px solid var(--ink); border-top: 0; table-layout: fixed; }
   table.signoff th { width: 13%; font-size: 11px; background: #f3f3f3; }
-  table.signoff td { width: 20.3%; height: 2.1em; }
-  table.signoff td.blank { border-bottom: 1px solid var(--ink); }
-  table.signoff tr.sign td { height: 2.8em; }
+  table.signoff td { width: 20.3%; height: 1.9em; }
+  table.signoff td.blank { border-bottom: 1.5px solid var(--ink); }
+  table.signoff tr.sign td { height: 3.4em; }
   h2 { font-size: 15px; border-bottom: 1.5px solid var(--ink); padding-bottom: 2px; margin: 14px 0 6px; }
   h3 { font-size: 13px; margin: 12px 0 4px; }
   table { border-collapse: collapse; width: 100%; margin: 4px 0 8px; }
@@ -112,9 +112,10 @@ export const REPORT_CSS = `  :root { --ink: #111; --muted: #555; --rule: #999; }
   table.factors td.sym { width: 5em; white-space: nowrap; }
   table.factors td.num { width: 3.5em; }
   table.factors td.src { width: 36%; color: var(--muted); }
-  ul.conventions { margin: 0; padding-left: 1.1em; font-size: 11px; }
+  ul.conventions { margin: 0; padding-left: 1.1em; font-size: 11px; columns: 2; column-gap: 1.6em; }
+  ul.conventions li { break-inside: avoid; }
   table.plates td.num:nth-child(5) { white-space: normal; }
-  figure.drawing { margin: 0; border: 1px solid var(--rule); }
+  figure.drawing { margin: 0; outline: 1px solid var(--rule); }
   figure.drawing > svg { width: 100%; height: auto; display: block; }
   .drawing-caption { font-size: 11px; margin: 4px 0 0; }
   .drawing-caption svg.scale-bar { vertical-align: middle; margin-left: 8px; }
@@ -132,7 +133,10 @@ export const REPORT_CSS = `  :root { --ink: #111; --muted: #555; --rule: #999; }
     h2 { font-size: 11.5pt; margin: 8px 0 4px; }
     h3 { font-size: 9.5pt; margin: 8px 0 3px; }
     header.sheet h1 { font-size: 13pt; }
-    .muted, table.factors td, ul.conventions, .caution, td.clause { font-size: 7.5pt; }
+    .muted, table.factors td, .caution, td.clause { font-size: 7.5pt; }
+    ul.conventions { font-size: 7pt; line-height: 1.2; }
+    #page-1 .kv td { padding-top: 1px; padding-bottom: 1px; }
+    #page-1 h2 { margin-top: 6px; }
     tr.formula-row td.formula { font-size: 7.5pt; }
     th, td { padding: 2px 5px; }
     .verdict { font-size: 12pt; padding: 4px 10px; }
