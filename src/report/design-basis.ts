@@ -57,10 +57,10 @@ function enFactors(kinds: Set<CheckKind>, scenario: CheckableScenario): { lines:
   const ec1 = "EN 1993-1-1 6.1 NOTE 2B, recommended";
   const t21 = "EN 1993-1-8 Table 2.1, recommended";
   const lines: FactorLine[] = [
-    { symbol: "γM0", value: s.factors.gamma_M0, use: "resistance of cross-sections (gross yield)", source: src("gammaM0", ec1) },
+    { symbol: "γM0", value: s.factors.gamma_M0, use: "resistance of cross-sections (gross yield; the shear area in block tearing, EN 1993-1-8 3.10.2)", source: src("gammaM0", ec1) },
   ];
   if (has(kinds, "strut-buckling", "ply-buckling")) lines.push({ symbol: "γM1", value: s.factors.gamma_M1, use: "resistance of members to instability (cover strut, ply buckling)", source: src("gammaM1", ec1) });
-  lines.push({ symbol: "γM2", value: s.factors.gamma_M2, use: "net-section rupture, bolts, plates in bearing, block tearing", source: src("gammaM2", t21) });
+  lines.push({ symbol: "γM2", value: s.factors.gamma_M2, use: "net-section rupture, bolts, plates in bearing, the tension area in block tearing", source: src("gammaM2", t21) });
   if (has(kinds, "slip") && s.category === "C") lines.push({ symbol: "γM3", value: s.factors.gamma_M3, use: "slip resistance at the ultimate limit state (Category C)", source: src("gammaM3", t21) });
   if (has(kinds, "slip") && s.category === "B") lines.push({ symbol: "γM3,ser", value: s.factors.gamma_M3_ser, use: "slip resistance at the serviceability limit state (Category B)", source: src("gammaM3ser", t21) });
   return { lines, national: Object.values(given).some((v) => v !== undefined) };

@@ -198,7 +198,6 @@ function inputsSection(input: ReportInput, x: Ctx): string {
   const plateRows = joint.plates
     .map((p) => `<tr><td>${esc(p.label)}</td><td class="num">${lengthNumber(p.spec.width_mm, x.u)}</td><td class="num">${lengthNumber(p.spec.thickness_mm, x.u)}</td><td>${esc(p.spec.grade)}</td><td class="num">${esc(`${stressText(p.fy_MPa, x.u)} / ${stressText(p.fu_MPa, x.u)}`)}</td><td>${esc(p.spec.edges)}</td><td class="num">${p.role === "packing" ? "—" : trimmed(p.forceShare, 3)}</td></tr>`)
     .join("\n");
-  const o = scenario.options;
   return `<section id="inputs" class="page">
 <h2>1. Inputs</h2>
 <div class="keep"><h3>Load</h3>
@@ -216,14 +215,24 @@ ${layoutRows(input, x)}
 </table></div>
 <div class="keep"><h3>Options</h3>
 <table class="kv">
-<tr><td>Exposed to corrosion</td><td>${o.exposedToCorrosion ? "yes" : "no"}</td></tr>
-<tr><td>Bolt net area Anb</td><td>${esc(o.boltNetArea)}</td></tr>
-<tr><td>Bolt strength basis</td><td>ISO 898-1 ${esc(o.boltStrength)} values</td></tr>
-<tr><td>Efficiency basis</td><td>${esc(o.efficiencyBasis)}</td></tr>
-<tr><td>Net-section load</td><td>${o.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"}</td></tr>
+${optionRows(scenario)}
 </table></div>
 ${bomSection(input.bom, x)}
 </section>`;
+}
+
+/** The scenario's options that its code's checks read. */
+function optionRows(scenario: CheckableScenario): string {
+  const o = scenario.options;
+  const rows: Array<[string, string]> = [["Exposed to corrosion", o.exposedToCorrosion ? "yes" : "no"]];
+  if (scenario.code.startsWith("is800")) rows.push(["Bolt net area Anb", o.boltNetArea], ["Bolt strength basis", `ISO 898-1 ${o.boltStrength} values`]);
+  if (scenario.code.startsWith("en1993")) rows.push(["Plate fy, fu", o.steelStrengths === "en1993-1-1" ? "EN 1993-1-1 Table 3.1" : "the product standard by thickness (EN 10025-2)"]);
+  if (scenario.code.startsWith("aisc")) {
+    rows.push(["Deformation at the bolt hole at service", o.bearingDeformation === "not-considered" ? "not a design consideration (J3.10(a)(1)(ii), (a)(2)(ii))" : "a design consideration (J3.10(a)(1)(i), (a)(2)(i))"]);
+    rows.push(["Fillers", o.fillersDeveloped ? "developed (J5.2(b))" : "not developed"]);
+  }
+  rows.push(["Efficiency basis", o.efficiencyBasis], ["Net-section load", o.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"]);
+  return rows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n");
 }
 
 function bomSection(bom: BillOfMaterials, x: Ctx): string {
@@ -284,7 +293,7 @@ function resultSection(input: ReportInput, rows: SummaryRow[], folded: FoldedChe
   const strength = report.strengthBySense && scenario.load.factoredCompression_N !== undefined
     ? Object.entries(report.strengthBySense).map(([k, v]) => `in ${k} ${F(v)}`).join("; ")
     : `${F(report.jointStrength_N)} for a factored tension of ${F(scenario.load.factoredTension_N)}`;
-  return `<section id="result" class="page">
+  return `<section id="result" class="keep">
 <h2>4. Result</h2>
 <table class="kv">
 <tr><td>Joint design strength</td><td>${esc(strength)}</td></tr>
