@@ -15,6 +15,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { cli, scenarioPath } from "./helpers/cli.js";
 import { pdfPages, squeezed, type PdfPage } from "./helpers/pdf-text.js";
+import { usDimensionText } from "../src/report/format.js";
 
 const CHROMIUM = "/usr/bin/chromium";
 const haveBrowser = existsSync(CHROMIUM);
@@ -103,6 +104,22 @@ describe("design basis: the factors the checks use, against the codes' published
   });
 });
 
+describe("US customary dimensions in the bill of materials", () => {
+  // US shop drawings and bills dimension in feet, inches and fractions to 1/16 in, whole inches always
+  // written after the feet, 1'-0 3/8" (common practice).
+  it("to 1/16 in, feet-inches from 12 in, whole inches written after the feet", () => {
+    const cases: Array<[number, string]> = [[0.75, '3/4"'], [5.5, '5 1/2"'], [12, "1'-0\""], [12.375, "1'-0 3/8\""], [18.5, "1'-6 1/2\""], [24.0625, "2'-0 1/16\""]];
+    for (const [inches, text] of cases) expect(usDimensionText(inches * 25.4)).toBe(text);
+  });
+
+  it("canopy-tie-us.yaml: the report's bill of materials gives the cover plates as 8\" × 3/8\" × 1'-0 3/8\" and their mass in lb", () => {
+    const { html } = writeReport(scenarioPath("canopy-tie-us.yaml"));
+    // Covers 12.375 in long (2 × (1.5 + 3 + 1.5) in + 0.375 in butt gap), 8 in × 3/8 in; steel 490 lb/ft³ (common practice):
+    // 8 × 0.375 × 12.375 in³ × 490 / 1728 = 10.5 lb.
+    expect(html).toContain("cover plate A 8&quot; × 3/8&quot; × 1&#39;-0 3/8&quot; A36</td><td class=\"num\">1</td><td>10.5 lb");
+  });
+});
+
 describe("sign-off block", () => {
   it("carries the scenario's document fields; absent ones are blank lines to sign", () => {
     const doc = "document:\n  job: J-2041\n  calculation_number: C-017\n  revision: B\n  prepared_by: R. Menon\n  checked_by: S. Okafor\n  date: 2026-11-30\n";
@@ -181,7 +198,7 @@ describe.skipIf(!haveBrowser)("the report printed to PDF on A4 in headless Chrom
     }
   }, 60_000);
 
-  it.each(["footbridge-tie.yaml", "canopy-tie-us.yaml"])("%s: no check is split from its formula row across a page break", async (name) => {
+  it.each(["footbridge-tie.yaml", "canopy-tie-us.yaml"])("%s: no check is split from its formula row, no heading from its table, across a page break", async (name) => {
     const { file } = writeReport(scenarioPath(name));
     const page = await open(file);
     try {
@@ -192,7 +209,10 @@ describe.skipIf(!haveBrowser)("the report printed to PDF on A4 in headless Chrom
         }),
       );
       expect(rows.length).toBeGreaterThan(15);
+      const headings = await page.locator("#checks h3").allInnerTexts();
       const pages = (await print(page)).map((p) => squeezed(p.text));
+      // Each group's heading lands on the page of its table's header row (kept with its table).
+      for (const h of headings) expect(pages.some((p) => p.includes(`${squeezed(h)}ClauseCheckDemand`)), h).toBe(true);
       for (const r of rows) {
         const figures = squeezed(r.figures);
         const formula = squeezed(r.formula).slice(0, 24);
