@@ -71,7 +71,7 @@ describe("design basis: the factors the checks use, against the codes' published
     expect(rows.map((r) => [r.symbol, r.value])).toEqual([["γM0", 1.0], ["γM2", 1.25]]);
     expect(rows[0]!.source).toMatch(/^EN 1993-1-1 6\.1/);
     expect(rows[1]!.source).toMatch(/^EN 1993-1-8 Table 2\.1/);
-    expect(html).toMatch(/recommended values \(EN 1993-1-1 6\.1, EN 1993-1-8 Table 2\.1/);
+    expect(html).toContain("recommended values (EN 1993-1-1 6.1, EN 1993-1-8 Table 2.1); no national annex given");
   });
 
   it("EN 1993-1-8, Categories B and C: γM3,ser 1.10 and γM3 1.25 (Table 2.1)", () => {
@@ -154,8 +154,13 @@ describe.skipIf(!haveBrowser)("the report printed to PDF on A4 in headless Chrom
 
   const text = (page: Page, selector: string) => page.locator(selector).first().innerText();
 
-  it.each(DEMOS)("%s: A4 pages printed at full size; page 1 carries the summary, design basis, sign-off and caution", async (name) => {
-    const { file } = writeReport(scenarioPath(name));
+  // Each demo, and a heavily failing layout (the EN demo at about three times its load: 12 checks fail),
+  // whose page 1 must still hold the summary and the caution.
+  const overloaded = () => scenarioVariant("sports-hall-chord-ec3.yaml", (t) => t.replace("factored_tension: 950 kN", "factored_tension: 2950 kN"));
+  const CASES: Array<[string, () => string, "PASS" | "FAIL"]> = [...DEMOS.map((d): [string, () => string, "PASS"] => [d, () => scenarioPath(d), "PASS"]), ["sports-hall-chord-ec3.yaml at 2950 kN", overloaded, "FAIL"]];
+
+  it.each(CASES)("%s: A4 pages printed at full size; page 1 carries the summary, design basis, sign-off and caution", async (name, path, verdict) => {
+    const { file } = writeReport(path());
     const page = await open(file);
     try {
       const summary = {
@@ -166,7 +171,7 @@ describe.skipIf(!haveBrowser)("the report printed to PDF on A4 in headless Chrom
         governing: await text(page, '#summary tr[data-row="governing"] td:last-child'),
         efficiency: (await text(page, '#summary tr[data-row="efficiency"] td:last-child')).split("\n")[0]!,
       };
-      expect(summary.verdict).toMatch(/^PASS/);
+      expect(summary.verdict.startsWith(verdict)).toBe(true);
       expect(summary.governing).toMatch(/\((IS 800:2007|EN 1993-1-8|EN 1993-1-1|AISC 360-16) /); // the clause beside the check
       const factors = await page.locator("#factors tr").allInnerTexts();
       expect(factors.length).toBeGreaterThanOrEqual(2);
@@ -190,7 +195,7 @@ describe.skipIf(!haveBrowser)("the report printed to PDF on A4 in headless Chrom
       for (const row of factors) expect(first).toContain(squeezed(row));
       expect(first).not.toContain("1.Inputs"); // page 1 holds its own content and nothing after it
       expect(squeezed(pages[1]!.text)).toContain("1.Inputs");
-      expect(squeezed(pages.at(-1)!.text)).toContain("Verdict:PASS");
+      expect(squeezed(pages.at(-1)!.text)).toContain(`Verdict:${verdict}`);
       expect(pages.length).toBeLessThanOrEqual(10);
       console.info(`${name}: ${pages.length} A4 pages`);
     } finally {

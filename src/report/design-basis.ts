@@ -7,7 +7,7 @@
 import { PARTIAL_FACTORS } from "../codes/is800-2007/factors.js";
 import { PHI } from "../codes/aisc360-16/factors.js";
 import { phiSlip } from "../codes/aisc360-16/slip.js";
-import { RECOMMENDED_FACTORS, settingsOf } from "../codes/en1993-1-8/settings.js";
+import { settingsOf } from "../codes/en1993-1-8/settings.js";
 import { ASTM_PLATE_GRADES, astmPlateGrade } from "../catalogue/steels.js";
 import type { BillOfMaterials } from "../export/bolt-list.js";
 import type { CheckKind, CheckReport } from "../model/results.js";
@@ -110,7 +110,7 @@ export function designBasis(scenario: CheckableScenario, report: CheckReport, bo
     return {
       factorsTitle: "Partial factors",
       factors: lines,
-      factorsNote: national && !allRecommended ? "national annex values given by the scenario (section factors:) where stated; recommended values elsewhere" : `recommended values (EN 1993-1-1 6.1, EN 1993-1-8 Table 2.1: γM0 ${RECOMMENDED_FACTORS.gamma_M0.toFixed(2)}, γM2 ${RECOMMENDED_FACTORS.gamma_M2.toFixed(2)}); no national annex given`,
+      factorsNote: national && !allRecommended ? "national annex values given by the scenario (section factors:) where stated; recommended values elsewhere" : "recommended values (EN 1993-1-1 6.1, EN 1993-1-8 Table 2.1); no national annex given",
       plates,
       bolts,
     };

@@ -112,11 +112,27 @@ function signOff(scenario: CheckableScenario, runDate: string, x: Ctx): string {
 </table>`;
 }
 
+/** Page 1 lists at most this many failing checks per row; the checks and result sections list them all. */
+const PAGE1_LIST = 3;
+
+/** A list cut for page 1: the first items, then how many more and where they are. */
+function page1List(items: string[]): string[] {
+  if (items.length <= PAGE1_LIST) return items;
+  return [...items.slice(0, PAGE1_LIST - 1), `… and ${items.length - PAGE1_LIST + 1} more: every one in 3. Checks and 4. Result`];
+}
+
+/** The verdict for page 1: FAIL with the failing checks named, or counted where there are many (the rows below name them). */
+function page1Verdict(verdict: SummaryRow): string {
+  const m = /^(FAIL — \d+ checks? fail): (.*)$/.exec(verdict.value);
+  if (!m || m[2]!.split("; ").length <= 2) return verdict.value;
+  return `${m[1]}: the strength and detailing rows below name them`;
+}
+
 function summaryTable(rows: SummaryRow[], x: Ctx): string {
   return `<table class="kv summary">
 ${rows
   .slice(1)
-  .map((r) => `<tr class="${r.status}" data-row="${r.key}"><td>${esc(r.label)}</td><td>${x.t(r.value)}${r.detail.map((d) => `<br><span class="muted">${x.t(d)}</span>`).join("")}</td></tr>`)
+  .map((r) => `<tr class="${r.status}" data-row="${r.key}"><td>${esc(r.label)}</td><td>${x.t(r.value)}${page1List(r.detail).map((d) => `<br><span class="muted">${x.t(d)}</span>`).join("")}</td></tr>`)
   .join("\n")}
 </table>`;
 }
@@ -155,7 +171,7 @@ function firstPage(input: ReportInput, rows: SummaryRow[], x: Ctx): string {
 ${signOff(scenario, input.date, x)}
 <section id="summary">
 <h2>Summary</h2>
-<div class="verdict ${report.pass ? "is-pass" : "is-fail"}" id="summary-verdict">${x.t(rows[0]!.value)}</div>
+<div class="verdict ${report.pass ? "is-pass" : "is-fail"}" id="summary-verdict">${x.t(page1Verdict(rows[0]!))}</div>
 ${summaryTable(rows, x)}
 </section>
 ${designBasisSection(input, x)}

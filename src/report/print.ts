@@ -109,9 +109,9 @@ export const REPORT_CSS = `  :root { --ink: #111; --muted: #555; --rule: #999; }
   .kv > tbody > tr > td:first-child, .kv > tr > td:first-child { width: 24%; color: var(--muted); }
   table.factors { margin: 0 0 2px; }
   table.factors td { padding: 1px 5px; font-size: 12px; }
-  table.factors td.sym { width: 5em; white-space: nowrap; }
+  table.factors td.sym { width: 4em; white-space: nowrap; }
   table.factors td.num { width: 3.5em; }
-  table.factors td.src { width: 36%; color: var(--muted); }
+  table.factors td.src { width: 31%; color: var(--muted); }
   ul.conventions { margin: 0; padding-left: 0; font-size: 11px; columns: 2; column-gap: 1.6em; }
   ul.conventions li { break-inside: avoid; margin-left: 1.1em; }
   table.plates td.num:nth-child(5) { white-space: normal; }
