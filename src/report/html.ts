@@ -48,7 +48,7 @@ const SPLICE_TEXT: Record<Joint["spliceType"], string> = {
 /** What every writer below needs: the units and the text of core strings in them. */
 interface Ctx {
   u: DisplayUnits;
-  /** A core text (SI words) as this report shows it, escaped. */
+  /** A core text (SI words) as this report shows it, escaped. The user's own free text (names, document fields) is only escaped. */
   t(s: string): string;
 }
 
@@ -105,7 +105,7 @@ function checkRows(folded: FoldedCheck[], governing: string, x: Ctx): string {
 /** The sign-off block: the scenario's document fields, a blank line to fill in where one is absent. */
 function signOff(scenario: CheckableScenario, runDate: string, x: Ctx): string {
   const d = scenario.document ?? {};
-  const cell = (v: string | undefined, key: string) => (v && v.trim() ? `<td data-field="${key}">${x.t(v)}</td>` : `<td data-field="${key}" class="blank"></td>`);
+  const cell = (v: string | undefined, key: string) => (v && v.trim() ? `<td data-field="${key}">${esc(v)}</td>` : `<td data-field="${key}" class="blank"></td>`);
   return `<table class="signoff" id="sign-off">
 <tr><th>Job</th>${cell(d.job, "job")}<th>Calculation no.</th>${cell(d.calculationNumber, "calculation")}<th>Revision</th>${cell(d.revision, "revision")}</tr>
 <tr class="sign"><th>Prepared by<br><span class="muted">name, signature</span></th>${cell(d.preparedBy, "prepared")}<th>Checked by<br><span class="muted">name, signature</span></th>${cell(d.checkedBy, "checked")}<th>Date</th>${cell(d.date ?? runDate, "date")}</tr>
@@ -166,7 +166,7 @@ function firstPage(input: ReportInput, rows: SummaryRow[], x: Ctx): string {
 <header class="sheet">
   <h1>Calculation report — bolted ${titleOf(scenario)}</h1>
   <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
-  <div class="scenario"><b>${x.t(scenario.name)}</b>${scenario.project ? ` — ${x.t(scenario.project)}` : ""}<br><span class="muted">${esc(report.codeTitle)}; ${esc(SPLICE_TEXT[input.joint.spliceType])}; layout: ${esc(input.origin)}</span></div>
+  <div class="scenario"><b>${esc(scenario.name)}</b>${scenario.project ? ` — ${esc(scenario.project)}` : ""}<br><span class="muted">${esc(report.codeTitle)}; ${esc(SPLICE_TEXT[input.joint.spliceType])}; layout: ${esc(input.origin)}</span></div>
 </header>
 ${signOff(scenario, input.date, x)}
 <section id="summary">
