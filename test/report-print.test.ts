@@ -15,7 +15,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { cli, scenarioPath } from "./helpers/cli.js";
 import { pdfPages, squeezed, type PdfPage } from "./helpers/pdf-text.js";
-import { usDimensionText } from "../src/report/format.js";
+import { displayText, usDimensionText } from "../src/report/format.js";
 
 const CHROMIUM = "/usr/bin/chromium";
 const haveBrowser = existsSync(CHROMIUM);
@@ -117,6 +117,18 @@ describe("US customary dimensions in the bill of materials", () => {
     // Covers 12.375 in long (2 × (1.5 + 3 + 1.5) in + 0.375 in butt gap), 8 in × 3/8 in; steel 490 lb/ft³ (common practice):
     // 8 × 0.375 × 12.375 in³ × 490 / 1728 = 10.5 lb.
     expect(html).toContain("cover plate A 8&quot; × 3/8&quot; × 1&#39;-0 3/8&quot; A36</td><td class=\"num\">1</td><td>10.5 lb");
+  });
+});
+
+describe("SI texts of the core shown on a US customary report", () => {
+  // Exact conversions (NIST SP 811, from memory): 1 in = 25.4 mm, 1 kip = 4.4482216152605 kN, 1 ksi = 6.894757293168 MPa.
+  it("converts numbers with mm, mm², kN and MPa, and leaves SI output alone", () => {
+    expect(displayText("|y centroid| ≤ 0.5 mm", "us")).toBe("|y centroid| ≤ 0.02 in"); // 0.5 / 25.4 = 0.0197 in
+    expect(displayText("Ag = 2464.0 mm²", "us")).toBe("Ag = 3.819 in²"); // 2464 / 645.16
+    expect(displayText("Tdn = 727.4 kN", "us")).toBe("Tdn = 163.53 kips"); // 727.4 / 4.44822
+    expect(displayText("fu 410 MPa", "us")).toBe("fu 59.5 ksi"); // 410 / 6.894757
+    expect(displayText("dimensions in mm", "us")).toBe("dimensions in in");
+    expect(displayText("Ag = 2464.0 mm², 0.5 mm, 727.4 kN", "si")).toBe("Ag = 2464.0 mm², 0.5 mm, 727.4 kN");
   });
 });
 
