@@ -112,7 +112,7 @@ export const REPORT_CSS = `  :root { --ink: #111; --muted: #555; --rule: #999; }
   table.factors td.sym { width: 4em; white-space: nowrap; }
   table.factors td.num { width: 3.5em; }
   table.factors td.src { width: 31%; color: var(--muted); }
-  ul.conventions { margin: 0; padding-left: 0; font-size: 11px; columns: 2; column-gap: 1.6em; }
+  ul.conventions { margin: 0; padding-left: 0; font-size: 11px; columns: 2; column-gap: 2.4em; }
   ul.conventions li { break-inside: avoid; margin-left: 1.1em; }
   table.plates td.num:nth-child(5) { white-space: normal; }
   figure.drawing { margin: 0; outline: 1px solid var(--rule); }
