@@ -72,7 +72,7 @@ describe("drawing, export JSON and report", () => {
     expect(html).toContain('data-row="detailing"');
     expect(html).toMatch(/<span class="margin">at the limit<\/span>/);
     expect(html).not.toContain("Highest utilisation");
-    expect(html.indexOf('id="summary"')).toBeLessThan(html.indexOf('id="project"'));
+    expect(html.indexOf('id="summary"')).toBeLessThan(html.indexOf('id="inputs"')); // page 1 carries the summary; the inputs follow
   });
 });
 

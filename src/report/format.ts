@@ -108,3 +108,23 @@ export function unitSuffix(quantity: "length" | "mass", units: DisplayUnits = "s
   if (quantity === "mass") return units === "us" ? "lb" : "kg";
   return units === "us" ? "in" : "mm";
 }
+
+/**
+ * A text the core wrote in SI (formula texts, notes, conventions, warnings: "|y centroid| ≤ 0.5 mm") as a
+ * US customary output shows it: every "<number> mm" in inches (to 0.001 in), mm² in in², kN in kips,
+ * MPa in ksi, and a bare "mm" unit word as "in". SI text is returned unchanged. Display only: the figures
+ * behind it stay in N, mm, MPa.
+ */
+export function displayText(text: string, units: DisplayUnits): string {
+  if (units !== "us") return text;
+  const num = String.raw`(-?\d+(?:\.\d+)?)`;
+  return text
+    .replace(new RegExp(`${num}\\s?mm²`, "g"), (_, v: string) => `${trimmed(toUnit(toUnit(Number(v), "in", "length"), "in", "length"), 3)} in²` /* mm² ÷ 25.4² */)
+    .replace(new RegExp(`${num}\\s?mm\\b`, "g"), (_, v: string) => `${trimmed(toUnit(Number(v), "in", "length"), 3)} in`)
+    .replace(new RegExp(`${num}\\s?kN\\b`, "g"), (_, v: string) => `${trimmed(toUnit(Number(v) * 1000, "kip", "force"), 2)} kips`)
+    .replace(new RegExp(`${num}\\s?MPa\\b`, "g"), (_, v: string) => `${trimmed(toUnit(Number(v), "ksi", "stress"), 1)} ksi`)
+    .replace(/\bmm²/g, "in²")
+    .replace(/\bmm\b/g, "in")
+    .replace(/\bkN\b/g, "kips")
+    .replace(/\bMPa\b/g, "ksi");
+}

@@ -1,6 +1,11 @@
 /**
  * The calculation report: one self-contained HTML file (inline styles, inline SVG drawing, system
- * fonts, no network requests), laid out as a plain calculation sheet that prints cleanly to A4. Pure.
+ * fonts, no network requests), laid out as a calculation sheet that prints to A4: page 1 carries the
+ * sign-off block, the summary and the design basis; the drawing has a landscape page of its own at a
+ * scale true on the printed page (ISO 5455); every check keeps its formula row with it. Pure.
+ *
+ * US customary scenarios (`units: us`) print kips, ksi and inches throughout; texts the core writes in
+ * SI (formula texts, notes, conventions) are converted at display by `displayText`.
  */
 import type { Joint } from "../model/joint.js";
 import { boltWordsOf } from "../codes/words.js";
@@ -11,11 +16,12 @@ import { renderSvg } from "../export/svg.js";
 import { boltSizeText } from "../catalogue/bolts.js";
 import { CAUTION } from "./check-json.js";
 import { citationText } from "./citation.js";
-import { lengthNumber, lengthText, trimmed } from "./format.js";
-import { summarise, summaryRows } from "./summary.js";
+import { designBasis } from "./design-basis.js";
+import { dimensionText, displayText, forceText, lengthNumber, lengthText, stressText, trimmed, type DisplayUnits } from "./format.js";
+import { summarise, summaryRows, type SummaryRow } from "./summary.js";
 import { foldTwins, type FoldedCheck } from "./twins.js";
 import { xmlText } from "../text/escape.js";
-import { loadLabel } from "../model/load.js";
+import { drawingPrint, REPORT_CSS, scaleBarSvg, type DrawingPrint } from "./print.js";
 
 export interface ReportInput {
   scenario: CheckableScenario;
@@ -31,12 +37,20 @@ export interface ReportInput {
 /** Every text into the page goes through xmlText (entities, no control characters). */
 const esc = xmlText;
 const fx = (v: number, d = 1) => (Number.isFinite(v) ? v.toFixed(d) : "∞");
+const KG_TO_LB = 1 / 0.45359237; // exact definition of the pound (common practice)
 
 const SPLICE_TEXT: Record<Joint["spliceType"], string> = {
   lap: "Lap splice: two plates, bolts in single shear",
   "butt-single-cover": "Butt splice with one cover plate: bolts in single shear",
   "butt-double-cover": "Butt splice with two cover plates: bolts in double shear",
 };
+
+/** What every writer below needs: the units and the text of core strings in them. */
+interface Ctx {
+  u: DisplayUnits;
+  /** A core text (SI words) as this report shows it, escaped. The user's own free text (names, document fields) is only escaped. */
+  t(s: string): string;
+}
 
 /** Which section of the report a check belongs to (twins: the section of their folded component). */
 function componentOf(f: FoldedCheck): string {
@@ -46,75 +60,282 @@ function componentOf(f: FoldedCheck): string {
   return f.component.replace(/, (each side|side [AB])$/, "").replace(/^./, (m) => m.toUpperCase());
 }
 
-function demandText(c: CheckResult): string {
-  return c.type === "strength" ? `${fx(c.demand_N / 1000)} kN` : lengthText(c.value_mm);
+function demandText(c: CheckResult, u: DisplayUnits): string {
+  return c.type === "strength" ? forceText(c.demand_N, u) : lengthText(c.value_mm, u);
 }
 
-function resistanceText(c: CheckResult): string {
-  return c.type === "strength" ? `${fx(c.resistance_N / 1000)} kN` : `${c.bound === "min" ? "≥" : "≤"} ${lengthText(c.limit_mm)}`;
+function resistanceText(c: CheckResult, u: DisplayUnits): string {
+  return c.type === "strength" ? forceText(c.resistance_N, u) : `${c.bound === "min" ? "≥" : "≤"} ${lengthText(c.limit_mm, u)}`;
 }
 
 /** Strength checks: the utilisation as a bar. Rules: the margin to the limit, never a utilisation. */
-function bar(c: CheckResult): string {
+function bar(c: CheckResult, u: DisplayUnits): string {
   if (c.type === "rule") {
     const margin = c.bound === "min" ? c.value_mm - c.limit_mm : c.limit_mm - c.value_mm;
-    const text = Math.abs(margin) < 0.005 ? "at the limit" : margin > 0 ? `${lengthText(margin)} to spare` : `${lengthText(-margin)} ${c.bound === "min" ? "short" : "over"}`;
+    const text = Math.abs(margin) < 0.005 ? "at the limit" : margin > 0 ? `${lengthText(margin, u)} to spare` : `${lengthText(-margin, u)} ${c.bound === "min" ? "short" : "over"}`;
     return `<span class="margin">${esc(text)}</span>`;
   }
   if (c.loadRatio === 0) return `<span class="margin">condition ${c.pass ? "holds" : "does not hold"}</span>`;
-  const u = Number.isFinite(c.utilisation) ? c.utilisation : 9.99;
-  const width = Math.min(100, Math.max(0, u * 100));
-  return `<div class="bar${c.pass ? "" : " over"}" role="img" aria-label="utilisation ${fx(u, 2)}"><span style="width:${fx(width, 1)}%"></span></div><span class="u">${fx(u, 2)}</span>`;
+  const v = Number.isFinite(c.utilisation) ? c.utilisation : 9.99;
+  const width = Math.min(100, Math.max(0, v * 100));
+  return `<div class="bar${c.pass ? "" : " over"}" role="img" aria-label="utilisation ${fx(v, 2)}"><span style="width:${fx(width, 1)}%"></span></div><span class="u">${fx(v, 2)}</span>`;
 }
 
-function checkRows(folded: FoldedCheck[], governing: string): string {
+/** Each check as its own tbody: the figures row and, under it, the formula row across the table (kept together). */
+function checkRows(folded: FoldedCheck[], governing: string, x: Ctx): string {
   return folded
-    .map(({ check: c, members, component }) => ({ c, component, governs: members.some((m) => m.id === governing), ids: members.map((m) => m.id).join(" ") }))
-    .map(
-      ({ c, component, governs, ids }) => `<tr class="${c.pass ? "pass" : "fail"}${governs ? " governing" : ""}" data-check="${esc(ids)}">
+    .map(({ check: c, members, component }) => {
+      const governs = members.some((m) => m.id === governing);
+      const ids = members.map((m) => m.id).join(" ");
+      return `<tbody class="check">
+<tr class="${c.pass ? "pass" : "fail"}${governs ? " governing" : ""}" data-check="${esc(ids)}">
   <td class="clause">${esc(citationText(c.citation))}</td>
-  <td><b>${esc(c.title)}</b><br><span class="muted">${esc(component)}</span></td>
-  <td class="formula"><div>${esc(c.formula)}</div><div class="subst">${esc(c.substituted)}</div>${c.notes.length ? `<div class="muted">${esc(c.notes.join("; "))}</div>` : ""}</td>
-  <td class="num">${esc(demandText(c))}</td>
-  <td class="num">${esc(resistanceText(c))}</td>
-  <td class="util">${bar(c)}</td>
+  <td><b>${x.t(c.title)}</b><br><span class="muted">${x.t(component)}</span></td>
+  <td class="num">${esc(demandText(c, x.u))}</td>
+  <td class="num">${esc(resistanceText(c, x.u))}</td>
+  <td class="util">${bar(c, x.u)}</td>
   <td class="result">${c.pass ? "pass" : "FAIL"}${governs ? "<br><span class=\"muted\">governs</span>" : ""}</td>
-</tr>`,
-    )
+</tr>
+<tr class="formula-row${governs ? " governing" : ""}"><td colspan="6" class="formula"><div>${x.t(c.formula)}</div><div class="subst">${x.t(c.substituted)}</div>${c.notes.length ? `<div class="muted">${x.t(c.notes.join("; "))}</div>` : ""}</td></tr>
+</tbody>`;
+    })
     .join("\n");
+}
+
+/** The sign-off block: the scenario's document fields, a blank line to fill in where one is absent. */
+function signOff(scenario: CheckableScenario, runDate: string, x: Ctx): string {
+  const d = scenario.document ?? {};
+  const cell = (v: string | undefined, key: string) => (v && v.trim() ? `<td data-field="${key}">${esc(v)}</td>` : `<td data-field="${key}" class="blank"></td>`);
+  return `<table class="signoff" id="sign-off">
+<tr><th>Job</th>${cell(d.job, "job")}<th>Calculation no.</th>${cell(d.calculationNumber, "calculation")}<th>Revision</th>${cell(d.revision, "revision")}</tr>
+<tr class="sign"><th>Prepared by<br><span class="muted">name, signature</span></th>${cell(d.preparedBy, "prepared")}<th>Checked by<br><span class="muted">name, signature</span></th>${cell(d.checkedBy, "checked")}<th>Date</th>${cell(d.date ?? runDate, "date")}</tr>
+</table>`;
+}
+
+/** Page 1 lists at most this many failing checks per row; the checks and result sections list them all. */
+const PAGE1_LIST = 3;
+
+/** A list cut for page 1: the first items, then how many more and where they are. */
+function page1List(items: string[]): string[] {
+  if (items.length <= PAGE1_LIST) return items;
+  return [...items.slice(0, PAGE1_LIST - 1), `… and ${items.length - PAGE1_LIST + 1} more: every one in 3. Checks and 4. Result`];
+}
+
+/** The verdict for page 1: FAIL with the failing checks named, or counted where there are many (the rows below name them). */
+function page1Verdict(verdict: SummaryRow): string {
+  const m = /^(FAIL — \d+ checks? fail): (.*)$/.exec(verdict.value);
+  if (!m || m[2]!.split("; ").length <= 2) return verdict.value;
+  return `${m[1]}: the strength and detailing rows below name them`;
+}
+
+function summaryTable(rows: SummaryRow[], x: Ctx): string {
+  return `<table class="kv summary">
+${rows
+  .slice(1)
+  .map((r) => `<tr class="${r.status}" data-row="${r.key}"><td>${esc(r.label)}</td><td>${x.t(r.value)}${page1List(r.detail).map((d) => `<br><span class="muted">${x.t(d)}</span>`).join("")}</td></tr>`)
+  .join("\n")}
+</table>`;
+}
+
+function designBasisSection(input: ReportInput, x: Ctx): string {
+  const { scenario, report, bom } = input;
+  const basis = designBasis(scenario, report, bom);
+  const factorRows = basis.factors.map((f) => `<tr data-factor="${esc(f.symbol)}"><td class="sym">${esc(f.symbol)}</td><td class="num">${f.value.toFixed(2)}</td><td>${esc(f.use)}</td><td class="src">${esc(f.source)}</td></tr>`).join("\n");
+  return `<section id="design-basis">
+<h2>Design basis</h2>
+<table class="kv">
+<tr><td>Design code</td><td>${esc(report.codeTitle)}</td></tr>
+<tr><td>${esc(basis.factorsTitle)}</td><td><table class="factors" id="factors"><tbody>${factorRows}</tbody></table><span class="muted">${esc(basis.factorsNote)}</span></td></tr>
+<tr><td>Plate material</td><td>${basis.plates.map((p) => esc(p)).join("<br>")}</td></tr>
+<tr><td>Bolts</td><td>${esc(basis.bolts.join("; "))}</td></tr>
+<tr><td>Units</td><td>${x.u === "us" ? "lengths in inches, forces in kips, stresses in ksi (US customary); the checks compute in SI units and convert exactly (1 in = 25.4 × 10⁻³ m)" : "lengths in mm, forces in kN, stresses in MPa"}</td></tr>
+<tr><td>Conventions</td><td><ul class="conventions">${report.conventions.map((c) => `<li>${x.t(c)}</li>`).join("")}</ul></td></tr>
+</table>
+</section>`;
+}
+
+function titleOf(scenario: CheckableScenario): string {
+  const l = scenario.load;
+  return l.factoredCompression_N !== undefined ? (l.factoredTension_N > 0 ? "splice under reversing load" : "splice in compression") : "tension splice";
+}
+
+/** Page 1: title, sign-off, summary, design basis, caution. */
+function firstPage(input: ReportInput, rows: SummaryRow[], x: Ctx): string {
+  const { scenario, report } = input;
+  return `<section id="page-1">
+<header class="sheet">
+  <h1>Calculation report — bolted ${titleOf(scenario)}</h1>
+  <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
+  <div class="scenario"><b>${esc(scenario.name)}</b>${scenario.project ? ` — ${esc(scenario.project)}` : ""}<br><span class="muted">${esc(report.codeTitle)}; ${esc(SPLICE_TEXT[input.joint.spliceType])}; layout: ${esc(input.origin)}</span></div>
+</header>
+${signOff(scenario, input.date, x)}
+<section id="summary">
+<h2>Summary</h2>
+<div class="verdict ${report.pass ? "is-pass" : "is-fail"}" id="summary-verdict">${x.t(page1Verdict(rows[0]!))}</div>
+${summaryTable(rows, x)}
+</section>
+${designBasisSection(input, x)}
+<div class="caution"><b>Caution.</b> ${esc(CAUTION)}</div>
+</section>`;
+}
+
+function loadRows(scenario: CheckableScenario, x: Ctx): string {
+  const l = scenario.load;
+  const F = (N: number) => forceText(N, x.u);
+  return [
+    l.factoredTension_N > 0 ? `<tr><td>Factored tension T</td><td>${F(l.factoredTension_N)}</td></tr>` : "",
+    l.serviceTension_N !== undefined ? `<tr><td>Service tension</td><td>${F(l.serviceTension_N)}</td></tr>` : "",
+    l.factoredCompression_N !== undefined ? `<tr><td>Factored compression C</td><td>${F(l.factoredCompression_N)}${l.factoredTension_N > 0 ? " (the load reverses: every check in both senses)" : ""}</td></tr>` : "",
+    l.serviceCompression_N !== undefined ? `<tr><td>Service compression</td><td>${F(l.serviceCompression_N)}</td></tr>` : "",
+    l.factoredCompression_N !== undefined && scenario.splice.type !== "lap" ? `<tr><td>Butt ends</td><td>${scenario.splice.endsInContact ? "in contact (prepared for bearing)" : "not in contact: the bolts and covers carry the whole compression"}</td></tr>` : "",
+  ].filter(Boolean).join("\n");
+}
+
+function layoutRows(input: ReportInput, x: Ctx): string {
+  const { scenario, joint } = input;
+  const b = scenario.bolts;
+  const L = (mm: number) => lengthText(mm, x.u);
+  const l = scenario.layout;
+  const rows: Array<[string, string]> = [["Pattern", joint.patternText + (joint.spliceType !== "lap" ? " per side of the butt" : "")]];
+  if (l.kind !== "holes") {
+    rows.push(["Pitch", L(l.pitch_mm)], ["Gauge", L(l.gauge_mm)], ["End distance", L(l.endDistance_mm)]);
+    if (joint.spliceType !== "lap") rows.push(["End distance at the butt", L(l.endDistanceAtButt_mm)], ["Butt gap", L(joint.buttGap_mm)]);
+  }
+  rows.push(["Bolts", `${joint.holes.length}`], ["Splice length", L(joint.spliceLength_mm)], ["Holes", `Ø${L(joint.holes[0]?.across_mm ?? 0)} (${b.hole})`]);
+  const words = boltWordsOf(scenario.code);
+  const grade = b.astmGrade ? `ASTM ${b.astmGrade}` : `property class ${b.propertyClass} (ISO 898-1)`;
+  return `<tr><td>Bolts</td><td>${esc(boltSizeText(b.size_mm))} ${esc(grade)}, ${esc(words.boltType(b))}; ${esc(words.threads(b.threadsInShearPlanes))}</td></tr>
+${rows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${x.t(v)}</td></tr>`).join("\n")}`;
+}
+
+function inputsSection(input: ReportInput, x: Ctx): string {
+  const { scenario, joint } = input;
+  const unit = x.u === "us" ? "in" : "mm";
+  const plateRows = joint.plates
+    .map((p) => `<tr><td>${esc(p.label)}</td><td class="num">${lengthNumber(p.spec.width_mm, x.u)}</td><td class="num">${lengthNumber(p.spec.thickness_mm, x.u)}</td><td>${esc(p.spec.grade)}</td><td class="num">${esc(`${stressText(p.fy_MPa, x.u)} / ${stressText(p.fu_MPa, x.u)}`)}</td><td>${esc(p.spec.edges)}</td><td class="num">${p.role === "packing" ? "—" : trimmed(p.forceShare, 3)}</td></tr>`)
+    .join("\n");
+  return `<section id="inputs" class="page">
+<h2>1. Inputs</h2>
+<div class="keep"><h3>Load</h3>
+<table class="kv">
+${loadRows(scenario, x)}
+</table></div>
+<div class="keep"><h3>Plates</h3>
+<table class="plates">
+<thead><tr><th>Plate</th><th>Width (${unit})</th><th>Thickness (${unit})</th><th>Steel</th><th>fy / fu</th><th>Edges</th><th>Share of T</th></tr></thead>
+<tbody>${plateRows}</tbody>
+</table></div>
+<div class="keep"><h3>Bolts and layout</h3>
+<table class="kv">
+${layoutRows(input, x)}
+</table></div>
+<div class="keep"><h3>Options</h3>
+<table class="kv">
+${optionRows(scenario)}
+</table></div>
+${bomSection(input.bom, x)}
+</section>`;
+}
+
+/** The scenario's options that its code's checks read. */
+function optionRows(scenario: CheckableScenario): string {
+  const o = scenario.options;
+  const rows: Array<[string, string]> = [["Exposed to corrosion", o.exposedToCorrosion ? "yes" : "no"]];
+  if (scenario.code.startsWith("is800")) rows.push(["Bolt net area Anb", o.boltNetArea], ["Bolt strength basis", `ISO 898-1 ${o.boltStrength} values`]);
+  if (scenario.code.startsWith("en1993")) rows.push(["Plate fy, fu", o.steelStrengths === "en1993-1-1" ? "EN 1993-1-1 Table 3.1" : "the product standard by thickness (EN 10025-2)"]);
+  if (scenario.code.startsWith("aisc")) {
+    rows.push(["Deformation at the bolt hole at service", o.bearingDeformation === "not-considered" ? "not a design consideration (J3.10(a)(1)(ii), (a)(2)(ii))" : "a design consideration (J3.10(a)(1)(i), (a)(2)(i))"]);
+    rows.push(["Fillers", o.fillersDeveloped ? "developed (J5.2(b))" : "not developed"]);
+  }
+  rows.push(["Efficiency basis", o.efficiencyBasis], ["Net-section load", o.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"]);
+  return rows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n");
+}
+
+function bomSection(bom: BillOfMaterials, x: Ctx): string {
+  const line = (item: string, quantity: number, notes: string) => `<tr><td>${x.t(item)}</td><td class="num">${quantity}</td><td>${x.t(notes)}</td></tr>`;
+  const D = (mm: number) => dimensionText(mm, x.u);
+  const mass = (kg: number) => (x.u === "us" ? `${fx(kg * KG_TO_LB, 1)} lb` : `${fx(kg, 2)} kg`);
+  const rows = [
+    ...bom.bolts.map((b) => line(b.item, b.quantity, b.standard)),
+    ...bom.nuts.map((b) => line(b.item, b.quantity, b.standard)),
+    ...bom.washers.map((b) => line(b.item, b.quantity, b.standard)),
+    ...bom.plates.map((p) => line(`${p.item} ${D(p.width_mm)} × ${D(p.thickness_mm)} × ${D(p.length_mm)} ${p.grade}`, p.quantity, `${mass(p.mass_kg)}, ${p.holes} holes Ø${D(p.holeDiameter_mm)}`)),
+  ].join("\n");
+  return `<div class="keep"><h3>Bill of materials</h3>
+<table class="bom">
+<thead><tr><th>Item${x.u === "us" ? "" : " (plates: width × thickness × length, mm)"}</th><th>Quantity</th><th>Standard / notes</th></tr></thead>
+<tbody>${rows}</tbody>
+</table>
+${bom.notes.length ? `<p class="muted">${bom.notes.map((n) => x.t(n)).join("<br>")}</p>` : ""}</div>`;
+}
+
+function drawingSection(svg: string, print: DrawingPrint | null, x: Ctx): string {
+  const caption = print
+    ? `Printed on A4 at <b id="print-scale">1:${print.printDenominator}</b> (ISO 5455): the A3 sheet, drawn at 1:${print.sheetDenominator}, reduced to ${trimmed(print.factor * 100, 1)} %; the scale in its title block refers to the A3 sheet. Print at 100 % (no "fit to page") for the scale to hold; the bar gives a check.`
+    : `<b id="print-scale">Not to scale</b>: the drawing is fitted to the page.`;
+  return `<section id="drawing" class="landscape">
+<h2>2. Drawing</h2>
+<figure class="drawing${print ? " to-scale" : ""}">${svg}</figure>
+<p class="drawing-caption">${caption}${print ? ` ${scaleBarSvg(print, x.u)}` : ""}</p>
+</section>`;
+}
+
+function checksSection(input: ReportInput, folded: FoldedCheck[], x: Ctx): string {
+  const { report } = input;
+  const groups = new Map<string, FoldedCheck[]>();
+  for (const f of folded) groups.set(componentOf(f), [...(groups.get(componentOf(f)) ?? []), f]);
+  return `<section id="checks" class="page">
+<h2>3. Checks</h2>
+${folded.length < report.checks.length ? `<p class="muted">${report.checks.length} checks; twins — the same check with the same figures on each side of the butt or on both cover plates — are printed once ("each side", "both cover plates"). The JSON export lists every check.</p>` : ""}
+${[...groups.entries()]
+  .map(
+    ([name, checks]) => `<h3>${x.t(name)}</h3>
+<table class="checks">
+<colgroup><col class="c-clause"><col class="c-check"><col class="c-demand"><col class="c-resist"><col class="c-util"><col class="c-result"></colgroup>
+<thead><tr><th>Clause</th><th>Check</th><th>Demand</th><th>Resistance / limit</th><th>Utilisation (rules: margin)</th><th>Result</th></tr></thead>
+${checkRows(checks, report.governing, x)}
+</table>`,
+  )
+  .join("\n")}
+</section>`;
+}
+
+function resultSection(input: ReportInput, rows: SummaryRow[], folded: FoldedCheck[], x: Ctx): string {
+  const { scenario, report } = input;
+  const summary = summarise(scenario, report);
+  const F = (N: number) => forceText(N, x.u);
+  const failed = folded.filter((f) => !f.check.pass);
+  const verdict = report.pass ? "PASS — every check passes" : `FAIL — ${failed.length} check${failed.length > 1 ? "s" : ""} fail`;
+  const strength = report.strengthBySense && scenario.load.factoredCompression_N !== undefined
+    ? Object.entries(report.strengthBySense).map(([k, v]) => `in ${k} ${F(v)}`).join("; ")
+    : `${F(report.jointStrength_N)} for a factored tension of ${F(scenario.load.factoredTension_N)}`;
+  return `<section id="result" class="keep">
+<h2>4. Result</h2>
+<table class="kv">
+<tr><td>Joint design strength</td><td>${esc(strength)}</td></tr>
+<tr><td>Governing check</td><td>${summary.governing ? x.t(`${summary.governing.title}, ${summary.governing.component} — ${summary.governing.clause}`) : "—"}</td></tr>
+<tr><td>Efficiency</td><td>${fx(report.efficiency * 100)} %<br><span class="muted">${x.t(report.efficiencyDefinition)}</span></td></tr>
+${rows
+  .filter((r) => r.key === "strength-utilisation" || r.key === "service-utilisation" || r.key === "detailing")
+  .map((r) => `<tr><td>${esc(r.label)}</td><td>${x.t(r.value)}${r.detail.map((d) => `<br><span class="muted">${x.t(d)}</span>`).join("")}</td></tr>`)
+  .join("\n")}
+</table>
+${report.warnings.length ? `<h3>Warnings</h3><ul>${report.warnings.map((w) => `<li><b>${esc(w.id)}</b>: ${x.t(w.message)}</li>`).join("")}</ul>` : ""}
+<div class="verdict" id="verdict">Verdict: ${esc(verdict)}</div>
+${failed.length ? `<p>Failing: ${failed.map((f) => x.t(`${f.check.title} (${f.component})`)).join("; ")}</p>` : ""}
+<div class="caution"><b>Caution.</b> ${esc(CAUTION)}</div>
+</section>`;
 }
 
 export function renderReportHtml(input: ReportInput): string {
   const { scenario, joint, report, bom } = input;
-  const b = scenario.bolts;
+  const u: DisplayUnits = scenario.units === "us" ? "us" : "si";
+  const x: Ctx = { u, t: (s) => esc(displayText(s, u)) };
   const svg = renderSvg({ scenario, joint, report, bom, date: input.date }).replace(/^<\?xml[^>]*>\s*/, "");
+  const print = drawingPrint(svg);
   const folded = foldTwins(report.checks);
-  const groups = new Map<string, FoldedCheck[]>();
-  for (const f of folded) {
-    const key = componentOf(f);
-    groups.set(key, [...(groups.get(key) ?? []), f]);
-  }
-  const summary = summarise(scenario, report);
-  const rows = summaryRows(summary);
-  const failed = folded.filter((f) => !f.check.pass);
-  const verdict = report.pass ? "PASS — every check passes" : `FAIL — ${failed.length} check${failed.length > 1 ? "s" : ""} fail`;
-  const plateRows = joint.plates
-    .map((p) => `<tr><td>${esc(p.label)}</td><td class="num">${lengthNumber(p.spec.width_mm)}</td><td class="num">${lengthNumber(p.spec.thickness_mm)}</td><td>${esc(p.spec.grade)}</td><td class="num">${p.fy_MPa} / ${p.fu_MPa}</td><td>${esc(p.spec.edges)}</td><td class="num">${p.role === "packing" ? "—" : trimmed(p.forceShare, 3)}</td></tr>`)
-    .join("\n");
-  const l = scenario.layout;
-  const layoutRows: Array<[string, string]> = [["Pattern", joint.patternText + (joint.spliceType !== "lap" ? " per side of the butt" : "")]];
-  if (l.kind !== "holes") {
-    layoutRows.push(["Pitch", lengthText(l.pitch_mm)], ["Gauge", lengthText(l.gauge_mm)], ["End distance", lengthText(l.endDistance_mm)]);
-    if (joint.spliceType !== "lap") layoutRows.push(["End distance at the butt", lengthText(l.endDistanceAtButt_mm)], ["Butt gap", lengthText(joint.buttGap_mm)]);
-  }
-  layoutRows.push(["Bolts", `${joint.holes.length}`], ["Splice length", lengthText(joint.spliceLength_mm)], ["Holes", `Ø${lengthText(joint.holes[0]?.across_mm ?? 0)} (${b.hole})`]);
-  const bomRows = [
-    ...bom.bolts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
-    ...bom.nuts.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
-    ...bom.washers.map((x) => `<tr><td>${esc(x.item)}</td><td class="num">${x.quantity}</td><td>${esc(x.standard)}</td></tr>`),
-    ...bom.plates.map((x) => `<tr><td>${esc(`${x.item} ${lengthNumber(x.width_mm)} × ${lengthNumber(x.thickness_mm)} × ${lengthNumber(x.length_mm)} ${x.grade}`)}</td><td class="num">${x.quantity}</td><td>${fx(x.mass_kg, 2)} kg, ${x.holes} holes Ø${x.holeDiameter_mm}</td></tr>`),
-  ].join("\n");
-
+  const rows = summaryRows(summarise(scenario, report), u);
+  const units = u === "us" ? "dimensions in inches, forces in kips, stresses in ksi" : "dimensions in mm, forces in kN, stresses in MPa";
   return `<!DOCTYPE html>
 <html lang="en">
 <head>
@@ -123,154 +344,16 @@ export function renderReportHtml(input: ReportInput): string {
 <meta name="generator" content="splicewright ${esc(input.version)}">
 <title>${esc(scenario.name)} — calculation report</title>
 <style>
-  :root { --ink: #111; --muted: #555; --rule: #999; }
-  * { box-sizing: border-box; }
-  body { font-family: "DejaVu Sans", "Liberation Sans", Arial, Helvetica, sans-serif; color: var(--ink); margin: 0 auto; max-width: 1100px; padding: 16px 24px; font-size: 13px; line-height: 1.35; }
-  header.sheet { border: 1.5px solid var(--ink); display: grid; grid-template-columns: 1fr auto; margin-bottom: 12px; }
-  header.sheet h1 { font-size: 18px; margin: 0; padding: 8px 10px; border-right: 1px solid var(--ink); }
-  header.sheet .meta { padding: 6px 10px; font-size: 12px; }
-  h2 { font-size: 15px; border-bottom: 1.5px solid var(--ink); padding-bottom: 2px; margin: 18px 0 8px; }
-  h3 { font-size: 13px; margin: 14px 0 4px; }
-  table { border-collapse: collapse; width: 100%; margin: 4px 0 10px; }
-  th, td { border: 1px solid var(--rule); padding: 3px 6px; vertical-align: top; text-align: left; }
-  th { background: #eee; font-weight: 600; }
-  td.num { text-align: right; white-space: nowrap; }
-  td.clause { font-size: 12px; min-width: 8em; max-width: 13em; }
-  td.formula { font-family: "DejaVu Sans Mono", "Liberation Mono", Consolas, monospace; font-size: 11px; }
-  td.formula .subst { margin-top: 2px; }
-  .muted { color: var(--muted); font-size: 11px; font-family: inherit; }
-  td.util { width: 130px; white-space: nowrap; }
-  .bar { display: inline-block; width: 80px; height: 10px; border: 1px solid var(--ink); vertical-align: middle; position: relative; }
-  .bar span { display: block; height: 100%; background: #444; }
-  .bar.over span { background: repeating-linear-gradient(45deg, #000 0 3px, #fff 3px 5px); }
-  .u { margin-left: 6px; font-variant-numeric: tabular-nums; }
-  tr.fail td.result { font-weight: bold; }
-  tr.governing td { border-top: 2px solid var(--ink); border-bottom: 2px solid var(--ink); }
-  .kv td:first-child { width: 32%; color: var(--muted); }
-  figure.drawing { margin: 0; border: 1px solid var(--rule); }
-  figure.drawing svg { width: 100%; height: auto; display: block; }
-  .verdict { border: 2px solid var(--ink); padding: 8px 12px; font-size: 16px; font-weight: bold; margin: 8px 0; }
-  .verdict.is-pass { border-color: #1a6b2a; color: #1a6b2a; }
-  .verdict.is-fail { border-color: #b00020; color: #b00020; border-width: 3px; }
-  table.summary tr.fail td:last-child { color: #b00020; font-weight: bold; }
-  table.summary tr.warn td:last-child { color: #8a5a00; }
-  tr.fail td.result { color: #b00020; }
-  .caution { border: 1px solid var(--ink); padding: 8px 12px; font-size: 12px; margin-top: 16px; }
-  footer { margin-top: 18px; font-size: 11px; color: var(--muted); }
-  @page { size: A4; margin: 14mm 12mm 16mm; @bottom-right { content: "page " counter(page) " of " counter(pages); font-size: 9pt; } @bottom-left { content: "splicewright calculation report"; font-size: 9pt; } }
-  @media print {
-    body { max-width: none; padding: 0; font-size: 10pt; }
-    section.page { break-before: page; }
-    tr, .verdict, .caution, figure.drawing { break-inside: avoid; }
-    thead { display: table-header-group; }
-    a { color: inherit; text-decoration: none; }
-  }
+${REPORT_CSS}${print ? `\n  @media print { figure.drawing.to-scale { width: ${trimmed(print.width_mm, 2)}mm; } }` : ""}
 </style>
 </head>
 <body>
-<header class="sheet">
-  <h1>Calculation report — bolted ${scenario.load.factoredCompression_N !== undefined ? (scenario.load.factoredTension_N > 0 ? "splice under reversing load" : "splice in compression") : "tension splice"}</h1>
-  <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
-</header>
-
-<section id="summary">
-<h2>Summary</h2>
-<div class="verdict ${report.pass ? "is-pass" : "is-fail"}" id="summary-verdict">${esc(rows[0]!.value)}</div>
-<table class="kv summary">
-${rows
-  .slice(1)
-  .map((r) => `<tr class="${r.status}" data-row="${r.key}"><td>${esc(r.label)}</td><td>${esc(r.value)}${r.detail.map((d) => `<br><span class="muted">${esc(d)}</span>`).join("")}</td></tr>`)
-  .join("\n")}
-</table>
-</section>
-
-<section id="project">
-<h2>1. Project and scenario</h2>
-<table class="kv">
-<tr><td>Scenario</td><td>${esc(scenario.name)}</td></tr>
-<tr><td>Project</td><td>${esc(scenario.project ?? "—")}</td></tr>
-<tr><td>Design code</td><td>${esc(report.codeTitle)}</td></tr>
-<tr><td>Splice</td><td>${esc(SPLICE_TEXT[joint.spliceType])}</td></tr>
-<tr><td>Layout</td><td>${esc(input.origin)}</td></tr>
-</table>
-</section>
-
-<section id="inputs">
-<h2>2. Inputs</h2>
-<h3>Load</h3>
-<table class="kv">
-${scenario.load.factoredTension_N > 0 ? `<tr><td>Factored tension T</td><td>${fx(scenario.load.factoredTension_N / 1000)} kN</td></tr>` : ""}
-${scenario.load.serviceTension_N !== undefined ? `<tr><td>Service tension</td><td>${fx(scenario.load.serviceTension_N / 1000)} kN</td></tr>` : ""}
-${scenario.load.factoredCompression_N !== undefined ? `<tr><td>Factored compression C</td><td>${fx(scenario.load.factoredCompression_N / 1000)} kN${scenario.load.factoredTension_N > 0 ? " (the load reverses: every check in both senses)" : ""}</td></tr>` : ""}
-${scenario.load.serviceCompression_N !== undefined ? `<tr><td>Service compression</td><td>${fx(scenario.load.serviceCompression_N / 1000)} kN</td></tr>` : ""}
-${scenario.load.factoredCompression_N !== undefined && scenario.splice.type !== "lap" ? `<tr><td>Butt ends</td><td>${scenario.splice.endsInContact ? "in contact (prepared for bearing)" : "not in contact: the bolts and covers carry the whole compression"}</td></tr>` : ""}
-</table>
-<h3>Plates</h3>
-<table>
-<thead><tr><th>Plate</th><th>Width (mm)</th><th>Thickness (mm)</th><th>Steel</th><th>fy / fu (MPa)</th><th>Edges</th><th>Share of T</th></tr></thead>
-<tbody>${plateRows}</tbody>
-</table>
-<h3>Bolts and layout</h3>
-<table class="kv">
-<tr><td>Bolts</td><td>${esc(boltSizeText(b.size_mm))} ${b.astmGrade ? `ASTM ${b.astmGrade}` : `property class ${b.propertyClass} (ISO 898-1)`}, ${esc(boltWordsOf(scenario.code).boltType(b))}; ${esc(boltWordsOf(scenario.code).threads(b.threadsInShearPlanes))}</td></tr>
-${layoutRows.map(([k, v]) => `<tr><td>${esc(k)}</td><td>${esc(v)}</td></tr>`).join("\n")}
-</table>
-<h3>Options</h3>
-<table class="kv">
-<tr><td>Exposed to corrosion</td><td>${scenario.options.exposedToCorrosion ? "yes" : "no"}</td></tr>
-<tr><td>Bolt net area Anb</td><td>${esc(scenario.options.boltNetArea)}</td></tr>
-<tr><td>Bolt strength basis</td><td>ISO 898-1 ${esc(scenario.options.boltStrength)} values</td></tr>
-<tr><td>Efficiency basis</td><td>${esc(scenario.options.efficiencyBasis)}</td></tr>
-<tr><td>Net-section load</td><td>${scenario.options.netSectionLoad === "transferred" ? "load already transferred to bolts ahead of each path" : "the whole plate force on every path"}</td></tr>
-</table>
-</section>
-
-<section id="drawing" class="page">
-<h2>3. Drawing</h2>
-<figure class="drawing">${svg}</figure>
-<h3>Bill of materials</h3>
-<table>
-<thead><tr><th>Item</th><th>Quantity</th><th>Standard / notes</th></tr></thead>
-<tbody>${bomRows}</tbody>
-</table>
-${bom.notes.length ? `<p>${bom.notes.map(esc).join("<br>")}</p>` : ""}
-</section>
-
-<section id="checks" class="page">
-<h2>4. Checks</h2>
-${folded.length < report.checks.length ? `<p class="muted">${report.checks.length} checks; twins — the same check with the same figures on each side of the butt or on both cover plates — are printed once ("each side", "both cover plates"). The JSON export lists every check.</p>` : ""}
-${[...groups.entries()]
-  .map(
-    ([name, checks]) => `<h3>${esc(name)}</h3>
-<table class="checks">
-<thead><tr><th>Clause</th><th>Check</th><th>Formula and substituted values</th><th>Demand</th><th>Resistance / limit</th><th>Utilisation (rules: margin)</th><th>Result</th></tr></thead>
-<tbody>
-${checkRows(checks, report.governing)}
-</tbody>
-</table>`,
-  )
-  .join("\n")}
-</section>
-
-<section id="result" class="page">
-<h2>5. Result</h2>
-<table class="kv">
-<tr><td>Joint design strength</td><td>${report.strengthBySense && scenario.load.factoredCompression_N !== undefined ? esc(Object.entries(report.strengthBySense).map(([k, v]) => `in ${k} ${fx(v / 1000)} kN`).join("; ") + ` for ${loadLabel(scenario.load)}`) : `${fx(report.jointStrength_N / 1000)} kN for a factored tension of ${fx(scenario.load.factoredTension_N / 1000)} kN`}</td></tr>
-<tr><td>Governing check</td><td>${summary.governing ? esc(`${summary.governing.title}, ${summary.governing.component} — ${summary.governing.clause}`) : "—"}</td></tr>
-<tr><td>Efficiency</td><td>${fx(report.efficiency * 100)} %<br><span class="muted">${esc(report.efficiencyDefinition)}</span></td></tr>
-${rows
-  .filter((r) => r.key === "strength-utilisation" || r.key === "service-utilisation" || r.key === "detailing")
-  .map((r) => `<tr><td>${esc(r.label)}</td><td>${esc(r.value)}${r.detail.map((d) => `<br><span class="muted">${esc(d)}</span>`).join("")}</td></tr>`)
-  .join("\n")}
-</table>
-${report.warnings.length ? `<h3>Warnings</h3><ul>${report.warnings.map((w) => `<li><b>${esc(w.id)}</b>: ${esc(w.message)}</li>`).join("")}</ul>` : ""}
-<h3>Conventions</h3>
-<ul>${report.conventions.map((c) => `<li>${esc(c)}</li>`).join("")}</ul>
-<div class="verdict" id="verdict">Verdict: ${esc(verdict)}</div>
-${failed.length ? `<p>Failing: ${failed.map((f) => esc(`${f.check.title} (${f.component})`)).join("; ")}</p>` : ""}
-<div class="caution"><b>Caution.</b> ${esc(CAUTION)}</div>
-</section>
-<footer>Generated by splicewright ${esc(input.version)} on ${esc(input.date)}. All dimensions in mm, forces in kN, stresses in MPa.</footer>
+${firstPage(input, rows, x)}
+${inputsSection(input, x)}
+${drawingSection(svg, print, x)}
+${checksSection(input, folded, x)}
+${resultSection(input, rows, folded, x)}
+<footer>Generated by splicewright ${esc(input.version)} on ${esc(input.date)}. All ${units}.</footer>
 </body>
 </html>
 `;
