@@ -19,7 +19,7 @@ import { main } from "../src/cli/main.js";
 import { parseScenario } from "../src/io/scenario.js";
 import { assemblyOf } from "../src/export/bolt-list.js";
 import type { CheckableScenario } from "../src/model/scenario.js";
-import { scenarioPath } from "./helpers/cli.js";
+import { cliAsync, scenarioPath } from "./helpers/cli.js";
 
 async function run(args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
   const out: string[] = [];
@@ -84,6 +84,16 @@ describe("IS 800 demos: IS words and assemblies only", () => {
     expectOnly("is", outs);
     expect(outs[0]![1]).toMatch(/property classes: .*\(bearing type\)/);
   }, 60_000);
+  it("warehouse-roof-project.yaml: schedule table, JSON and the schedule and order CSVs", async () => {
+    const dir = mkdtempSync(join(tmpdir(), "splicewright-words-schedule-"));
+    // The schedule's search workers are built modules: the built CLI runs it (as a user does).
+    const r = await cliAsync(["schedule", scenarioPath("warehouse-roof-project.yaml"), "--max-types", "2", "--out", dir]);
+    expect(r.code, r.stderr).toBe(0);
+    const outs: Array<[string, string]> = [["schedule", r.stdout]];
+    for (const f of readdirSync(dir).sort()) outs.push([`schedule → ${f}`, readFileSync(join(dir, f), "utf8")]);
+    expect(outs.length).toBeGreaterThanOrEqual(4);
+    expectOnly("is", outs);
+  }, 120_000);
   it("compare of property classes under IS 800 (one code)", async () => {
     const r = await run(["compare", scenarioPath("footbridge-tie.yaml"), "--classes", "8.8,10.9"]);
     expect(r.code, r.stderr).toBe(0);
@@ -108,10 +118,8 @@ describe("EN 1993-1-8 demos: EN words and assemblies only", () => {
 });
 
 describe("AISC 360-16 demos: AISC words and ASTM assemblies only", () => {
-  it("canopy-tie-us.yaml: check, brief, JSON", async () => {
-    // Export and report of inch bolts are issue 17 item 1 (another branch): when they land, call
-    // outputsOf("canopy-tie-us.yaml", true) here so the drawing, DXF, CSV, JSON and report are grepped too.
-    const outs = await outputsOf("canopy-tie-us.yaml", false);
+  it("canopy-tie-us.yaml: check, brief, JSON, drawing, DXF, CSV, export JSON and report", async () => {
+    const outs = await outputsOf("canopy-tie-us.yaml", true);
     expectOnly("aisc", outs);
     // AISC 360-16 Table J3.2: threads not excluded from the shear planes, the N designation (common practice).
     expect(outs[0]![1]).toMatch(/bearing-type, snug-tight, threads included in the shear planes \(N\)/);
