@@ -69,7 +69,9 @@ export function usDimensionText(mm: number): string {
   const sign = mm < 0 && sixteenths > 0 ? "-" : "";
   if (sixteenths < 12 * 16) return `${sign}${inchesAndFraction(sixteenths)}"`;
   const feet = Math.floor(sixteenths / (12 * 16));
-  return `${sign}${feet}'-${inchesAndFraction(sixteenths - feet * 12 * 16)}"`;
+  const rest = sixteenths - feet * 12 * 16;
+  // Under an inch after the feet, the whole inches are written as 0: 1'-0 3/8" (common practice).
+  return `${sign}${feet}'-${rest > 0 && rest < 16 ? "0 " : ""}${inchesAndFraction(rest)}"`;
 }
 
 /** A dimension for a drawing or a bill of materials: mm as `lengthNumber` gives it, or US feet-inches-fractions. */
