@@ -238,7 +238,8 @@ function planDimensions(c: Ctx): PlanDims {
   // Across: edge, gauges, edge on the narrowest loaded plate, measured at the main plate's break, the
   // gauge lines run on as centre lines; then the width.
   const loaded = joint.plates.filter((p) => p.role !== "packing");
-  const narrow = loaded.reduce((a, b) => (b.spec.width_mm < a.spec.width_mm ? b : a));
+  // The narrowest loaded plate, of equals the one reaching farthest right: its edges' extension lines never run along another plate's edge.
+  const narrow = loaded.reduce((a, b) => (b.spec.width_mm < a.spec.width_mm - 1e-9 || (Math.abs(b.spec.width_mm - a.spec.width_mm) < 1e-9 && drawnExtent(b, c.ext)[1] > drawnExtent(a, c.ext)[1]) ? b : a));
   const xEdge = drawnExtent(narrow, c.ext)[1];
   const xDim1 = c.xRight + loadSpace(c) + 6 * k;
   const xDim2 = xDim1 + 7 * k;
@@ -493,10 +494,17 @@ function thicknessDims(c: Ctx, zOf: Map<string, [number, number]>): void {
   const xAt = xEnd + dir * 5 * k;
   const faces = group.stack.map((id) => zOf.get(id)!);
   const zs = [...new Set(faces.flatMap(([t, b]) => [t, b]))].sort((a, b) => b - a);
+  // A face that runs on past the dimension line (a main plate's) needs no extension line: the dimension line meets it.
+  const runsOn = (z: number) => group.stack.some((id) => {
+    const p = joint.plates.find((q) => q.id === id)!;
+    const [x0, x1] = drawnExtent(p, c.ext);
+    const [zt, zb] = zOf.get(id)!;
+    return x0 < xAt && x1 > xAt && (Math.abs(zt - z) < 1e-9 || Math.abs(zb - z) < 1e-9);
+  });
   for (let i = 1; i < zs.length; i++) {
     const a = zs[i - 1]!;
     const b = zs[i]!;
-    prims.push({ kind: "dim", view: "section", from: [xEnd, a], to: [xEnd, b], at: xAt, direction: "y", value: a - b, text: c.dimText(a - b), extension: [i === 1, i === zs.length - 1] });
+    prims.push({ kind: "dim", view: "section", from: [xEnd, a], to: [xEnd, b], at: xAt, direction: "y", value: a - b, text: c.dimText(a - b), extension: [i === 1 && !runsOn(a), i === zs.length - 1 && !runsOn(b)] });
   }
 }
 
