@@ -309,11 +309,11 @@ function planAnnotations(c: Ctx, options: DrawingOptions, marks: Array<{ plate: 
     const [x0, x1] = drawnExtent(p, c.ext);
     const h = p.spec.width_mm / 2;
     const inset = 0.25 * Math.min(p.spec.width_mm, 40 * k);
-    if (p.continues !== "none" && p !== c.top) {
+    if (p.continues !== "none") {
       const x = p.continues === "left" ? x0 + 0.4 * c.ext : x1 - 0.4 * c.ext;
       balloon(c, [x, h - inset], [x, c.W / 2 + 7 * k], markOf(marks, p.id));
     } else {
-      const x = p.continues === "left" ? x0 + 0.4 * c.ext : p.continues === "right" ? x1 - 0.4 * c.ext : x0 + Math.min(0.5 * ((c.xs[0] ?? x0) - x0), 20 * k);
+      const x = x0 + Math.min(0.5 * ((c.xs[0] ?? x0) - x0), 20 * k);
       balloon(c, [x, -h + inset], [x, -c.W / 2 - 7 * k], markOf(marks, p.id));
     }
   }
