@@ -158,7 +158,7 @@ export function buildDrawing(joint: Joint, lengths: readonly BoltLengthLine[], o
   const fromLowerEdge = gaugeY + c.top.spec.width_mm / 2;
   const title = "SECTION A–A";
   c.prims.push({ kind: "text", layer: "text", at: sectionTitleAt, height: LETTERING_MM.title * c.k, text: title, anchor: "start", role: "title" });
-  const subX = c.xLeft + (TEXT_WIDTH_PER_HEIGHT * LETTERING_MM.title * title.length + 4) * c.k;
+  const subX = c.xLeft + (0.75 * LETTERING_MM.title * title.length + 3) * c.k; // past the title in a wide CAD font too
   c.prims.push({ kind: "text", layer: "text", at: [subX, sectionTitleAt[1]], height: LETTERING_MM.dimension * c.k, text: `cut on the gauge line ${c.dimText(fromLowerEdge)} from the lower edge of ${c.top.label}`, anchor: "start", role: "subtitle" });
   const bounds = extents(c.prims, c.k);
   return { primitives: c.prims, min: bounds.min, max: bounds.max, planTitleAt, sectionTitleAt, marks, section: { gaugeY_mm: gaugeY, fromLowerEdge_mm: fromLowerEdge, plate: c.top.id } };

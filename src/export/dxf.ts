@@ -21,7 +21,7 @@ import type { BillOfMaterials } from "./bolt-list.js";
 import { dxfText } from "../text/escape.js";
 import { arrowHeadPoints, buildDrawing, EXTENSION_GAP_MM, EXTENSION_OVERRUN_MM, LETTERING_MM, scaleText, type Layer, type Point, type Primitive } from "./drawing.js";
 import { loadSenses } from "../model/load.js";
-import { boltSpecText, displayUnitsOf, drawingLoadText, partsListRows, titleRows } from "./svg.js";
+import { displayUnitsOf, drawingLoadText, partsListRows, titleRows } from "./svg.js";
 
 export const DXF_LAYERS: Record<Layer, string> = {
   outlines: "OUTLINES",
@@ -86,7 +86,6 @@ export function renderDxf(input: DxfInput): string {
   const lines = [
     `splicewright - bolted tension splice: ${titleRows(input, k)[1]![1]}`,
     ...rows.slice(2),
-    `Parts: ${boltSpecText(input)}`,
     ...parts,
     `drawn for ${scaleText(k)}; ${inch ? "dimensions in inches" : "dimensions in mm"}. To be verified by a qualified engineer against the governing code edition, its national annex and local regulations.`,
   ];
