@@ -35,7 +35,7 @@ export type Primitive =
   | { kind: "poly"; layer: Layer; points: Point[]; closed: boolean; plate?: PlateId; fill?: "section" | "white"; role?: LineRole }
   | { kind: "circle"; layer: Layer; c: Point; r: number; hole?: Hole; fill?: "black" }
   | { kind: "text"; layer: Layer; at: Point; height: number; text: string; anchor: "start" | "middle" | "end"; rotate?: number; role?: "title" | "subtitle" | "callout" | "mark" | "load" | "cutting-plane" }
-  | { kind: "dim"; from: Point; to: Point; at: number; direction: "x" | "y"; value: number; text: string; extension: [boolean, boolean]; view: "plan" | "section" }
+  | { kind: "dim"; from: Point; to: Point; at: number; direction: "x" | "y"; value: number; text: string; extension: [boolean, boolean]; view: "plan" | "section"; textAt?: number }
   | { kind: "arrow"; layer: Layer; from: Point; to: Point; role?: "load" | "cutting-plane" }
   | { kind: "hatch"; part: PlateId; angle_deg: number; spacing_mm: number; lines: Array<[Point, Point]> };
 
@@ -361,7 +361,11 @@ function drawSection(c: Ctx, lengths: readonly BoltLengthLine[], marks: Array<{ 
   // Bolt length: from under the head to the end of the shank, beside the leftmost bolt.
   if (leftBolt) {
     const xd = leftBolt.x - 1.6 * d - 2 * k;
-    prims.push({ kind: "dim", view: "section", from: [leftBolt.x - 0.8 * d, leftBolt.zHead], to: [leftBolt.x - d / 2, leftBolt.zHead - leftBolt.L], at: xd, direction: "y", value: leftBolt.L, text: c.dimText(leftBolt.L), extension: [false, true] });
+    // The value sits beside the part of the shank below the plies, clear of the plates' edges.
+    const zStackBottom = zTop - stackThickness(joint);
+    const zEnd = leftBolt.zHead - leftBolt.L;
+    const textAt = zStackBottom > zEnd ? (leftBolt.zHead - (zStackBottom + zEnd) / 2) / leftBolt.L : 0.5;
+    prims.push({ kind: "dim", view: "section", from: [leftBolt.x - 0.8 * d, leftBolt.zHead], to: [leftBolt.x - d / 2, zEnd], at: xd, direction: "y", value: leftBolt.L, text: c.dimText(leftBolt.L), extension: [false, true], textAt });
   }
   thicknessDims(c, zOf);
   return Math.min(lowest, sectionMarks(c, zOf, marks, zTop));

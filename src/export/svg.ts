@@ -279,7 +279,8 @@ function renderDim(p: Extract<Primitive, { kind: "dim" }>, P: (p: Point) => Poin
     ? `<polygon points="${arrowHead(a, b, arrow)}"/><polygon points="${arrowHead(b, a, arrow)}"/>`
     : `<polygon points="${arrowHead(a, [a[0] - u[0], a[1] - u[1]], arrow)}"/><polygon points="${arrowHead(b, [b[0] + u[0], b[1] + u[1]], arrow)}"/>` +
       `<line x1="${n(a[0] - u[0] * (arrow + 1.5))}" y1="${n(a[1] - u[1] * (arrow + 1.5))}" x2="${n(b[0] + u[0] * (arrow + 1.5))}" y2="${n(b[1] + u[1] * (arrow + 1.5))}"/>`;
-  const mid: Point = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
+  const f = p.textAt ?? 0.5;
+  const mid: Point = [a[0] + (b[0] - a[0]) * f, a[1] + (b[1] - a[1]) * f];
   const short = textW > len - 1;
   const text = along
     ? `<text x="${n(mid[0])}" y="${n(mid[1] - 1 - (short ? 0 : 0))}" font-size="${h}" text-anchor="middle">${esc(p.text)}</text>`
