@@ -352,7 +352,7 @@ function drawSection(c: Ctx, lengths: readonly BoltLengthLine[], marks: Array<{ 
   const zOf = zFaces(joint, zTop);
   sectionPlates(c, zOf, cut);
   let lowest = zTop - stackThickness(joint);
-  let leftBolt: { x: number; zHead: number; L: number } | null = null;
+  let leftBolt: { x: number; zHead: number; L: number; washered: boolean } | null = null;
   for (const hole of cut) {
     const b = drawBolt(c, hole, lengths, zOf);
     lowest = Math.min(lowest, b.zHead - b.L - 2 * k);
@@ -365,7 +365,7 @@ function drawSection(c: Ctx, lengths: readonly BoltLengthLine[], marks: Array<{ 
     const zStackBottom = zTop - stackThickness(joint);
     const zEnd = leftBolt.zHead - leftBolt.L;
     const textAt = zStackBottom > zEnd ? (leftBolt.zHead - (zStackBottom + zEnd) / 2) / leftBolt.L : 0.5;
-    prims.push({ kind: "dim", view: "section", from: [leftBolt.x - 0.8 * d, leftBolt.zHead], to: [leftBolt.x - d / 2, zEnd], at: xd, direction: "y", value: leftBolt.L, text: c.dimText(leftBolt.L), extension: [false, true], textAt });
+    prims.push({ kind: "dim", view: "section", from: [leftBolt.x - 0.8 * d, leftBolt.zHead], to: [leftBolt.x - d / 2, zEnd], at: xd, direction: "y", value: leftBolt.L, text: c.dimText(leftBolt.L), extension: [leftBolt.washered, true], textAt }); // under the head: the plies' face, or a washer's
   }
   thicknessDims(c, zOf);
   return Math.min(lowest, sectionMarks(c, zOf, marks, zTop));
@@ -461,7 +461,7 @@ function clipToRect(base: Point, u: Point, x0: number, x1: number, y0: number, y
 }
 
 /** A bolt in view: head, washers, shank, nut, its centre line. Returns the underside of the head and the length. */
-function drawBolt(c: Ctx, hole: Hole, lengths: readonly BoltLengthLine[], zOf: Map<string, [number, number]>): { zHead: number; L: number } {
+function drawBolt(c: Ctx, hole: Hole, lengths: readonly BoltLengthLine[], zOf: Map<string, [number, number]>): { zHead: number; L: number; washered: boolean } {
   const { joint, k, prims } = c;
   const d = joint.boltDiameter_mm;
   const line = lengths.find((l) => l.group === hole.group);
@@ -483,7 +483,7 @@ function drawBolt(c: Ctx, hole: Hole, lengths: readonly BoltLengthLine[], zOf: M
   prims.push(rect(d, zb - wn, zb));
   prims.push(rect(0.8 * d, zb - wn - nut, zb - wn));
   prims.push({ kind: "line", layer: "centre", a: [x, zHead + head + 2 * k], b: [x, zHead - L - 2 * k] });
-  return { zHead, L };
+  return { zHead, L, washered: underHead > 0 };
 }
 
 /** Thicknesses of the plies (packing included) as a vertical chain just past a cover end, on the packed side if any. */
