@@ -377,3 +377,46 @@ describe("8. hatching per part and break lines", () => {
     }
   });
 });
+
+describe("legibility: nothing written over anything else written", () => {
+  type Box = { t: string; x0: number; x1: number; y0: number; y1: number; balloon?: boolean };
+  /** Boxes of every text, dimension value and mark circle, model mm; a text's width estimated at 0.6 × its height per character (a sans-serif's average advance: common practice). */
+  function boxes(d: Loaded): Box[] {
+    const { drawing, scale: k } = layoutSheet({ ...d, bom: billOfMaterials(d.joint, d.scenario), date: "2026-01-01" });
+    const out: Box[] = [];
+    const H = 2.5 * k;
+    for (const p of drawing.primitives) {
+      if (p.kind === "text") {
+        const w = 0.6 * p.height * p.text.length;
+        const x0 = p.anchor === "start" ? p.at[0] : p.anchor === "end" ? p.at[0] - w : p.at[0] - w / 2;
+        out.push({ t: p.text, x0, x1: x0 + w, y0: p.at[1] - 0.2 * p.height, y1: p.at[1] + 0.8 * p.height });
+      } else if (p.kind === "dim") {
+        const f = p.textAt ?? 0.5;
+        const w = 0.6 * H * p.text.length;
+        if (p.direction === "x") {
+          const xm = p.from[0] + (p.to[0] - p.from[0]) * f;
+          out.push({ t: `dim ${p.text}`, x0: xm - w / 2, x1: xm + w / 2, y0: p.at + k, y1: p.at + k + H });
+        } else {
+          const ym = p.from[1] + (p.to[1] - p.from[1]) * f;
+          const short = w > Math.abs(p.to[1] - p.from[1]) - k; // as the SVG writer decides: the value beside the line when it is longer than the space
+          out.push(short ? { t: `dim ${p.text}`, x0: p.at + k, x1: p.at + k + w, y0: ym - 0.35 * H, y1: ym + 0.65 * H } : { t: `dim ${p.text}`, x0: p.at - k - H, x1: p.at - k, y0: ym - w / 2, y1: ym + w / 2 });
+        }
+      } else if (p.kind === "circle" && !p.hole && p.fill !== "black") out.push({ t: "mark circle", x0: p.c[0] - p.r, x1: p.c[0] + p.r, y0: p.c[1] - p.r, y1: p.c[1] + p.r, balloon: true });
+    }
+    return out;
+  }
+  for (const name of ["footbridge-tie.yaml", "canopy-tie-us.yaml", "truss-chord-staggered.yaml", "sports-hall-chord-ec3.yaml", "mezzanine-hanger.yaml", "truss-top-chord-reversal.yaml"]) {
+    it(name, () => {
+      const b = boxes(demo(name));
+      const clashes: string[] = [];
+      for (let i = 0; i < b.length; i++) {
+        for (let j = i + 1; j < b.length; j++) {
+          const [p, q] = [b[i]!, b[j]!];
+          if ((p.balloon && /^\d+$/.test(q.t)) || (q.balloon && /^\d+$/.test(p.t))) continue; // a mark inside its own circle
+          if (p.x0 < q.x1 && q.x0 < p.x1 && p.y0 < q.y1 && q.y0 < p.y1) clashes.push(`${p.t} / ${q.t}`);
+        }
+      }
+      expect(clashes).toEqual([]);
+    });
+  }
+});
