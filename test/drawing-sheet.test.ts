@@ -405,9 +405,11 @@ describe("legibility: nothing written over anything else written", () => {
     }
     return out;
   }
-  for (const name of ["footbridge-tie.yaml", "canopy-tie-us.yaml", "truss-chord-staggered.yaml", "sports-hall-chord-ec3.yaml", "mezzanine-hanger.yaml", "truss-top-chord-reversal.yaml"]) {
+  // A single line of bolts: the cut lies on the plate axis, beside the load arrows (invented test joint).
+  const oneLine = "name: One line of M12\ncode: is800-2007\nsplice: { type: lap }\nplates: { main: { width: 50, thickness: 6, grade: E250, edges: sawn } }\nload: { factored_tension: 30 kN }\nbolts: { size: M12, class: \"4.6\", type: bearing, threads_in_shear_planes: true }\nlayout: { pattern: grid, across: 1, along: 2, pitch: 35, end_distance: 25 }\n";
+  for (const name of ["footbridge-tie.yaml", "canopy-tie-us.yaml", "truss-chord-staggered.yaml", "sports-hall-chord-ec3.yaml", "mezzanine-hanger.yaml", "truss-top-chord-reversal.yaml", "one line of bolts"]) {
     it(name, () => {
-      const b = boxes(demo(name));
+      const b = boxes(name.endsWith(".yaml") ? demo(name) : load(oneLine));
       const clashes: string[] = [];
       for (let i = 0; i < b.length; i++) {
         for (let j = i + 1; j < b.length; j++) {

@@ -258,7 +258,12 @@ function planDimensions(c: Ctx): PlanDims {
 
 /** Room to the right of the main plate for the load arrow and its text, model mm. */
 function loadSpace(c: Ctx): number {
-  return (9 + Math.max(16, TEXT_WIDTH_PER_HEIGHT * LETTERING_MM.text * c.loadText.length)) * c.k;
+  return (loadArrowOffset(c, sectionGauge(c)) + 5 + Math.max(16, TEXT_WIDTH_PER_HEIGHT * LETTERING_MM.text * c.loadText.length)) * c.k;
+}
+
+/** How far past the main plate's break the load arrow starts, paper mm: past the cutting-plane end and its letter when the cut is on the axis. */
+function loadArrowOffset(c: Ctx, gaugeY: number): number {
+  return Math.abs(gaugeY) < 8 * c.k ? 13 : 4;
 }
 
 /** The gauge line the section is cut on: the one with the most holes, the lowest of equals. */
@@ -274,7 +279,7 @@ function planAnnotations(c: Ctx, options: DrawingOptions, marks: Array<{ plate: 
   // Load arrows at the main plates' far ends, clear of the break line and the cutting-plane ends.
   for (const p of joint.plates.filter((q) => q.role === "main")) {
     const dir = p.continues === "left" ? -1 : 1;
-    const xe = (dir < 0 ? c.xLeft : c.xRight) + dir * (Math.abs(gaugeY) < 8 * k ? 9 : 4) * k;
+    const xe = (dir < 0 ? c.xLeft : c.xRight) + dir * loadArrowOffset(c, gaugeY) * k;
     const senses = options.senses ?? ["tension"];
     const tip: Point = [xe + dir * 16 * k, 0];
     if (senses.includes("tension")) prims.push({ kind: "arrow", layer: "text", from: [xe, 0], to: tip, role: "load" });
