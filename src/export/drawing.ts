@@ -147,9 +147,9 @@ export function buildDrawing(joint: Joint, lengths: readonly BoltLengthLine[], o
   const marks = partMarks(joint);
   planOutlines(c);
   planCentreLines(c);
-  const dims = planDimensions(c);
+  planDimensions(c);
   const gaugeY = sectionGauge(c);
-  planAnnotations(c, options, marks, gaugeY, dims);
+  planAnnotations(c, options, marks, gaugeY);
   // Under the plan: its title at the left, the top plate's mark and the hole callout (about 11 mm on paper).
   const planTitleAt: Point = [c.xLeft, -c.W / 2 - 9 * c.k];
   c.prims.push({ kind: "text", layer: "text", at: planTitleAt, height: LETTERING_MM.title * c.k, text: "PLAN", anchor: "start", role: "title" });
@@ -211,14 +211,8 @@ function planCentreLines(c: Ctx): void {
   for (const x of xs) prims.push({ kind: "line", layer: "centre", a: [x, -W / 2 - 2 * k], b: [x, W / 2 + (8 + EXTENSION_OVERRUN_MM) * k] });
 }
 
-interface PlanDims {
-  /** x of the across-the-force chain and of its overall dimension, model mm. */
-  xDim1: number;
-  xDim2: number;
-}
-
 /** Chain dimensions along the force above the plan and across it to the right of the main plate's break (ISO 129-1). */
-function planDimensions(c: Ctx): PlanDims {
+function planDimensions(c: Ctx): void {
   const { joint, k, W, prims, xs, spliceX0, spliceX1, top } = c;
   const stops = new Map<number, boolean>([[spliceX0, true], [spliceX1, true]]); // true: a plate end (extension line), false: a hole (its centre line)
   for (const x of xs) if (!stops.has(x)) stops.set(x, false);
@@ -253,7 +247,6 @@ function planDimensions(c: Ctx): PlanDims {
   }
   prims.push({ kind: "dim", view: "plan", from: [xEdge, -h], to: [xEdge, h], at: xDim2, direction: "y", value: 2 * h, text: c.dimText(2 * h), extension: [true, true] });
   for (const y of c.ys) prims.push({ kind: "line", layer: "centre", a: [Math.max(...xs) + 0.3 * (joint.holes[0]?.across_mm ?? 20) + 2 * k, y], b: [xDim1 + EXTENSION_OVERRUN_MM * k, y] });
-  return { xDim1, xDim2 };
 }
 
 /** Room to the right of the main plate for the load arrow and its text, model mm. */
@@ -273,7 +266,7 @@ function sectionGauge(c: Ctx): number {
 }
 
 /** Load arrows, the cutting plane A–A, the hole callout and the plan's item references. */
-function planAnnotations(c: Ctx, options: DrawingOptions, marks: Array<{ plate: PlateId; mark: string }>, gaugeY: number, _dims: PlanDims): void {
+function planAnnotations(c: Ctx, options: DrawingOptions, marks: Array<{ plate: PlateId; mark: string }>, gaugeY: number): void {
   const { k, prims, joint } = c;
   const text = LETTERING_MM.text * k;
   // Load arrows at the main plates' far ends, clear of the break line and the cutting-plane ends.
@@ -643,13 +636,3 @@ export function scaleText(k: number): string {
   return k < 1 ? `${fx(1 / k)}:1` : `1:${fx(k)}`;
 }
 
-/** The largest scale (smallest k) at which the drawing fits a paper area (mm). */
-export function chooseScale(extentAt1: (k: number) => { width: number; height: number }, paperWidth: number, paperHeight: number): number {
-  for (const k of SCALES) {
-    const e = extentAt1(k);
-    if (e.width / k <= paperWidth && e.height / k <= paperHeight) return k;
-  }
-  return SCALES[SCALES.length - 1]!;
-}
-
-export { fx as formatLength };
