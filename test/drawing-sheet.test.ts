@@ -13,7 +13,7 @@ import { checkScenario } from "../src/engine/check.js";
 import { billOfMaterials } from "../src/export/bolt-list.js";
 import { buildDrawing, SCALES } from "../src/export/drawing.js";
 import { exportFiles } from "../src/export/index.js";
-import { DRAWING_AREA, drawingLoadText, layoutSheet } from "../src/export/svg.js";
+import { DRAWING_AREA, drawingLoadText, layoutSheet, LINE_PATTERNS_MM } from "../src/export/svg.js";
 import { parseScenario, requireCheckable } from "../src/io/scenario.js";
 import { loadSenses } from "../src/model/load.js";
 import { strengthFigures } from "../src/report/summary.js";
@@ -184,6 +184,9 @@ describe("2. DXF: DIMENSION entities, header, ISO 128 layer widths, rounded text
     expect(p).toHaveLength(4);
     expect(p[0]!).toBeGreaterThan(10 * p[2]!); // the long dash is many times the dot
     expect(lt.DASHED!.pattern).toHaveLength(2);
+    // the same patterns on paper as the SVG sheet (mm drawing: paper mm)
+    expect(p.map(Math.abs)).toEqual([...LINE_PATTERNS_MM.centre]);
+    expect(lt.DASHED!.pattern!.map(Math.abs)).toEqual([...LINE_PATTERNS_MM.dashed]);
   });
 });
 

@@ -72,7 +72,7 @@ describe("SVG drawing read back", () => {
     expect(svg).toContain("12 × M20 × 65 class 8.8");
     expect(svg).toMatch(/727\.4 kN for T = 620\.0 kN/);
     expect(svg).toMatch(/1:\d+ on A3/);
-    expect(svg).toMatch(/\.centre \{[^}]*stroke-dasharray: 12 1\.5 0\.5 1\.5/); // long-dash dot, ISO 128-20 type 04.1 (24d, 3d, 0.5d... at d = 0.25 mm, about: common practice)
+    expect(svg).toMatch(/\.centre \{[^}]*stroke-dasharray: 12 1\.5 0\.5 1\.5/); // long-dash dot, ISO 128-20 type 04.1: long dash 24 d, gap 3 d at d = 0.5 mm (the dot drawn 0.5 mm)
     expect(svg).toMatch(/\.outline \{[^}]*stroke-width: 0\.5/); // continuous wide
     expect(svg).toContain("qualified engineer");
   });

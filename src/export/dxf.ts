@@ -21,7 +21,7 @@ import type { BillOfMaterials } from "./bolt-list.js";
 import { dxfText } from "../text/escape.js";
 import { arrowHeadPoints, buildDrawing, EXTENSION_GAP_MM, EXTENSION_OVERRUN_MM, LETTERING_MM, scaleText, type Layer, type Point, type Primitive } from "./drawing.js";
 import { loadSenses } from "../model/load.js";
-import { displayUnitsOf, drawingLoadText, partsListRows, titleRows } from "./svg.js";
+import { displayUnitsOf, drawingLoadText, LINE_PATTERNS_MM, partsListRows, titleRows } from "./svg.js";
 
 export const DXF_LAYERS: Record<Layer, string> = {
   outlines: "OUTLINES",
@@ -104,9 +104,10 @@ function setupDocument(dxf: DxfWriter, input: DxfInput, k: number, paper: (mm: n
   dxf.setVariable("$LTSCALE", { 40: k });
   dxf.setVariable("$DIMSCALE", { 40: k });
   dxf.setVariable("$DIMSTYLE", { 2: "SPLICEWRIGHT" });
-  // ISO 128-20 dashed: dash 12 d, gap 3 d; long-dash dot: dash 24 d, gaps 3 d, dot 0.5 d, with d = 0.25 mm narrow lines.
-  dxf.addLType("DASHED", "Dashed __ __ __", [paper(3), -paper(0.75)]);
-  dxf.addLType("CENTER", "Long-dash dot ____ . ____ .", [paper(6), -paper(0.75), paper(0.125), -paper(0.75)]);
+  // The SVG's patterns on paper (svg.ts LINE_PATTERNS_MM): ISO 128-20 element lengths (long dash 24 d,
+  // gap 3 d) at d = 0.5 mm, the dot drawn 0.5 mm long to stay visible; dashed: dash 3, gap 1.5.
+  dxf.addLType("DASHED", "Dashed __ __ __", LINE_PATTERNS_MM.dashed.map((v, i) => (i % 2 ? -paper(v) : paper(v))));
+  dxf.addLType("CENTER", "Long-dash dot ____ . ____ .", LINE_PATTERNS_MM.centre.map((v, i) => (i % 2 ? -paper(v) : paper(v))));
   for (const layer of Object.keys(DXF_LAYERS) as Layer[]) {
     const s = DXF_LAYER_STYLE[layer];
     const record = dxf.addLayer(DXF_LAYERS[layer], s.color, s.lineType);

@@ -20,6 +20,8 @@ import { loadLabel, loadSenses } from "../model/load.js";
 export const SHEET = { width: 420, height: 297, margin: 10, titleHeight: 50, titleWidth: 200 } as const;
 /** ISO 128-20 line group 0.5: wide 0.5 mm, narrow 0.25 mm. */
 export const LINE_WIDTH_MM = { wide: 0.5, narrow: 0.25 } as const;
+/** Dash patterns on paper, mm: dash, gap (, dot, gap). Long-dash dot after ISO 128-20's element lengths (long dash 24 d, gap 3 d) at d = 0.5 mm, the dot 0.5 mm to stay visible. */
+export const LINE_PATTERNS_MM = { dashed: [3, 1.5], centre: [12, 1.5, 0.5, 1.5] } as const;
 
 /** Every text into the SVG goes through xmlText: well-formed XML whatever a name holds. */
 const esc = xmlText;
@@ -154,8 +156,8 @@ export function renderSvg(input: SvgInput): string {
     `<title>${esc(drawingName(input.scenario.name))}</title>`,
     `<style>`,
     `  .outline { stroke: #000; stroke-width: ${LINE_WIDTH_MM.wide}; fill: none; stroke-linecap: round; }`,
-    `  .hidden { stroke: #000; stroke-width: ${LINE_WIDTH_MM.narrow}; stroke-dasharray: 3 1.5; fill: none; }`,
-    `  .centre { stroke: #000; stroke-width: ${LINE_WIDTH_MM.narrow}; stroke-dasharray: 12 1.5 0.5 1.5; fill: none; }`,
+    `  .hidden { stroke: #000; stroke-width: ${LINE_WIDTH_MM.narrow}; stroke-dasharray: ${LINE_PATTERNS_MM.dashed.join(" ")}; fill: none; }`,
+    `  .centre { stroke: #000; stroke-width: ${LINE_WIDTH_MM.narrow}; stroke-dasharray: ${LINE_PATTERNS_MM.centre.join(" ")}; fill: none; }`,
     `  .hole { stroke: #000; stroke-width: ${LINE_WIDTH_MM.wide}; fill: #fff; }`,
     `  .part { stroke: none; fill: #fff; }`,
     `  .section-edge { stroke: #000; stroke-width: ${LINE_WIDTH_MM.wide}; stroke-linecap: round; }`,
