@@ -208,7 +208,7 @@ describe("outputs show the senses of the load", () => {
     const { boltLengths } = await import("../src/export/bolt-list.js");
     const { scenario, joint } = runText(text);
     const arrows = (senses: Array<"tension" | "compression">) =>
-      buildDrawing(joint, boltLengths(joint, scenario), { scale: 5, loadText: "x", senses }).primitives.filter((p) => p.kind === "arrow") as Array<{ from: [number, number]; to: [number, number] }>;
+      buildDrawing(joint, boltLengths(joint, scenario), { scale: 5, loadText: "x", senses }).primitives.filter((p) => p.kind === "arrow" && p.role === "load") as Array<{ from: [number, number]; to: [number, number] }>;
     // An arrow points away from the splice when its tip is farther from x = 0 than its tail.
     const away = (a: { from: [number, number]; to: [number, number] }) => Math.abs(a.to[0]) > Math.abs(a.from[0]);
     expect(arrows(["tension"]).map(away)).toEqual([true, true]);

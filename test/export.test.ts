@@ -42,7 +42,7 @@ describe("SVG drawing read back", () => {
   const dims: Node[] = [];
   walk(doc, (tag, n) => {
     if (tag === "circle" && n["@_data-hole"]) circles.push(n);
-    if (tag === "g" && n["@_class"] === "dim") dims.push(n);
+    if (tag === "g" && n["@_class"] === "dim" && n["@_data-view"] === "plan") dims.push(n);
   });
 
   it("has every hole at its coordinates, to scale, at true diameter", () => {
@@ -72,7 +72,7 @@ describe("SVG drawing read back", () => {
     expect(svg).toContain("12 × M20 × 65 class 8.8");
     expect(svg).toMatch(/727\.4 kN for T = 620\.0 kN/);
     expect(svg).toMatch(/1:\d+ on A3/);
-    expect(svg).toMatch(/\.centre \{[^}]*stroke-dasharray: 9 1\.5 1 1\.5/); // long-dash dot
+    expect(svg).toMatch(/\.centre \{[^}]*stroke-dasharray: 12 1\.5 0\.5 1\.5/); // long-dash dot, ISO 128-20 type 04.1: long dash 24 d, gap 3 d at d = 0.5 mm (the dot drawn 0.5 mm)
     expect(svg).toMatch(/\.outline \{[^}]*stroke-width: 0\.5/); // continuous wide
     expect(svg).toContain("qualified engineer");
   });
