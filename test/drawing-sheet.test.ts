@@ -425,3 +425,13 @@ describe("legibility: nothing written over anything else written", () => {
     });
   }
 });
+
+describe("the sheet's title names the splice by the sense of its load", () => {
+  it("a splice under reversing load is not titled a tension splice (SVG and DXF)", () => {
+    const d = demo("truss-top-chord-reversal.yaml");
+    expect(svgOf(d)).toContain("bolted splice under reversing load");
+    expect(svgOf(d)).not.toContain("tension splice");
+    expect(dxfOf(d)).toContain("bolted splice under reversing load");
+    expect(svgOf(demo("footbridge-tie.yaml"))).toContain("bolted tension splice");
+  });
+});

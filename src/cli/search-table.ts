@@ -8,7 +8,7 @@ import type { RankBy } from "../search/ranking.js";
 import type { SearchOutcome } from "../search/search.js";
 import type { Scenario } from "../model/scenario.js";
 import { toUnit } from "../units/units.js";
-import { loadWords } from "../model/load.js";
+import { loadWords, spliceKindWords } from "../model/load.js";
 import { strengthUtilisationWords } from "./text.js";
 
 const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
@@ -28,7 +28,7 @@ function displayUnits(scenario: Scenario) {
 export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy: RankBy, currency: string, codeTitle: string, elapsed_ms: number, variants = false): string {
   const out: string[] = [];
   const butt = scenario.splice.type !== "lap";
-  out.push("splicewright — layout search: bolted tension splice");
+  out.push(`splicewright — layout search: bolted ${spliceKindWords(scenario.load)}`);
   out.push(`Scenario: ${scenario.name}${scenario.project ? `   Project: ${scenario.project}` : ""}`);
   out.push(`Code:     ${codeTitle}`);
   const u = displayUnits(scenario);

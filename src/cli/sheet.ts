@@ -16,6 +16,7 @@ import { inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
 import { toUnit } from "../units/units.js";
 import { PLAIN_STYLE, type Style } from "./style.js";
 import { columns, PIPED_WIDTH, wrap } from "./text.js";
+import { spliceKindWords } from "../model/load.js";
 
 export interface SheetOptions {
   width: number;
@@ -148,7 +149,7 @@ export function formatSheet(scenario: CheckableScenario, joint: Joint, report: C
   const u: DisplayUnits = scenario.units === "us" ? "us" : "si";
   const out: string[] = [];
   const line = (label: string, text: string) => out.push(...wrap(text, width, label.padEnd(10), " ".repeat(10)));
-  out.push(...wrap(`splicewright — calculation sheet: bolted ${scenario.load.factoredCompression_N !== undefined ? (scenario.load.factoredTension_N > 0 ? "splice under reversing load" : "splice in compression") : "tension splice"}${options.brief ? " (brief)" : ""}`, width));
+  out.push(...wrap(`splicewright — calculation sheet: bolted ${spliceKindWords(scenario.load)}${options.brief ? " (brief)" : ""}`, width));
   line("Scenario:", scenario.name);
   if (scenario.project) line("Project:", scenario.project);
   line("Code:", report.codeTitle);

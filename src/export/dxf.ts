@@ -20,7 +20,7 @@ import type { CheckableScenario } from "../model/scenario.js";
 import type { BillOfMaterials } from "./bolt-list.js";
 import { dxfText } from "../text/escape.js";
 import { arrowHeadPoints, buildDrawing, EXTENSION_GAP_MM, EXTENSION_OVERRUN_MM, LETTERING_MM, scaleText, type Layer, type Point, type Primitive } from "./drawing.js";
-import { loadSenses } from "../model/load.js";
+import { loadSenses, spliceKindWords } from "../model/load.js";
 import { displayUnitsOf, drawingLoadText, LINE_PATTERNS_MM, partsListRows, titleRows } from "./svg.js";
 
 export const DXF_LAYERS: Record<Layer, string> = {
@@ -84,7 +84,7 @@ export function renderDxf(input: DxfInput): string {
   const rows = titleRows(input, k).map(([key, v]) => `${key}: ${v}`);
   const parts = partsListRows(input, drawing).map((r) => r.filter(Boolean).join("  "));
   const lines = [
-    `splicewright - bolted tension splice: ${titleRows(input, k)[1]![1]}`,
+    `splicewright - bolted ${spliceKindWords(input.scenario.load)}: ${titleRows(input, k)[1]![1]}`,
     ...rows.slice(2),
     ...parts,
     `drawn for ${scaleText(k)}; ${inch ? "dimensions in inches" : "dimensions in mm"}. To be verified by a qualified engineer against the governing code edition, its national annex and local regulations.`,

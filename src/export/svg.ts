@@ -15,7 +15,7 @@ import { detailingState, strengthFigures } from "../report/summary.js";
 import { dimensionText, forceText, type DisplayUnits } from "../report/format.js";
 import { toUnit } from "../units/units.js";
 import { arrowHeadPoints, buildDrawing, EXTENSION_GAP_MM, EXTENSION_OVERRUN_MM, holeCallout, LETTERING_MM, SCALES, scaleText, TEXT_WIDTH_PER_HEIGHT, type Drawing, type Point, type Primitive } from "./drawing.js";
-import { loadLabel, loadSenses } from "../model/load.js";
+import { loadLabel, loadSenses, spliceKindWords } from "../model/load.js";
 
 export const SHEET = { width: 420, height: 297, margin: 10, titleHeight: 50, titleWidth: 200 } as const;
 /** ISO 128-20 line group 0.5: wide 0.5 mm, narrow 0.25 mm. */
@@ -143,7 +143,7 @@ export function renderSvg(input: SvgInput): string {
   const tbY = SHEET.height - SHEET.margin - SHEET.titleHeight;
   const title: string[] = [
     `<rect class="frame" x="${tbX}" y="${tbY}" width="${tbW}" height="${SHEET.titleHeight}"/>`,
-    `<text class="tb-head" x="${tbX + 3}" y="${tbY + 5.5}">splicewright — bolted tension splice</text>`,
+    `<text class="tb-head" x="${tbX + 3}" y="${tbY + 5.5}">splicewright — bolted ${spliceKindWords(input.scenario.load)}</text>`,
   ];
   titleRows(input, scale).forEach(([k, v], i) => {
     const y = tbY + 12 + i * 5.2;

@@ -44,3 +44,9 @@ export function loadLabel(load: Scenario["load"]): string {
   if ((load.factoredCompression_N ?? 0) > 0) parts.push(`C = ${kN(load.factoredCompression_N ?? 0)}`);
   return parts.join(" / ");
 }
+
+/** The splice by the sense of its load, for titles: "tension splice", "splice in compression", "splice under reversing load". */
+export function spliceKindWords(load: Scenario["load"]): string {
+  if (load.factoredCompression_N === undefined) return "tension splice";
+  return load.factoredTension_N > 0 ? "splice under reversing load" : "splice in compression";
+}

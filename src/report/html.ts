@@ -22,6 +22,7 @@ import { summarise, summaryRows, type SummaryRow } from "./summary.js";
 import { foldTwins, type FoldedCheck } from "./twins.js";
 import { xmlText } from "../text/escape.js";
 import { drawingPrint, REPORT_CSS, scaleBarSvg, type DrawingPrint } from "./print.js";
+import { spliceKindWords } from "../model/load.js";
 
 export interface ReportInput {
   scenario: CheckableScenario;
@@ -155,8 +156,7 @@ function designBasisSection(input: ReportInput, x: Ctx): string {
 }
 
 function titleOf(scenario: CheckableScenario): string {
-  const l = scenario.load;
-  return l.factoredCompression_N !== undefined ? (l.factoredTension_N > 0 ? "splice under reversing load" : "splice in compression") : "tension splice";
+  return spliceKindWords(scenario.load);
 }
 
 /** Page 1: title, sign-off, summary, design basis, caution. */
