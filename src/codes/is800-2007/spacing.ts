@@ -2,12 +2,12 @@
  * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
-import { distance, gaugeLines, transverseLines } from "../../geometry/lines.js";
+import { distance, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, forEachHolePair, PairSet, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
@@ -31,13 +31,23 @@ export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_m
   return { staggered: true, gauge_mm: gauge };
 }
 
+/** Each bolt group's holes with their gauge lines and stagger, worked out once per rule. */
+function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }> {
+  const sets = new Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }>();
+  for (const g of joint.groups) {
+    const holes = joint.holes.filter((h) => h.group === g.id);
+    sets.set(g.id, { gaugeLines: gaugeLines(holes), stagger: staggerOf(holes) });
+  }
+  return sets;
+}
+
 /** Minimum spacing between fastener centres, 2.5 d. IS 800:2007, cl. 10.2.2. */
 export function minSpacingRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   forEachHolePair(joint, (plate, a, b) => {
     const s = distance(a, b);
-    worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
+    if (beatsWorst(worst, s, 2.5 * d, "min")) worst = { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` };
   });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
 }
@@ -54,17 +64,19 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
   let pitch: Worst | null = null;
   let edgeLine: Worst | null = null;
   const outside = outsidePlates(joint);
-  const seen = new Set<string>();
+  const seen = new PairSet(joint.holes);
   let relaxedAnywhere = false;
+  const groups = groupHoleSets(joint);
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
     const lines = gaugeLines(holes);
-    const stagger = staggerOf(holes.filter((h) => h.group === (plate.connections[0]?.group ?? h.group)));
+    const first = plate.connections[0];
+    const stagger = first ? groups.get(first.group)!.stagger : staggerOf(holes);
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (relax > 1) relaxedAnywhere = true;
     // Across: adjacent gauge lines, per group.
     for (const group of new Set(holes.map((h) => h.group))) {
-      const gl = gaugeLines(holes.filter((h) => h.group === group));
+      const gl = groups.get(group)!.gaugeLines;
       for (let i = 1; i < gl.length; i++) {
         const a = gl[i - 1]!.holes[0]!;
         const b = gl[i]!.holes[0]!;
@@ -81,12 +93,10 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
       for (let k = 1; k < line.holes.length; k++) {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
-        const key = `${a.id}|${b.id}`;
         const s = b.x_mm - a.x_mm;
         const t = pairThickness(joint, a, b);
         const cap = Math.min(32 * t, 300);
-        if (!seen.has(key)) {
-          seen.add(key);
+        if (seen.addNew(a, b)) {
           const base = Math.min(16 * t, 200);
           const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
           const limit = Math.min(base * r, cap);
