@@ -111,7 +111,7 @@ export function groupCentroidRule(joint: Joint, citation: Citation): RuleCheck[]
   for (const g of joint.groups) {
     const holes = joint.holes.filter((h) => h.group === g.id);
     const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
-    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${Math.abs(yc).toFixed(2)} mm vs 0.5 mm` }, "max");
+    if (beatsWorst(worst, Math.abs(yc), 0.5, "max")) worst = { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${Math.abs(yc).toFixed(2)} mm vs 0.5 mm` };
   }
   return worstRule("group-centroid", "group-centroid", "Bolt group on the plate axis", citation, "|y centroid| ≤ 0.5 mm", "max", worst);
 }

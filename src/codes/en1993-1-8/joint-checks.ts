@@ -373,7 +373,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
   const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);
   const ratio = plate.forceShare * fraction;
   const pathText = pathLabel(path);
-  const resistance = catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
+  const resistance = () => catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",
@@ -387,7 +387,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
       (transferred ? "k = bolts not yet passed; highest demand/resistance over all paths" : "least over all paths"),
     substituted: () =>
       `${transferred ? "governing" : "least"} path ${pathText}: Anet = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(Anet)} mm²;  ` +
-      `${resistance} = ${kN(R)}` +
+      `${resistance()} = ${kN(R)}` +
       (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
       shareText(plate),
     limitState: "ULS",

@@ -132,8 +132,8 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
   const perBolt = Vdpb(b.kb, d, t, plate.fu_MPa, holeFactor);
   const n = holes.length;
   const T = scenario.load.factoredTension_N;
-  const eTerm = Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
-  const pTerm = Number.isFinite(b.p_mm)
+  const eTerm = () => Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
+  const pTerm = () => Number.isFinite(b.p_mm)
     ? `p/3d0 − 0.25 = ${f(b.p_mm)}/(3 × ${f(b.d0_mm)}) − 0.25 = ${f(b.p_mm / (3 * b.d0_mm) - 0.25, 3)}`
     : "p: no bolt behind another";
   const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
@@ -145,7 +145,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     citation: cl("10.3.4"),
     formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
     substituted: () =>
-      `kb = min(${eTerm}, ${pTerm}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
+      `kb = min(${eTerm()}, ${pTerm()}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
       `Vdpb = 2.5 × ${f(b.kb, 3)} × ${d} × ${f(t)} × ${plate.fu_MPa}${holeFactor !== 1 ? ` × ${holeFactor}` : ""} / ${PARTIAL_FACTORS.gamma_mb} = ${kN(perBolt, 2)};  ` +
       `n·Vdpb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}` +
       (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),

@@ -83,7 +83,7 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
         const t = pairThickness(joint, a, b);
         const limit = Math.min(32 * t, 300);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` }, "max");
+        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
       }
     }
     // Along: consecutive holes on each gauge line.
@@ -100,14 +100,14 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
           const base = Math.min(16 * t, 200);
           const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
           const limit = Math.min(base * r, cap);
-          pitch = keepWorst(pitch, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` }, "max");
+          if (beatsWorst(pitch, s, limit, "max")) pitch = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` };
         }
         if (edge && isOutside) {
           const tp = plate.spec.thickness_mm;
           const base = Math.min(100 + 4 * tp, 200);
           const r = a.group === b.group ? relax : 1.0;
           const limit = Math.min(base * r, Math.min(32 * tp, 300));
-          edgeLine = keepWorst(edgeLine, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` }, "max");
+          if (beatsWorst(edgeLine, s, limit, "max")) edgeLine = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` };
         }
       }
     });
@@ -146,24 +146,24 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     const outerT = Math.min(...outside.filter((p) => p.connections.some((c) => groups.has(c.group))).map((p) => p.spec.thickness_mm));
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
-    const maxText = scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
+    const maxText = () => scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
-      minEdge = keepWorst(minEdge, { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` }, "min");
+      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
     }
     const ys = holes.map((h) => h.y_mm);
     for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
-      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     }
     for (const c of plate.connections) {
       const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, u: c.towardEnd * (c.endX_mm - h.x_mm) }));
       for (const { h, u } of us) {
         const limit = factor * h.along_mm;
-        minEnd = keepWorst(minEnd, { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` }, "min");
+        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
       }
       const nearest = Math.min(...us.map((x) => x.u));
-      maxEdge = keepWorst(maxEdge, { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+      if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     }
   }
   return [
@@ -178,7 +178,7 @@ export function gripRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   for (const g of joint.groups) {
-    worst = keepWorst(worst, { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` }, "max");
+    if (beatsWorst(worst, g.grip_mm, 8 * d, "max")) worst = { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` };
   }
   return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
 }
