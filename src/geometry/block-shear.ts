@@ -109,11 +109,23 @@ interface GaugeLineOfBlock {
 
 /** Gauge lines of the local holes, sorted by y (holes within the line tolerance share a line). */
 function blockGaugeLines(local: readonly LocalHole[]): GaugeLineOfBlock[] {
-  const ys: number[] = local.map((h) => h.y).sort((a, b) => a - b);
+  const ys = local.map((h) => h.y);
+  // Insertion sort: a group has tens of holes.
+  for (let i = 1; i < ys.length; i++) {
+    const y = ys[i]!;
+    let j = i - 1;
+    while (j >= 0 && ys[j]! > y) {
+      ys[j + 1] = ys[j]!;
+      j--;
+    }
+    ys[j + 1] = y;
+  }
   const lines: GaugeLineOfBlock[] = [];
   for (const y of ys) if (lines.length === 0 || !near(lines[lines.length - 1]!.y, y)) lines.push({ y, holes: [], maxU: -Infinity });
   for (const h of local) {
-    const line = lines.find((l) => h.y >= l.y - LINE_TOLERANCE_MM && h.y <= l.y + LINE_TOLERANCE_MM)!;
+    let k = 0;
+    while (!(h.y >= lines[k]!.y - LINE_TOLERANCE_MM && h.y <= lines[k]!.y + LINE_TOLERANCE_MM)) k++;
+    const line = lines[k]!;
     line.holes.push(h);
     line.maxU = Math.max(line.maxU, h.u);
   }

@@ -54,15 +54,29 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
   ];
 }
 
-const cell = (x: number, y: number) => `${Math.round(x / LINE_TOLERANCE_MM)}:${Math.round(y / LINE_TOLERANCE_MM)}`;
+/** The hole centres of a plate on a grid of the line tolerance: which cells hold a hole. */
+class OccupiedCells {
+  readonly #rows = new Map<number, Set<number>>();
+  constructor(holes: readonly Hole[]) {
+    for (const h of holes) {
+      const x = Math.round(h.x_mm / LINE_TOLERANCE_MM);
+      let row = this.#rows.get(x);
+      if (!row) this.#rows.set(x, (row = new Set()));
+      row.add(Math.round(h.y_mm / LINE_TOLERANCE_MM));
+    }
+  }
+  has(x_mm: number, y_mm: number): boolean {
+    return this.#rows.get(Math.round(x_mm / LINE_TOLERANCE_MM))?.has(Math.round(y_mm / LINE_TOLERANCE_MM)) ?? false;
+  }
+}
 
 /**
  * Two holes staggered against each other: on different gauge lines and transverse lines, with no hole
  * of the plate at the other corners of their rectangle (a grid's diagonal is not a stagger).
- * @param occupied the plate's hole centres as `cell` keys
+ * @param occupied the plate's hole centres
  */
-function staggeredPair(occupied: ReadonlySet<string>, a: Hole, b: Hole): boolean {
-  return !occupied.has(cell(a.x_mm, b.y_mm)) && !occupied.has(cell(b.x_mm, a.y_mm));
+function staggeredPair(occupied: OccupiedCells, a: Hole, b: Hole): boolean {
+  return !occupied.has(a.x_mm, b.y_mm) && !occupied.has(b.x_mm, a.y_mm);
 }
 
 /**
@@ -75,22 +89,22 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
   let gauge: Worst | null = null;
   let staggerGauge: Worst | null = null;
   let staggerDistance: Worst | null = null;
-  const occupiedBy = new Map<PlatePiece, Set<string>>();
+  const occupiedBy = new Map<PlatePiece, OccupiedCells>();
   forEachHolePair(joint, (plate, a, b, holes) => {
     let occupied = occupiedBy.get(plate);
-    if (!occupied) occupiedBy.set(plate, (occupied = new Set(holes.map((h) => cell(h.x_mm, h.y_mm)))));
+    if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
     const d0 = Math.max(holeWidth(a), holeWidth(b));
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
-    const pair = `holes ${a.id}–${b.id}`;
+    const pair = () => `holes ${a.id}–${b.id}`;
     if (dy <= LINE_TOLERANCE_MM) {
-      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `${pair}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
+      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `${pair()}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
     } else if (dx <= LINE_TOLERANCE_MM) {
-      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `${pair}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
+      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `${pair()}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     } else if (staggeredPair(occupied, a, b)) {
       const L = distance(a, b);
-      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `${pair} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
-      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `${pair} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
+      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `${pair()} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
+      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `${pair()} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     }
   });
   const citation = cl("3.5", { table: "Table 3.3" });
