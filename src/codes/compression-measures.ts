@@ -3,6 +3,7 @@
  * plate, the unbraced length of a cover across the butt, the area of a plate in compression, and the
  * force each plate carries in compression.
  */
+import { groupHoles } from "../geometry/joint-builder.js";
 import { gaugeLines, transverseLines } from "../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
@@ -50,8 +51,8 @@ export function largestPitch_mm(joint: Joint, plate: PlatePiece): number {
  * B (2 × end distance at the butt + gap for patterns mirrored about the butt), mm.
  */
 export function coverStrutLength_mm(joint: Joint): number {
-  const a = joint.holes.filter((h) => h.group === "A").map((h) => h.x_mm);
-  const b = joint.holes.filter((h) => h.group === "B").map((h) => h.x_mm);
+  const a = groupHoles(joint, "A").map((h) => h.x_mm);
+  const b = groupHoles(joint, "B").map((h) => h.x_mm);
   return Math.min(...b) - Math.max(...a);
 }
 

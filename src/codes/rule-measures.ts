@@ -2,6 +2,7 @@
  * What spacing, end and edge rules of any design code measure on a joint: the plates a hole passes,
  * the outside plates of a bolt stack, and the governing (worst) measurement of a rule.
  */
+import { groupHoles } from "../geometry/joint-builder.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { Citation, RuleCheck } from "../model/results.js";
 import { rule } from "./check-builders.js";
@@ -109,7 +110,7 @@ export function worstRule(
 export function groupCentroidRule(joint: Joint, citation: Citation): RuleCheck[] {
   let worst: Worst | null = null;
   for (const g of joint.groups) {
-    const holes = joint.holes.filter((h) => h.group === g.id);
+    const holes = groupHoles(joint, g.id);
     const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
     if (beatsWorst(worst, Math.abs(yc), 0.5, "max")) worst = { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${Math.abs(yc).toFixed(2)} mm vs 0.5 mm` };
   }

@@ -4,7 +4,7 @@
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
-import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
@@ -23,7 +23,7 @@ import { Tdb, Tdg, Tdn } from "./tension-member.js";
 
 export interface GroupFactors {
   group: BoltGroupGeometry;
-  holes: Hole[];
+  holes: readonly Hole[];
   lj_mm: number;
   beta_lj: number;
   beta_lg: number;
@@ -37,7 +37,7 @@ export function groupLabel(joint: Joint, group: BoltGroupGeometry): string {
 /** Reduction factors of one bolt group, from its hole coordinates (cl. 10.3.3.1–10.3.3.3). */
 export function groupFactors(joint: Joint, group: BoltGroupGeometry): GroupFactors {
   const d = joint.boltDiameter_mm;
-  const holes = joint.holes.filter((h) => h.group === group.id);
+  const holes = groupHoles(joint, group.id);
   const lj = jointLength_mm(holes);
   const blj = beta_lj(lj, d);
   return {
@@ -125,7 +125,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
   const { bolts, options } = scenario;
   const d = bolts.size_mm;
   const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
-  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const holes = groupHoles(joint, connection.group);
   const b = bearingFactor(holes, connection, mat.fub_MPa, plate.fu_MPa);
   const holeFactor = bearingHoleFactor(bolts.hole);
   const t = plate.spec.thickness_mm;
@@ -273,7 +273,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
-  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const holes = groupHoles(joint, connection.group);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;

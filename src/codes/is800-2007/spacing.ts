@@ -2,6 +2,7 @@
  * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
+import { groupHoles } from "../../geometry/joint-builder.js";
 import { distance, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
@@ -35,7 +36,7 @@ export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_m
 function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }> {
   const sets = new Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }>();
   for (const g of joint.groups) {
-    const holes = joint.holes.filter((h) => h.group === g.id);
+    const holes = groupHoles(joint, g.id);
     sets.set(g.id, { gaugeLines: gaugeLines(holes), stagger: staggerOf(holes) });
   }
   return sets;
