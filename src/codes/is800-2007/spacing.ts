@@ -68,9 +68,13 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
   const seen = new PairSet(joint.holes);
   let relaxedAnywhere = false;
   const groups = groupHoleSets(joint);
+  const linesOfJoined = new Map<string, Line[]>();
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
-    const lines = gaugeLines(holes);
+    // Plates joined to the same groups (both covers; a main plate and its own group) share their lines.
+    const joined = plate.connections.map((c) => c.group).join("+");
+    let lines = linesOfJoined.get(joined);
+    if (!lines) linesOfJoined.set(joined, (lines = gaugeLines(holes)));
     const first = plate.connections[0];
     const stagger = first ? groups.get(first.group)!.stagger : staggerOf(holes);
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
@@ -122,6 +126,13 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
   ];
 }
 
+/** Thickness of the thinner outside plate of the bolt stacks a plate belongs to (cl. 10.2.4.3). */
+function outerThickness(outside: readonly PlatePiece[], plate: PlatePiece): number {
+  let t = Infinity;
+  for (const p of outside) if (p.connections.some((c) => plate.connections.some((k) => k.group === c.group))) t = Math.min(t, p.spec.thickness_mm);
+  return t;
+}
+
 function minDistanceFactor(plate: PlatePiece): { factor: number; text: string } {
   const rough = plate.spec.edges === "sheared" || plate.spec.edges === "hand-flame-cut";
   return rough ? { factor: 1.7, text: `1.7 d0 (${plate.spec.edges} edge)` } : { factor: 1.5, text: `1.5 d0 (${plate.spec.edges} edge)` };
@@ -141,29 +152,35 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
     if (holes.length === 0) continue;
-    const { factor, text } = minDistanceFactor(plate);
+    const { factor } = minDistanceFactor(plate);
+    const text = () => minDistanceFactor(plate).text;
     const half = plate.spec.width_mm / 2;
-    const groups = new Set(plate.connections.map((c) => c.group));
-    const outerT = Math.min(...outside.filter((p) => p.connections.some((c) => groups.has(c.group))).map((p) => p.spec.thickness_mm));
+    const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
     const maxText = () => scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
-      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
+      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text()} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
     }
-    const ys = holes.map((h) => h.y_mm);
-    for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
+    let yMin = Infinity;
+    let yMax = -Infinity;
+    for (const h of holes) {
+      yMin = Math.min(yMin, h.y_mm);
+      yMax = Math.max(yMax, h.y_mm);
+    }
+    for (const [side, e] of [["lower", half + yMin], ["upper", half - yMax]] as const) {
       if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     }
     for (const c of plate.connections) {
-      const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, u: c.towardEnd * (c.endX_mm - h.x_mm) }));
-      for (const { h, u } of us) {
+      let nearest = Infinity;
+      for (const h of groupHoles(joint, c.group)) {
+        const u = c.towardEnd * (c.endX_mm - h.x_mm);
+        nearest = Math.min(nearest, u);
         const limit = factor * h.along_mm;
-        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
+        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text()} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
       }
-      const nearest = Math.min(...us.map((x) => x.u));
       if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     }
   }
