@@ -3,10 +3,11 @@
  * plate, the unbraced length of a cover across the butt, the area of a plate in compression, and the
  * force each plate carries in compression.
  */
+import { groupHoles } from "../geometry/joint-builder.js";
 import { gaugeLines, transverseLines } from "../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
-import { holePlates, keepWorst, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
+import { beatsWorst, holePlates, keepWorst, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
 
 /** Effective length factor of a cover plate strut held by bolts at both ends: fixed-fixed, 0.65 (common practice). */
 export const COVER_STRUT_K = 0.65;
@@ -15,7 +16,7 @@ export const COVER_STRUT_K = 0.65;
  * The worst pitch along the force against a limit that depends on the thinner plate of the pair.
  * Pairs are consecutive holes of one gauge line in one plate (across the butt too, on the covers).
  */
-export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => { limit_mm: number; text: string }): Worst | null {
+export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => { limit_mm: number; text: () => string }): Worst | null {
   let worst: Worst | null = null;
   for (const plate of holePlates(joint)) {
     for (const line of gaugeLines(platesHoles(joint, plate))) {
@@ -25,7 +26,7 @@ export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => {
         const s = b.x_mm - a.x_mm;
         const t = pairThickness(joint, a, b);
         const { limit_mm, text } = limitOf(t);
-        worst = keepWorst(worst, { value: s, limit: limit_mm, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${s.toFixed(1)} mm vs ${text} with t = ${t.toFixed(1)} → ${limit_mm.toFixed(1)} mm` }, "max");
+        if (beatsWorst(worst, s, limit_mm, "max")) worst = { value: s, limit: limit_mm, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${s.toFixed(1)} mm vs ${text()} with t = ${t.toFixed(1)} → ${limit_mm.toFixed(1)} mm` };
       }
     }
   }
@@ -50,8 +51,8 @@ export function largestPitch_mm(joint: Joint, plate: PlatePiece): number {
  * B (2 × end distance at the butt + gap for patterns mirrored about the butt), mm.
  */
 export function coverStrutLength_mm(joint: Joint): number {
-  const a = joint.holes.filter((h) => h.group === "A").map((h) => h.x_mm);
-  const b = joint.holes.filter((h) => h.group === "B").map((h) => h.x_mm);
+  const a = groupHoles(joint, "A").map((h) => h.x_mm);
+  const b = groupHoles(joint, "B").map((h) => h.x_mm);
   return Math.min(...b) - Math.max(...a);
 }
 

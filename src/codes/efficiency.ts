@@ -9,13 +9,13 @@ import type { EfficiencyBasis } from "../model/scenario.js";
 export interface UnperforatedTerms {
   yield_N: number;
   rupture_N: number;
-  /** e.g. "Ag·fy/γm0" and "200 × 12 × 250/1.1". */
+  /** e.g. "Ag·fy/γm0" and "200 × 12 × 250/1.1" (the numbers written only when the definition is read). */
   yieldSymbols: string;
-  yieldNumbers: string;
+  yieldNumbers: () => string;
   ruptureSymbols: string;
-  ruptureNumbers: string;
+  ruptureNumbers: () => string;
   /** The value taken for "lesser" when the code defines it otherwise (EN 1993-1-8 Category C). */
-  lesser?: { value_N: number; text: string };
+  lesser?: { value_N: number; text: () => string };
 }
 
 /** The basis of efficiency in words, as every output names it. */
@@ -25,15 +25,32 @@ export const BASIS_WORDS: Record<EfficiencyBasis, string> = {
   yield: "gross yield",
 };
 
+/** The unperforated strength and its definition in words, written on first read. */
+class Unperforated {
+  #definition: (() => string) | string;
+  constructor(
+    readonly value_N: number,
+    definition: () => string,
+  ) {
+    this.#definition = definition;
+  }
+  get definition(): string {
+    if (typeof this.#definition === "function") this.#definition = this.#definition();
+    return this.#definition;
+  }
+}
+
 /**
- * The unperforated strength on a basis, with the definition every output prints beside efficiency.
+ * The unperforated strength on a basis, with the definition every output prints beside efficiency
+ * (the words are written only when read; the value never depends on them).
  * @param force formats a force in the output's units
  */
 export function unperforatedOnBasis(terms: UnperforatedTerms, basis: EfficiencyBasis, force: (n: number) => string): { value_N: number; definition: string } {
-  const head = `efficiency = joint design strength / design tension strength of the unperforated thinner main plate, basis: ${BASIS_WORDS[basis]} (options.efficiency_basis: ${basis}) = `;
-  if (basis === "yield") return { value_N: terms.yield_N, definition: `${head}${terms.yieldSymbols} = ${terms.yieldNumbers} = ${force(terms.yield_N)}` };
-  if (basis === "rupture") return { value_N: terms.rupture_N, definition: `${head}${terms.ruptureSymbols} = ${terms.ruptureNumbers} = ${force(terms.rupture_N)}` };
-  if (terms.lesser) return { value_N: terms.lesser.value_N, definition: `${head}${terms.lesser.text} = ${force(terms.lesser.value_N)}` };
+  const head = () => `efficiency = joint design strength / design tension strength of the unperforated thinner main plate, basis: ${BASIS_WORDS[basis]} (options.efficiency_basis: ${basis}) = `;
+  if (basis === "yield") return new Unperforated(terms.yield_N, () => `${head()}${terms.yieldSymbols} = ${terms.yieldNumbers()} = ${force(terms.yield_N)}`);
+  if (basis === "rupture") return new Unperforated(terms.rupture_N, () => `${head()}${terms.ruptureSymbols} = ${terms.ruptureNumbers()} = ${force(terms.rupture_N)}`);
+  const lesser = terms.lesser;
+  if (lesser) return new Unperforated(lesser.value_N, () => `${head()}${lesser.text()} = ${force(lesser.value_N)}`);
   const value = Math.min(terms.yield_N, terms.rupture_N);
-  return { value_N: value, definition: `${head}min(${terms.yieldSymbols}, ${terms.ruptureSymbols}) = min(${terms.yieldNumbers}, ${terms.ruptureNumbers}) = ${force(value)}` };
+  return new Unperforated(value, () => `${head()}min(${terms.yieldSymbols}, ${terms.ruptureSymbols}) = min(${terms.yieldNumbers()}, ${terms.ruptureNumbers()}) = ${force(value)}`);
 }

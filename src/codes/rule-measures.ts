@@ -2,19 +2,29 @@
  * What spacing, end and edge rules of any design code measure on a joint: the plates a hole passes,
  * the outside plates of a bolt stack, and the governing (worst) measurement of a rule.
  */
+import { groupHoles } from "../geometry/joint-builder.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { Citation, RuleCheck } from "../model/results.js";
 import { rule } from "./check-builders.js";
 
-/** Plates (not packing) through which a hole passes. */
-export function platesThrough(joint: Joint, hole: Hole): PlatePiece[] {
-  return joint.plates.filter((p) => p.role !== "packing" && p.connections.some((c) => c.group === hole.group));
+/** Whether a plate takes load from a bolt group (its holes pass through the plate). */
+export function connects(plate: PlatePiece, group: Hole["group"]): boolean {
+  for (const c of plate.connections) if (c.group === group) return true;
+  return false;
 }
 
-/** Thickness of the thinner plate that two holes both pass through. */
+/** Plates (not packing) through which a hole passes. */
+export function platesThrough(joint: Joint, hole: Hole): PlatePiece[] {
+  return joint.plates.filter((p) => p.role !== "packing" && connects(p, hole.group));
+}
+
+/** Thickness of the thinner plate that two holes both pass through (Infinity: none). */
 export function pairThickness(joint: Joint, a: Hole, b: Hole): number {
-  const shared = platesThrough(joint, a).filter((p) => platesThrough(joint, b).includes(p));
-  return Math.min(...shared.map((p) => p.spec.thickness_mm));
+  let t = Infinity;
+  for (const p of joint.plates) {
+    if (p.role !== "packing" && connects(p, a.group) && connects(p, b.group)) t = Math.min(t, p.spec.thickness_mm);
+  }
+  return t;
 }
 
 /** Plates at either face of some bolt group's stack (the "outside" or "outer" plates of the codes). */
@@ -34,8 +44,7 @@ export function holePlates(joint: Joint): PlatePiece[] {
 
 /** Every hole of every bolt group a plate connects to. */
 export function platesHoles(joint: Joint, plate: PlatePiece): Hole[] {
-  const groups = new Set(plate.connections.map((c) => c.group));
-  return joint.holes.filter((h) => groups.has(h.group));
+  return joint.holes.filter((h) => connects(plate, h.group));
 }
 
 /** One measurement of a rule: the value, its limit, where, and the text of its working (built on demand). */
@@ -50,8 +59,20 @@ export interface Worst {
 /** The worse of two measurements: the higher value/limit for a maximum, limit/value for a minimum. */
 export function keepWorst(current: Worst | null, next: Worst, bound: "min" | "max"): Worst {
   if (!current) return next;
-  const ratio = (w: Worst) => (bound === "max" ? w.value / w.limit : w.limit / w.value);
-  return ratio(next) > ratio(current) + 1e-12 ? next : current;
+  return worstRatio(next.value, next.limit, bound) > worstRatio(current.value, current.limit, bound) + 1e-12 ? next : current;
+}
+
+/** How near a measurement is to its limit: value/limit for a maximum, limit/value for a minimum. */
+function worstRatio(value: number, limit: number, bound: "min" | "max"): number {
+  return bound === "max" ? value / limit : limit / value;
+}
+
+/**
+ * Whether a measurement would replace the current worst (keepWorst's test, without building the
+ * measurement): for loops over many hole pairs that build the text closure only for a new worst.
+ */
+export function beatsWorst(current: Worst | null, value: number, limit: number, bound: "min" | "max"): boolean {
+  return !current || worstRatio(value, limit, bound) > worstRatio(current.value, current.limit, bound) + 1e-12;
 }
 
 /** The rule check of the governing measurement, or nothing when the rule measured nothing. */
@@ -89,9 +110,9 @@ export function worstRule(
 export function groupCentroidRule(joint: Joint, citation: Citation): RuleCheck[] {
   let worst: Worst | null = null;
   for (const g of joint.groups) {
-    const holes = joint.holes.filter((h) => h.group === g.id);
+    const holes = groupHoles(joint, g.id);
     const yc = holes.reduce((a, h) => a + h.y_mm, 0) / holes.length;
-    worst = keepWorst(worst, { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${Math.abs(yc).toFixed(2)} mm vs 0.5 mm` }, "max");
+    if (beatsWorst(worst, Math.abs(yc), 0.5, "max")) worst = { value: Math.abs(yc), limit: 0.5, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `centroid offset from the plate axis ${Math.abs(yc).toFixed(2)} mm vs 0.5 mm` };
   }
   return worstRule("group-centroid", "group-centroid", "Bolt group on the plate axis", citation, "|y centroid| ≤ 0.5 mm", "max", worst);
 }
@@ -101,18 +122,39 @@ export function groupCentroidRule(joint: Joint, citation: Citation): RuleCheck[]
  * visited with the first of them), with that plate and its holes.
  */
 export function forEachHolePair(joint: Joint, visit: (plate: PlatePiece, a: Hole, b: Hole, holes: readonly Hole[]) => void): void {
-  const seen = new Set<string>();
-  for (const plate of holePlates(joint)) {
+  const plates = holePlates(joint);
+  for (let k = 0; k < plates.length; k++) {
+    const plate = plates[k]!;
     const holes = platesHoles(joint, plate);
     for (let i = 0; i < holes.length; i++) {
       for (let j = i + 1; j < holes.length; j++) {
         const a = holes[i]!;
         const b = holes[j]!;
-        const key = `${a.id}|${b.id}`;
-        if (seen.has(key)) continue;
-        seen.add(key);
-        visit(plate, a, b, holes);
+        // The pair was visited with an earlier plate if one holds both holes' groups.
+        if (!sharedEarlier(plates, k, a.group, b.group)) visit(plate, a, b, holes);
       }
     }
+  }
+}
+
+/** Whether a plate before plates[k] connects to both groups. */
+function sharedEarlier(plates: readonly PlatePiece[], k: number, groupA: Hole["group"], groupB: Hole["group"]): boolean {
+  for (let m = 0; m < k; m++) if (connects(plates[m]!, groupA) && connects(plates[m]!, groupB)) return true;
+  return false;
+}
+
+/** Pairs of a joint's holes (ordered: a then b), for rules that must measure each pair once. */
+export class PairSet {
+  readonly #index = new Map<Hole, number>();
+  readonly #seen = new Set<number>();
+  constructor(holes: readonly Hole[]) {
+    holes.forEach((h, i) => this.#index.set(h, i));
+  }
+  /** Adds the pair; false when it was there already. */
+  addNew(a: Hole, b: Hole): boolean {
+    const key = this.#index.get(a)! * this.#index.size + this.#index.get(b)!;
+    if (this.#seen.has(key)) return false;
+    this.#seen.add(key);
+    return true;
   }
 }

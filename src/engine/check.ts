@@ -52,7 +52,10 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
     senses,
     strengthBySense: bySense,
     efficiency: jointStrength / plain.value_N,
-    efficiencyDefinition: plain.definition,
+    // The definition in words, written when an output reads it (the number above never uses it).
+    get efficiencyDefinition() {
+      return plain.definition;
+    },
     unperforatedStrength_N: plain.value_N,
     maxUtilisation,
     pass: checks.every((c) => c.pass),

@@ -51,7 +51,7 @@ function weight(t: number, p0: number, p1: number): number {
 }
 
 /** Shear plane along gauge line y from u = 0 to u = uLast. */
-function shearPlane(holes: LocalHole[], y: number, uLast: number): BlockPlane {
+function shearPlane(holes: readonly LocalHole[], y: number, uLast: number): BlockPlane {
   let deduction = 0;
   for (const h of holes) if (near(h.y, y)) deduction += weight(h.u, 0, uLast) * h.along;
   // A hole at u = 0 cannot exist (end distance > 0), so the ½ weight applies only at uLast.
@@ -59,10 +59,93 @@ function shearPlane(holes: LocalHole[], y: number, uLast: number): BlockPlane {
 }
 
 /** Tension plane across the force at u = uLast, from y0 to y1 (y0 < y1; either may be a plate edge). */
-function tensionPlane(holes: LocalHole[], uLast: number, y0: number, y1: number): BlockPlane {
+function tensionPlane(holes: readonly LocalHole[], uLast: number, y0: number, y1: number): BlockPlane {
   let deduction = 0;
   for (const h of holes) if (near(h.u, uLast)) deduction += weight(h.y, y0, y1) * h.across;
   return { gross_mm: y1 - y0, net_mm: y1 - y0 - deduction };
+}
+
+/** Which of the shapes above a block is; with the gauge lines it spans, it names the block. */
+type BlockForm = "central" | "edge-strips" | "lower-strip" | "upper-strip";
+
+/** The words for a block (written only when a sheet reads them). */
+function describeBlock(form: BlockForm, a: number, b: number, G: number): string {
+  switch (form) {
+    case "central":
+      return `central block between gauge lines ${a + 1} and ${b + 1} of ${G}`;
+    case "edge-strips":
+      return a === 0 ? "edge strips outside the outer gauge lines" : `edge strips, gauge lines 1–${a + 1} and ${b + 1}–${G} of ${G}`;
+    case "lower-strip":
+      return a === G - 1 ? `one-sided block, shear plane on gauge line ${G} of ${G}, tension plane to the ${G === 1 ? "edge at −y" : "far edge (−y)"}` : `one edge strip, gauge lines 1–${a + 1} of ${G}`;
+    case "upper-strip":
+      return a === 0 ? `one-sided block, shear plane on gauge line 1 of ${G}, tension plane to the ${G === 1 ? "edge at +y" : "far edge (+y)"}` : `one edge strip, gauge lines ${a + 1}–${G} of ${G}`;
+  }
+}
+
+/** A block's plane lengths and bolts, with its description written on first read. */
+class Block implements BlockShape {
+  constructor(
+    private readonly form: BlockForm,
+    private readonly lineA: number,
+    private readonly lineB: number,
+    private readonly lineCount: number,
+    readonly shearGross_mm: number,
+    readonly shearNet_mm: number,
+    readonly tensionGross_mm: number,
+    readonly tensionNet_mm: number,
+    readonly boltsInBlock: number,
+  ) {}
+  get description(): string {
+    return describeBlock(this.form, this.lineA, this.lineB, this.lineCount);
+  }
+}
+
+/** The holes of one gauge line (in the group's order) and the farthest of them from the plate end. */
+interface GaugeLineOfBlock {
+  y: number;
+  holes: LocalHole[];
+  maxU: number;
+}
+
+/** Gauge lines of the local holes, sorted by y (holes within the line tolerance share a line). */
+function blockGaugeLines(local: readonly LocalHole[]): GaugeLineOfBlock[] {
+  const ys = local.map((h) => h.y);
+  // Insertion sort: a group has tens of holes.
+  for (let i = 1; i < ys.length; i++) {
+    const y = ys[i]!;
+    let j = i - 1;
+    while (j >= 0 && ys[j]! > y) {
+      ys[j + 1] = ys[j]!;
+      j--;
+    }
+    ys[j + 1] = y;
+  }
+  const lines: GaugeLineOfBlock[] = [];
+  for (const y of ys) if (lines.length === 0 || !near(lines[lines.length - 1]!.y, y)) lines.push({ y, holes: [], maxU: -Infinity });
+  for (const h of local) {
+    let k = 0;
+    while (!(h.y >= lines[k]!.y - LINE_TOLERANCE_MM && h.y <= lines[k]!.y + LINE_TOLERANCE_MM)) k++;
+    const line = lines[k]!;
+    line.holes.push(h);
+    line.maxU = Math.max(line.maxU, h.u);
+  }
+  return lines;
+}
+
+/** Bolts on gauge lines lo … hi and the farthest of them from the plate end (the block's tension plane). */
+function span(lines: readonly GaugeLineOfBlock[], lo: number, hi: number): { bolts: number; uLast: number } {
+  let bolts = 0;
+  let uLast = -Infinity;
+  for (let k = lo; k <= hi; k++) {
+    bolts += lines[k]!.holes.length;
+    uLast = Math.max(uLast, lines[k]!.maxU);
+  }
+  return { bolts, uLast };
+}
+
+/** Shear plane along a gauge line from u = 0 to u = uLast (only that line's holes lie on it). */
+function shearPlaneOn(line: GaugeLineOfBlock, uLast: number): BlockPlane {
+  return shearPlane(line.holes, line.y, uLast);
 }
 
 /**
@@ -75,32 +158,19 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
     across: h.across_mm,
     along: h.along_mm,
   }));
-  const ys: number[] = [];
-  for (const y of [...local.map((h) => h.y)].sort((a, b) => a - b)) {
-    if (ys.length === 0 || !near(ys[ys.length - 1]!, y)) ys.push(y);
-  }
-  const G = ys.length;
+  const lines = blockGaugeLines(local);
+  const G = lines.length;
   const half = width_mm / 2;
   const shapes: BlockShape[] = [];
-  const inLines = (lo: number, hi: number) => local.filter((h) => h.y >= ys[lo]! - LINE_TOLERANCE_MM && h.y <= ys[hi]! + LINE_TOLERANCE_MM);
-  const lastU = (hs: LocalHole[]) => Math.max(...hs.map((h) => h.u));
 
   // Central blocks between gauge lines a < b.
   for (let a = 0; a < G; a++) {
     for (let b = a + 1; b < G; b++) {
-      const block = inLines(a, b);
-      const uLast = lastU(block);
-      const sa = shearPlane(local, ys[a]!, uLast);
-      const sb = shearPlane(local, ys[b]!, uLast);
-      const t = tensionPlane(local, uLast, ys[a]!, ys[b]!);
-      shapes.push({
-        description: `central block between gauge lines ${a + 1} and ${b + 1} of ${G}`,
-        shearGross_mm: sa.gross_mm + sb.gross_mm,
-        shearNet_mm: sa.net_mm + sb.net_mm,
-        tensionGross_mm: t.gross_mm,
-        tensionNet_mm: t.net_mm,
-        boltsInBlock: block.length,
-      });
+      const { bolts, uLast } = span(lines, a, b);
+      const sa = shearPlaneOn(lines[a]!, uLast);
+      const sb = shearPlaneOn(lines[b]!, uLast);
+      const t = tensionPlane(local, uLast, lines[a]!.y, lines[b]!.y);
+      shapes.push(new Block("central", a, b, G, sa.gross_mm + sb.gross_mm, sa.net_mm + sb.net_mm, t.gross_mm, t.net_mm, bolts));
     }
   }
 
@@ -108,20 +178,14 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
   for (let a = 0; a < G; a++) {
     const m = G - 1 - a;
     if (a >= m) break;
-    const block = [...inLines(0, a), ...inLines(m, G - 1)];
-    const uLast = lastU(block);
-    const sa = shearPlane(local, ys[a]!, uLast);
-    const sm = shearPlane(local, ys[m]!, uLast);
-    const t0 = tensionPlane(local, uLast, -half, ys[a]!);
-    const t1 = tensionPlane(local, uLast, ys[m]!, half);
-    shapes.push({
-      description: a === 0 ? "edge strips outside the outer gauge lines" : `edge strips, gauge lines 1–${a + 1} and ${m + 1}–${G} of ${G}`,
-      shearGross_mm: sa.gross_mm + sm.gross_mm,
-      shearNet_mm: sa.net_mm + sm.net_mm,
-      tensionGross_mm: t0.gross_mm + t1.gross_mm,
-      tensionNet_mm: t0.net_mm + t1.net_mm,
-      boltsInBlock: block.length,
-    });
+    const low = span(lines, 0, a);
+    const high = span(lines, m, G - 1);
+    const uLast = Math.max(low.uLast, high.uLast);
+    const sa = shearPlaneOn(lines[a]!, uLast);
+    const sm = shearPlaneOn(lines[m]!, uLast);
+    const t0 = tensionPlane(local, uLast, -half, lines[a]!.y);
+    const t1 = tensionPlane(local, uLast, lines[m]!.y, half);
+    shapes.push(new Block("edge-strips", a, m, G, sa.gross_mm + sm.gross_mm, sa.net_mm + sm.net_mm, t0.gross_mm + t1.gross_mm, t0.net_mm + t1.net_mm, low.bolts + high.bolts));
   }
 
   // One edge strip, bounded by one side edge: lines 0..a with its shear plane on line a and its tension
@@ -129,30 +193,14 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
   // one-sided block: the shear plane along one outer line, the tension plane from it across every line
   // to the far edge (for a single gauge line, the shear plane along it and the tension plane to one edge).
   for (let a = 0; a < G; a++) {
-    const lower = inLines(0, a);
-    const uL = lastU(lower);
-    const sL = shearPlane(local, ys[a]!, uL);
-    const tL = tensionPlane(local, uL, -half, ys[a]!);
-    shapes.push({
-      description: a === G - 1 ? `one-sided block, shear plane on gauge line ${G} of ${G}, tension plane to the ${G === 1 ? "edge at −y" : "far edge (−y)"}` : `one edge strip, gauge lines 1–${a + 1} of ${G}`,
-      shearGross_mm: sL.gross_mm,
-      shearNet_mm: sL.net_mm,
-      tensionGross_mm: tL.gross_mm,
-      tensionNet_mm: tL.net_mm,
-      boltsInBlock: lower.length,
-    });
-    const upper = inLines(a, G - 1);
-    const uU = lastU(upper);
-    const sU = shearPlane(local, ys[a]!, uU);
-    const tU = tensionPlane(local, uU, ys[a]!, half);
-    shapes.push({
-      description: a === 0 ? `one-sided block, shear plane on gauge line 1 of ${G}, tension plane to the ${G === 1 ? "edge at +y" : "far edge (+y)"}` : `one edge strip, gauge lines ${a + 1}–${G} of ${G}`,
-      shearGross_mm: sU.gross_mm,
-      shearNet_mm: sU.net_mm,
-      tensionGross_mm: tU.gross_mm,
-      tensionNet_mm: tU.net_mm,
-      boltsInBlock: upper.length,
-    });
+    const lower = span(lines, 0, a);
+    const sL = shearPlaneOn(lines[a]!, lower.uLast);
+    const tL = tensionPlane(local, lower.uLast, -half, lines[a]!.y);
+    shapes.push(new Block("lower-strip", a, a, G, sL.gross_mm, sL.net_mm, tL.gross_mm, tL.net_mm, lower.bolts));
+    const upper = span(lines, a, G - 1);
+    const sU = shearPlaneOn(lines[a]!, upper.uLast);
+    const tU = tensionPlane(local, upper.uLast, lines[a]!.y, half);
+    shapes.push(new Block("upper-strip", a, a, G, sU.gross_mm, sU.net_mm, tU.gross_mm, tU.net_mm, upper.bolts));
   }
   return shapes;
 }

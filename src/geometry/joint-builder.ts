@@ -10,7 +10,7 @@
  * and cover A.
  */
 import type { CheckableScenario, HoleType, PlateSpec, SlotDirection } from "../model/scenario.js";
-import type { BoltGroupGeometry, Hole, Joint, PlateId, PlatePiece } from "../model/joint.js";
+import type { BoltGroupGeometry, GroupId, Hole, Joint, PlateId, PlatePiece } from "../model/joint.js";
 import { describePattern, loadedEndDistance, patternHoles } from "./patterns.js";
 
 export interface HoleDimensions {
@@ -80,6 +80,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     const group: BoltGroupGeometry = {
       id: "J",
       holeIds: holes.map((h) => h.id),
+      holes,
       shearPlanes: 1,
       stack: ["mainA", "mainB"],
       grip_mm: plates.mainA.thickness_mm + plates.mainB.thickness_mm,
@@ -161,6 +162,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     return {
       id,
       holeIds: holes.map((h) => h.id),
+      holes,
       shearPlanes: doubleCover ? 2 : 1,
       stack: stackIds,
       grip_mm: coverThickness + pack + (id === "A" ? tA : tB),
@@ -181,11 +183,18 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
 }
 
 /** Holes that pass through a plate: every hole of every group the plate connects to, or the packing's side. */
-export function holesOfPlate(joint: Joint, plate: PlatePiece): Hole[] {
+export function holesOfPlate(joint: Joint, plate: PlatePiece): readonly Hole[] {
   if (plate.role === "packing") {
     const group = joint.groups.find((g) => g.packing_mm > 0);
-    return group ? joint.holes.filter((h) => h.group === group.id) : [];
+    return group ? group.holes : [];
   }
+  if (plate.connections.length === 1) return groupHoles(joint, plate.connections[0]!.group);
   const groups = new Set(plate.connections.map((c) => c.group));
   return joint.holes.filter((h) => groups.has(h.group));
+}
+
+/** The holes of one bolt group, as the joint builder sorted them (no filtering per call). */
+export function groupHoles(joint: Joint, group: GroupId): readonly Hole[] {
+  for (const g of joint.groups) if (g.id === group) return g.holes;
+  return [];
 }

@@ -10,7 +10,7 @@
  * by dynamic programming over every pair of holes — no list of "likely" paths.
  */
 import type { Hole, PlatePiece } from "../model/joint.js";
-import { LINE_TOLERANCE_MM } from "./lines.js";
+import { LINE_TOLERANCE_MM, sortedHoles } from "./lines.js";
 
 export interface NetPath {
   /** Holes on the path, from the lower edge (y = −b/2) to the upper. */
@@ -50,7 +50,7 @@ export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: P
 export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: PathFilter = {}): NetPath | null {
   const half = width_mm / 2;
   const allowed = filter.allowed;
-  const sorted = (allowed ? holes.filter(allowed) : [...holes]).sort((a, b) => a.y_mm - b.y_mm || a.x_mm - b.x_mm);
+  const sorted = sortedHoles(allowed ? holes.filter(allowed) : holes, (a, b) => a.y_mm - b.y_mm || a.x_mm - b.x_mm);
   const tagOf = filter.tag ?? (() => 0);
   const required = filter.required ?? 0;
   const masks = required === 0 && !filter.tag ? 1 : 4;

@@ -53,6 +53,8 @@ export interface PlatePiece {
 export interface BoltGroupGeometry {
   id: GroupId;
   holeIds: string[];
+  /** The group's holes, in the order of the joint's hole list (shared with it: read, never modify). */
+  holes: readonly Hole[];
   /** Shear planes each bolt of the group crosses. */
   shearPlanes: number;
   /** Plates the bolts of this group pass through, top to bottom. */

@@ -115,7 +115,7 @@ export interface CheckReport {
  * A search runs thousands of checks and shows a few; the figures are identical either way.
  * (Getters live on the prototype: read them by name, as the report writers do.)
  */
-class LazyText {
+export class LazyText {
   #substituted: (() => string) | string;
   #notes: (() => string[]) | string[];
   constructor(substituted: () => string, notes: () => string[]) {

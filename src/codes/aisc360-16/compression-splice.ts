@@ -100,7 +100,7 @@ function compressionPitchRule(joint: Joint): RuleCheck[] {
   const Fy = Math.max(...holePlates(joint).map((p) => p.fy_MPa));
   const cap = inchBoltSize(joint.boltDiameter_mm) !== undefined ? 12 * MM_PER_IN : 305;
   const k = 0.75 * Math.sqrt(E_STEEL_MPA / Fy);
-  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(k * t, cap), text: `min(0.75 t √(E/Fy) = ${f(k, 2)} t, ${f(cap)} mm), Fy ${f(Fy)} MPa` }));
+  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(k * t, cap), text: () => `min(0.75 t √(E/Fy) = ${f(k, 2)} t, ${f(cap)} mm), Fy ${f(Fy)} MPa` }));
   if (!worst) return [];
   return [
     rule({

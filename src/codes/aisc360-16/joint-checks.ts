@@ -4,7 +4,7 @@
  */
 import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
 import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
-import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
@@ -56,7 +56,7 @@ export function aiscBolt(bolts: Pick<BoltSpec, "size_mm" | "astmGrade" | "proper
 /** Reductions of one group's bolt shear: long joint (Table J3.2 [b]), fillers (J5.2), A307 grip ([c]). */
 export interface GroupShear {
   group: BoltGroupGeometry;
-  holes: Hole[];
+  holes: readonly Hole[];
   patternLength_mm: number;
   longJoint: number;
   filler: number;
@@ -67,7 +67,7 @@ export interface GroupShear {
 
 export function groupShear(joint: Joint, scenario: Scenario & { bolts: BoltSpec }, group: BoltGroupGeometry): GroupShear {
   const bolt = aiscBolt(scenario.bolts);
-  const holes = joint.holes.filter((h) => h.group === group.id);
+  const holes = groupHoles(joint, group.id);
   const length = jointLength_mm(holes);
   const lj = longJointFactor(length, bolt.inch !== undefined);
   const filler = fillerFactor(group.packing_mm, scenario.options.fillersDeveloped ?? false);
@@ -294,7 +294,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const u = unitText(scenario);
-  const holes = netHoles(joint.holes.filter((h) => h.group === connection.group), joint.boltDiameter_mm);
+  const holes = netHoles(groupHoles(joint, connection.group), joint.boltDiameter_mm);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;

@@ -7,7 +7,7 @@ import { distance, gaugeLines } from "../../geometry/lines.js";
 import type { Joint } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
-import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { unitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
@@ -55,7 +55,7 @@ export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
   let worst: Worst | null = null;
   forEachHolePair(joint, (plate, a, b) => {
     const s = distance(a, b);
-    worst = keepWorst(worst, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * joint.boltDiameter_mm)} preferred)` }, "min");
+    if (beatsWorst(worst, s, limit, "min")) worst = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * joint.boltDiameter_mm)} preferred)` };
   });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("J3.3"), "s ≥ 2⅔ d", "min", worst);
 }
@@ -89,7 +89,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
         const b = line.holes[k]!;
         const limit = maxSpacing_mm(pairThickness(joint, a, b), isInch(joint), corrosion);
         const s = b.x_mm - a.x_mm;
-        along = keepWorst(along, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs ${u.len(limit)}` }, "max");
+        if (beatsWorst(along, s, limit, "max")) along = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs ${u.len(limit)}` };
       }
     }
     for (const group of new Set(holes.map((h) => h.group))) {
@@ -99,7 +99,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
         const b = gl[i]!.holes[0]!;
         const limit = maxSpacing_mm(pairThickness(joint, a, b), isInch(joint), corrosion);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(gl[i - 1]!.at_mm)} and ${u.len(gl[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` }, "max");
+        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(gl[i - 1]!.at_mm)} and ${u.len(gl[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` };
       }
     }
   }
@@ -132,16 +132,16 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     const maxLimit = maxEdge_mm(plate.spec.thickness_mm, isInch(joint));
     for (const h of holes) {
       const e = half - Math.abs(h.y_mm);
-      minEdge = keepWorst(minEdge, { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id}: ${u.len(e)} vs ${u.len(minLimit)}` }, "min");
-      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${isInch(joint) ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` }, "max");
+      if (beatsWorst(minEdge, e, minLimit, "min")) minEdge = { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id}: ${u.len(e)} vs ${u.len(minLimit)}` };
+      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${isInch(joint) ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` };
     }
     for (const c of plate.connections) {
       const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, e: c.towardEnd * (c.endX_mm - h.x_mm) }));
       for (const { h, e } of us) {
-        minEnd = keepWorst(minEnd, { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(minLimit)}` }, "min");
+        if (beatsWorst(minEnd, e, minLimit, "min")) minEnd = { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(minLimit)}` };
       }
       const nearest = us.reduce((m, x) => (x.e < m.e ? x : m), us[0]!);
-      maxEdge = keepWorst(maxEdge, { value: nearest.e, limit: maxLimit, where: plate.label, detail: () => `hole ${nearest.h.id} to the plate end: ${u.len(nearest.e)} vs ${u.len(maxLimit)}` }, "max");
+      if (beatsWorst(maxEdge, nearest.e, maxLimit, "max")) maxEdge = { value: nearest.e, limit: maxLimit, where: plate.label, detail: () => `hole ${nearest.h.id} to the plate end: ${u.len(nearest.e)} vs ${u.len(maxLimit)}` };
     }
   }
   const table = isInch(joint) ? "Table J3.4" : "Table J3.4M";
@@ -166,7 +166,7 @@ export function fillerRule(joint: Joint, scenario: CheckableScenario): RuleCheck
   let worst: Worst | null = null;
   for (const g of joint.groups) {
     if (g.packing_mm <= 0) continue;
-    worst = keepWorst(worst, { value: g.packing_mm, limit, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `filler ${u.len(g.packing_mm)} vs ${u.len(limit)} (undeveloped)` }, "max");
+    if (beatsWorst(worst, g.packing_mm, limit, "max")) worst = { value: g.packing_mm, limit, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `filler ${u.len(g.packing_mm)} vs ${u.len(limit)} (undeveloped)` };
   }
   return worstRule("filler-thickness", "filler-thickness", "Undeveloped filler thickness (the project's limit)", cl("J5.2", { also: ["J5.2(b) for developed fillers"] }), `t filler ≤ ${isInch(joint) ? "3/4 in" : "19 mm"} unless developed (the older text of J5.2; refuses more than 360-16 as recalled)`, "max", worst);
 }

@@ -193,13 +193,13 @@ function boundCode(bound: Ec3Settings): DesignCode {
       yield_N: Npl,
       rupture_N: Nu_Rd(A, m.fu_MPa, gamma_M2),
       yieldSymbols: "Npl,Rd = A·fy/γM0",
-      yieldNumbers: `${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}`,
+      yieldNumbers: () => `${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}`,
       ruptureSymbols: "Nu,Rd = 0.9·A·fu/γM2",
-      ruptureNumbers: `0.9 × ${f(A)} × ${m.fu_MPa}/${f(gamma_M2, 2)}`,
+      ruptureNumbers: () => `0.9 × ${f(A)} × ${m.fu_MPa}/${f(gamma_M2, 2)}`,
     };
     if (bound.category === "C") {
       const value = Math.min(Npl, Nnet_Rd(A, m.fy_MPa, gamma_M0));
-      terms.lesser = { value_N: value, text: `Category C: min(Npl,Rd, Nnet,Rd with Anet = A) = ${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}` };
+      terms.lesser = { value_N: value, text: () => `Category C: min(Npl,Rd, Nnet,Rd with Anet = A) = ${f(A)} × ${m.fy_MPa}/${f(gamma_M0, 2)}` };
     }
     return unperforatedOnBasis(terms, basis, (n) => kN(n));
   }

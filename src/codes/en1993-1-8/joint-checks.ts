@@ -4,7 +4,7 @@
  */
 import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
 import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
-import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
@@ -32,7 +32,7 @@ function alsoOf(refs: Array<string | false>): { also?: string[] } {
 /** One bolt group with its shear resistance and the reductions that set it. */
 export interface Ec3Group {
   group: BoltGroupGeometry;
-  holes: Hole[];
+  holes: readonly Hole[];
   /** Distance between the centres of the end fasteners along the force, mm (3.8). */
   Lj_mm: number;
   beta_Lf: number;
@@ -53,7 +53,7 @@ export interface Ec3Group {
 export function groupOf(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, group: BoltGroupGeometry): Ec3Group {
   const { bolts } = scenario;
   const d = bolts.size_mm;
-  const holes = joint.holes.filter((h) => h.group === group.id);
+  const holes = groupHoles(joint, group.id);
   const Lj = jointLength_mm(holes);
   const bolt = boltStrength(bolts.propertyClass, d);
   const threads = bolts.threadsInShearPlanes;
@@ -373,7 +373,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
   const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);
   const ratio = plate.forceShare * fraction;
   const pathText = pathLabel(path);
-  const resistance = catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
+  const resistance = () => catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",
@@ -387,7 +387,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
       (transferred ? "k = bolts not yet passed; highest demand/resistance over all paths" : "least over all paths"),
     substituted: () =>
       `${transferred ? "governing" : "least"} path ${pathText}: Anet = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(Anet)} mm²;  ` +
-      `${resistance} = ${kN(R)}` +
+      `${resistance()} = ${kN(R)}` +
       (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
       shareText(plate),
     limitState: "ULS",
@@ -405,7 +405,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
 export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
-  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const holes = groupHoles(joint, connection.group);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const { gamma_M0, gamma_M2 } = s.factors;

@@ -9,7 +9,7 @@ import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { holeWidth } from "./holes.js";
 
@@ -36,7 +36,7 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
       const factor = slotted(h) ? 1.5 : 1.2;
       const name = slotted(h) ? "e4" : "e2";
       const edge = half - Math.abs(h.y_mm) - (h.across_mm - d0) / 2;
-      minEdge = keepWorst(minEdge, { value: edge, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id}: ${name} = ${f(edge)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` }, "min");
+      if (beatsWorst(minEdge, edge, factor * d0, "min")) minEdge = { value: edge, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id}: ${name} = ${f(edge)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
     }
     for (const c of plate.connections) {
       for (const h of holes.filter((k) => k.group === c.group)) {
@@ -44,7 +44,7 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
         const factor = slotted(h) ? 1.5 : 1.2;
         const name = slotted(h) ? "e3" : "e1";
         const end = c.towardEnd * (c.endX_mm - h.x_mm) - (h.along_mm - d0) / 2;
-        minEnd = keepWorst(minEnd, { value: end, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${name} = ${f(end)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` }, "min");
+        if (beatsWorst(minEnd, end, factor * d0, "min")) minEnd = { value: end, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${name} = ${f(end)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
       }
     }
   }
@@ -54,15 +54,29 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
   ];
 }
 
-const cell = (x: number, y: number) => `${Math.round(x / LINE_TOLERANCE_MM)}:${Math.round(y / LINE_TOLERANCE_MM)}`;
+/** The hole centres of a plate on a grid of the line tolerance: which cells hold a hole. */
+class OccupiedCells {
+  readonly #rows = new Map<number, Set<number>>();
+  constructor(holes: readonly Hole[]) {
+    for (const h of holes) {
+      const x = Math.round(h.x_mm / LINE_TOLERANCE_MM);
+      let row = this.#rows.get(x);
+      if (!row) this.#rows.set(x, (row = new Set()));
+      row.add(Math.round(h.y_mm / LINE_TOLERANCE_MM));
+    }
+  }
+  has(x_mm: number, y_mm: number): boolean {
+    return this.#rows.get(Math.round(x_mm / LINE_TOLERANCE_MM))?.has(Math.round(y_mm / LINE_TOLERANCE_MM)) ?? false;
+  }
+}
 
 /**
  * Two holes staggered against each other: on different gauge lines and transverse lines, with no hole
  * of the plate at the other corners of their rectangle (a grid's diagonal is not a stagger).
- * @param occupied the plate's hole centres as `cell` keys
+ * @param occupied the plate's hole centres
  */
-function staggeredPair(occupied: ReadonlySet<string>, a: Hole, b: Hole): boolean {
-  return !occupied.has(cell(a.x_mm, b.y_mm)) && !occupied.has(cell(b.x_mm, a.y_mm));
+function staggeredPair(occupied: OccupiedCells, a: Hole, b: Hole): boolean {
+  return !occupied.has(a.x_mm, b.y_mm) && !occupied.has(b.x_mm, a.y_mm);
 }
 
 /**
@@ -75,22 +89,22 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
   let gauge: Worst | null = null;
   let staggerGauge: Worst | null = null;
   let staggerDistance: Worst | null = null;
-  const occupiedBy = new Map<PlatePiece, Set<string>>();
+  const occupiedBy = new Map<PlatePiece, OccupiedCells>();
   forEachHolePair(joint, (plate, a, b, holes) => {
     let occupied = occupiedBy.get(plate);
-    if (!occupied) occupiedBy.set(plate, (occupied = new Set(holes.map((h) => cell(h.x_mm, h.y_mm)))));
+    if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
     const d0 = Math.max(holeWidth(a), holeWidth(b));
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
-    const pair = `holes ${a.id}–${b.id}`;
+    const pair = () => `holes ${a.id}–${b.id}`;
     if (dy <= LINE_TOLERANCE_MM) {
-      pitch = keepWorst(pitch, { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `${pair}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` }, "min");
+      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `${pair()}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
     } else if (dx <= LINE_TOLERANCE_MM) {
-      gauge = keepWorst(gauge, { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `${pair}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` }, "min");
+      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `${pair()}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     } else if (staggeredPair(occupied, a, b)) {
       const L = distance(a, b);
-      staggerGauge = keepWorst(staggerGauge, { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `${pair} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` }, "min");
-      staggerDistance = keepWorst(staggerDistance, { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `${pair} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` }, "min");
+      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `${pair()} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
+      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `${pair()} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     }
   });
   const citation = cl("3.5", { table: "Table 3.3" });
@@ -123,11 +137,11 @@ export function maxRules(joint: Joint, scenario: CheckableScenario): RuleCheck[]
     const half = plate.spec.width_mm / 2;
     const ys = holes.map((h) => h.y_mm);
     for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
-      edges = keepWorst(edges, { value: e, limit: eMax, where: plate.label, detail: () => `${side} edge to the nearest gauge line: e2 = ${f(e)} mm vs 4t + 40 = 4 × ${f(t)} + 40 = ${f(eMax)} mm` }, "max");
+      if (beatsWorst(edges, e, eMax, "max")) edges = { value: e, limit: eMax, where: plate.label, detail: () => `${side} edge to the nearest gauge line: e2 = ${f(e)} mm vs 4t + 40 = 4 × ${f(t)} + 40 = ${f(eMax)} mm` };
     }
     for (const c of plate.connections) {
       const nearest = Math.min(...holes.filter((h) => h.group === c.group).map((h) => c.towardEnd * (c.endX_mm - h.x_mm)));
-      edges = keepWorst(edges, { value: nearest, limit: eMax, where: plate.label, detail: () => `plate end to the nearest transverse line: e1 = ${f(nearest)} mm vs 4t + 40 = 4 × ${f(t)} + 40 = ${f(eMax)} mm` }, "max");
+      if (beatsWorst(edges, nearest, eMax, "max")) edges = { value: nearest, limit: eMax, where: plate.label, detail: () => `plate end to the nearest transverse line: e1 = ${f(nearest)} mm vs 4t + 40 = 4 × ${f(t)} + 40 = ${f(eMax)} mm` };
     }
     const lines = gaugeLines(holes);
     lines.forEach((line, index) => {
@@ -150,7 +164,7 @@ export function maxRules(joint: Joint, scenario: CheckableScenario): RuleCheck[]
       for (let i = 1; i < gl.length; i++) {
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
         const limit = Math.min(14 * t, 200);
-        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: p2 = ${f(g)} mm vs min(14t, 200) with t = ${f(t)} → ${f(limit)} mm` }, "max");
+        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: p2 = ${f(g)} mm vs min(14t, 200) with t = ${f(t)} → ${f(limit)} mm` };
       }
     }
   }

@@ -89,7 +89,7 @@ export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate
 
 /** Pitch along the force in compression: p ≤ min(12 t, 200 mm), t the thinner plate. IS 800:2007, cl. 10.2.3.2. */
 export function compressionPitchRule(joint: Joint): RuleCheck[] {
-  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(12 * t, 200), text: "min(12t, 200)" }));
+  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(12 * t, 200), text: () => "min(12t, 200)" }));
   if (!worst) return [];
   return [
     rule({

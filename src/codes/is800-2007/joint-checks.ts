@@ -4,7 +4,7 @@
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
-import { holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { tearOutDistances } from "../../geometry/tear-out.js";
@@ -23,7 +23,7 @@ import { Tdb, Tdg, Tdn } from "./tension-member.js";
 
 export interface GroupFactors {
   group: BoltGroupGeometry;
-  holes: Hole[];
+  holes: readonly Hole[];
   lj_mm: number;
   beta_lj: number;
   beta_lg: number;
@@ -37,7 +37,7 @@ export function groupLabel(joint: Joint, group: BoltGroupGeometry): string {
 /** Reduction factors of one bolt group, from its hole coordinates (cl. 10.3.3.1–10.3.3.3). */
 export function groupFactors(joint: Joint, group: BoltGroupGeometry): GroupFactors {
   const d = joint.boltDiameter_mm;
-  const holes = joint.holes.filter((h) => h.group === group.id);
+  const holes = groupHoles(joint, group.id);
   const lj = jointLength_mm(holes);
   const blj = beta_lj(lj, d);
   return {
@@ -125,15 +125,15 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
   const { bolts, options } = scenario;
   const d = bolts.size_mm;
   const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
-  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const holes = groupHoles(joint, connection.group);
   const b = bearingFactor(holes, connection, mat.fub_MPa, plate.fu_MPa);
   const holeFactor = bearingHoleFactor(bolts.hole);
   const t = plate.spec.thickness_mm;
   const perBolt = Vdpb(b.kb, d, t, plate.fu_MPa, holeFactor);
   const n = holes.length;
   const T = scenario.load.factoredTension_N;
-  const eTerm = Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
-  const pTerm = Number.isFinite(b.p_mm)
+  const eTerm = () => Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
+  const pTerm = () => Number.isFinite(b.p_mm)
     ? `p/3d0 − 0.25 = ${f(b.p_mm)}/(3 × ${f(b.d0_mm)}) − 0.25 = ${f(b.p_mm / (3 * b.d0_mm) - 0.25, 3)}`
     : "p: no bolt behind another";
   const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
@@ -145,7 +145,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     citation: cl("10.3.4"),
     formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
     substituted: () =>
-      `kb = min(${eTerm}, ${pTerm}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
+      `kb = min(${eTerm()}, ${pTerm()}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
       `Vdpb = 2.5 × ${f(b.kb, 3)} × ${d} × ${f(t)} × ${plate.fu_MPa}${holeFactor !== 1 ? ` × ${holeFactor}` : ""} / ${PARTIAL_FACTORS.gamma_mb} = ${kN(perBolt, 2)};  ` +
       `n·Vdpb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}` +
       (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
@@ -273,7 +273,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
-  const holes = joint.holes.filter((h) => h.group === connection.group);
+  const holes = groupHoles(joint, connection.group);
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;

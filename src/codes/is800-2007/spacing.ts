@@ -2,12 +2,13 @@
  * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
-import { distance, gaugeLines, transverseLines } from "../../geometry/lines.js";
+import { groupHoles } from "../../geometry/joint-builder.js";
+import { distance, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, forEachHolePair, PairSet, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
@@ -31,13 +32,23 @@ export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_m
   return { staggered: true, gauge_mm: gauge };
 }
 
+/** Each bolt group's holes with their gauge lines and stagger, worked out once per rule. */
+function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }> {
+  const sets = new Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }>();
+  for (const g of joint.groups) {
+    const holes = groupHoles(joint, g.id);
+    sets.set(g.id, { gaugeLines: gaugeLines(holes), stagger: staggerOf(holes) });
+  }
+  return sets;
+}
+
 /** Minimum spacing between fastener centres, 2.5 d. IS 800:2007, cl. 10.2.2. */
 export function minSpacingRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   forEachHolePair(joint, (plate, a, b) => {
     const s = distance(a, b);
-    worst = keepWorst(worst, { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` }, "min");
+    if (beatsWorst(worst, s, 2.5 * d, "min")) worst = { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` };
   });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
 }
@@ -54,24 +65,30 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
   let pitch: Worst | null = null;
   let edgeLine: Worst | null = null;
   const outside = outsidePlates(joint);
-  const seen = new Set<string>();
+  const seen = new PairSet(joint.holes);
   let relaxedAnywhere = false;
+  const groups = groupHoleSets(joint);
+  const linesOfJoined = new Map<string, Line[]>();
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
-    const lines = gaugeLines(holes);
-    const stagger = staggerOf(holes.filter((h) => h.group === (plate.connections[0]?.group ?? h.group)));
+    // Plates joined to the same groups (both covers; a main plate and its own group) share their lines.
+    const joined = plate.connections.map((c) => c.group).join("+");
+    let lines = linesOfJoined.get(joined);
+    if (!lines) linesOfJoined.set(joined, (lines = gaugeLines(holes)));
+    const first = plate.connections[0];
+    const stagger = first ? groups.get(first.group)!.stagger : staggerOf(holes);
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (relax > 1) relaxedAnywhere = true;
     // Across: adjacent gauge lines, per group.
     for (const group of new Set(holes.map((h) => h.group))) {
-      const gl = gaugeLines(holes.filter((h) => h.group === group));
+      const gl = groups.get(group)!.gaugeLines;
       for (let i = 1; i < gl.length; i++) {
         const a = gl[i - 1]!.holes[0]!;
         const b = gl[i]!.holes[0]!;
         const t = pairThickness(joint, a, b);
         const limit = Math.min(32 * t, 300);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        across = keepWorst(across, { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` }, "max");
+        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
       }
     }
     // Along: consecutive holes on each gauge line.
@@ -81,23 +98,21 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
       for (let k = 1; k < line.holes.length; k++) {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
-        const key = `${a.id}|${b.id}`;
         const s = b.x_mm - a.x_mm;
         const t = pairThickness(joint, a, b);
         const cap = Math.min(32 * t, 300);
-        if (!seen.has(key)) {
-          seen.add(key);
+        if (seen.addNew(a, b)) {
           const base = Math.min(16 * t, 200);
           const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
           const limit = Math.min(base * r, cap);
-          pitch = keepWorst(pitch, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` }, "max");
+          if (beatsWorst(pitch, s, limit, "max")) pitch = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` };
         }
         if (edge && isOutside) {
           const tp = plate.spec.thickness_mm;
           const base = Math.min(100 + 4 * tp, 200);
           const r = a.group === b.group ? relax : 1.0;
           const limit = Math.min(base * r, Math.min(32 * tp, 300));
-          edgeLine = keepWorst(edgeLine, { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` }, "max");
+          if (beatsWorst(edgeLine, s, limit, "max")) edgeLine = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` };
         }
       }
     });
@@ -109,6 +124,13 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxed), "p ≤ min(16 t, 200 mm)", "max", pitch),
     ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxed), "p ≤ min(100 + 4 t, 200 mm)", "max", edgeLine),
   ];
+}
+
+/** Thickness of the thinner outside plate of the bolt stacks a plate belongs to (cl. 10.2.4.3). */
+function outerThickness(outside: readonly PlatePiece[], plate: PlatePiece): number {
+  let t = Infinity;
+  for (const p of outside) if (p.connections.some((c) => plate.connections.some((k) => k.group === c.group))) t = Math.min(t, p.spec.thickness_mm);
+  return t;
 }
 
 function minDistanceFactor(plate: PlatePiece): { factor: number; text: string } {
@@ -130,30 +152,36 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
     if (holes.length === 0) continue;
-    const { factor, text } = minDistanceFactor(plate);
+    const { factor } = minDistanceFactor(plate);
+    const text = () => minDistanceFactor(plate).text;
     const half = plate.spec.width_mm / 2;
-    const groups = new Set(plate.connections.map((c) => c.group));
-    const outerT = Math.min(...outside.filter((p) => p.connections.some((c) => groups.has(c.group))).map((p) => p.spec.thickness_mm));
+    const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
-    const maxText = scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
+    const maxText = () => scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
-      minEdge = keepWorst(minEdge, { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` }, "min");
+      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text()} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
     }
-    const ys = holes.map((h) => h.y_mm);
-    for (const [side, e] of [["lower", half + Math.min(...ys)], ["upper", half - Math.max(...ys)]] as const) {
-      maxEdge = keepWorst(maxEdge, { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+    let yMin = Infinity;
+    let yMax = -Infinity;
+    for (const h of holes) {
+      yMin = Math.min(yMin, h.y_mm);
+      yMax = Math.max(yMax, h.y_mm);
+    }
+    for (const [side, e] of [["lower", half + yMin], ["upper", half - yMax]] as const) {
+      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     }
     for (const c of plate.connections) {
-      const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, u: c.towardEnd * (c.endX_mm - h.x_mm) }));
-      for (const { h, u } of us) {
+      let nearest = Infinity;
+      for (const h of groupHoles(joint, c.group)) {
+        const u = c.towardEnd * (c.endX_mm - h.x_mm);
+        nearest = Math.min(nearest, u);
         const limit = factor * h.along_mm;
-        minEnd = keepWorst(minEnd, { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` }, "min");
+        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text()} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
       }
-      const nearest = Math.min(...us.map((x) => x.u));
-      maxEdge = keepWorst(maxEdge, { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText} = ${f(maxLimit)} mm` }, "max");
+      if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     }
   }
   return [
@@ -168,7 +196,7 @@ export function gripRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   for (const g of joint.groups) {
-    worst = keepWorst(worst, { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` }, "max");
+    if (beatsWorst(worst, g.grip_mm, 8 * d, "max")) worst = { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` };
   }
   return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
 }
