@@ -13,6 +13,7 @@
  *     Manual) plus 5/32 in for each F436 washer, rounded up to the next 1/4 in — from memory.
  */
 import { inchBoltSize } from "./bolts.js";
+import { hyphenatedInches } from "../units/units.js";
 import { HEX_NUT_HEIGHT_MM, HSFG_DIMENSIONS, iso4014ThreadLength_mm, PLAIN_WASHER_MM, PREFERRED_LENGTHS_MM, THREAD_PITCH_MM } from "./fasteners.js";
 
 const IN = 25.4;
@@ -60,16 +61,7 @@ export interface AssemblyInput {
 
 /** An inch length as a US shop writes it, to 1/16 in: 2-1/4 in. */
 export function inchFractionText(mm: number): string {
-  const sixteenths = Math.round((mm / IN) * 16);
-  const whole = Math.floor(sixteenths / 16);
-  let n = sixteenths % 16;
-  let den = 16;
-  while (n > 0 && n % 2 === 0) {
-    n /= 2;
-    den /= 2;
-  }
-  const frac = n > 0 ? `${n}/${den}` : "";
-  return `${whole > 0 ? whole : ""}${whole > 0 && frac ? "-" : ""}${frac || (whole > 0 ? "" : "0")} in`;
+  return `${hyphenatedInches(Math.round((mm / IN) * 16))} in`;
 }
 
 const mmText = (l: number) => `${Number(l.toFixed(1))} mm`;

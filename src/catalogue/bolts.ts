@@ -2,6 +2,7 @@
  * Bolt data: metric ISO sizes and property classes.
  * Every value carries its source beside it.
  */
+import { hyphenatedInches } from "../units/units.js";
 
 /** Metric bolt sizes the catalogue knows (nominal diameter, mm). */
 export const BOLT_SIZES_MM = [12, 16, 18, 20, 22, 24, 27, 30, 36] as const;
@@ -107,18 +108,7 @@ export function inchBoltSize(d_mm: number): number | undefined {
 
 /** An inch size as the trade writes it: "3/4 in", "1-1/8 in". */
 export function inchSizeText(d_in: number): string {
-  const whole = Math.floor(d_in + 1e-9);
-  const eighths = Math.round((d_in - whole) * 16);
-  const frac = eighths === 0 ? "" : (() => {
-    let n = eighths;
-    let den = 16;
-    while (n % 2 === 0) {
-      n /= 2;
-      den /= 2;
-    }
-    return `${n}/${den}`;
-  })();
-  return `${whole > 0 ? String(whole) : ""}${whole > 0 && frac ? "-" : ""}${frac} in`;
+  return `${hyphenatedInches(Math.round(d_in * 16))} in`;
 }
 
 /**

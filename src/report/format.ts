@@ -4,7 +4,7 @@
  * Dimensions keep the precision they have and no more: 62.5 mm prints "62.5", 60 mm prints "60",
  * 37.4 mm prints "37.4" (up to 0.01 mm; inches up to 0.001 in). Forces print to 0.1 kN or 0.1 kips.
  */
-import { toUnit } from "../units/units.js";
+import { sixteenthsParts, toUnit } from "../units/units.js";
 
 export type DisplayUnits = "si" | "us";
 
@@ -49,15 +49,9 @@ function sixteenthsOf(mm: number): number {
 
 /** Whole inches and a reduced fraction of sixteenths, "5 1/2", "3/4", "12", "0". */
 function inchesAndFraction(sixteenths: number): string {
-  const whole = Math.floor(sixteenths / 16);
-  let numerator = sixteenths % 16;
-  let denominator = 16;
-  while (numerator > 0 && numerator % 2 === 0) {
-    numerator /= 2;
-    denominator /= 2;
-  }
-  if (numerator === 0) return String(whole);
-  return whole > 0 ? `${whole} ${numerator}/${denominator}` : `${numerator}/${denominator}`;
+  const { whole, fraction } = sixteenthsParts(sixteenths);
+  if (!fraction) return String(whole);
+  return whole > 0 ? `${whole} ${fraction}` : fraction;
 }
 
 /**

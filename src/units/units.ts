@@ -85,3 +85,26 @@ export function fromUnit(value: number, unit: string, quantity: Quantity): numbe
 }
 
 export const N_PER_KN = 1000;
+
+/**
+ * A count of sixteenths of an inch as whole inches and a reduced fraction: 36 → { whole: 2, fraction: "1/4" },
+ * 12 → { whole: 0, fraction: "3/4" }, 32 → { whole: 2, fraction: "" }. Every inch text (sizes, lengths,
+ * dimensions) is written from this.
+ */
+export function sixteenthsParts(sixteenths: number): { whole: number; fraction: string } {
+  const whole = Math.floor(sixteenths / 16);
+  let numerator = sixteenths - whole * 16;
+  let denominator = 16;
+  while (numerator > 0 && numerator % 2 === 0) {
+    numerator /= 2;
+    denominator /= 2;
+  }
+  return { whole, fraction: numerator > 0 ? `${numerator}/${denominator}` : "" };
+}
+
+/** An inch amount as a bolt size or an ordered bolt length is written: "3/4", "1-1/8", "2-1/2", "2" ("0" for none). */
+export function hyphenatedInches(sixteenths: number): string {
+  const { whole, fraction } = sixteenthsParts(sixteenths);
+  if (whole === 0) return fraction || "0";
+  return fraction ? `${whole}-${fraction}` : String(whole);
+}
