@@ -297,6 +297,24 @@ describe("values by hand from the scenario files", () => {
     expect(new Set(mainA.map(col(holes, "plate_length_mm")))).toEqual(new Set(["145"]));
   });
 
+  it("sports-hall-chord-ec3.yaml: every plate's holes are also measured from a real plate end (marking_end), main plate A from its butt end", () => {
+    const { holes } = exported.get("sports-hall-chord-ec3.yaml")!;
+    const x = num(holes, "x_from_left_end_mm");
+    const fromEnd = num(holes, "x_from_marking_end_mm");
+    const length = num(holes, "plate_length_mm");
+    const end = col(holes, "marking_end");
+    for (const r of holes.data) {
+      if (r[0] === "mainA") expect([end(r), fromEnd(r)]).toEqual(["right", Number((length(r) - x(r)).toFixed(2))]);
+      else expect([end(r), fromEnd(r)]).toEqual(["left", x(r)]);
+    }
+    // The scenario file: e1 = 45 mm at the covers' outer ends, 50 mm at the chord ends (the butt), pitch 70 mm.
+    // Main plate A's nearest hole is 50 mm from its own end; the covers' first hole 45 mm from theirs.
+    const nearest = (plate: string) => Math.min(...holes.data.filter((r) => r[0] === plate).map(fromEnd));
+    expect(nearest("mainA")).toBe(50);
+    expect(nearest("mainB")).toBe(50);
+    expect(nearest("coverA")).toBe(45);
+  });
+
   it.each(["along", "across"])("slotted holes (%s the force): the slot's length and direction in its own columns, the width as the diameter", async (direction) => {
     const text = readFileSync(scenarioPath("footbridge-tie.yaml"), "utf8").replace(/hole: standard[^\n]*/, `hole: short-slot\n  slot_direction: ${direction}`);
     const dir = mkdtempSync(join(tmpdir(), "splicewright-csv-slot-"));

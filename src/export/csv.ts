@@ -13,6 +13,9 @@
  * end as drawn on the plan, increasing rightward; y from the plate's lower edge as drawn, increasing
  * upward. Main plate A continues leftward beyond the splice: its left end as drawn is the left end of
  * its length within the splice (plate_length), and its own end, in the splice, lies at x = plate_length.
+ * So that every hole is also measured from a real plate end, `marking_end` names the end the shop marks
+ * from (main plate A: its right end, in the splice; every other plate: its left end) and
+ * `x_from_marking_end` the hole's distance from it.
  */
 import type { Joint, PlatePiece } from "../model/joint.js";
 import { holesOfPlate } from "../geometry/joint-builder.js";
@@ -90,13 +93,17 @@ const UNITS_NOTE: Record<DisplayUnits, string> = {
 export function holeScheduleCsv(joint: Joint, title: string, units: DisplayUnits = "si"): string {
   const u = unitSuffix("length", units);
   const len = (v: number) => lengthValue(v, units);
-  const header = ["plate", "plate_name", "hole", `x_from_left_end_${u}`, `y_from_lower_edge_${u}`, `hole_diameter_${u}`, `slot_length_${u}`, "slot_direction", `plate_length_${u}`, `plate_width_${u}`];
+  const header = ["plate", "plate_name", "hole", `x_from_left_end_${u}`, `y_from_lower_edge_${u}`, `hole_diameter_${u}`, `slot_length_${u}`, "slot_direction", `plate_length_${u}`, `plate_width_${u}`, "marking_end", `x_from_marking_end_${u}`];
   const rows: CsvCell[][] = [];
   for (const p of joint.plates) {
     const d = plateDatum(p);
-    for (const h of plateHoles(joint, p)) rows.push([p.id, p.label, h.id, len(h.x_mm), len(h.y_mm), len(h.diameter_mm), h.slotLength_mm === null ? null : len(h.slotLength_mm), h.slotDirection === null ? null : `${h.slotDirection} the force`, len(d.length_mm), len(p.spec.width_mm)]);
+    const fromRight = p.continues === "left";
+    for (const h of plateHoles(joint, p)) {
+      const fromMarkingEnd_mm = fromRight ? d.length_mm - h.x_mm : h.x_mm;
+      rows.push([p.id, p.label, h.id, len(h.x_mm), len(h.y_mm), len(h.diameter_mm), h.slotLength_mm === null ? null : len(h.slotLength_mm), h.slotDirection === null ? null : `${h.slotDirection} the force`, len(d.length_mm), len(p.spec.width_mm), fromRight ? "right" : "left", len(fromMarkingEnd_mm)]);
+    }
   }
-  const continuing = joint.plates.filter((p) => p.continues === "left").map((p) => `${p.label} continues leftward beyond the splice: its left end as drawn is the left end of its length within the splice, its own end lies at x = plate_length`);
+  const continuing = joint.plates.filter((p) => p.continues === "left").map((p) => `${p.label} continues leftward beyond the splice: its left end as drawn is the left end of its length within the splice, its own end lies at x = plate_length; mark its holes from that end (marking_end right, x_from_marking_end = plate_length − x)`);
   return csvDocument(header, rows, [
     `hole schedule: ${title}`,
     "datum, every plate: x from the plate's left end as drawn on the plan (increasing rightward), y from the plate's lower edge as drawn (increasing upward)",
