@@ -37,7 +37,7 @@ describe("targets before any work", () => {
   it("a dangling symbolic link counts as existing (no --force), and --force never replaces a link", () => {
     const dir = fresh();
     symlinkSync(join(dir, "nowhere"), join(dir, "r.html"));
-    oneLine(cli(["report", demo, "--out", join(dir, "r.html")]), /r\.html: already exists \(a symbolic link\) \(use --force to overwrite\)/);
+    oneLine(cli(["report", demo, "--out", join(dir, "r.html")]), /r\.html: already exists and is a symbolic link: give a file name that is free \(--force replaces regular files only\)/);
     oneLine(cli(["report", demo, "--out", join(dir, "r.html"), "--force"]), /r\.html: is a symbolic link: --force replaces regular files only/);
     expect(existsSync(join(dir, "nowhere"))).toBe(false);
   });

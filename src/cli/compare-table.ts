@@ -65,7 +65,7 @@ export function formatCompare(title: string, columns: CompareColumn[], currency:
     "",
     table.toString(),
     `Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`,
-    `Strength utilisation: ${strengthUtilisationWords(load)}; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit and its margin.`,
+    `Strength utilisation: ${strengthUtilisationWords(load)}; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length.`,
     efficiencyBasisNote(basis),
   ];
   const mapped = columns.filter((c) => c.mapping.length);

@@ -72,7 +72,7 @@ export function checkTargets(paths: readonly string[], force: boolean): void {
       checkFolder(dirname(path));
       continue;
     }
-    if (!force) throw new InputError(path, `already exists${st.isFile() ? "" : ` (${kindOf(st)})`} (use --force to overwrite)`);
+    if (!force) throw new InputError(path, st.isFile() ? "already exists (use --force to overwrite)" : `already exists and is ${kindOf(st)}: give a file name that is free (--force replaces regular files only)`);
     if (!st.isFile()) throw new InputError(path, `is ${kindOf(st)}: --force replaces regular files only`);
   }
 }

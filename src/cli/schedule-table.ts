@@ -21,6 +21,43 @@ export interface ScheduleEffort {
   selection_ms: number;
 }
 
+/** Which splice each row is: id, mark, quantity, description and plates. */
+function spliceListTable(s: Schedule): BoxTable {
+  const t = table(["Id", "Mark", "Qty", "Description", "Plates", "T kN"]);
+  for (const row of s.rows) t.push([row.id, row.mark, String(row.quantity), row.description, row.plates, row.factoredTension_kN.toFixed(1)]);
+  return t;
+}
+
+/** Each row's layout: bolt type, pattern, counts, dimensions, utilisation and the tightest rule. */
+function layoutTable(s: Schedule, service: boolean): BoxTable {
+  const t = table(["Id", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", "End", "Cover t", "Bolts", "Str. util.", ...(service ? ["SLS util."] : []), "Tightest rule (all pass)"]);
+  for (const row of s.rows) {
+    const l = row.layout;
+    t.push([
+      row.id,
+      row.type,
+      l.pattern,
+      l.counts,
+      dim(l.pitch_mm),
+      dim(l.gauge_mm),
+      l.endDistanceAtButt_mm !== null ? `${dim(l.endDistance_mm)} / ${dim(l.endDistanceAtButt_mm)}` : dim(l.endDistance_mm),
+      dim(l.coverThickness_mm),
+      String(row.boltsEach),
+      fx(l.strengthUtilisation, 2),
+      ...(service ? [fx(l.serviceUtilisation, 2)] : []),
+      l.tightestRule,
+    ]);
+  }
+  return t;
+}
+
+/** Each row's cost against the splice's own optimum (its best bolt type alone). */
+function costTable(s: Schedule): BoxTable {
+  const t = table(["Id", "Qty", "Cost", "Row cost", "Own optimum", "Premium"]);
+  for (const row of s.rows) t.push([row.id, String(row.quantity), fx(row.costEach, 1), fx(row.cost, 1), `${row.ownType} ${fx(row.ownCostEach, 1)}`, row.premium > 0 ? `+${fx(row.premium, 1)}` : "0"]);
+  return t;
+}
+
 export function formatSchedule(s: Schedule, codeTitle: string, currency: string, effort: ScheduleEffort): string {
   const out: string[] = [];
   const t = s.totals;
@@ -41,40 +78,19 @@ export function formatSchedule(s: Schedule, codeTitle: string, currency: string,
   for (const u of s.types) types.push([u.type, String(u.rows), String(u.splices), String(u.bolts), fx(u.layoutCost, 1)]);
   out.push(types.toString());
   out.push("");
-  out.push("Splices (bolts and cost per splice; × qty for the row; counts per side of the butt for butt splices):");
   const service = s.rows.some((r) => r.layout.serviceUtilisation !== null);
-  const rows = table(["Id", "Mark", "Qty", "Description", "Plates", "T kN", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", "End", "Cover t", "Bolts", "Str. util.", ...(service ? ["SLS util."] : []), "Tightest rule (all pass)", "Cost", "Row cost", "Own optimum", "Premium"]);
-  for (const row of s.rows) {
-    const l = row.layout;
-    rows.push([
-      row.id,
-      row.mark,
-      String(row.quantity),
-      row.description,
-      row.plates,
-      row.factoredTension_kN.toFixed(1),
-      row.type,
-      l.pattern,
-      l.counts,
-      dim(l.pitch_mm),
-      dim(l.gauge_mm),
-      l.endDistanceAtButt_mm !== null ? `${dim(l.endDistance_mm)} / ${dim(l.endDistanceAtButt_mm)}` : dim(l.endDistance_mm),
-      dim(l.coverThickness_mm),
-      String(row.boltsEach),
-      fx(l.strengthUtilisation, 2),
-      ...(service ? [fx(l.serviceUtilisation, 2)] : []),
-      l.tightestRule,
-      fx(row.costEach, 1),
-      fx(row.cost, 1),
-      `${row.ownType} ${fx(row.ownCostEach, 1)}`,
-      row.premium > 0 ? `+${fx(row.premium, 1)}` : "0",
-    ]);
-  }
-  out.push(rows.toString());
+  out.push("Splices of the job:");
+  out.push(spliceListTable(s).toString());
+  out.push("");
+  out.push("Layouts (bolts per splice; counts per side of the butt for butt splices):");
+  out.push(layoutTable(s, service).toString());
+  out.push("");
+  out.push("Costs (per splice; × qty for the row):");
+  out.push(costTable(s).toString());
   out.push(`Dimensions in mm; costs in ${currency}. T: factored tension. End: end distance (/ at the butt). Every layout has passed every check of \`splicewright check\`, and was checked again before it was scheduled.`);
   out.push(
     `Str. util.: strength utilisation = factored tension / joint design strength${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
-      "Tightest rule: every detailing rule passes; the cell names the one closest to its limit and its margin.",
+      "Tightest rule: every detailing rule passes; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length.",
   );
   const bases = [...new Set(s.rows.map((r) => r.efficiencyBasis))];
   out.push(bases.length === 1 ? efficiencyBasisNote(bases[0]!) : `Efficiency bases differ between splices (${bases.join(", ")}; options.efficiency_basis).`);

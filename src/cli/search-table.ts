@@ -72,7 +72,7 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
     out.push(`Proven over the declared space above: ${provenStatement(variants)} (DEVELOPERS.md).`);
     out.push(
       `Str. util.: strength utilisation = ${strengthUtilisationWords(scenario.load)} (ultimate limit state)${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
-        "Tightest rule: every detailing rule (spacing, end and edge distances, grip) passes in every row; the cell names the one closest to its limit and its margin.",
+        "Tightest rule: every detailing rule (spacing, end and edge distances, grip) passes in every row; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length.",
     );
     out.push(efficiencyBasisNote(scenario.options.efficiencyBasis));
     out.push("Counts \"3/2 across\": a staggered pattern, 3 bolts on odd transverse lines and 2 on even ones.");

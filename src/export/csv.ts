@@ -132,7 +132,7 @@ export function billOfMaterialsCsv(bom: BillOfMaterials, title: string, units: D
   return csvDocument(header, rows, [
     `bill of materials: ${title}`,
     ...bom.notes,
-    "the main plates are the members being spliced and are not listed; plate masses at 7850 kg/m³",
+    `the main plates are the members being spliced and are not listed; plate masses at ${units === "us" ? "0.2836 lb/in³ (490 lb/ft³)" : "7850 kg/m³"}`,
     UNITS_NOTE[units],
     `caution: ${CAUTION}`,
   ]);

@@ -73,7 +73,7 @@ export function scheduleJson(s: Schedule, meta: { code: string; currency: string
   };
 }
 
-const SCHEDULE_HEADER = ["id", "mark", "quantity", "description", "plates", "factored_tension_kN", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths", "joint_strength_kN", "strength_utilisation", "service_utilisation", "efficiency", "detailing", "governing_check", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"] as const;
+const SCHEDULE_HEADER = ["id", "mark", "quantity", "description", "plates", "factored_tension_kN", "type", "pattern", "counts", "pitch_mm", "gauge_mm", "end_distance_mm", "end_distance_at_butt_mm", "edge_distance_mm", "cover_thickness_mm", "bolts_each", "bolts", "bolt_lengths", "joint_strength_kN", "strength_utilisation", "service_utilisation", "efficiency_percent", "detailing", "governing_check", "cost_each", "cost", "own_optimum_type", "own_optimum_cost_each", "premium_each", "premium"] as const;
 
 const mm = (v: number | null) => (v === null ? null : roundedNumber(v, 2));
 const kN = (v: number | null) => (v === null ? null : roundedNumber(v, 2));
@@ -84,21 +84,20 @@ function scheduleRow(r: Schedule["rows"][number]): CsvCell[] {
   const l = r.layout;
   const g = l.governingCheck;
   const lengths = r.boltLengths.map((b) => `${b.quantity} × ${b.length_mm} mm`).join("; ");
-  return [r.id, r.mark, r.quantity, r.description, r.plates, kN(r.factoredTension_kN), r.type, l.pattern, l.counts, mm(l.pitch_mm), mm(l.gauge_mm), mm(l.endDistance_mm), mm(l.endDistanceAtButt_mm), mm(l.edgeDistance_mm), mm(l.coverThickness_mm), r.boltsEach, r.bolts, lengths, kN(l.jointStrength_kN), ratio(l.strengthUtilisation), ratio(l.serviceUtilisation), ratio(l.efficiency), l.detailingText, g ? `${g.title}, ${g.component} (${g.clause})` : "", money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)];
+  return [r.id, r.mark, r.quantity, r.description, r.plates, kN(r.factoredTension_kN), r.type, l.pattern, l.counts, mm(l.pitch_mm), mm(l.gauge_mm), mm(l.endDistance_mm), mm(l.endDistanceAtButt_mm), mm(l.edgeDistance_mm), mm(l.coverThickness_mm), r.boltsEach, r.bolts, lengths, kN(l.jointStrength_kN), ratio(l.strengthUtilisation), ratio(l.serviceUtilisation), l.efficiency === null ? null : Number((100 * l.efficiency).toFixed(2)), l.detailingText, g ? `${g.title}, ${g.component} (${g.clause})` : "", money(r.costEach), money(r.cost), r.ownType, money(r.ownCostEach), money(r.premiumEach), money(r.premium)];
 }
 
 /**
- * The schedule as CSV (docs/csv.md): one row per splice of the project file, then the TOTAL row, then
- * note rows (project, rules and proof, definitions, caution).
+ * The schedule as CSV (docs/csv.md): one row per splice of the project file (so that a spreadsheet's
+ * SUM of a column is the job's figure), then note rows (project, totals, rules and proof, definitions, caution).
  */
 export function scheduleCsv(s: Schedule): string {
   const t = s.totals;
-  const total: CsvCell[] = ["TOTAL", null, t.splices, null, null, null, `${t.typesUsed} types`, null, null, null, null, null, null, null, null, null, t.bolts, null, null, null, null, null, null, null, null, money(t.layoutCost), null, money(t.own.layoutCost), null, money(t.premium)];
-  return csvDocument(SCHEDULE_HEADER, [...s.rows.map(scheduleRow), total], [
+  return csvDocument(SCHEDULE_HEADER, s.rows.map(scheduleRow), [
     `schedule: ${s.project}`,
+    `total: ${t.splices} splices, ${t.bolts} bolts, ${t.typesUsed} bolt type${t.typesUsed === 1 ? "" : "s"}; layout cost ${money(t.layoutCost)} (the sum of the cost column); every splice at its own optimum ${money(t.own.layoutCost)}; rationalisation premium ${money(t.premium)}`,
     `${rulesText(s).join("; ")}; ${s.selection.proven ? "proven optimal" : "NOT proven optimal"} (${s.selection.method})`,
     `strength_utilisation: factored tension / joint design strength; service_utilisation: service tension / slip resistance at service; detailing: the rules (all pass) and the one closest to its limit; ${efficiencyNote(s)}`,
-    "TOTAL row: quantity = splices, bolts = bolts of the job, cost = layout cost of the job, own_optimum_cost_each = the job at every splice's own optimum, premium = the rationalisation premium",
     `caution: ${CAUTION}`,
   ]);
 }
