@@ -110,7 +110,7 @@ interface Exported {
     scenario: string;
     layout: {
       holes: Array<{ id: string; x_mm: number; y_mm: number }>;
-      plates: Array<{ id: string; width_mm: number; x0_mm: number; x1_mm: number; continues: string; datum: { x_mm: number; y_mm: number }; holes: Array<{ id: string; x_from_left_end_mm: number; y_from_lower_edge_mm: number; diameter_mm: number }> }>;
+      plates: Array<{ id: string; width_mm: number; length_mm: number; x0_mm: number; x1_mm: number; continues: string; datum: { x_mm: number; y_mm: number }; holes: Array<{ id: string; x_from_left_end_mm: number; y_from_lower_edge_mm: number; diameter_mm: number }> }>;
     };
   };
 }
@@ -295,6 +295,14 @@ describe("values by hand from the scenario files", () => {
     const mainA = holes.data.filter((r) => r[0] === "mainA");
     expect([...new Set(mainA.map((r) => Number(col(holes, "x_from_left_end_mm")(r))))]).toEqual([40, 105]);
     expect(new Set(mainA.map(col(holes, "plate_length_mm")))).toEqual(new Set(["145"]));
+  });
+
+  it("canopy-tie-us.yaml: the JSON gives inch dimensions exactly (13/16 in = 20.6375 mm, AISC 360-16 Table J3.3 for 3/4 in bolts; 1 in = 25.4 mm exact)", () => {
+    const { json } = exported.get("canopy-tie-us.yaml")!;
+    const plate = json.layout.plates[0]!;
+    for (const h of plate.holes) expect(h.diameter_mm).toBe(20.6375);
+    // Cover plate length 12 3/8 in = 314.325 mm (the scenario's layout, worked by hand in the test above).
+    expect(plate.length_mm).toBe(314.325);
   });
 
   it("sports-hall-chord-ec3.yaml: every plate's holes are also measured from a real plate end (marking_end), main plate A from its butt end", () => {

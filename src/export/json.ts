@@ -15,7 +15,8 @@ export const EXPORT_SCHEMA_ID = "splicewright-export/1";
 export const PLATE_DATUM_TEXT =
   "each plate's holes: x from the plate's left end as drawn on the plan (increasing rightward), y from its lower edge as drawn (increasing upward), mm; datum = that corner in the joint coordinates; a plate that continues leftward (main plate A) is measured from the left end of its length within the splice";
 
-const r2 = (v: number) => Number(v.toFixed(2));
+/** To 0.0001 mm: no float noise, and an inch dimension (1/16 in = 1.5875 mm) given exactly. */
+const r4 = (v: number) => Number(v.toFixed(4));
 
 /**
  * Lengths without float noise (9.524999999999999 → 9.525): every number of a plain object rounded to
@@ -42,9 +43,9 @@ function plateJson(joint: Joint, p: PlatePiece) {
     x1_mm: p.x1_mm,
     continues: p.continues,
     forceShare: p.forceShare,
-    length_mm: r2(d.length_mm),
+    length_mm: r4(d.length_mm),
     datum: { x_mm: d.x_mm, y_mm: d.y_mm },
-    holes: plateHoles(joint, p).map((h) => ({ id: h.id, x_from_left_end_mm: r2(h.x_mm), y_from_lower_edge_mm: r2(h.y_mm), diameter_mm: r2(h.diameter_mm), slotLength_mm: h.slotLength_mm === null ? null : r2(h.slotLength_mm), slotDirection: h.slotDirection })),
+    holes: plateHoles(joint, p).map((h) => ({ id: h.id, x_from_left_end_mm: r4(h.x_mm), y_from_lower_edge_mm: r4(h.y_mm), diameter_mm: r4(h.diameter_mm), slotLength_mm: h.slotLength_mm === null ? null : r4(h.slotLength_mm), slotDirection: h.slotDirection })),
   };
 }
 

@@ -44,7 +44,8 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
       threads: boltWordsOf(scenario.code).threads(scenario.bolts.threadsInShearPlanes),
       count: joint.holes.length,
     },
-    spliceLength_mm: round(joint.spliceLength_mm, 1),
+    spliceLength_mm: round(joint.spliceLength_mm, 4),
+    ...(us ? { spliceLength_in: inch(joint.spliceLength_mm) } : {}),
     pass: report.pass,
     jointStrength_kN: round(report.jointStrength_N / 1000, 2),
     factoredTension_kN: round(scenario.load.factoredTension_N / 1000, 2),
@@ -86,7 +87,16 @@ export function checkReportJson(scenario: CheckableScenario, joint: Joint, repor
     })),
     warnings: report.warnings,
     conventions: report.conventions,
-    holes: joint.holes.map((h) => ({ id: h.id, group: h.group, x_mm: round(h.x_mm, 2), y_mm: round(h.y_mm, 2), across_mm: h.across_mm, along_mm: h.along_mm })),
+    // Coordinates to 0.0001 mm, so that an inch layout (1/16 in = 1.5875 mm) is given exactly.
+    holes: joint.holes.map((h) => ({
+      id: h.id,
+      group: h.group,
+      x_mm: round(h.x_mm, 4),
+      y_mm: round(h.y_mm, 4),
+      across_mm: round(h.across_mm, 4),
+      along_mm: round(h.along_mm, 4),
+      ...(us ? { x_in: inch(h.x_mm), y_in: inch(h.y_mm), across_in: inch(h.across_mm), along_in: inch(h.along_mm) } : {}),
+    })),
     caution: CAUTION,
   };
 }
