@@ -73,6 +73,9 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     const holes = platesHoles(joint, plate);
     // Plates joined to the same groups (both covers; a main plate and its own group) share their lines.
     const joined = plate.connections.map((c) => c.group).join("+");
+    // Joined to the same groups as an earlier plate (cover B after cover A): its gauges and pitches are
+    // that plate's, already measured; only its own edge-line limit (its thickness) is new.
+    const repeat = linesOfJoined.has(joined);
     let lines = linesOfJoined.get(joined);
     if (!lines) linesOfJoined.set(joined, (lines = plate.connections.length === 1 ? groups.get(plate.connections[0]!.group)!.gaugeLines : gaugeLines(holes)));
     const first = plate.connections[0];
@@ -80,15 +83,17 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (relax > 1) relaxedAnywhere = true;
     // Across: adjacent gauge lines, per group.
-    for (const group of new Set(holes.map((h) => h.group))) {
-      const gl = groups.get(group)!.gaugeLines;
-      for (let i = 1; i < gl.length; i++) {
-        const a = gl[i - 1]!.holes[0]!;
-        const b = gl[i]!.holes[0]!;
-        const t = pairThickness(joint, a, b);
-        const limit = Math.min(32 * t, 300);
-        const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+    if (!repeat) {
+      for (const group of new Set(holes.map((h) => h.group))) {
+        const gl = groups.get(group)!.gaugeLines;
+        for (let i = 1; i < gl.length; i++) {
+          const a = gl[i - 1]!.holes[0]!;
+          const b = gl[i]!.holes[0]!;
+          const t = pairThickness(joint, a, b);
+          const limit = Math.min(32 * t, 300);
+          const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
+          if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+        }
       }
     }
     // Along: consecutive holes on each gauge line.
@@ -99,9 +104,9 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
         const s = b.x_mm - a.x_mm;
-        const t = pairThickness(joint, a, b);
-        const cap = Math.min(32 * t, 300);
-        if (seen.addNew(a, b)) {
+        if (!repeat && seen.addNew(a, b)) {
+          const t = pairThickness(joint, a, b);
+          const cap = Math.min(32 * t, 300);
           const base = Math.min(16 * t, 200);
           const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
           const limit = Math.min(base * r, cap);
