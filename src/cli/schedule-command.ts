@@ -118,7 +118,7 @@ export function registerSchedule(program: Command, io: Io, setExit: (code: numbe
       const t0 = performance.now();
       let pool;
       try {
-        pool = await searchSplices(text, project, costs, { workers: Math.min(opts.workers ?? defaultWorkers(), maxWorkers()), onProgress: (done) => bar.update(done), maxCandidates });
+        pool = await searchSplices(project, costs, { workers: Math.min(opts.workers ?? defaultWorkers(), maxWorkers()), onProgress: (done) => bar.update(done), maxCandidates });
       } catch (e) {
         bar.finish();
         throw e;

@@ -1,11 +1,12 @@
 /**
  * The per-splice searches of a job on worker threads. Identical splices (same plates, load, space and
  * options) are searched once. Results come back in splice order whatever order the workers finish in.
+ * The project is parsed once, here; each worker is sent the scenarios of the splices it searches.
  */
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
 import type { CostTable } from "../catalogue/costs.js";
-import type { Project } from "../io/project.js";
+import { codeSpliceOf, type Project } from "../io/project.js";
 import { spliceOptions, type SpliceOptions } from "../schedule/options.js";
 import { distinctSplices, resultsOfGroup } from "../schedule/run.js";
 
@@ -26,7 +27,7 @@ export interface PoolResult {
 
 export const defaultWorkers = (): number => availableParallelism();
 
-export async function searchSplices(projectText: string, project: Project, costs: CostTable, opts: PoolOptions): Promise<PoolResult> {
+export async function searchSplices(project: Project, costs: CostTable, opts: PoolOptions): Promise<PoolResult> {
   const tasks = distinctSplices(project);
   const total = project.splices.length;
   const found: Array<SpliceOptions | undefined> = Array(total);
@@ -52,11 +53,13 @@ export async function searchSplices(projectText: string, project: Project, costs
         reject(e);
       };
       const feed = (w: Worker) => {
-        if (next < tasks.length) w.postMessage(tasks[next++]![0]);
+        if (next >= tasks.length) return;
+        const index = tasks[next++]![0]!;
+        w.postMessage({ index, scenario: project.splices[index]!.scenario });
       };
       const byFirst = new Map(tasks.map((t) => [t[0]!, t]));
       for (let i = 0; i < W; i++) {
-        const w = new Worker(new URL("./schedule-search-worker.js", import.meta.url), { workerData: { projectText, costs, maxCandidates: opts.maxCandidates } });
+        const w = new Worker(new URL("./schedule-search-worker.js", import.meta.url), { workerData: { codeScenario: codeSpliceOf(project).scenario, costs, maxCandidates: opts.maxCandidates } });
         workers.push(w);
         w.on("message", (msg: { index: number; result: SpliceOptions }) => {
           store(byFirst.get(msg.index)!, msg.result);

@@ -1,16 +1,20 @@
 /**
- * Worker thread: the per-type layout searches of the splices it is sent. It parses the project text
- * itself (design codes are objects with functions, which cannot cross threads) and answers with plain data.
+ * Worker thread: the per-type layout searches of the splices it is sent. The main thread has parsed and
+ * validated the project once; each message brings one splice's scenario (plain data). The design code is
+ * bound here again from the scenario the project's code was bound by (design codes are objects with
+ * functions, which cannot cross threads). It answers with plain data.
  */
 import { parentPort, workerData } from "node:worker_threads";
 import type { CostTable } from "../catalogue/costs.js";
-import { parseProject } from "../io/project.js";
+import { boundCode, findCode } from "../codes/registry.js";
+import type { Scenario } from "../model/scenario.js";
 import { spliceOptions } from "../schedule/options.js";
 
-const { projectText, costs, maxCandidates } = workerData as { projectText: string; costs: CostTable; maxCandidates?: number };
-const project = parseProject(projectText);
+const { codeScenario, costs, maxCandidates } = workerData as { codeScenario: Scenario; costs: CostTable; maxCandidates?: number };
+const registered = findCode(codeScenario.code);
+if (!registered) throw new Error(`a search worker was given an unknown design code "${codeScenario.code}"`);
+const code = boundCode(registered, codeScenario);
 
-parentPort!.on("message", (index: number) => {
-  const splice = project.splices[index]!;
-  parentPort!.postMessage({ index, result: spliceOptions(splice.scenario, project.code, costs, maxCandidates) });
+parentPort!.on("message", ({ index, scenario }: { index: number; scenario: Scenario }) => {
+  parentPort!.postMessage({ index, result: spliceOptions(scenario, code, costs, maxCandidates) });
 });

@@ -3,6 +3,7 @@ import { ownEntry } from "../catalogue/lookup.js";
 import { IS800_2007 } from "./is800-2007/index.js";
 import { EN1993_1_8 } from "./en1993-1-8/index.js";
 import { AISC360_16 } from "./aisc360-16/index.js";
+import type { Scenario } from "../model/scenario.js";
 import type { DesignCode } from "./types.js";
 
 const CODES: Record<string, DesignCode> = {
@@ -35,4 +36,13 @@ export function codeIds(): string[] {
 export function findCode(id: string): DesignCode | undefined {
   const key = id.trim().toLowerCase();
   return ownEntry(CODES, ownEntry(ALIASES, key) ?? key);
+}
+
+/**
+ * A code module bound to a validated scenario's settings (partial factors of a national annex, units):
+ * what `toScenario` returns, and what a worker thread rebuilds from the scenario alone (design codes
+ * hold functions, which cannot cross threads).
+ */
+export function boundCode(code: DesignCode, scenario: Scenario): DesignCode {
+  return code.settings ? code.settings.bind(scenario) : code;
 }

@@ -125,6 +125,8 @@ export function forEachHolePair(joint: Joint, visit: (plate: PlatePiece, a: Hole
   const plates = holePlates(joint);
   for (let k = 0; k < plates.length; k++) {
     const plate = plates[k]!;
+    // Every pair of a plate whose groups an earlier plate joins too (cover B after cover A) was visited.
+    if (joinedEarlier(plates, k)) continue;
     const holes = platesHoles(joint, plate);
     for (let i = 0; i < holes.length; i++) {
       for (let j = i + 1; j < holes.length; j++) {
@@ -135,6 +137,13 @@ export function forEachHolePair(joint: Joint, visit: (plate: PlatePiece, a: Hole
       }
     }
   }
+}
+
+/** Whether a plate before plates[k] connects to every group plates[k] connects to. */
+function joinedEarlier(plates: readonly PlatePiece[], k: number): boolean {
+  const groups = plates[k]!.connections;
+  for (let m = 0; m < k; m++) if (groups.every((c) => connects(plates[m]!, c.group))) return true;
+  return false;
 }
 
 /** Whether a plate before plates[k] connects to both groups. */

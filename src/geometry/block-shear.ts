@@ -148,10 +148,36 @@ function shearPlaneOn(line: GaugeLineOfBlock, uLast: number): BlockPlane {
   return shearPlane(line.holes, line.y, uLast);
 }
 
+/** One measured set of block shapes and what it was measured from. */
+interface MeasuredShapes {
+  holes: readonly Hole[];
+  endX_mm: number;
+  towardEnd: 1 | -1;
+  width_mm: number;
+  shapes: readonly BlockShape[];
+}
+
+/** The last few shape sets measured (newest last): enough for the plates of one joint. */
+const recentShapes: MeasuredShapes[] = [];
+const RECENT_SHAPES = 6;
+
 /**
  * Every block shape that can form in a plate of width b for one bolt group bearing toward one plate end.
+ * Plates of the same width joined to the same group's holes (the same array from the joint builder) at
+ * the same end have the same shapes — both cover plates of a butt splice — so a set is measured once
+ * and handed again to the next plate that asks (the shapes are only read, never changed).
  */
-export function blockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number): BlockShape[] {
+export function blockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number): readonly BlockShape[] {
+  for (const m of recentShapes) {
+    if (m.holes === holes && m.endX_mm === connection.endX_mm && m.towardEnd === connection.towardEnd && m.width_mm === width_mm) return m.shapes;
+  }
+  const shapes = measureBlockShapes(holes, connection, width_mm);
+  recentShapes.push({ holes, endX_mm: connection.endX_mm, towardEnd: connection.towardEnd, width_mm, shapes });
+  if (recentShapes.length > RECENT_SHAPES) recentShapes.shift();
+  return shapes;
+}
+
+function measureBlockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number): BlockShape[] {
   const local: LocalHole[] = holes.map((h) => ({
     u: connection.towardEnd * (connection.endX_mm - h.x_mm),
     y: h.y_mm,

@@ -190,6 +190,9 @@ export function holesOfPlate(joint: Joint, plate: PlatePiece): readonly Hole[] {
   }
   if (plate.connections.length === 1) return groupHoles(joint, plate.connections[0]!.group);
   const groups = new Set(plate.connections.map((c) => c.group));
+  // A plate joined to every group (the covers of a butt splice) has the joint's own hole list, one
+  // array for both covers, so measurements made from it can be shared (net-section.ts, netPathFor).
+  if (joint.holes.every((h) => groups.has(h.group))) return joint.holes;
   return joint.holes.filter((h) => groups.has(h.group));
 }
 

@@ -9,7 +9,7 @@
  * the edges. With holes sorted by y that is a shortest path in a directed acyclic graph, solved exactly
  * by dynamic programming over every pair of holes — no list of "likely" paths.
  */
-import type { Hole, PlatePiece } from "../model/joint.js";
+import type { Hole, PlateConnection, PlatePiece } from "../model/joint.js";
 import { LINE_TOLERANCE_MM, sortedHoles } from "./lines.js";
 
 export interface NetPath {
@@ -153,12 +153,39 @@ export function governingNetPath(plate: PlatePiece, holes: readonly Hole[]): { p
   return best;
 }
 
+/** One governing net path and what it was measured from. */
+interface MeasuredPath {
+  holes: readonly Hole[];
+  width_mm: number;
+  load: "full" | "transferred";
+  /** The plate's connections (group and end): read by the "transferred" path only. */
+  connections: readonly PlateConnection[];
+  answer: { path: NetPath; fraction: number };
+}
+
+/** The last few net paths measured (newest last): enough for the plates of one joint. */
+const recentPaths: MeasuredPath[] = [];
+const RECENT_PATHS = 4;
+
+const sameEnds = (a: readonly PlateConnection[], b: readonly PlateConnection[]): boolean =>
+  a.length === b.length && a.every((c, i) => c.group === b[i]!.group && c.endX_mm === b[i]!.endX_mm && c.towardEnd === b[i]!.towardEnd);
+
 /**
  * The net path a check uses: the least path with the whole plate force ("full", the clauses as
- * written), or the governing path with load already transferred ("transferred").
+ * written), or the governing path with load already transferred ("transferred"). Plates of the same
+ * width with the same holes (the same array from the joint builder) — both cover plates of a butt
+ * splice, both plates of a lap — have the same path, so it is measured once and handed again to the
+ * next plate that asks ("transferred" also needs the same groups and ends). The answer is only read.
  */
 export function netPathFor(plate: PlatePiece, holes: readonly Hole[], load: "full" | "transferred"): { path: NetPath; fraction: number } {
-  return load === "transferred" ? governingNetPath(plate, holes) : { path: leastNetPath(holes, plate.spec.width_mm), fraction: 1 };
+  const width_mm = plate.spec.width_mm;
+  for (const m of recentPaths) {
+    if (m.holes === holes && m.width_mm === width_mm && m.load === load && (load === "full" || sameEnds(m.connections, plate.connections))) return m.answer;
+  }
+  const answer = load === "transferred" ? governingNetPath(plate, holes) : { path: leastNetPath(holes, width_mm), fraction: 1 };
+  recentPaths.push({ holes, width_mm, load, connections: plate.connections, answer });
+  if (recentPaths.length > RECENT_PATHS) recentPaths.shift();
+  return answer;
 }
 
 /** The holes of a path as the sheet names them: "holes A1–A4–A2", or "no hole". */

@@ -103,6 +103,12 @@ export function searchFieldPath(project: Project, m: number, field: string): str
   return `splices[${m}].search.${field}`;
 }
 
+/**
+ * The splice whose scenario the project's code is bound by (`parseProject` binds it by the last splice's
+ * settings); a worker thread binds the same code again from that scenario (codes/registry.ts, boundCode).
+ */
+export const codeSpliceOf = (project: Project): ProjectSplice => project.splices[project.splices.length - 1]!;
+
 /** Parse and validate a project file's text completely (every splice through `toScenario`). */
 export function parseProject(text: string): Project {
   const value = parseYaml(text);

@@ -2,7 +2,7 @@
  * YAML text → typed Scenario (core units), or an InputError naming the field path and the reason.
  * No file system here: the CLI reads the file and hands over its text.
  */
-import { findCode, codeIds } from "../codes/registry.js";
+import { findCode, codeIds, boundCode } from "../codes/registry.js";
 import type { DesignCode } from "../codes/types.js";
 import { isBoltSize, isPropertyClass, BOLT_SIZES_MM, PROPERTY_CLASSES, type PropertyClass, ASTM_BOLT_GRADES, ASTM_ISO_EQUIVALENT, astmBoltGrade, inchBoltSize, INCH_BOLT_SIZES_IN, inchSizeText } from "../catalogue/bolts.js";
 import { buildJoint } from "../geometry/joint-builder.js";
@@ -304,7 +304,7 @@ export function toScenario(file: ScenarioFile): { scenario: Scenario; code: Desi
   sizeScope(scenario, code);
   const scope = code.scopeErrors(scenario)[0];
   if (scope) throw new InputError(scope.path, scope.message);
-  return { scenario, code: code.settings ? code.settings.bind(scenario) : code };
+  return { scenario, code: boundCode(code, scenario) };
 }
 
 /**

@@ -9,7 +9,8 @@ import { boltGradeText, boltSizeText } from "../catalogue/bolts.js";
 import { citationText } from "./citation.js";
 import { foldTwins } from "./twins.js";
 import { detailingCell, detailingJson, tightestCell, detailingState, strengthFigures, UTILISATION_DEFINITIONS } from "./summary.js";
-import type { EfficiencyBasis } from "../model/scenario.js";
+import type { BoltSpec, EfficiencyBasis } from "../model/scenario.js";
+import type { Family } from "../search/space.js";
 
 export interface ResultRow {
   rank: number;
@@ -53,7 +54,17 @@ export interface ResultRow {
 
 const r = (v: number, d = 2) => Number(v.toFixed(d));
 
-export function countsText(c: Candidate): string {
+/**
+ * What a result row reads of a candidate: its arrangement (bolt, pattern, counts, layout), its checked
+ * scenario, joint and report, and its total cost. A schedule builds the row of a scheduled layout from
+ * its re-check, so only these cross from the search worker.
+ */
+export type RowSource = Pick<Candidate, "layout" | "scenario" | "joint" | "report" | "counts" | "chosenBy"> & {
+  family: Pick<Family, "size_mm" | "propertyClass" | "pattern" | "coverThickness_mm"> & { base: { bolts: BoltSpec } };
+  cost: { total: number };
+};
+
+export function countsText(c: Pick<RowSource, "counts" | "family">): string {
   const counts = c.counts;
   const along = counts.length;
   if (c.family.pattern === "grid") return `${counts[0]} across × ${along} along`;
@@ -61,7 +72,7 @@ export function countsText(c: Candidate): string {
   return `${counts.join("-")} across × ${along} along`;
 }
 
-export function resultRow(c: Candidate, rank: number): ResultRow {
+export function resultRow(c: RowSource, rank: number): ResultRow {
   const l = c.layout;
   const ys = c.joint.holes.map((h) => Math.abs(h.y_mm));
   const narrow = Math.min(...c.joint.plates.filter((p) => p.role !== "packing").map((p) => p.spec.width_mm));

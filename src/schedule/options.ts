@@ -5,7 +5,7 @@
 import type { CostTable } from "../catalogue/costs.js";
 import type { DesignCode } from "../codes/types.js";
 import type { CheckableScenario, Scenario } from "../model/scenario.js";
-import { resultRow, type ResultRow } from "../report/search-json.js";
+import type { RowSource } from "../report/search-json.js";
 import { bestPerBoltType, type BoltType } from "../search/per-type.js";
 import type { SelectionProblem, SelectionRules } from "./selection.js";
 
@@ -15,7 +15,11 @@ export interface TypeOption {
   /** Cost of one splice with this layout. */
   cost: number;
   bolts: number;
-  row: ResultRow;
+  /**
+   * The arrangement of the layout (bolt, pattern, counts, layout spec): with the re-check of `scenario`
+   * it gives the layout's result row (schedule.ts), written only for the layout that is scheduled.
+   */
+  arrangement: Omit<RowSource, "scenario" | "joint" | "report" | "cost">;
   /** The layout as a checkable scenario (re-checked before it is scheduled). */
   scenario: CheckableScenario;
 }
@@ -34,10 +38,22 @@ export function spliceOptions(scenario: Scenario, code: DesignCode, costs: CostT
   for (const entry of bestPerBoltType({ scenario, code, costs }, maxCandidates)) {
     out.checks += entry.stats.fullChecks;
     const c = entry.best;
-    if (c) out.options.push({ type: entry.type, cost: c.cost.total, bolts: c.joint.holes.length, row: resultRow(c, 1), scenario: c.scenario });
+    if (c) out.options.push({ type: entry.type, cost: c.cost.total, bolts: c.joint.holes.length, arrangement: arrangementOf(c), scenario: c.scenario });
     else out.none.push({ type: entry.type, reason: entry.noResultReason ?? "no layout of this type passes every check" });
   }
   return out;
+}
+
+/** The plain fields of a candidate's arrangement that its result row reads (search-json.ts, RowSource). */
+function arrangementOf(c: RowSource): TypeOption["arrangement"] {
+  const f = c.family;
+  const arrangement: TypeOption["arrangement"] = {
+    family: { size_mm: f.size_mm, propertyClass: f.propertyClass, pattern: f.pattern, coverThickness_mm: f.coverThickness_mm, base: { bolts: f.base.bolts } },
+    layout: c.layout,
+    counts: c.counts,
+  };
+  if (c.chosenBy) arrangement.chosenBy = c.chosenBy;
+  return arrangement;
 }
 
 const ASSEMBLY_ORDER = { bearing: 0, "friction-grip": 1 } as const;

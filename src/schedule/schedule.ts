@@ -9,7 +9,7 @@ import type { DesignCode } from "../codes/types.js";
 import { checkScenario } from "../engine/check.js";
 import { billOfMaterials } from "../export/bolt-list.js";
 import type { EfficiencyBasis, Scenario } from "../model/scenario.js";
-import type { ResultRow } from "../report/search-json.js";
+import { resultRow, type ResultRow } from "../report/search-json.js";
 import { lengthNumber } from "../report/format.js";
 import type { TypeOption } from "./options.js";
 import { COST_TOLERANCE, evaluateAssignment, ownOptima, typeLabel, type SelectionProblem, type SelectionRules } from "./selection.js";
@@ -174,7 +174,7 @@ export function buildSchedule(input: ScheduleInput): Schedule {
       efficiencyBasis: o.scenario.options.efficiencyBasis,
       serviceTension_kN: o.scenario.load.serviceTension_N !== undefined ? Number((o.scenario.load.serviceTension_N / 1000).toFixed(2)) : null,
       type: label,
-      layout: o.row,
+      layout: resultRow({ ...o.arrangement, scenario: o.scenario, joint, report, cost: { total: o.cost } }, 1),
       boltsEach: o.bolts,
       bolts: o.bolts * s.quantity,
       boltLengths: bom.bolts.map((b) => ({ length_mm: b.length_mm, quantity: b.quantity })),

@@ -294,7 +294,9 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
     const counts = f.countsPerLine ?? Array(f.lines).fill(1);
     const bound = f.countsPerLine ? loadBound(code, f.base as CheckableScenario, shapeOf(f, counts)) : null;
-    const infeasible = bound ? bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk : taperedPlateBound(f) < T * (1 - 1e-9);
+    // Tapered families: the plates' bound, whatever the counts (worked out once per family).
+    const strengthUpper_N = bound ? bound.jointStrength_N : taperedPlateBound(f);
+    const infeasible = strengthUpper_N < T * (1 - 1e-9) || (bound !== null && !bound.serviceOk);
     if (infeasible) {
       stats.familiesSkippedByBound++;
       const check = bound ? bound.check : "plate (gross yield or net section)";
@@ -308,7 +310,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     // divides it by the basis's strength of the thinner plate, never below `denominator`.
     // In compression alone the joint strength can pass the unperforated tension strength (no net section).
     const cap = scenario.load.factoredTension_N > 0 ? unperforated : Infinity;
-    const efficiencyUpper = Math.min(cap, bound ? bound.jointStrength_N : taperedPlateBound(f)) / denominator;
+    const efficiencyUpper = Math.min(cap, strengthUpper_N) / denominator;
     heap.push({
       kind: "family",
       f,

@@ -15,21 +15,20 @@ import { epsilon } from "./materials.js";
 /**
  * Whether a plate's fasteners are staggered at equal intervals (cl. 10.2.3.4): consecutive transverse
  * lines share no gauge line and are equally spaced. Returns the gauge (least distance between adjacent
- * gauge lines) too.
+ * gauge lines) too. `gauge`: the gauge lines of these holes, when the caller has them already.
  */
-export function staggerOf(holes: readonly Hole[]): { staggered: boolean; gauge_mm: number } {
-  const ys = gaugeLines(holes).map((l) => l.at_mm);
-  let gauge = Infinity;
-  for (let i = 1; i < ys.length; i++) gauge = Math.min(gauge, ys[i]! - ys[i - 1]!);
-  const lines = transverseLines(holes);
-  if (lines.length < 2) return { staggered: false, gauge_mm: gauge };
-  const spacing = lines[1]!.at_mm - lines[0]!.at_mm;
-  for (let i = 1; i < lines.length; i++) {
-    const prev = new Set(lines[i - 1]!.holes.map((h) => h.y_mm));
-    if (lines[i]!.holes.some((h) => prev.has(h.y_mm))) return { staggered: false, gauge_mm: gauge };
-    if (Math.abs(lines[i]!.at_mm - lines[i - 1]!.at_mm - spacing) > 1e-6) return { staggered: false, gauge_mm: gauge };
+export function staggerOf(holes: readonly Hole[], gauge: readonly Line[] = gaugeLines(holes)): { staggered: boolean; gauge_mm: number } {
+  let gauge_mm = Infinity;
+  for (let i = 1; i < gauge.length; i++) gauge_mm = Math.min(gauge_mm, gauge[i]!.at_mm - gauge[i - 1]!.at_mm);
+  const transverse = transverseLines(holes);
+  if (transverse.length < 2) return { staggered: false, gauge_mm };
+  const spacing = transverse[1]!.at_mm - transverse[0]!.at_mm;
+  for (let i = 1; i < transverse.length; i++) {
+    const prev = new Set(transverse[i - 1]!.holes.map((h) => h.y_mm));
+    if (transverse[i]!.holes.some((h) => prev.has(h.y_mm))) return { staggered: false, gauge_mm };
+    if (Math.abs(transverse[i]!.at_mm - transverse[i - 1]!.at_mm - spacing) > 1e-6) return { staggered: false, gauge_mm };
   }
-  return { staggered: true, gauge_mm: gauge };
+  return { staggered: true, gauge_mm };
 }
 
 /** Each bolt group's holes with their gauge lines and stagger, worked out once per rule. */
@@ -37,7 +36,8 @@ function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; s
   const sets = new Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }>();
   for (const g of joint.groups) {
     const holes = groupHoles(joint, g.id);
-    sets.set(g.id, { gaugeLines: gaugeLines(holes), stagger: staggerOf(holes) });
+    const lines = gaugeLines(holes);
+    sets.set(g.id, { gaugeLines: lines, stagger: staggerOf(holes, lines) });
   }
   return sets;
 }
@@ -73,22 +73,27 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     const holes = platesHoles(joint, plate);
     // Plates joined to the same groups (both covers; a main plate and its own group) share their lines.
     const joined = plate.connections.map((c) => c.group).join("+");
+    // Joined to the same groups as an earlier plate (cover B after cover A): its gauges and pitches are
+    // that plate's, already measured; only its own edge-line limit (its thickness) is new.
+    const repeat = linesOfJoined.has(joined);
     let lines = linesOfJoined.get(joined);
-    if (!lines) linesOfJoined.set(joined, (lines = gaugeLines(holes)));
+    if (!lines) linesOfJoined.set(joined, (lines = plate.connections.length === 1 ? groups.get(plate.connections[0]!.group)!.gaugeLines : gaugeLines(holes)));
     const first = plate.connections[0];
     const stagger = first ? groups.get(first.group)!.stagger : staggerOf(holes);
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (relax > 1) relaxedAnywhere = true;
     // Across: adjacent gauge lines, per group.
-    for (const group of new Set(holes.map((h) => h.group))) {
-      const gl = groups.get(group)!.gaugeLines;
-      for (let i = 1; i < gl.length; i++) {
-        const a = gl[i - 1]!.holes[0]!;
-        const b = gl[i]!.holes[0]!;
-        const t = pairThickness(joint, a, b);
-        const limit = Math.min(32 * t, 300);
-        const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+    if (!repeat) {
+      for (const group of new Set(holes.map((h) => h.group))) {
+        const gl = groups.get(group)!.gaugeLines;
+        for (let i = 1; i < gl.length; i++) {
+          const a = gl[i - 1]!.holes[0]!;
+          const b = gl[i]!.holes[0]!;
+          const t = pairThickness(joint, a, b);
+          const limit = Math.min(32 * t, 300);
+          const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
+          if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+        }
       }
     }
     // Along: consecutive holes on each gauge line.
@@ -99,9 +104,9 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
         const s = b.x_mm - a.x_mm;
-        const t = pairThickness(joint, a, b);
-        const cap = Math.min(32 * t, 300);
-        if (seen.addNew(a, b)) {
+        if (!repeat && seen.addNew(a, b)) {
+          const t = pairThickness(joint, a, b);
+          const cap = Math.min(32 * t, 300);
           const base = Math.min(16 * t, 200);
           const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
           const limit = Math.min(base * r, cap);
