@@ -53,15 +53,12 @@ export function csvDocument(header: readonly string[], rows: readonly CsvCell[][
   return UTF8_BOM + lines.join("\r\n") + "\r\n";
 }
 
-/** The datum in words, for a drawing's note or a report. */
-export const PLATE_DATUM_WORDS = "x from the plate's left end as drawn, y from its lower edge as drawn";
-
 /**
  * The datum of a plate's hole schedule, in the joint's coordinates: its left end as drawn (x_mm) and its
- * lower edge (y_mm); the plate's length from that end; `sense` is +1 for every plate (measured rightward).
+ * lower edge (y_mm), and the plate's length from that end; every plate is measured rightward.
  */
-export function plateDatum(p: PlatePiece): { x_mm: number; y_mm: number; length_mm: number; sense: 1; text: string } {
-  return { x_mm: p.x0_mm, y_mm: -p.spec.width_mm / 2, length_mm: p.x1_mm - p.x0_mm, sense: 1, text: PLATE_DATUM_WORDS };
+export function plateDatum(p: PlatePiece): { x_mm: number; y_mm: number; length_mm: number } {
+  return { x_mm: p.x0_mm, y_mm: -p.spec.width_mm / 2, length_mm: p.x1_mm - p.x0_mm };
 }
 
 /** Every hole of a plate in the plate's datum, in drilling order (along the plate, then up). */

@@ -155,16 +155,12 @@ function designBasisSection(input: ReportInput, x: Ctx): string {
 </section>`;
 }
 
-function titleOf(scenario: CheckableScenario): string {
-  return spliceKindWords(scenario.load);
-}
-
 /** Page 1: title, sign-off, summary, design basis, caution. */
 function firstPage(input: ReportInput, rows: SummaryRow[], x: Ctx): string {
   const { scenario, report } = input;
   return `<section id="page-1">
 <header class="sheet">
-  <h1>Calculation report — bolted ${titleOf(scenario)}</h1>
+  <h1>Calculation report — bolted ${spliceKindWords(scenario.load)}</h1>
   <div class="meta">${esc(input.date)}<br>splicewright ${esc(input.version)}</div>
   <div class="scenario"><b>${esc(scenario.name)}</b>${scenario.project ? ` — ${esc(scenario.project)}` : ""}<br><span class="muted">${esc(report.codeTitle)}; ${esc(SPLICE_TEXT[input.joint.spliceType])}; layout: ${esc(input.origin)}</span></div>
 </header>
