@@ -11,7 +11,7 @@ import { LazyText, type Citation, type RuleCheck, type StrengthCheck } from "../
 import { utilisation } from "./format.js";
 
 type StrengthInput = Omit<StrengthCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string; notes?: () => string[] };
-type RuleInput = Omit<RuleCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string };
+type RuleInput = Omit<RuleCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string; notes?: () => string[] };
 
 const NO_NOTES = (): string[] => [];
 
@@ -65,7 +65,7 @@ class RuleResult extends LazyText implements RuleCheck {
   utilisation: number;
   pass: boolean;
   constructor(r: RuleInput) {
-    super(r.substituted, NO_NOTES);
+    super(r.substituted, r.notes ?? NO_NOTES);
     this.id = r.id;
     this.kind = r.kind;
     this.title = r.title;

@@ -7,7 +7,8 @@
 import type { CodeChecks, DesignCode } from "../codes/types.js";
 import type { Joint, PlateConnection, PlatePiece } from "../model/joint.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
-import { withLazyText, type CheckResult } from "../model/results.js";
+import type { CheckResult } from "../model/results.js";
+import { rule, strength } from "../codes/check-builders.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
 /** Kinds of the code's own checks that apply in compression too, with the bearing directions reversed. */
@@ -39,17 +40,22 @@ function asLoad(scenario: CheckableScenario, factored_N: number, service_N: numb
   return { ...scenario, load: { factoredTension_N: factored_N, ...(service_N !== undefined ? { serviceTension_N: service_N } : {}) } };
 }
 
-/** A check labelled with its sense and its load ratio scaled from its own load to the reference load. */
+/**
+ * A check labelled with its sense and its load ratio scaled from its own load to the reference load:
+ * a new result of the same fixed shape (check-builders.ts), its text read from the original on demand.
+ */
 function labelled(c: CheckResult, sense: LoadSense, scale: number, reversal: boolean, loadSymbol = "C"): CheckResult {
   const title = c.type === "strength" && (reversal || sense === "compression") ? `${c.title} (${sense})` : c.title;
   const id = sense === "compression" ? `compression:${c.id}` : c.id;
-  const numbers: Record<string, unknown> = { ...c, id, title, sense };
-  delete numbers.substituted;
-  delete numbers.notes;
-  if (c.type === "strength") numbers.loadRatio = c.loadRatio * scale;
   // The code's bolt checks name the force they were given T; in compression it is the compression the splice carries.
-  const text = sense === "compression" ? () => c.substituted.replace(/× T\b/g, `× ${loadSymbol}`) : () => c.substituted;
-  return withLazyText(numbers as unknown as CheckResult, text, () => c.notes);
+  const substituted = sense === "compression" ? () => c.substituted.replace(/× T\b/g, `× ${loadSymbol}`) : () => c.substituted;
+  const notes = () => c.notes;
+  const { kind, component, citation, formula } = c;
+  if (c.type === "strength") {
+    const { limitState, demand_N, resistance_N } = c;
+    return strength({ id, kind, title, component, citation, formula, limitState, sense, demand_N, resistance_N, loadRatio: c.loadRatio * scale, substituted, notes });
+  }
+  return rule({ id, kind, title, component, citation, formula, sense, value_mm: c.value_mm, limit_mm: c.limit_mm, bound: c.bound, substituted, notes });
 }
 
 /** Every check of every sense of the scenario's load. */

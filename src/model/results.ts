@@ -131,7 +131,3 @@ export class LazyText {
     return this.#notes;
   }
 }
-
-export function withLazyText<T extends object>(numbers: T, substituted: () => string, notes: () => string[]): T & { substituted: string; notes: string[] } {
-  return Object.assign(new LazyText(substituted, notes), numbers);
-}
