@@ -19,11 +19,6 @@
 import type { Hole, PlateConnection } from "../model/joint.js";
 import { LINE_TOLERANCE_MM } from "./lines.js";
 
-export interface BlockPlane {
-  gross_mm: number;
-  net_mm: number;
-}
-
 export interface BlockShape {
   description: string;
   /** Shear planes along the force: gross and net length, mm (multiply by t for areas). */
@@ -50,19 +45,25 @@ function weight(t: number, p0: number, p1: number): number {
   return t > p0 && t < p1 ? 1 : 0;
 }
 
-/** Shear plane along gauge line y from u = 0 to u = uLast. */
-function shearPlane(holes: readonly LocalHole[], y: number, uLast: number): BlockPlane {
+/**
+ * Deduction of the holes on a shear plane along gauge line y from u = 0 to u = uLast (net length =
+ * uLast − deduction). A hole at u = 0 cannot exist (end distance > 0), so the ½ weight applies only
+ * at uLast.
+ */
+function shearDeduction(holes: readonly LocalHole[], y: number, uLast: number): number {
   let deduction = 0;
   for (const h of holes) if (near(h.y, y)) deduction += weight(h.u, 0, uLast) * h.along;
-  // A hole at u = 0 cannot exist (end distance > 0), so the ½ weight applies only at uLast.
-  return { gross_mm: uLast, net_mm: uLast - deduction };
+  return deduction;
 }
 
-/** Tension plane across the force at u = uLast, from y0 to y1 (y0 < y1; either may be a plate edge). */
-function tensionPlane(holes: readonly LocalHole[], uLast: number, y0: number, y1: number): BlockPlane {
+/**
+ * Deduction of the holes on a tension plane across the force at u = uLast, from y0 to y1 (y0 < y1;
+ * either may be a plate edge): net length = (y1 − y0) − deduction.
+ */
+function tensionDeduction(holes: readonly LocalHole[], uLast: number, y0: number, y1: number): number {
   let deduction = 0;
   for (const h of holes) if (near(h.u, uLast)) deduction += weight(h.y, y0, y1) * h.across;
-  return { gross_mm: y1 - y0, net_mm: y1 - y0 - deduction };
+  return deduction;
 }
 
 /** Which of the shapes above a block is; with the gauge lines it spans, it names the block. */
@@ -132,20 +133,23 @@ function blockGaugeLines(local: readonly LocalHole[]): GaugeLineOfBlock[] {
   return lines;
 }
 
-/** Bolts on gauge lines lo … hi and the farthest of them from the plate end (the block's tension plane). */
-function span(lines: readonly GaugeLineOfBlock[], lo: number, hi: number): { bolts: number; uLast: number } {
+/** Bolts on gauge lines lo … hi. */
+function boltsOn(lines: readonly GaugeLineOfBlock[], lo: number, hi: number): number {
   let bolts = 0;
-  let uLast = -Infinity;
-  for (let k = lo; k <= hi; k++) {
-    bolts += lines[k]!.holes.length;
-    uLast = Math.max(uLast, lines[k]!.maxU);
-  }
-  return { bolts, uLast };
+  for (let k = lo; k <= hi; k++) bolts += lines[k]!.holes.length;
+  return bolts;
 }
 
-/** Shear plane along a gauge line from u = 0 to u = uLast (only that line's holes lie on it). */
-function shearPlaneOn(line: GaugeLineOfBlock, uLast: number): BlockPlane {
-  return shearPlane(line.holes, line.y, uLast);
+/** The farthest hole of gauge lines lo … hi from the plate end: where the block's tension plane lies. */
+function lastU(lines: readonly GaugeLineOfBlock[], lo: number, hi: number): number {
+  let uLast = -Infinity;
+  for (let k = lo; k <= hi; k++) uLast = Math.max(uLast, lines[k]!.maxU);
+  return uLast;
+}
+
+/** Net length of the shear plane along a gauge line from u = 0 to u = uLast (only that line's holes lie on it). */
+function shearNetOn(line: GaugeLineOfBlock, uLast: number): number {
+  return uLast - shearDeduction(line.holes, line.y, uLast);
 }
 
 /** One measured set of block shapes and what it was measured from. */
@@ -188,15 +192,16 @@ function measureBlockShapes(holes: readonly Hole[], connection: PlateConnection,
   const G = lines.length;
   const half = width_mm / 2;
   const shapes: BlockShape[] = [];
+  // Plane lengths are numbers, not objects: a search measures thousands of shapes. Gross shear planes
+  // run from the end (u = 0) to uLast; a tension plane from y0 to y1 is y1 − y0 gross.
 
   // Central blocks between gauge lines a < b.
   for (let a = 0; a < G; a++) {
     for (let b = a + 1; b < G; b++) {
-      const { bolts, uLast } = span(lines, a, b);
-      const sa = shearPlaneOn(lines[a]!, uLast);
-      const sb = shearPlaneOn(lines[b]!, uLast);
-      const t = tensionPlane(local, uLast, lines[a]!.y, lines[b]!.y);
-      shapes.push(new Block("central", a, b, G, sa.gross_mm + sb.gross_mm, sa.net_mm + sb.net_mm, t.gross_mm, t.net_mm, bolts));
+      const uLast = lastU(lines, a, b);
+      const tension = lines[b]!.y - lines[a]!.y;
+      const tensionNet = tension - tensionDeduction(local, uLast, lines[a]!.y, lines[b]!.y);
+      shapes.push(new Block("central", a, b, G, uLast + uLast, shearNetOn(lines[a]!, uLast) + shearNetOn(lines[b]!, uLast), tension, tensionNet, boltsOn(lines, a, b)));
     }
   }
 
@@ -204,14 +209,13 @@ function measureBlockShapes(holes: readonly Hole[], connection: PlateConnection,
   for (let a = 0; a < G; a++) {
     const m = G - 1 - a;
     if (a >= m) break;
-    const low = span(lines, 0, a);
-    const high = span(lines, m, G - 1);
-    const uLast = Math.max(low.uLast, high.uLast);
-    const sa = shearPlaneOn(lines[a]!, uLast);
-    const sm = shearPlaneOn(lines[m]!, uLast);
-    const t0 = tensionPlane(local, uLast, -half, lines[a]!.y);
-    const t1 = tensionPlane(local, uLast, lines[m]!.y, half);
-    shapes.push(new Block("edge-strips", a, m, G, sa.gross_mm + sm.gross_mm, sa.net_mm + sm.net_mm, t0.gross_mm + t1.gross_mm, t0.net_mm + t1.net_mm, low.bolts + high.bolts));
+    const uLast = Math.max(lastU(lines, 0, a), lastU(lines, m, G - 1));
+    const low = lines[a]!.y - -half;
+    const high = half - lines[m]!.y;
+    const lowNet = low - tensionDeduction(local, uLast, -half, lines[a]!.y);
+    const highNet = high - tensionDeduction(local, uLast, lines[m]!.y, half);
+    const bolts = boltsOn(lines, 0, a) + boltsOn(lines, m, G - 1);
+    shapes.push(new Block("edge-strips", a, m, G, uLast + uLast, shearNetOn(lines[a]!, uLast) + shearNetOn(lines[m]!, uLast), low + high, lowNet + highNet, bolts));
   }
 
   // One edge strip, bounded by one side edge: lines 0..a with its shear plane on line a and its tension
@@ -219,14 +223,13 @@ function measureBlockShapes(holes: readonly Hole[], connection: PlateConnection,
   // one-sided block: the shear plane along one outer line, the tension plane from it across every line
   // to the far edge (for a single gauge line, the shear plane along it and the tension plane to one edge).
   for (let a = 0; a < G; a++) {
-    const lower = span(lines, 0, a);
-    const sL = shearPlaneOn(lines[a]!, lower.uLast);
-    const tL = tensionPlane(local, lower.uLast, -half, lines[a]!.y);
-    shapes.push(new Block("lower-strip", a, a, G, sL.gross_mm, sL.net_mm, tL.gross_mm, tL.net_mm, lower.bolts));
-    const upper = span(lines, a, G - 1);
-    const sU = shearPlaneOn(lines[a]!, upper.uLast);
-    const tU = tensionPlane(local, upper.uLast, lines[a]!.y, half);
-    shapes.push(new Block("upper-strip", a, a, G, sU.gross_mm, sU.net_mm, tU.gross_mm, tU.net_mm, upper.bolts));
+    const y = lines[a]!.y;
+    const lowerU = lastU(lines, 0, a);
+    const lower = y - -half;
+    shapes.push(new Block("lower-strip", a, a, G, lowerU, shearNetOn(lines[a]!, lowerU), lower, lower - tensionDeduction(local, lowerU, -half, y), boltsOn(lines, 0, a)));
+    const upperU = lastU(lines, a, G - 1);
+    const upper = half - y;
+    shapes.push(new Block("upper-strip", a, a, G, upperU, shearNetOn(lines[a]!, upperU), upper, upper - tensionDeduction(local, upperU, y, half), boltsOn(lines, a, G - 1)));
   }
   return shapes;
 }
@@ -249,23 +252,36 @@ export interface GoverningBlock<D> {
  * The governing block of a plate: the shape with the least joint tension at which it fails, when a
  * block holding k of a group's n bolts takes share·k/n of the joint tension (load "share") or the
  * plate's whole force, share·T (load "full"). Null when no shape forms.
- * @param resist the code's design resistance of a shape (N), with whatever detail its text needs
+ * @param resist the code's design resistance of a shape, N
+ * @param detailOf whatever the code's text needs of the governing shape (worked out for it alone)
  */
 export function governingBlock<D>(
   shapes: readonly BlockShape[],
   bolts: number,
   share: number,
   load: BlockShearLoad,
-  resist: (shape: BlockShape) => { value_N: number; detail: D },
+  resist: (shape: BlockShape) => number,
+  detailOf: (shape: BlockShape) => D,
 ): GoverningBlock<D> | null {
-  let best: GoverningBlock<D> | null = null;
-  for (const shape of shapes) {
-    const r = resist(shape);
+  let best = -1;
+  let bestRatio = 0;
+  let bestValue = 0;
+  let bestPermits = Infinity;
+  for (let i = 0; i < shapes.length; i++) {
+    const shape = shapes[i]!;
+    const value = resist(shape);
     const ratio = load === "full" ? share : (share * shape.boltsInBlock) / bolts;
-    const permits = r.value_N / ratio;
-    if (!best || permits < best.permits_N - 1e-9) best = { shape, ratio, value_N: r.value_N, permits_N: permits, detail: r.detail };
+    const permits = value / ratio;
+    if (best < 0 || permits < bestPermits - 1e-9) {
+      best = i;
+      bestRatio = ratio;
+      bestValue = value;
+      bestPermits = permits;
+    }
   }
-  return best;
+  if (best < 0) return null;
+  const shape = shapes[best]!;
+  return { shape, ratio: bestRatio, value_N: bestValue, permits_N: bestPermits, detail: detailOf(shape) };
 }
 
 /** The block's share of the load and the joint tension it permits, in words (every code's block text). */

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -262,7 +262,6 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const Ae = cover ? spliceEffectiveArea(An, Ag) : An;
   const R = phiPnRupture(Ae, plate.fu_MPa);
   const ratio = plate.forceShare * fraction;
-  const pathText = pathLabel(path);
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",
@@ -273,7 +272,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
       ? `F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + ${allowance}) + Σ s²/4g)·t, φ = 0.75`
       : `F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + ${allowance}) + Σ s²/4g)·t, φ = 0.75`,
     substituted: () =>
-      `${transferred ? "governing" : "least"} path ${pathText}: An = (${u.n(b)} − ${u.n(path.holeDeduction_mm)} + ${u.n(path.staggerAddition_mm)}) × ${u.n(t)} = ${u.area(An)}` +
+      `${transferred ? "governing" : "least"} path ${pathLabel(path)}: An = (${u.n(b)} − ${u.n(path.holeDeduction_mm)} + ${u.n(path.staggerAddition_mm)}) × ${u.n(t)} = ${u.area(An)}` +
       (cover ? `;  Ae = min(An, 0.85 × ${u.area(Ag)}) = ${u.area(Ae)}` : `;  Ae = 1.0 × An = ${u.area(Ae)}`) +
       `;  φPn = 0.75 × ${u.stress(plate.fu_MPa)} × ${u.area(Ae)} = ${u.force(R)}` +
       (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
@@ -298,10 +297,8 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => {
-    const r = phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
-    return { value_N: r.phiRn_N, detail: r };
-  });
+  const resistance = (shape: BlockShape) => phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => resistance(shape).phiRn_N, resistance);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;

@@ -372,7 +372,6 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
   const catC = s.category === "C";
   const R = catC ? Nnet_Rd(Anet, plate.fy_MPa, s.factors.gamma_M0) : Nu_Rd(Anet, plate.fu_MPa, s.factors.gamma_M2);
   const ratio = plate.forceShare * fraction;
-  const pathText = pathLabel(path);
   const resistance = () => catC ? `Nnet,Rd = ${f(Anet)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)}` : `Nu,Rd = 0.9 × ${f(Anet)} × ${plate.fu_MPa} / ${f(s.factors.gamma_M2, 2)}`;
   return strength({
     id: `net-section:${plate.id}`,
@@ -386,7 +385,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
       ";  Anet = (b − Σd0 + Σ s²/4p)·t, " +
       (transferred ? "k = bolts not yet passed; highest demand/resistance over all paths" : "least over all paths"),
     substituted: () =>
-      `${transferred ? "governing" : "least"} path ${pathText}: Anet = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(Anet)} mm²;  ` +
+      `${transferred ? "governing" : "least"} path ${pathLabel(path)}: Anet = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(Anet)} mm²;  ` +
       `${resistance()} = ${kN(R)}` +
       (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
       shareText(plate),
@@ -410,10 +409,7 @@ export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: 
   const t = plate.spec.thickness_mm;
   const { gamma_M0, gamma_M2 } = s.factors;
   const load = scenario.options.blockShearLoad;
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => ({
-    value_N: Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2),
-    detail: null,
-  }));
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2), () => null);
   if (!best) return null;
   const { shape: b, value_N: R, ratio } = best;
   const side = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -240,7 +240,6 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const An = path.netWidth_mm * t;
   const R = Tdn(An, plate.fu_MPa);
   const ratio = plate.forceShare * fraction;
-  const pathText = pathLabel(path);
   return strength({
     id: `net-section:${plate.id}`,
     kind: "net-section",
@@ -251,7 +250,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
       ? "F·k/n ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t; k = bolts not yet passed; highest F·k/n / Tdn over all paths"
       : "F ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t, least over all paths",
     substituted: () =>
-      `${transferred ? "governing" : "least"} path ${pathText}: An = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(An)} mm²;  ` +
+      `${transferred ? "governing" : "least"} path ${pathLabel(path)}: An = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(An)} mm²;  ` +
       `Tdn = 0.9 × ${f(An)} × ${plate.fu_MPa} / ${PARTIAL_FACTORS.gamma_m1} = ${kN(R)}` +
       (transferred ? `;  load still in the plate at this path: ${f(fraction, 3)} of its force` : "") +
       shareText(plate),
@@ -277,10 +276,8 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
   const shapes = blockShapes(holes, connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => {
-    const r = Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
-    return { value_N: r.Tdb_N, detail: r };
-  });
+  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => resistance(shape).Tdb_N, resistance);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;

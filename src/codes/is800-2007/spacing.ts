@@ -8,7 +8,7 @@ import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { beatsWorst, forEachHolePair, PairSet, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, keepWorst, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
@@ -24,11 +24,16 @@ export function staggerOf(holes: readonly Hole[], gauge: readonly Line[] = gauge
   if (transverse.length < 2) return { staggered: false, gauge_mm };
   const spacing = transverse[1]!.at_mm - transverse[0]!.at_mm;
   for (let i = 1; i < transverse.length; i++) {
-    const prev = new Set(transverse[i - 1]!.holes.map((h) => h.y_mm));
-    if (transverse[i]!.holes.some((h) => prev.has(h.y_mm))) return { staggered: false, gauge_mm };
+    if (sharesGaugeLine(transverse[i - 1]!, transverse[i]!)) return { staggered: false, gauge_mm };
     if (Math.abs(transverse[i]!.at_mm - transverse[i - 1]!.at_mm - spacing) > 1e-6) return { staggered: false, gauge_mm };
   }
   return { staggered: true, gauge_mm };
+}
+
+/** Whether two transverse lines have a hole at the same y (the same gauge line). */
+function sharesGaugeLine(a: Line, b: Line): boolean {
+  for (const h of b.holes) for (const k of a.holes) if (h.y_mm === k.y_mm) return true;
+  return false;
 }
 
 /** Each bolt group's holes with their gauge lines and stagger, worked out once per rule. */
@@ -61,74 +66,94 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
  *  - staggered at equal intervals with gauge ≤ 75 mm: the last two limits × 1.5, not above min(32 t, 300).
  */
 export function maxSpacingRules(joint: Joint): RuleCheck[] {
-  let across: Worst | null = null;
-  let pitch: Worst | null = null;
-  let edgeLine: Worst | null = null;
+  const worst: MaxSpacingWorst = { across: null, pitch: null, edgeLine: null };
   const outside = outsidePlates(joint);
   const seen = new PairSet(joint.holes);
   let relaxedAnywhere = false;
   const groups = groupHoleSets(joint);
-  const linesOfJoined = new Map<string, Line[]>();
-  for (const plate of holePlates(joint)) {
-    const holes = platesHoles(joint, plate);
-    // Plates joined to the same groups (both covers; a main plate and its own group) share their lines.
-    const joined = plate.connections.map((c) => c.group).join("+");
+  const plates = holePlates(joint);
+  const linesOf: Line[][] = [];
+  for (let k = 0; k < plates.length; k++) {
+    const plate = plates[k]!;
     // Joined to the same groups as an earlier plate (cover B after cover A): its gauges and pitches are
-    // that plate's, already measured; only its own edge-line limit (its thickness) is new.
-    const repeat = linesOfJoined.has(joined);
-    let lines = linesOfJoined.get(joined);
-    if (!lines) linesOfJoined.set(joined, (lines = plate.connections.length === 1 ? groups.get(plate.connections[0]!.group)!.gaugeLines : gaugeLines(holes)));
+    // that plate's, already measured, and its lines the same; only its own edge-line limit (its thickness) is new.
+    const earlier = sameGroupsEarlier(plates, k);
+    const repeat = earlier >= 0;
+    const lines = repeat ? linesOf[earlier]! : plate.connections.length === 1 ? groups.get(plate.connections[0]!.group)!.gaugeLines : gaugeLines(platesHoles(joint, plate));
+    linesOf.push(lines);
     const first = plate.connections[0];
-    const stagger = first ? groups.get(first.group)!.stagger : staggerOf(holes);
+    const stagger = first ? groups.get(first.group)!.stagger : staggerOf(platesHoles(joint, plate));
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (relax > 1) relaxedAnywhere = true;
-    // Across: adjacent gauge lines, per group.
     if (!repeat) {
-      for (const group of new Set(holes.map((h) => h.group))) {
-        const gl = groups.get(group)!.gaugeLines;
-        for (let i = 1; i < gl.length; i++) {
-          const a = gl[i - 1]!.holes[0]!;
-          const b = gl[i]!.holes[0]!;
-          const t = pairThickness(joint, a, b);
-          const limit = Math.min(32 * t, 300);
-          const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-          if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
-        }
-      }
+      for (const g of joint.groups) if (connects(plate, g.id)) acrossRule(joint, plate, groups.get(g.id)!.gaugeLines, worst);
     }
-    // Along: consecutive holes on each gauge line.
     const isOutside = outside.includes(plate);
-    lines.forEach((line, index) => {
+    for (let index = 0; index < lines.length; index++) {
       const edge = index === 0 || index === lines.length - 1;
-      for (let k = 1; k < line.holes.length; k++) {
-        const a = line.holes[k - 1]!;
-        const b = line.holes[k]!;
-        const s = b.x_mm - a.x_mm;
-        if (!repeat && seen.addNew(a, b)) {
-          const t = pairThickness(joint, a, b);
-          const cap = Math.min(32 * t, 300);
-          const base = Math.min(16 * t, 200);
-          const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
-          const limit = Math.min(base * r, cap);
-          if (beatsWorst(pitch, s, limit, "max")) pitch = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` };
-        }
-        if (edge && isOutside) {
-          const tp = plate.spec.thickness_mm;
-          const base = Math.min(100 + 4 * tp, 200);
-          const r = a.group === b.group ? relax : 1.0;
-          const limit = Math.min(base * r, Math.min(32 * tp, 300));
-          if (beatsWorst(edgeLine, s, limit, "max")) edgeLine = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` };
-        }
-      }
-    });
+      pitchRules(joint, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
+    }
   }
   // cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners applied.
   const relaxed = relaxedAnywhere ? { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] } : {};
   return [
-    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", across),
-    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxed), "p ≤ min(16 t, 200 mm)", "max", pitch),
-    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxed), "p ≤ min(100 + 4 t, 200 mm)", "max", edgeLine),
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", worst.across),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxed), "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxed), "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
   ];
+}
+
+/** The governing measurements of the three maximum-spacing rules so far. */
+interface MaxSpacingWorst {
+  across: Worst | null;
+  pitch: Worst | null;
+  edgeLine: Worst | null;
+}
+
+/** Index of an earlier plate joined to exactly the groups of plates[k], in the same order (−1: none). */
+function sameGroupsEarlier(plates: readonly PlatePiece[], k: number): number {
+  const mine = plates[k]!.connections;
+  for (let m = 0; m < k; m++) {
+    const theirs = plates[m]!.connections;
+    if (theirs.length === mine.length && theirs.every((c, i) => c.group === mine[i]!.group)) return m;
+  }
+  return -1;
+}
+
+/** cl. 10.2.3.1 across the force: adjacent gauge lines of one group, ≤ min(32 t, 300 mm). */
+function acrossRule(joint: Joint, plate: PlatePiece, gl: readonly Line[], worst: MaxSpacingWorst): void {
+  for (let i = 1; i < gl.length; i++) {
+    const a = gl[i - 1]!.holes[0]!;
+    const b = gl[i]!.holes[0]!;
+    const t = pairThickness(joint, a, b);
+    const limit = Math.min(32 * t, 300);
+    const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
+    if (beatsWorst(worst.across, g, limit, "max")) worst.across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+  }
+}
+
+/**
+ * cl. 10.2.3.2 and 10.2.3.3 along one gauge line: the pitch of consecutive holes ≤ min(16 t, 200 mm)
+ * (each pair once over all plates), and on a line next to an edge of an outside plate ≤ min(100 + 4 t,
+ * 200 mm) with that plate's t; × relax (cl. 10.2.3.4) within a group, not above min(32 t, 300 mm).
+ */
+function pitchRules(joint: Joint, plate: PlatePiece, line: readonly Hole[], relax: number, measurePitch: boolean, edgeLine: boolean, seen: PairSet, worst: MaxSpacingWorst): void {
+  for (let k = 1; k < line.length; k++) {
+    const a = line[k - 1]!;
+    const b = line[k]!;
+    const s = b.x_mm - a.x_mm;
+    const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
+    if (measurePitch && seen.addNew(a, b)) {
+      const t = pairThickness(joint, a, b);
+      const limit = Math.min(Math.min(16 * t, 200) * r, Math.min(32 * t, 300));
+      if (beatsWorst(worst.pitch, s, limit, "max")) worst.pitch = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` };
+    }
+    if (edgeLine) {
+      const tp = plate.spec.thickness_mm;
+      const limit = Math.min(Math.min(100 + 4 * tp, 200) * r, Math.min(32 * tp, 300));
+      if (beatsWorst(worst.edgeLine, s, limit, "max")) worst.edgeLine = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` };
+    }
+  }
 }
 
 /** Thickness of the thinner outside plate of the bolt stacks a plate belongs to (cl. 10.2.4.3). */
@@ -138,9 +163,15 @@ function outerThickness(outside: readonly PlatePiece[], plate: PlatePiece): numb
   return t;
 }
 
-function minDistanceFactor(plate: PlatePiece): { factor: number; text: string } {
+/** The minimum end and edge distance factor on d0 of cl. 10.2.4.2: 1.7 for sheared or hand flame cut edges, else 1.5. */
+function minDistanceFactor(plate: PlatePiece): number {
   const rough = plate.spec.edges === "sheared" || plate.spec.edges === "hand-flame-cut";
-  return rough ? { factor: 1.7, text: `1.7 d0 (${plate.spec.edges} edge)` } : { factor: 1.5, text: `1.5 d0 (${plate.spec.edges} edge)` };
+  return rough ? 1.7 : 1.5;
+}
+
+/** The factor in words: "1.5 d0 (sawn edge)". */
+function minDistanceText(plate: PlatePiece): string {
+  return `${minDistanceFactor(plate)} d0 (${plate.spec.edges} edge)`;
 }
 
 /**
@@ -157,8 +188,8 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
   for (const plate of holePlates(joint)) {
     const holes = platesHoles(joint, plate);
     if (holes.length === 0) continue;
-    const { factor } = minDistanceFactor(plate);
-    const text = () => minDistanceFactor(plate).text;
+    const factor = minDistanceFactor(plate);
+    const text = () => minDistanceText(plate);
     const half = plate.spec.width_mm / 2;
     const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
@@ -175,9 +206,10 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
       yMin = Math.min(yMin, h.y_mm);
       yMax = Math.max(yMax, h.y_mm);
     }
-    for (const [side, e] of [["lower", half + yMin], ["upper", half - yMax]] as const) {
-      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `${side} edge to nearest gauge line: ${f(e)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
-    }
+    const lower = half + yMin;
+    if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = { value: lower, limit: maxLimit, where: plate.label, detail: () => `lower edge to nearest gauge line: ${f(lower)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
+    const upper = half - yMax;
+    if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = { value: upper, limit: maxLimit, where: plate.label, detail: () => `upper edge to nearest gauge line: ${f(upper)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
     for (const c of plate.connections) {
       let nearest = Infinity;
       for (const h of groupHoles(joint, c.group)) {
