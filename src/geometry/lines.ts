@@ -72,8 +72,20 @@ export function transverseLines(holes: readonly Hole[]): Line[] {
   return lines;
 }
 
+/** Centre-to-centre distance of two holes, mm. */
 export function distance(a: Hole, b: Hole): number {
   return Math.hypot(a.x_mm - b.x_mm, a.y_mm - b.y_mm);
+}
+
+/**
+ * Whether two holes are certainly farther apart than s_mm, from the squared distance with a margin far
+ * above rounding: a walk for the least distance of many pairs measures `distance` (Math.hypot, slower)
+ * only for pairs that might be nearer than the least so far.
+ */
+export function fartherThan(a: Hole, b: Hole, s_mm: number): boolean {
+  const dx = a.x_mm - b.x_mm;
+  const dy = a.y_mm - b.y_mm;
+  return dx * dx + dy * dy > s_mm * s_mm * (1 + 1e-9);
 }
 
 /** Long-joint length: distance between the first and last transverse lines of a group, mm. */

@@ -56,9 +56,16 @@ export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: P
   const masks = required === 0 && !filter.tag ? 1 : 4;
   const n = sorted.length;
   // best[j * masks + m]: least partial width from the lower edge to hole j having collected tags m.
-  const best = new Float64Array(n * masks).fill(Infinity);
-  const previous = new Int32Array(n * masks).fill(-1);
-  const tags = sorted.map((h) => (masks === 1 ? 0 : tagOf(h) & 3));
+  // Plain arrays, not typed ones: a typed array of more than 64 bytes gets a backing store outside the
+  // heap, which costs more to make and free than this whole walk (a search makes thousands).
+  const best: number[] = [];
+  const previous: number[] = [];
+  for (let k = 0; k < n * masks; k++) {
+    best.push(Infinity);
+    previous.push(-1);
+  }
+  const tags: number[] = [];
+  for (const h of sorted) tags.push(masks === 1 ? 0 : tagOf(h) & 3);
   for (let j = 0; j < n; j++) {
     const hj = sorted[j]!;
     const tj = tags[j]!;

@@ -3,7 +3,7 @@
  * measured on the hole coordinates. Each result prints the governing value and its limit.
  */
 import { inchBoltSize } from "../../catalogue/bolts.js";
-import { distance, gaugeLines } from "../../geometry/lines.js";
+import { distance, fartherThan, gaugeLines } from "../../geometry/lines.js";
 import type { Joint } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
@@ -54,6 +54,8 @@ export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
   const limit = minSpacing_mm(joint.boltDiameter_mm);
   let worst: Worst | null = null;
   forEachHolePair(joint, (plate, a, b) => {
+    // The limit is the same for every pair: only a pair nearer than the nearest so far can govern.
+    if (worst !== null && fartherThan(a, b, (worst as Worst).value)) return;
     const s = distance(a, b);
     if (beatsWorst(worst, s, limit, "min")) worst = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * joint.boltDiameter_mm)} preferred)` };
   });
@@ -68,7 +70,7 @@ export function preferredSpacingWarning(joint: Joint, scenario: Scenario): Warni
   const d = joint.boltDiameter_mm;
   let least = Infinity;
   forEachHolePair(joint, (_plate, a, b) => {
-    least = Math.min(least, distance(a, b));
+    if (!fartherThan(a, b, least)) least = Math.min(least, distance(a, b));
   });
   if (!(least < 3 * d - 1e-9)) return null;
   const u = unitText(scenario);

@@ -3,7 +3,7 @@
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
 import { groupHoles } from "../../geometry/joint-builder.js";
-import { distance, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
+import { distance, fartherThan, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
@@ -52,6 +52,8 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   forEachHolePair(joint, (plate, a, b) => {
+    // The limit is the same for every pair: only a pair nearer than the nearest so far can govern.
+    if (worst !== null && fartherThan(a, b, (worst as Worst).value)) return;
     const s = distance(a, b);
     if (beatsWorst(worst, s, 2.5 * d, "min")) worst = { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` };
   });
