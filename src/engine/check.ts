@@ -14,11 +14,18 @@ export interface CheckOutcome {
   report: CheckReport;
 }
 
-/** The thinner main plate (ties broken by the lower unperforated strength, the lesser of yield and rupture). */
-function thinnerMainPlate(scenario: CheckableScenario, code: DesignCode) {
+/**
+ * The unperforated strength (efficiency basis of the scenario) of the thinner main plate; ties broken
+ * by the lower unperforated strength, the lesser of yield and rupture.
+ */
+function thinnerPlateStrength(scenario: CheckableScenario, code: DesignCode): { value_N: number; definition: string } {
   const { mainA, mainB } = scenario.plates;
-  if (mainA.thickness_mm !== mainB.thickness_mm) return mainA.thickness_mm < mainB.thickness_mm ? mainA : mainB;
-  return code.unperforatedStrength(mainA).value_N <= code.unperforatedStrength(mainB).value_N ? mainA : mainB;
+  const basis = scenario.options.efficiencyBasis;
+  if (mainA.thickness_mm !== mainB.thickness_mm) return code.unperforatedStrength(mainA.thickness_mm < mainB.thickness_mm ? mainA : mainB, basis);
+  const a = code.unperforatedStrength(mainA);
+  const b = code.unperforatedStrength(mainB);
+  if (basis === "lesser") return a.value_N <= b.value_N ? a : b;
+  return code.unperforatedStrength(a.value_N <= b.value_N ? mainA : mainB, basis);
 }
 
 /** Check a joint already built (the search builds joints itself and calls this). */
@@ -34,7 +41,7 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
       governing = c.id;
     }
   }
-  const plain = code.unperforatedStrength(thinnerMainPlate(scenario, code), scenario.options.efficiencyBasis);
+  const plain = thinnerPlateStrength(scenario, code);
   const senses = loadSenses(scenario.load);
   const ref = referenceLoad_N(scenario.load);
   const bySense: { tension?: number; compression?: number } = {};

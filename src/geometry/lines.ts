@@ -52,7 +52,8 @@ export function gaugeLines(holes: readonly Hole[]): Line[] {
       lines.push(last);
     }
   }
-  for (const line of lines) if (line.holes.length > 1) line.holes.sort((a, b) => a.x_mm - b.x_mm);
+  // Sorted by y, then x: a line's holes are in x order already unless their y differ within the tolerance.
+  for (const line of lines) if (!inOrderOfX(line.holes)) line.holes.sort((a, b) => a.x_mm - b.x_mm);
   return lines;
 }
 
@@ -68,8 +69,21 @@ export function transverseLines(holes: readonly Hole[]): Line[] {
       lines.push(last);
     }
   }
-  for (const line of lines) if (line.holes.length > 1) line.holes.sort((a, b) => a.y_mm - b.y_mm);
+  // Sorted by x, then y: a line's holes are in y order already unless their x differ within the tolerance.
+  for (const line of lines) if (!inOrderOfY(line.holes)) line.holes.sort((a, b) => a.y_mm - b.y_mm);
   return lines;
+}
+
+/** Whether holes are in ascending x (then the stable sort by x would leave them as they are). */
+function inOrderOfX(holes: readonly Hole[]): boolean {
+  for (let k = 1; k < holes.length; k++) if (holes[k - 1]!.x_mm > holes[k]!.x_mm) return false;
+  return true;
+}
+
+/** Whether holes are in ascending y. */
+function inOrderOfY(holes: readonly Hole[]): boolean {
+  for (let k = 1; k < holes.length; k++) if (holes[k - 1]!.y_mm > holes[k]!.y_mm) return false;
+  return true;
 }
 
 /** Centre-to-centre distance of two holes, mm. */
