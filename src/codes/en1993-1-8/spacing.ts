@@ -4,6 +4,7 @@
  * corrosive influences (Table 3.3, note 1: for tension members not exposed they are unlimited).
  * d0 is the hole's diameter (a slot's width); t the thinner outer connected part (note 3).
  */
+import { groupHoles } from "../../geometry/joint-builder.js";
 import { distance, gaugeLines, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
@@ -33,16 +34,18 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
     const half = plate.spec.width_mm / 2;
     for (const h of holes) {
       const d0 = holeWidth(h);
-      const factor = slotted(h) ? 1.5 : 1.2;
-      const name = slotted(h) ? "e4" : "e2";
+      const slot = slotted(h);
+      const factor = slot ? 1.5 : 1.2;
+      const name = slot ? "e4" : "e2";
       const edge = half - Math.abs(h.y_mm) - (h.across_mm - d0) / 2;
       if (beatsWorst(minEdge, edge, factor * d0, "min")) minEdge = { value: edge, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id}: ${name} = ${f(edge)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
     }
     for (const c of plate.connections) {
-      for (const h of holes.filter((k) => k.group === c.group)) {
+      for (const h of groupHoles(joint, c.group)) {
         const d0 = holeWidth(h);
-        const factor = slotted(h) ? 1.5 : 1.2;
-        const name = slotted(h) ? "e3" : "e1";
+        const slot = slotted(h);
+        const factor = slot ? 1.5 : 1.2;
+        const name = slot ? "e3" : "e1";
         const end = c.towardEnd * (c.endX_mm - h.x_mm) - (h.along_mm - d0) / 2;
         if (beatsWorst(minEnd, end, factor * d0, "min")) minEnd = { value: end, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${name} = ${f(end)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
       }
@@ -96,15 +99,14 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
     const d0 = Math.max(holeWidth(a), holeWidth(b));
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
-    const pair = () => `holes ${a.id}–${b.id}`;
     if (dy <= LINE_TOLERANCE_MM) {
-      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `${pair()}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
+      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
     } else if (dx <= LINE_TOLERANCE_MM) {
-      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `${pair()}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
+      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     } else if (staggeredPair(occupied, a, b)) {
       const L = distance(a, b);
-      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `${pair()} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
-      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `${pair()} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
+      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
+      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     }
   });
   const citation = cl("3.5", { table: "Table 3.3" });
