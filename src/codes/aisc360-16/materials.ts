@@ -10,21 +10,30 @@ import { MPA_PER_KSI } from "./factors.js";
 
 export const GRADES = Object.keys(ASTM_PLATE_GRADES);
 
+/** Fy, Fu and their note by grade name as written, each looked up once (a check asks about ten times). */
+const strengthsByGrade = new Map<string, Readonly<{ fy_MPa: number; fu_MPa: number; note: string }>>();
+
 /**
  * Fy and Fu of an ASTM plate, MPa (exact conversion of the ksi values).
  * AISC 360-16 A3.1 (ASTM A36, A572); values from AISC Manual Table 2-5.
  * @throws RangeError for a grade outside the table.
  */
-export function plateStrength(spec: PlateSpec): { fy_MPa: number; fu_MPa: number; note: string } {
-  const grade = astmPlateGrade(spec.grade);
-  const steel = grade ? ownEntry(ASTM_PLATE_GRADES, grade) : undefined;
-  if (!grade || !steel) throw new RangeError(`unknown ASTM plate grade "${spec.grade}"`);
-  return {
-    fy_MPa: steel.Fy_ksi * MPA_PER_KSI,
-    fu_MPa: steel.Fu_ksi * MPA_PER_KSI,
-    note: `${grade}: Fy ${steel.Fy_ksi} ksi, Fu ${steel.Fu_ksi} ksi (${steel.source})`,
-  };
+export function plateStrength(spec: PlateSpec): Readonly<{ fy_MPa: number; fu_MPa: number; note: string }> {
+  let m = strengthsByGrade.get(spec.grade);
+  if (!m) {
+    const grade = astmPlateGrade(spec.grade);
+    const steel = grade ? ownEntry(ASTM_PLATE_GRADES, grade) : undefined;
+    if (!grade || !steel) throw new RangeError(`unknown ASTM plate grade "${spec.grade}"`);
+    m = Object.freeze({
+      fy_MPa: steel.Fy_ksi * MPA_PER_KSI,
+      fu_MPa: steel.Fu_ksi * MPA_PER_KSI,
+      note: `${grade}: Fy ${steel.Fy_ksi} ksi, Fu ${steel.Fu_ksi} ksi (${steel.source})`,
+    });
+    strengthsByGrade.set(spec.grade, m);
+  }
+  return m;
 }
+
 
 /** The bolt groups of AISC 360-16 Table J3.2. */
 export type BoltGroup = "A307" | "Group A" | "Group B";
