@@ -154,16 +154,17 @@ function sharedEarlier(plates: readonly PlatePiece[], k: number, groupA: Hole["g
 
 /** Pairs of a joint's holes (ordered: a then b), for rules that must measure each pair once. */
 export class PairSet {
-  readonly #index = new Map<Hole, number>();
-  readonly #seen = new Set<number>();
+  readonly #holes: readonly Hole[];
+  /** Keys (index of a × hole count + index of b) of the pairs added: a rule adds tens, so a list. */
+  readonly #keys: number[] = [];
   constructor(holes: readonly Hole[]) {
-    holes.forEach((h, i) => this.#index.set(h, i));
+    this.#holes = holes;
   }
   /** Adds the pair; false when it was there already. */
   addNew(a: Hole, b: Hole): boolean {
-    const key = this.#index.get(a)! * this.#index.size + this.#index.get(b)!;
-    if (this.#seen.has(key)) return false;
-    this.#seen.add(key);
+    const key = this.#holes.indexOf(a) * this.#holes.length + this.#holes.indexOf(b);
+    if (this.#keys.includes(key)) return false;
+    this.#keys.push(key);
     return true;
   }
 }
