@@ -7,7 +7,8 @@
  * text and the notes are getters (from LazyText) that write the text on first read from closures over
  * the same numbers. No number is ever computed from a text.
  */
-import { LazyText, type Citation, type RuleCheck, type StrengthCheck } from "../model/results.js";
+import { LazyText, type Citation, type RuleCheck, type StrengthCheck, type CheckResult, type Warning } from "../model/results.js";
+import type { CodeChecks } from "./types.js";
 import { utilisation } from "./format.js";
 
 type StrengthInput = Omit<StrengthCheck, "type" | "utilisation" | "pass" | "notes" | "substituted"> & { substituted: () => string; notes?: () => string[] };
@@ -92,4 +93,28 @@ export function strength(partial: StrengthInput): StrengthCheck {
 /** A rule check result: a measured length against a limit, with the bound saying which way it binds. */
 export function rule(r: RuleInput): RuleCheck {
   return new RuleResult(r);
+}
+
+/** A code's checks of one joint, with the statements of its conventions written on first read. */
+class CodeCheckList implements CodeChecks {
+  #conventions: (() => string[]) | string[];
+  constructor(
+    readonly checks: CheckResult[],
+    readonly warnings: Warning[],
+    conventions: () => string[],
+  ) {
+    this.#conventions = conventions;
+  }
+  get conventions(): string[] {
+    if (typeof this.#conventions === "function") this.#conventions = this.#conventions();
+    return this.#conventions;
+  }
+}
+
+/**
+ * The checks and warnings of one joint under a code, with the conventions it used as words written only
+ * when an output reads them (a search checks thousands of joints and prints a few).
+ */
+export function codeChecks(checks: CheckResult[], warnings: Warning[], conventions: () => string[]): CodeChecks {
+  return new CodeCheckList(checks, warnings, conventions);
 }

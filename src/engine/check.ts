@@ -1,7 +1,7 @@
 /**
  * The one checker. `check`, `search` and every export run a layout through here.
  */
-import type { DesignCode } from "../codes/types.js";
+import type { CodeChecks, DesignCode } from "../codes/types.js";
 import { buildJoint } from "../geometry/joint-builder.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
 import { checksBySense } from "./senses.js";
@@ -30,7 +30,8 @@ function thinnerPlateStrength(scenario: CheckableScenario, code: DesignCode): { 
 
 /** Check a joint already built (the search builds joints itself and calls this). */
 export function checkJoint(joint: Joint, scenario: CheckableScenario, code: DesignCode): CheckReport {
-  const { checks, warnings, conventions } = checksBySense(joint, scenario, code);
+  const bySenseChecks = checksBySense(joint, scenario, code);
+  const { checks, warnings } = bySenseChecks;
   const uls = checks.filter((c): c is StrengthCheck => c.type === "strength" && c.limitState === "ULS");
   let jointStrength = Infinity;
   let governing = "";
@@ -50,12 +51,12 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
     bySense[sense] = Math.min(...of.map((c) => c.resistance_N / c.loadRatio)) * (factoredOf(scenario.load, sense) / ref);
   }
   const maxUtilisation = checks.reduce((m, c) => Math.max(m, c.utilisation), 0);
-  return new JointReport(code, checks, jointStrength, governing, senses, bySense, plain, maxUtilisation, warnings, conventions);
+  return new JointReport(code, bySenseChecks, jointStrength, governing, senses, bySense, plain, maxUtilisation);
 }
 
 /**
- * The report of one check: plain fields of one fixed shape, and the efficiency definition in words as
- * a getter that reads the unperforated strength's text when an output asks (the number never uses it).
+ * The report of one check: plain fields of one fixed shape; the efficiency definition and the
+ * conventions in words are getters that write their text when an output asks (no number uses them).
  * A class, not an object literal with a getter: V8 builds such a literal on a slow path, which cost
  * about a sixth of a whole check (bench, DEVELOPERS.md "Performance").
  */
@@ -65,28 +66,36 @@ class JointReport implements CheckReport {
   readonly efficiency: number;
   readonly unperforatedStrength_N: number;
   readonly pass: boolean;
+  readonly checks: CheckResult[];
+  readonly warnings: Warning[];
   readonly #plain: { value_N: number; definition: string };
+  readonly #codeChecks: CodeChecks;
   constructor(
     code: DesignCode,
-    readonly checks: CheckResult[],
+    codeChecks: CodeChecks,
     readonly jointStrength_N: number,
     readonly governing: string,
     readonly senses: LoadSense[],
     readonly strengthBySense: { tension?: number; compression?: number },
     plain: { value_N: number; definition: string },
     readonly maxUtilisation: number,
-    readonly warnings: Warning[],
-    readonly conventions: string[],
   ) {
     this.code = code.id;
     this.codeTitle = code.title;
+    this.checks = codeChecks.checks;
+    this.warnings = codeChecks.warnings;
     this.efficiency = jointStrength_N / plain.value_N;
     this.unperforatedStrength_N = plain.value_N;
-    this.pass = checks.every((c) => c.pass);
+    this.pass = this.checks.every((c) => c.pass);
     this.#plain = plain;
+    this.#codeChecks = codeChecks;
   }
   get efficiencyDefinition(): string {
     return this.#plain.definition;
+  }
+  /** The conventions the checks used, in words (written when an output reads them). */
+  get conventions(): string[] {
+    return this.#codeChecks.conventions;
   }
 }
 

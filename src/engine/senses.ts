@@ -8,7 +8,7 @@ import type { CodeChecks, DesignCode } from "../codes/types.js";
 import type { Joint, PlateConnection, PlatePiece } from "../model/joint.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
 import type { CheckResult } from "../model/results.js";
-import { rule, strength } from "../codes/check-builders.js";
+import { codeChecks, rule, strength } from "../codes/check-builders.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
 /** Kinds of the code's own checks that apply in compression too, with the bearing directions reversed. */
@@ -70,7 +70,6 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
   const share = comp.spliceShare(scenario);
   const checks: CheckResult[] = [];
   const warnings: CodeChecks["warnings"] = [];
-  const conventions: string[] = [];
   // Tension, or (compression only) the rules of the layout, which hold whatever the sense.
   const base = code.checkJoint(joint, reversal ? scenario : asLoad(scenario, C, scenario.load.serviceCompression_N));
   for (const c of base.checks) {
@@ -78,7 +77,6 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
     else if (reversal) checks.push(labelled(c, "tension", 1, true));
   }
   warnings.push(...(reversal ? base.warnings : base.warnings.filter((w) => w.id !== "below-minimum-design-action")));
-  conventions.push(...base.conventions);
   // Compression: the bolt checks with the bearing directions reversed, at the force the splice carries.
   const carried = share.value * C;
   const serviceC = scenario.load.serviceCompression_N;
@@ -87,10 +85,12 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
   for (const c of flipped.checks) if (c.type === "strength" && BOLT_KINDS.has(c.kind)) checks.push(labelled(c, "compression", carried / ref, reversal, symbol));
   const own = comp.checks(joint, scenario, share.value);
   for (const c of own.checks) checks.push(labelled(c, "compression", c.type === "strength" ? C / ref : 1, reversal));
-  conventions.push(
+  // The conventions in words, written when an output reads them.
+  const conventions = () => [
+    ...base.conventions,
     "compression: bolts bear away from the butt on the main plates (the plate continues behind them: no end distance, the pitch to the hole behind) and toward the other group's holes on the covers; no net-section rupture or block shear in compression",
     share.text,
     ...own.conventions,
-  );
-  return { checks, warnings, conventions };
+  ];
+  return codeChecks(checks, warnings, conventions);
 }

@@ -13,6 +13,7 @@ import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import { factorWarnings } from "../is800-2007/joint-checks.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { codeChecks } from "../check-builders.js";
 import { unitText, type UnitText } from "./display.js";
 import { holeDimensions } from "./holes.js";
 import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearingCheck, groupShear, netSectionCheck, slipCheck } from "./joint-checks.js";
@@ -76,6 +77,18 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   }
   checks.push(...minSpacingRule(joint, scenario), ...maxSpacingRule(joint, scenario), ...edgeRules(joint, scenario), ...fillerRule(joint, scenario), ...centroidRule(joint));
   const bolt = aiscBolt(scenario.bolts);
+  // IS 800 and AISC share the eccentric single-shear warning; the long-joint texts there name IS factors, so keep only that one.
+  const warnings = factorWarnings(joint, []);
+  for (const gs of shears) {
+    if (gs.longJoint < 1) warnings.push({ id: "long-joint", message: `${gs.group.id}: fastener pattern longer than ${bolt.inch !== undefined ? "38 in" : "950 mm"}, Fnv × 0.833 (Table J3.2 note [b])` });
+  }
+  const spacing = preferredSpacingWarning(joint, scenario);
+  if (spacing) warnings.push(spacing);
+  return codeChecks(checks, warnings, () => conventionsOf(joint, scenario, bolt, slipCritical));
+}
+
+/** The conventions of an AISC 360 check in words (written when an output reads them). */
+function conventionsOf(joint: Joint, scenario: CheckableScenario, bolt: ReturnType<typeof aiscBolt>, slipCritical: boolean): string[] {
   const conventions = [
     `LRFD; ${bolt.name}, ${bolt.group === "A307" ? "A307" : bolt.threadsIncluded ? "threads included in the shear planes (N)" : "threads excluded from the shear planes (X)"}; Ab = π d²/4 (J3.6)`,
     ...(scenario.bolts.astmGrade === undefined ? [`bolt class ${scenario.bolts.propertyClass} read as its ASTM grade of the same strength level (4.6 → A307, 8.8 → A325, 10.9 → A490)`] : []),
@@ -89,14 +102,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   ];
   if (slipCritical) conventions.push("slip-critical: slip checked at the factored load (LRFD), and bolt shear, bearing and tearout also checked (J3.8)");
   if (joint.groups.some((g) => g.packing_mm > 0)) conventions.push(`fillers ${scenario.options.fillersDeveloped ? "developed (their extension and bolts are not checked here)" : "not developed: shear × (1 − 0.4(t − 0.25)) over 1/4 in (J5.2(a)); over 3/4 in refused — the older text of J5.2, kept because it refuses more than 360-16 as recalled (from memory)"}`);
-  // IS 800 and AISC share the eccentric single-shear warning; the long-joint texts there name IS factors, so keep only that one.
-  const warnings = factorWarnings(joint, []);
-  for (const gs of shears) {
-    if (gs.longJoint < 1) warnings.push({ id: "long-joint", message: `${gs.group.id}: fastener pattern longer than ${bolt.inch !== undefined ? "38 in" : "950 mm"}, Fnv × 0.833 (Table J3.2 note [b])` });
-  }
-  const spacing = preferredSpacingWarning(joint, scenario);
-  if (spacing) warnings.push(spacing);
-  return { checks, warnings, conventions };
+  return conventions;
 }
 
 /** Design strength of the unperforated plate on an efficiency basis: 0.90·Fy·Ag (D2(a)), 0.75·Fu·Ag (D2(b) with Ae = Ag), or the lesser. */

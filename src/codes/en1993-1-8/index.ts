@@ -14,6 +14,7 @@ import { blockShearConvention } from "../../geometry/block-shear.js";
 import { f, kN } from "../format.js";
 import { groupLabel } from "../is800-2007/joint-checks.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { codeChecks } from "../check-builders.js";
 import { holeDimensions } from "./holes.js";
 import {
   bearingCheck,
@@ -174,8 +175,7 @@ function boundCode(bound: Ec3Settings): DesignCode {
       }
     }
     checks.push(...minSpacingRules(joint), ...minEndEdgeRules(joint), ...maxRules(joint, scenario), ...centroidRule(joint));
-    const conventions = conventionsOf(scenario, s, smallHoles);
-    return { checks, warnings: warningsOf(joint, s, groups), conventions };
+    return codeChecks(checks, warningsOf(joint, s, groups), () => conventionsOf(scenario, s, smallHoles));
   }
 
   /**

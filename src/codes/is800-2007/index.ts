@@ -10,6 +10,7 @@ import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "..
 import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { codeChecks } from "../check-builders.js";
 import { f, kN } from "../format.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { holeDimensions } from "./holes.js";
@@ -66,7 +67,6 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   const checks: CheckResult[] = [];
   const gfs = joint.groups.map((g) => groupFactors(joint, g));
   const friction = scenario.bolts.assembly === "friction-grip";
-  const slipAtUltimate = friction && scenario.bolts.slipAt === "ultimate";
   // Friction-grip bolts are checked in bolt shear and bearing at the factored load whatever the slip
   // design: no clause is relied on to waive them (from memory; the reading that refuses more).
   for (const gf of gfs) {
@@ -85,6 +85,16 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   }
   checks.push(...minSpacingRule(joint), ...maxSpacingRules(joint), ...edgeRules(joint, scenario), ...gripRule(joint), ...centroidRule(joint));
 
+  const warnings = factorWarnings(joint, gfs);
+  const minimum = minimumDesignAction(scenario);
+  if (minimum) warnings.push(minimum);
+  return codeChecks(checks, warnings, () => conventionsOf(scenario));
+}
+
+/** The conventions of an IS 800 check in words (written when an output reads them). */
+function conventionsOf(scenario: CheckableScenario): string[] {
+  const friction = scenario.bolts.assembly === "friction-grip";
+  const slipAtUltimate = friction && scenario.bolts.slipAt === "ultimate";
   const conventions: string[] = [
     `bolt net area Anb at the threads (cl. 10.3.3, 10.4.3): ${scenario.options.boltNetArea === "0.78-gross" ? "0.78 × π d²/4 — the approximation Indian design aids use (common practice); the clause defines Anb, it gives no factor" : "the ISO 898-1 tensile stress area"}`,
     `bolt strength: ISO 898-1 ${scenario.options.boltStrength} values`,
@@ -101,10 +111,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
     );
   }
   conventions.push(blockShearConvention(scenario.options.blockShearLoad, "block shear (cl. 6.4.1)"));
-  const warnings = factorWarnings(joint, gfs);
-  const minimum = minimumDesignAction(scenario);
-  if (minimum) warnings.push(minimum);
-  return { checks, warnings, conventions };
+  return conventions;
 }
 
 /**
