@@ -154,9 +154,10 @@ function shearNetOn(line: GaugeLineOfBlock, uLast: number): number {
 
 /** One measured set of block shapes and what it was measured from. */
 interface MeasuredShapes {
-  holes: readonly Hole[];
-  endX_mm: number;
-  towardEnd: 1 | -1;
+  /** The joint's own hole list (the joint builder's array): an answer is handed on within its joint only. */
+  jointHoles: readonly Hole[];
+  /** Each hole's u, y, width across and along, in the group's order: everything the shapes depend on. */
+  local: readonly number[];
   width_mm: number;
   shapes: readonly BlockShape[];
 }
@@ -165,29 +166,40 @@ interface MeasuredShapes {
 const recentShapes: MeasuredShapes[] = [];
 const RECENT_SHAPES = 6;
 
+/** The holes in the local frame of one plate end, flat: u, y, across, along of each hole in turn. */
+function localFrame(holes: readonly Hole[], connection: PlateConnection): number[] {
+  const local: number[] = [];
+  for (const h of holes) local.push(connection.towardEnd * (connection.endX_mm - h.x_mm), h.y_mm, h.across_mm, h.along_mm);
+  return local;
+}
+
+const sameNumbers = (a: readonly number[], b: readonly number[]): boolean => {
+  if (a.length !== b.length) return false;
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
+};
+
 /**
- * Every block shape that can form in a plate of width b for one bolt group bearing toward one plate end.
- * Plates of the same width joined to the same group's holes (the same array from the joint builder) at
- * the same end have the same shapes — both cover plates of a butt splice — so a set is measured once
- * and handed again to the next plate that asks (the shapes are only read, never changed).
+ * Every block shape that can form in a plate of width b for one bolt group (`holes`) bearing toward one
+ * plate end. The shapes depend only on the holes as seen from that end (u, y and hole widths) and the
+ * plate width, so within one joint (`jointHoles`: the joint builder's own hole list; default the
+ * group's holes) a set is measured once and handed again to the next plate that asks
+ * with the same numbers: both cover plates of a butt splice, and the mirror-image groups of its two
+ * main plates (and of each cover's two ends). Every joint measures its own (a check never reads an
+ * earlier joint's answer). The shapes hold numbers only, never hole names, and are only read.
  */
-export function blockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number): readonly BlockShape[] {
-  for (const m of recentShapes) {
-    if (m.holes === holes && m.endX_mm === connection.endX_mm && m.towardEnd === connection.towardEnd && m.width_mm === width_mm) return m.shapes;
-  }
-  const shapes = measureBlockShapes(holes, connection, width_mm);
-  recentShapes.push({ holes, endX_mm: connection.endX_mm, towardEnd: connection.towardEnd, width_mm, shapes });
+export function blockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number, jointHoles: readonly Hole[] = holes): readonly BlockShape[] {
+  const local = localFrame(holes, connection);
+  for (const m of recentShapes) if (m.jointHoles === jointHoles && m.width_mm === width_mm && sameNumbers(m.local, local)) return m.shapes;
+  const shapes = measureBlockShapes(local, width_mm);
+  recentShapes.push({ jointHoles, local, width_mm, shapes });
   if (recentShapes.length > RECENT_SHAPES) recentShapes.shift();
   return shapes;
 }
 
-function measureBlockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number): BlockShape[] {
-  const local: LocalHole[] = holes.map((h) => ({
-    u: connection.towardEnd * (connection.endX_mm - h.x_mm),
-    y: h.y_mm,
-    across: h.across_mm,
-    along: h.along_mm,
-  }));
+function measureBlockShapes(frame: readonly number[], width_mm: number): BlockShape[] {
+  const local: LocalHole[] = [];
+  for (let k = 0; k < frame.length; k += 4) local.push({ u: frame[k]!, y: frame[k + 1]!, across: frame[k + 2]!, along: frame[k + 3]! });
   const lines = blockGaugeLines(local);
   const G = lines.length;
   const half = width_mm / 2;

@@ -405,7 +405,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
  */
 export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const holes = groupHoles(joint, connection.group);
-  const shapes = blockShapes(holes, connection, plate.spec.width_mm);
+  const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
   const t = plate.spec.thickness_mm;
   const { gamma_M0, gamma_M2 } = s.factors;
   const load = scenario.options.blockShearLoad;

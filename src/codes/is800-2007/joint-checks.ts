@@ -273,7 +273,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const holes = groupHoles(joint, connection.group);
-  const shapes = blockShapes(holes, connection, plate.spec.width_mm);
+  const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
   const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
