@@ -15,8 +15,17 @@ export interface TearOut {
 
 /** Per hole of one group in one plate: distance to the end and to the nearest hole ahead in its strip. */
 export function tearOutDistances(holes: readonly Hole[], connection: PlateConnection): TearOut[] {
-  const u = (h: Hole) => connection.towardEnd * (connection.endX_mm - h.x_mm);
-  return holes.map((h) => {
+  const out: TearOut[] = [];
+  forEachTearOut(holes, connection, (hole, toEnd_mm, toHoleAhead_mm) => out.push({ hole, toEnd_mm, toHoleAhead_mm }));
+  return out;
+}
+
+/**
+ * The same measurements, handed to `visit` hole by hole in the group's order without building a list
+ * (the bearing rules of a search read them for every candidate).
+ */
+export function forEachTearOut(holes: readonly Hole[], connection: PlateConnection, visit: (hole: Hole, toEnd_mm: number, toHoleAhead_mm: number | null) => void): void {
+  for (const h of holes) {
     // Measured from the hole itself, so that an end at infinity (a plate that continues) still sees the holes ahead.
     let ahead = Infinity;
     for (const k of holes) {
@@ -24,6 +33,6 @@ export function tearOutDistances(holes: readonly Hole[], connection: PlateConnec
       const dk = connection.towardEnd * (k.x_mm - h.x_mm);
       if (dk > 1e-9 && Math.abs(k.y_mm - h.y_mm) < h.across_mm) ahead = Math.min(ahead, dk);
     }
-    return { hole: h, toEnd_mm: u(h), toHoleAhead_mm: ahead === Infinity ? null : ahead };
-  });
+    visit(h, connection.towardEnd * (connection.endX_mm - h.x_mm), ahead === Infinity ? null : ahead);
+  }
 }

@@ -7,7 +7,7 @@ import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
-import { tearOutDistances } from "../../geometry/tear-out.js";
+import { forEachTearOut } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck } from "../../model/results.js";
 import type { BoltSpec, CheckableScenario, Scenario } from "../../model/scenario.js";
@@ -144,18 +144,27 @@ export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, pla
   const shear = gs.perPlane_N * planesFor(plate, gs.group);
   const bearing = phiRnBearing(cb, bolt.d_mm, t, Fu);
   let total = 0;
-  const tally = new Map<string, { count: number; each: number; text: string }>();
-  for (const to of tearOutDistances(gs.holes, connection)) {
-    const lc = clearDistance_mm(to.toEnd_mm, to.toHoleAhead_mm, to.hole.along_mm);
+  // Each bolt's least strength and its clear distance: the sum is the group's; the words are tallied on read.
+  const perBolt: Array<{ least: number; lc: number; toEnd: boolean }> = [];
+  forEachTearOut(gs.holes, connection, (hole, toEnd_mm, toHoleAhead_mm) => {
+    const lc = clearDistance_mm(toEnd_mm, toHoleAhead_mm, hole.along_mm);
     const tear = phiRnTearout(ct, lc, t, Fu);
     const least = Math.min(shear, bearing, tear);
     total += least;
-    const [key, text] =
-      least === shear ? ["shear", "bolt shear"] : least === bearing ? ["bearing", "bearing"] : [`tearout ${f(lc, 3)}`, `tearout, lc = ${u.len(lc)} (${to.toHoleAhead_mm === null ? "to the end" : "to the hole ahead"})`];
-    const entry = tally.get(key) ?? { count: 0, each: least, text };
-    entry.count += 1;
-    tally.set(key, entry);
-  }
+    perBolt.push({ least, lc, toEnd: toHoleAhead_mm === null });
+  });
+  /** The bolts grouped by what governs each, in words: "4 × 98.2 kN (bolt shear) + 2 × … (tearout, …)". */
+  const tallyText = (): string => {
+    const tally = new Map<string, { count: number; each: number; text: string }>();
+    for (const { least, lc, toEnd } of perBolt) {
+      const [key, text] =
+        least === shear ? ["shear", "bolt shear"] : least === bearing ? ["bearing", "bearing"] : [`tearout ${f(lc, 3)}`, `tearout, lc = ${u.len(lc)} (${toEnd ? "to the end" : "to the hole ahead"})`];
+      const entry = tally.get(key) ?? { count: 0, each: least, text };
+      entry.count += 1;
+      tally.set(key, entry);
+    }
+    return [...tally.values()].map((e) => `${e.count} × ${u.force(e.each)} (${e.text})`).join(" + ");
+  };
   const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
   return strength({
     id: `bearing:${plate.id}:${connection.group}`,
@@ -166,7 +175,7 @@ export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, pla
     formula: `F ≤ Σ min(ns·φFnv·Ab, φ·${cb}·d·t·Fu, φ·${ct}·lc·t·Fu), φ = 0.75`,
     substituted: () =>
       `per bolt: shear ${planesFor(plate, gs.group)} × ${u.force(gs.perPlane_N)} = ${u.force(shear)}; bearing 0.75 × ${cb} × ${u.len(bolt.d_mm)} × ${u.len(t)} × ${u.stress(Fu)} = ${u.force(bearing)};  ` +
-      `Σ = ${[...tally.values()].map((e) => `${e.count} × ${u.force(e.each)} (${e.text})`).join(" + ")} = ${u.force(total)}` +
+      `Σ = ${tallyText()} = ${u.force(total)}` +
       (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * plate.forceShare,

@@ -7,7 +7,7 @@ import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
-import { tearOutDistances } from "../../geometry/tear-out.js";
+import { forEachTearOut } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
@@ -108,11 +108,11 @@ export function bearingFactor(holes: readonly Hole[], connection: PlateConnectio
   let e = Infinity;
   let p = Infinity;
   let d0 = 0;
-  for (const t of tearOutDistances(holes, connection)) {
-    d0 = Math.max(d0, t.hole.along_mm);
-    if (t.toHoleAhead_mm === null) e = Math.min(e, t.toEnd_mm);
-    else p = Math.min(p, t.toHoleAhead_mm);
-  }
+  forEachTearOut(holes, connection, (hole, toEnd_mm, toHoleAhead_mm) => {
+    d0 = Math.max(d0, hole.along_mm);
+    if (toHoleAhead_mm === null) e = Math.min(e, toEnd_mm);
+    else p = Math.min(p, toHoleAhead_mm);
+  });
   return { e_mm: e, p_mm: p, d0_mm: d0, kb: kbFactor(e, p, d0, fub_MPa, fu_MPa) };
 }
 

@@ -176,6 +176,11 @@ function minDistanceText(plate: PlatePiece): string {
   return `${minDistanceFactor(plate)} d0 (${plate.spec.edges} edge)`;
 }
 
+/** The maximum edge distance of cl. 10.2.4.3 with its numbers: "12tε = 12 × 10 × 1" or "40 + 4t = 40 + 4 × 10". */
+function maxEdgeText(exposedToCorrosion: boolean, outerT: number, eps: number): string {
+  return exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
+}
+
 /**
  * Minimum end and edge distances: 1.5 d0 (rolled, machine flame cut, sawn, planed edges) or 1.7 d0
  * (sheared or hand flame cut). IS 800:2007, cl. 10.2.4.2, with d0 from Table 19.
@@ -191,16 +196,14 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     const holes = platesHoles(joint, plate);
     if (holes.length === 0) continue;
     const factor = minDistanceFactor(plate);
-    const text = () => minDistanceText(plate);
     const half = plate.spec.width_mm / 2;
     const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
-    const maxText = () => scenario.options.exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
-      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${text()} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
+      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${minDistanceText(plate)} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
     }
     let yMin = Infinity;
     let yMax = -Infinity;
@@ -209,18 +212,18 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
       yMax = Math.max(yMax, h.y_mm);
     }
     const lower = half + yMin;
-    if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = { value: lower, limit: maxLimit, where: plate.label, detail: () => `lower edge to nearest gauge line: ${f(lower)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
+    if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = { value: lower, limit: maxLimit, where: plate.label, detail: () => `lower edge to nearest gauge line: ${f(lower)} mm vs ${maxEdgeText(scenario.options.exposedToCorrosion, outerT, eps)} = ${f(maxLimit)} mm` };
     const upper = half - yMax;
-    if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = { value: upper, limit: maxLimit, where: plate.label, detail: () => `upper edge to nearest gauge line: ${f(upper)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
+    if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = { value: upper, limit: maxLimit, where: plate.label, detail: () => `upper edge to nearest gauge line: ${f(upper)} mm vs ${maxEdgeText(scenario.options.exposedToCorrosion, outerT, eps)} = ${f(maxLimit)} mm` };
     for (const c of plate.connections) {
       let nearest = Infinity;
       for (const h of groupHoles(joint, c.group)) {
         const u = c.towardEnd * (c.endX_mm - h.x_mm);
         nearest = Math.min(nearest, u);
         const limit = factor * h.along_mm;
-        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${text()} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
+        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${minDistanceText(plate)} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
       }
-      if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxText()} = ${f(maxLimit)} mm` };
+      if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxEdgeText(scenario.options.exposedToCorrosion, outerT, eps)} = ${f(maxLimit)} mm` };
     }
   }
   return [
