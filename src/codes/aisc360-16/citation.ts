@@ -3,6 +3,6 @@ import type { Citation } from "../../model/results.js";
 export const STANDARD = "AISC 360-16";
 
 /** A citation of ANSI/AISC 360-16, Specification for Structural Steel Buildings (LRFD). */
-export function cl(clause: string, extra: Omit<Citation, "standard" | "clause"> = {}): Citation {
-  return { standard: STANDARD, clause, ...extra };
+export function cl(clause: string, extra?: Omit<Citation, "standard" | "clause">): Citation {
+  return extra ? { standard: STANDARD, clause, ...extra } : { standard: STANDARD, clause };
 }

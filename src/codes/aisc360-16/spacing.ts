@@ -7,7 +7,7 @@ import { distance, fartherThan, gaugeLines } from "../../geometry/lines.js";
 import type { Joint } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
-import { beatsWorst, forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { unitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
@@ -81,6 +81,7 @@ export function preferredSpacingWarning(joint: Joint, scenario: Scenario): Warni
 export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
   const u = unitText(scenario);
   const corrosion = scenario.options.exposedToCorrosion;
+  const inch = isInch(joint);
   let along: Worst | null = null;
   let across: Worst | null = null;
   for (const plate of holePlates(joint)) {
@@ -89,23 +90,23 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
       for (let k = 1; k < line.holes.length; k++) {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
-        const limit = maxSpacing_mm(pairThickness(joint, a, b), isInch(joint), corrosion);
+        const limit = maxSpacing_mm(pairThickness(joint, a, b), inch, corrosion);
         const s = b.x_mm - a.x_mm;
         if (beatsWorst(along, s, limit, "max")) along = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs ${u.len(limit)}` };
       }
     }
-    for (const group of new Set(holes.map((h) => h.group))) {
-      const gl = gaugeLines(holes.filter((h) => h.group === group));
+    for (const g of joint.groups) {
+      if (!connects(plate, g.id)) continue;
+      const gl = gaugeLines(g.holes);
       for (let i = 1; i < gl.length; i++) {
         const a = gl[i - 1]!.holes[0]!;
         const b = gl[i]!.holes[0]!;
-        const limit = maxSpacing_mm(pairThickness(joint, a, b), isInch(joint), corrosion);
+        const limit = maxSpacing_mm(pairThickness(joint, a, b), inch, corrosion);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
         if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(gl[i - 1]!.at_mm)} and ${u.len(gl[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` };
       }
     }
   }
-  const inch = isInch(joint);
   const cap = corrosion ? (inch ? "7 in" : "180 mm") : inch ? "12 in" : "305 mm";
   const formula = `s ≤ min(${corrosion ? "14" : "24"} t, ${cap})${corrosion ? " (unpainted weathering steel exposed to corrosion)" : ""}`;
   const item = corrosion ? "J3.5(b)" : "J3.5(a)";

@@ -3,6 +3,6 @@ import type { Citation } from "../../model/results.js";
 export const STANDARD = "IS 800:2007";
 
 /** A citation of IS 800:2007. */
-export function cl(clause: string, extra: Omit<Citation, "standard" | "clause"> = {}): Citation {
-  return { standard: STANDARD, clause, ...extra };
+export function cl(clause: string, extra?: Omit<Citation, "standard" | "clause">): Citation {
+  return extra ? { standard: STANDARD, clause, ...extra } : { standard: STANDARD, clause };
 }
