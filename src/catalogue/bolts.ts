@@ -36,6 +36,22 @@ export interface BoltMaterial {
   source: string;
 }
 
+/** fub and fyb, MPa, nominal (ISO 898-1 nominal values, EN 1993-1-8 Table 3.1). */
+const NOMINAL_STRENGTHS: Readonly<Record<PropertyClass, readonly [number, number]>> = {
+  "4.6": [400, 240],
+  "5.6": [500, 300],
+  "8.8": [800, 640],
+  "10.9": [1000, 900],
+};
+/** fub and fyb, MPa, minimum (ISO 898-1 Table 3, from memory); class 8.8 up to M16 here, above M16 next. */
+const MINIMUM_STRENGTHS: Readonly<Record<PropertyClass, readonly [number, number]>> = {
+  "4.6": [400, 240],
+  "5.6": [500, 300],
+  "8.8": [800, 640],
+  "10.9": [1040, 940],
+};
+const MINIMUM_8_8_ABOVE_M16 = [830, 660] as const;
+
 /**
  * Ultimate (fub) and yield (fyb) strength of a bolt property class.
  * "nominal": ISO 898-1 nominal values (the class numbers: 8.8 → 800/640), as EN 1993-1-8 Table 3.1.
@@ -46,22 +62,10 @@ export interface BoltMaterial {
  */
 export function boltMaterial(propertyClass: PropertyClass, d_mm: number, basis: BoltStrengthBasis): BoltMaterial {
   if (basis === "nominal") {
-    const nominal: Record<PropertyClass, [number, number]> = {
-      "4.6": [400, 240],
-      "5.6": [500, 300],
-      "8.8": [800, 640],
-      "10.9": [1000, 900],
-    };
-    const [fub, fyb] = nominal[propertyClass];
+    const [fub, fyb] = NOMINAL_STRENGTHS[propertyClass];
     return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 nominal values, EN 1993-1-8 Table 3.1" };
   }
-  const minimum: Record<PropertyClass, [number, number]> = {
-    "4.6": [400, 240],
-    "5.6": [500, 300],
-    "8.8": d_mm > 16 ? [830, 660] : [800, 640],
-    "10.9": [1040, 940],
-  };
-  const [fub, fyb] = minimum[propertyClass];
+  const [fub, fyb] = propertyClass === "8.8" && d_mm > 16 ? MINIMUM_8_8_ABOVE_M16 : MINIMUM_STRENGTHS[propertyClass];
   return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 Table 3 minimum values, IS 1367-3; from memory" };
 }
 
