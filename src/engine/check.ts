@@ -6,7 +6,7 @@ import { buildJoint } from "../geometry/joint-builder.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
 import { checksBySense } from "./senses.js";
 import type { Joint } from "../model/joint.js";
-import type { CheckReport, CheckResult, StrengthCheck, Warning } from "../model/results.js";
+import type { CheckReport, CheckResult, Warning } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
 export interface CheckOutcome {
@@ -31,26 +31,30 @@ function thinnerPlateStrength(scenario: CheckableScenario, code: DesignCode): { 
 /** Check a joint already built (the search builds joints itself and calls this). */
 export function checkJoint(joint: Joint, scenario: CheckableScenario, code: DesignCode): CheckReport {
   const bySenseChecks = checksBySense(joint, scenario, code);
-  const { checks, warnings } = bySenseChecks;
-  const uls = checks.filter((c): c is StrengthCheck => c.type === "strength" && c.limitState === "ULS");
+  const checks = bySenseChecks.checks;
   let jointStrength = Infinity;
   let governing = "";
-  for (const c of uls) {
+  // The least capacity (resistance / load ratio) of the ULS checks of each sense with a load ratio.
+  let leastTension = Infinity;
+  let leastCompression = Infinity;
+  let maxUtilisation = 0;
+  for (const c of checks) {
+    maxUtilisation = Math.max(maxUtilisation, c.utilisation);
+    if (c.type !== "strength" || c.limitState !== "ULS") continue;
     const capacity = c.resistance_N / c.loadRatio;
     if (capacity < jointStrength - 1e-9) {
       jointStrength = capacity;
       governing = c.id;
     }
+    if (!(c.loadRatio > 0)) continue;
+    if ((c.sense ?? "tension") === "tension") leastTension = Math.min(leastTension, capacity);
+    else leastCompression = Math.min(leastCompression, capacity);
   }
   const plain = thinnerPlateStrength(scenario, code);
   const senses = loadSenses(scenario.load);
   const ref = referenceLoad_N(scenario.load);
   const bySense: { tension?: number; compression?: number } = {};
-  for (const sense of senses) {
-    const of = uls.filter((c) => (c.sense ?? "tension") === sense && c.loadRatio > 0);
-    bySense[sense] = Math.min(...of.map((c) => c.resistance_N / c.loadRatio)) * (factoredOf(scenario.load, sense) / ref);
-  }
-  const maxUtilisation = checks.reduce((m, c) => Math.max(m, c.utilisation), 0);
+  for (const sense of senses) bySense[sense] = (sense === "tension" ? leastTension : leastCompression) * (factoredOf(scenario.load, sense) / ref);
   return new JointReport(code, bySenseChecks, jointStrength, governing, senses, bySense, plain, maxUtilisation);
 }
 

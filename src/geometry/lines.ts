@@ -105,6 +105,11 @@ export function fartherThan(a: Hole, b: Hole, s_mm: number): boolean {
 /** Long-joint length: distance between the first and last transverse lines of a group, mm. */
 export function jointLength_mm(holes: readonly Hole[]): number {
   if (holes.length === 0) return 0;
-  const xs = holes.map((h) => h.x_mm);
-  return Math.max(...xs) - Math.min(...xs);
+  let first = Infinity;
+  let last = -Infinity;
+  for (const h of holes) {
+    first = Math.min(first, h.x_mm);
+    last = Math.max(last, h.x_mm);
+  }
+  return last - first;
 }
