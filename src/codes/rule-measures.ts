@@ -29,12 +29,15 @@ export function pairThickness(joint: Joint, a: Hole, b: Hole): number {
 
 /** Plates at either face of some bolt group's stack (the "outside" or "outer" plates of the codes). */
 export function outsidePlates(joint: Joint): PlatePiece[] {
-  const ids = new Set<string>();
+  const ids: string[] = [];
+  const add = (id: string | undefined) => {
+    if (id && id !== "packing" && !ids.includes(id)) ids.push(id);
+  };
   for (const g of joint.groups) {
-    const ends = [g.stack[0], g.stack[g.stack.length - 1]];
-    for (const id of ends) if (id && id !== "packing") ids.add(id);
+    add(g.stack[0]);
+    add(g.stack[g.stack.length - 1]);
   }
-  return joint.plates.filter((p) => ids.has(p.id));
+  return joint.plates.filter((p) => ids.includes(p.id));
 }
 
 /** The plates that carry load (every plate but packing). */
