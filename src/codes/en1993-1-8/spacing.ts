@@ -94,8 +94,6 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
   let staggerDistance: Worst | null = null;
   const occupiedBy = new Map<PlatePiece, OccupiedCells>();
   forEachHolePair(joint, (plate, a, b, holes) => {
-    let occupied = occupiedBy.get(plate);
-    if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
     const d0 = Math.max(holeWidth(a), holeWidth(b));
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
@@ -103,8 +101,13 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
       if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
     } else if (dx <= LINE_TOLERANCE_MM) {
       if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
-    } else if (staggeredPair(occupied, a, b)) {
+    } else {
       const L = distance(a, b);
+      // Whether the pair is a stagger is asked only when it could govern one of the two stagger rules.
+      if (!beatsWorst(staggerGauge, dy, 1.2 * d0, "min") && !beatsWorst(staggerDistance, L, 2.4 * d0, "min")) return;
+      let occupied = occupiedBy.get(plate);
+      if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
+      if (!staggeredPair(occupied, a, b)) return;
       if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
       if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
     }
