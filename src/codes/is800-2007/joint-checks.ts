@@ -116,6 +116,16 @@ export function bearingFactor(holes: readonly Hole[], connection: PlateConnectio
   return { e_mm: e, p_mm: p, d0_mm: d0, kb: kbFactor(e, p, d0, fub_MPa, fu_MPa) };
 }
 
+/** The e-term of kb in words: "e/3d0 = 40/(3 × 22) = 0.606", or "e: —" where no bolt bears on an end. */
+function eTermText(b: { e_mm: number; d0_mm: number }): string {
+  return Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
+}
+
+/** The p-term of kb in words, or "p: no bolt behind another". */
+function pTermText(b: { p_mm: number; d0_mm: number }): string {
+  return Number.isFinite(b.p_mm) ? `p/3d0 − 0.25 = ${f(b.p_mm)}/(3 × ${f(b.d0_mm)}) − 0.25 = ${f(b.p_mm / (3 * b.d0_mm) - 0.25, 3)}` : "p: no bolt behind another";
+}
+
 /**
  * Bearing of one group's bolts on one plate: plate force ≤ n · Vdpb.
  * IS 800:2007, cl. 10.3.4. Each plate bears with its own kb (its own end distance and pitch toward its
@@ -132,10 +142,6 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
   const perBolt = Vdpb(b.kb, d, t, plate.fu_MPa, holeFactor);
   const n = holes.length;
   const T = scenario.load.factoredTension_N;
-  const eTerm = () => Number.isFinite(b.e_mm) ? `e/3d0 = ${f(b.e_mm)}/(3 × ${f(b.d0_mm)}) = ${f(b.e_mm / (3 * b.d0_mm), 3)}` : "e: —";
-  const pTerm = () => Number.isFinite(b.p_mm)
-    ? `p/3d0 − 0.25 = ${f(b.p_mm)}/(3 × ${f(b.d0_mm)}) − 0.25 = ${f(b.p_mm / (3 * b.d0_mm) - 0.25, 3)}`
-    : "p: no bolt behind another";
   const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
   return strength({
     id: `bearing:${plate.id}:${connection.group}`,
@@ -145,7 +151,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     citation: cl("10.3.4"),
     formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
     substituted: () =>
-      `kb = min(${eTerm()}, ${pTerm()}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
+      `kb = min(${eTermText(b)}, ${pTermText(b)}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
       `Vdpb = 2.5 × ${f(b.kb, 3)} × ${d} × ${f(t)} × ${plate.fu_MPa}${holeFactor !== 1 ? ` × ${holeFactor}` : ""} / ${PARTIAL_FACTORS.gamma_mb} = ${kN(perBolt, 2)};  ` +
       `n·Vdpb = ${n} × ${kN(perBolt, 2)} = ${kN(n * perBolt)}` +
       (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
