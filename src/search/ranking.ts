@@ -25,7 +25,11 @@ export interface Measures {
 /** Keys are rounded so that the same value computed two ways compares equal. */
 const r = (v: number) => (Number.isFinite(v) ? Math.round(v * 1e6) / 1e6 : v);
 
-export function rankKey(rankBy: RankBy, m: Measures, text: string): Key {
+/**
+ * The key of a checked layout. `text` (the fixed order) is written on first read: the heap reads it only
+ * when the numbers tie, and the output for the layouts reported.
+ */
+export function rankKey(rankBy: RankBy, m: Measures, text: () => string): Key {
   const numbers =
     rankBy === "cost"
       ? [m.cost, m.bolts, -m.efficiency]
@@ -34,7 +38,13 @@ export function rankKey(rankBy: RankBy, m: Measures, text: string): Key {
         : rankBy === "efficiency"
           ? [-m.efficiency, m.bolts, m.cost]
           : [m.length_mm, m.bolts, -m.efficiency, m.cost];
-  return { numbers: numbers.map(r), text };
+  let written: string | undefined;
+  return {
+    numbers: numbers.map(r),
+    get text(): string {
+      return (written ??= text());
+    },
+  };
 }
 
 /**

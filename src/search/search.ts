@@ -146,7 +146,7 @@ export function evaluate(ctx: SearchContext, f: Family, layout: LayoutSpec, coun
   const gauge = layout.kind === "holes" ? 0 : layout.gauge_mm;
   const end = layout.endDistance_mm;
   const endAtButt = layout.kind === "holes" || ctx.scenario.splice.type === "lap" ? undefined : layout.endDistanceAtButt_mm;
-  const text = fixedOrderText({ size_mm: f.size_mm, propertyClass: f.propertyClass, pattern: f.pattern, counts, pitch_mm: pitch, gauge_mm: gauge, end_mm: end, endAtButt_mm: endAtButt, coverThickness_mm: f.coverThickness_mm });
+  const text = () => fixedOrderText({ size_mm: f.size_mm, propertyClass: f.propertyClass, pattern: f.pattern, counts, pitch_mm: pitch, gauge_mm: gauge, end_mm: end, endAtButt_mm: endAtButt, coverThickness_mm: f.coverThickness_mm });
   const key = rankKey(rankBy, { cost: cost.total, bolts: joint.holes.length, efficiency: report.efficiency, length_mm: joint.spliceLength_mm }, text);
   return { candidate: { family: f, layout, scenario, joint, report, cost, counts, key }, report };
 }
@@ -161,11 +161,6 @@ export function identityOf(c: Candidate): string {
 /** The arrangement of a layout (size, class, pattern, counts): by default results keep the best of each. */
 export function arrangementOf(c: Candidate): string {
   return arrangementText(c.family.size_mm, c.family.propertyClass, c.family.pattern, c.counts);
-}
-
-/** The arrangement of every member of a grid or staggered family (tapered families hold many). */
-function familyArrangement(f: Family): string | null {
-  return f.countsPerLine ? arrangementText(f.size_mm, f.propertyClass, f.pattern, f.countsPerLine) : null;
 }
 
 function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel | null {
@@ -221,7 +216,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const streamFor = (f: Family, kcap: number): TaperedStream => {
     let stream = streams.get(f);
     if (!stream) {
-      stream = new TaperedStream(taperedProblem(ctx, f, kcap, transferred), taperedNmin(f), stats);
+      stream = new TaperedStream(f, taperedProblem(ctx, f, kcap, transferred), taperedNmin(f), stats);
       streams.set(f, stream);
     }
     return stream;
@@ -347,7 +342,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const least = taperedNmin(f);
     const stream = streams.get(f);
     if (variants || !stream) return least;
-    const open = stream.openLowerN((counts) => reported(f, counts));
+    const open = stream.openLowerN((i) => seen.has(stream.arrangementAt(i)));
     if (open === null) finished.add(f);
     return open === null ? null : Math.max(least, open);
   };
@@ -367,25 +362,26 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const variants = options.variants ?? false;
   /** Tapered families with no layout left to report (no count vector, or every one reported). */
   const finished = new Set<Family>();
+  /** The arrangement of every member of a grid or staggered family, written once per family (by index). */
+  const familyArrangements: Array<string | undefined> = [];
+  const familyArrangement = (f: Family & { countsPerLine: number[] }): string =>
+    (familyArrangements[f.index] ??= arrangementText(f.size_mm, f.propertyClass, f.pattern, f.countsPerLine));
   // Distinct arrangements: a node whose every layout belongs to an arrangement already reported is
-  // dropped unexpanded — none of its layouts could be reported.
-  const reported = (f: Family, counts?: number[]) => {
-    if (variants) return false;
-    const a = counts ? arrangementText(f.size_mm, f.propertyClass, f.pattern, counts) : familyArrangement(f);
-    return a !== null && seen.has(a);
-  };
+  // dropped unexpanded — none of its layouts could be reported. (Tapered families hold many.)
+  const familyReported = (f: Family): boolean => !variants && f.countsPerLine !== null && seen.has(familyArrangement(f as Family & { countsPerLine: number[] }));
   while (heap.size > 0 && results.length < options.top) {
     const node = heap.pop()!;
     stats.nodes++;
     if (options.onProgress && stats.nodes % PROGRESS_EVERY === 0) options.onProgress(stats, results.length);
     if (node.kind === "result") {
-      const id = variants ? identityOf(node.c) : arrangementOf(node.c);
+      const fc = node.c.family;
+      const id = variants ? identityOf(node.c) : fc.countsPerLine ? familyArrangement(fc as Family & { countsPerLine: number[] }) : arrangementOf(node.c);
       if (seen.has(id)) continue;
       seen.add(id);
       results.push(node.c);
       continue;
     }
-    if (finished.has(node.f) || (node.kind !== "tapered" && reported(node.f))) continue;
+    if (finished.has(node.f) || (node.kind !== "tapered" && familyReported(node.f))) continue;
     if (node.kind === "family") {
       const effUpper = -(node.key.numbers[0] ?? 0);
       if (model(node.f, node.f.countsPerLine ?? Array(node.f.lines).fill(1))) pushDims(node.f, 0, 0, 0, rankBy === "efficiency" ? effUpper : Infinity);
@@ -469,7 +465,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       continue;
     }
     heap.push({ ...node, index: node.index + 1, key: vectorKey });
-    if (reported(f, answer.counts)) continue;
+    if (!variants && seen.has(node.stream.arrangementAt(node.index))) continue;
     const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
@@ -494,10 +490,13 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
  */
 class TaperedStream {
   private readonly vectors: TaperedAnswer[] = [];
+  /** Arrangement text of each vector found, written when first asked. */
+  private readonly arrangements: string[] = [];
   private readonly tried: number[][];
   private N: number;
   private readonly maxN: number;
   constructor(
+    private readonly family: Family,
     private readonly problem: TaperedProblem,
     N0: number,
     private readonly stats: SearchStats,
@@ -515,13 +514,19 @@ class TaperedStream {
     return this.open;
   }
 
+  /** The arrangement (size, class, pattern, counts) of vector i, found already. */
+  arrangementAt(i: number): string {
+    const f = this.family;
+    return (this.arrangements[i] ??= arrangementText(f.size_mm, f.propertyClass, f.pattern, this.vectors[i]!.counts));
+  }
+
   /**
-   * A lower bound on the bolt total of every vector not passing `test` (reported), without solving
-   * more programmes: the first such vector found, else the level the stream has reached; null when
-   * the stream is exhausted and every vector passes. `test` must stay true once true.
+   * A lower bound on the bolt total of every vector whose index does not pass `test` (reported),
+   * without solving more programmes: the first such vector found, else the level the stream has
+   * reached; null when the stream is exhausted and every vector passes. `test` must stay true once true.
    */
-  openLowerN(test: (counts: number[]) => boolean): number | null {
-    while (this.open < this.vectors.length && test(this.vectors[this.open]!.counts)) this.open++;
+  openLowerN(test: (index: number) => boolean): number | null {
+    while (this.open < this.vectors.length && test(this.open)) this.open++;
     const v = this.vectors[this.open];
     if (v) return v.counts.reduce((a, b) => a + b, 0);
     return this.N > this.maxN ? null : this.N;
