@@ -347,6 +347,25 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return open === null ? null : Math.max(least, open);
   };
 
+  /** Whether the bound of a shape (dimensions left out at their most favourable) is below the load or a service check fails. */
+  const boundFails = (f: Family, counts: number[], p: number | undefined, e: number | undefined, eb: number | undefined): boolean => {
+    const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, counts, p, e, eb));
+    return bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk;
+  };
+  /**
+   * Grid and staggered families, at a node (0, ie, ieb) of the lattice: which sub-lattice below it no
+   * layout of can pass (DEVELOPERS.md, "Sub-lattice bounds"). "end at butt": every layout at this end
+   * distance at the butt (the bound with the pitch unknown and the largest end distance fails; only
+   * ie = 0 roots them all); "pitch chain": every pitch at these end distances (the bound with the pitch
+   * unknown fails); "none": neither.
+   */
+  const subLatticeFails = (f: Family, counts: number[], ie: number, ieb: number): "end at butt" | "pitch chain" | "none" => {
+    const eb = f.endsAtButt_mm[ieb];
+    // At the last end distance at the butt the first test is the family's own seed bound: it passed.
+    if (ie === 0 && ieb < f.endsAtButt_mm.length - 1 && boundFails(f, counts, undefined, undefined, eb)) return "end at butt";
+    return f.lines > 1 && boundFails(f, counts, undefined, f.ends_mm[ie], eb) ? "pitch chain" : "none";
+  };
+
   let lastRejection: { check: string; value: string } | null = null;
   const found = (c: Candidate) => heap.push({ kind: "result", key: c.key, c });
   const rejected = (report: CheckReport) => {
@@ -404,16 +423,21 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       }
     }
     if (node.kind === "dims") {
-      // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing.
-      pushDims(f, node.ip + 1, node.ie, node.ieb, effUpper);
-      if (node.ip === 0) pushDims(f, 0, node.ie + 1, node.ieb, effUpper);
-      if (node.ip === 0 && node.ie === 0) pushDims(f, 0, 0, node.ieb + 1, effUpper);
       const p = f.pitches_mm[node.ip]!;
       const e = f.ends_mm[node.ie]!;
       const eb = f.endsAtButt_mm[node.ieb];
+      // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing — less
+      // the sub-lattices a bound rules out whole (grid and staggered: subLatticeFails).
+      const skipped = f.countsPerLine && node.ip === 0 ? subLatticeFails(f, f.countsPerLine, node.ie, node.ieb) : "none";
+      if (skipped === "none") pushDims(f, node.ip + 1, node.ie, node.ieb, effUpper);
+      if (node.ip === 0 && skipped !== "end at butt") pushDims(f, 0, node.ie + 1, node.ieb, effUpper);
+      if (node.ip === 0 && node.ie === 0) pushDims(f, 0, 0, node.ieb + 1, effUpper);
+      if (skipped !== "none") {
+        stats.candidatesSkippedByBound++;
+        continue;
+      }
       if (f.countsPerLine) {
-        const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, f.countsPerLine, p, e, eb));
-        if (bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk) {
+        if (boundFails(f, f.countsPerLine, p, e, eb)) {
           stats.candidatesSkippedByBound++;
           continue;
         }
