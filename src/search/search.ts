@@ -18,7 +18,7 @@ import type { CheckableScenario, LayoutSpec, Scenario } from "../model/scenario.
 import { MinHeap } from "./heap.js";
 import { arrangementText, compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
-import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
+import { anyOpenVector, nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
 import { loadBound } from "../codes/sense-bound.js";
 import { referenceLoad_N } from "../model/load.js";
@@ -558,6 +558,11 @@ class TaperedStream {
 
   at(i: number): TaperedAnswer | null {
     while (this.vectors.length <= i && this.N <= this.maxN) {
+      // A bolt total with no vector left is settled by the exact walk, without the programme.
+      if (!anyOpenVector(this.problem, this.N, this.tried)) {
+        this.N++;
+        continue;
+      }
       this.stats.integerProgrammes++;
       const answer = nextTaperedCounts(this.problem, this.N, this.tried);
       if (answer) {
