@@ -418,7 +418,8 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       const m = model(f, Array(f.lines).fill(1))!;
       const fresh = dimsKey(f, m, p, e, eb, N, effUpper, lengthAt(m, p, e, eb));
       if (compareKeys(fresh, node.key) > 0) {
-        heap.push({ ...node, key: fresh });
+        node.key = fresh; // popped, so no longer in the heap: it goes back with its new key
+        heap.push(node);
         continue;
       }
     }
@@ -485,7 +486,8 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const m = model(f, Array(f.lines).fill(1))!;
     const vectorKey = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * m.cb, bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
     if (compareKeys(vectorKey, node.key) > 0) {
-      heap.push({ ...node, key: vectorKey }); // this vector has more bolts: wait for its turn
+      node.key = vectorKey; // this vector has more bolts: wait for its turn
+      heap.push(node);
       continue;
     }
     heap.push({ ...node, index: node.index + 1, key: vectorKey });
