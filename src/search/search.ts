@@ -241,7 +241,9 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   // No layout can carry more than the unperforated main plate (every joint strength is at most its gross
   // yield and its net rupture, each at most the unperforated strength): say so at once.
   if (scenario.load.factoredTension_N > unperforated * (1 + 1e-9)) {
-    return { space, spaceText: describeSpace(space, fams, scenario), results: [], stats, noResultReason: explainNothing(ctx, unperforated, new Map(), null, space) };
+    const outcome = outcomeOf(space, fams, scenario, [], stats);
+    outcome.noResultReason = explainNothing(ctx, unperforated, new Map(), null, space);
+    return outcome;
   }
 
   const shapeOf = (f: Family, counts: number[], p?: number, e?: number, eb?: number): LayoutShape => {
@@ -505,9 +507,22 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }, rejected);
   }
 
-  const outcome: SearchOutcome = { space, spaceText: describeSpace(space, fams, scenario), results, stats };
+  const outcome = outcomeOf(space, fams, scenario, results, stats);
   if (results.length === 0) outcome.noResultReason = explainNothing(ctx, unperforated, boundReasons, lastRejection, space);
   return outcome;
+}
+
+/** A search's outcome; the statement of its space is written when the output reads it. */
+function outcomeOf(space: SearchSpace, fams: Family[], scenario: Scenario, results: Candidate[], stats: SearchStats): SearchOutcome {
+  let text: string[] | undefined;
+  return {
+    space,
+    get spaceText(): string[] {
+      return (text ??= describeSpace(space, fams, scenario));
+    },
+    results,
+    stats,
+  };
 }
 
 /**

@@ -68,9 +68,13 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     edgeMin_mm: factor * d0,
     edgeMax_mm: maxEdge,
     tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
-    statement:
-      `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200, 100 + 4t), 32t, 300)/2" : "min(16t, 200, 100 + 4t)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
-      `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances to the same maximum (kb's e-term stops growing at 3d0, block shear does not)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}; every top a code maximum`,
+    /** The range statement, written when the output reads it. */
+    get statement(): string {
+      return (
+        `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200, 100 + 4t), 32t, 300)/2" : "min(16t, 200, 100 + 4t)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
+        `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances to the same maximum (kb's e-term stops growing at 3d0, block shear does not)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}; every top a code maximum`
+      );
+    },
   };
 }
 
