@@ -286,6 +286,14 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return N;
   };
 
+  /** perBoltCost by family scenario (one per bolt and cover thickness): the price looked up once. */
+  const perBoltCosts = new Map<Family["base"], number>();
+  const perBoltCostOf = (f: Family): number => {
+    let cost = perBoltCosts.get(f.base);
+    if (cost === undefined) perBoltCosts.set(f.base, (cost = perBoltCost(ctx, f)));
+    return cost;
+  };
+
   // Seed: one node per family, keyed by a lower bound of its members; families a bound rules out are skipped.
   for (const f of fams) {
     if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
@@ -311,7 +319,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     heap.push({
       kind: "family",
       f,
-      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCost(ctx, f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
+      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCostOf(f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
     });
   }
 
