@@ -6,18 +6,30 @@
  * compression cross-section with holes filled) and no net section — at the force the splice carries,
  * scaled to the reference load as the checker scales its compression checks (model/load.ts).
  */
-import type { DesignCode, LayoutShape, StrengthBound } from "./types.js";
+import type { CompressionChecks, DesignCode, LayoutShape, StrengthBound } from "./types.js";
 import type { CheckableScenario } from "../model/scenario.js";
 import { factoredOf, loadSenses, referenceLoad_N } from "../model/load.js";
 
-export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: LayoutShape): StrengthBound {
-  const senses = loadSenses(scenario.load);
-  if (!senses.includes("compression") || !code.compression) return code.strengthBound(scenario, shape);
-  const ref = referenceLoad_N(scenario.load);
-  const share = code.compression.spliceShare(scenario).value;
+/** The scenario with the carried compression standing for the tension, made once per scenario and code. */
+const asCompressionOf = new WeakMap<CheckableScenario, { code: DesignCode; carried_N: number; scenario: CheckableScenario }>();
+
+function compressionScenario(code: DesignCode, compression: CompressionChecks, scenario: CheckableScenario): { carried_N: number; scenario: CheckableScenario } {
+  const known = asCompressionOf.get(scenario);
+  if (known && known.code === code) return known;
+  const share = compression.spliceShare(scenario).value;
   const carried = share * factoredOf(scenario.load, "compression");
   const Cs = scenario.load.serviceCompression_N;
-  const asCompression: CheckableScenario = { ...scenario, load: { factoredTension_N: carried, ...(Cs !== undefined ? { serviceTension_N: share * Cs } : {}) } };
+  const made = { code, carried_N: carried, scenario: { ...scenario, load: { factoredTension_N: carried, ...(Cs !== undefined ? { serviceTension_N: share * Cs } : {}) } } };
+  asCompressionOf.set(scenario, made);
+  return made;
+}
+
+export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: LayoutShape): StrengthBound {
+  // Tension alone (no compression sense): the code's own bound.
+  if (!((scenario.load.factoredCompression_N ?? 0) > 0) || !code.compression) return code.strengthBound(scenario, shape);
+  const senses = loadSenses(scenario.load);
+  const ref = referenceLoad_N(scenario.load);
+  const { carried_N: carried, scenario: asCompression } = compressionScenario(code, code.compression, scenario);
   const { endDistance_mm: _e, endDistanceAtButt_mm: _eb, ...rest } = shape;
   const c = code.strengthBound(asCompression, { ...rest, sense: "compression" });
   const scale = ref / carried;

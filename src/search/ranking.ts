@@ -25,7 +25,17 @@ export interface Measures {
 /** Keys are rounded so that the same value computed two ways compares equal. */
 const r = (v: number) => (Number.isFinite(v) ? Math.round(v * 1e6) / 1e6 : v);
 
-export function rankKey(rankBy: RankBy, m: Measures, text: string): Key {
+/** The numbers of a key, rounded in place (the array is the key's own). */
+function rounded(numbers: number[]): number[] {
+  for (let i = 0; i < numbers.length; i++) numbers[i] = r(numbers[i]!);
+  return numbers;
+}
+
+/**
+ * The key of a checked layout. `text` (the fixed order) is written on first read: the heap reads it only
+ * when the numbers tie, and the output for the layouts reported.
+ */
+export function rankKey(rankBy: RankBy, m: Measures, text: () => string): Key {
   const numbers =
     rankBy === "cost"
       ? [m.cost, m.bolts, -m.efficiency]
@@ -34,7 +44,13 @@ export function rankKey(rankBy: RankBy, m: Measures, text: string): Key {
         : rankBy === "efficiency"
           ? [-m.efficiency, m.bolts, m.cost]
           : [m.length_mm, m.bolts, -m.efficiency, m.cost];
-  return { numbers: numbers.map(r), text };
+  let written: string | undefined;
+  return {
+    numbers: rounded(numbers),
+    get text(): string {
+      return (written ??= text());
+    },
+  };
 }
 
 /**
@@ -50,7 +66,7 @@ export function lowerKey(rankBy: RankBy, known: { cost?: number; bolts?: number;
   const l = known.length_mm ?? lo;
   const numbers =
     rankBy === "cost" ? [c, lo, lo] : rankBy === "bolts" ? [b, known.bolts === undefined ? lo : c, lo] : rankBy === "efficiency" ? [e, b, known.bolts === undefined ? lo : c] : [l, lo, lo, lo];
-  return { numbers: numbers.map(r), text: "" };
+  return { numbers: rounded(numbers), text: "" };
 }
 
 export function compareKeys(a: Key, b: Key): number {

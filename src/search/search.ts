@@ -18,7 +18,7 @@ import type { CheckableScenario, LayoutSpec, Scenario } from "../model/scenario.
 import { MinHeap } from "./heap.js";
 import { arrangementText, compareKeys, fixedOrderText, lowerKey, rankKey, type Key, type RankBy } from "./ranking.js";
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
-import { nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
+import { anyOpenVector, nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
 import { loadBound } from "../codes/sense-bound.js";
 import { referenceLoad_N } from "../model/load.js";
@@ -146,7 +146,7 @@ export function evaluate(ctx: SearchContext, f: Family, layout: LayoutSpec, coun
   const gauge = layout.kind === "holes" ? 0 : layout.gauge_mm;
   const end = layout.endDistance_mm;
   const endAtButt = layout.kind === "holes" || ctx.scenario.splice.type === "lap" ? undefined : layout.endDistanceAtButt_mm;
-  const text = fixedOrderText({ size_mm: f.size_mm, propertyClass: f.propertyClass, pattern: f.pattern, counts, pitch_mm: pitch, gauge_mm: gauge, end_mm: end, endAtButt_mm: endAtButt, coverThickness_mm: f.coverThickness_mm });
+  const text = () => fixedOrderText({ size_mm: f.size_mm, propertyClass: f.propertyClass, pattern: f.pattern, counts, pitch_mm: pitch, gauge_mm: gauge, end_mm: end, endAtButt_mm: endAtButt, coverThickness_mm: f.coverThickness_mm });
   const key = rankKey(rankBy, { cost: cost.total, bolts: joint.holes.length, efficiency: report.efficiency, length_mm: joint.spliceLength_mm }, text);
   return { candidate: { family: f, layout, scenario, joint, report, cost, counts, key }, report };
 }
@@ -161,11 +161,6 @@ export function identityOf(c: Candidate): string {
 /** The arrangement of a layout (size, class, pattern, counts): by default results keep the best of each. */
 export function arrangementOf(c: Candidate): string {
   return arrangementText(c.family.size_mm, c.family.propertyClass, c.family.pattern, c.counts);
-}
-
-/** The arrangement of every member of a grid or staggered family (tapered families hold many). */
-function familyArrangement(f: Family): string | null {
-  return f.countsPerLine ? arrangementText(f.size_mm, f.propertyClass, f.pattern, f.countsPerLine) : null;
 }
 
 function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel | null {
@@ -221,7 +216,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const streamFor = (f: Family, kcap: number): TaperedStream => {
     let stream = streams.get(f);
     if (!stream) {
-      stream = new TaperedStream(taperedProblem(ctx, f, kcap, transferred), taperedNmin(f), stats);
+      stream = new TaperedStream(f, taperedProblem(ctx, f, kcap, transferred), taperedNmin(f), stats);
       streams.set(f, stream);
     }
     return stream;
@@ -246,7 +241,9 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   // No layout can carry more than the unperforated main plate (every joint strength is at most its gross
   // yield and its net rupture, each at most the unperforated strength): say so at once.
   if (scenario.load.factoredTension_N > unperforated * (1 + 1e-9)) {
-    return { space, spaceText: describeSpace(space, fams, scenario), results: [], stats, noResultReason: explainNothing(ctx, unperforated, new Map(), null, space) };
+    const outcome = outcomeOf(space, fams, scenario, [], stats);
+    outcome.noResultReason = explainNothing(ctx, unperforated, new Map(), null, space);
+    return outcome;
   }
 
   const shapeOf = (f: Family, counts: number[], p?: number, e?: number, eb?: number): LayoutShape => {
@@ -289,6 +286,14 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return N;
   };
 
+  /** perBoltCost by family scenario (one per bolt and cover thickness): the price looked up once. */
+  const perBoltCosts = new Map<Family["base"], number>();
+  const perBoltCostOf = (f: Family): number => {
+    let cost = perBoltCosts.get(f.base);
+    if (cost === undefined) perBoltCosts.set(f.base, (cost = perBoltCost(ctx, f)));
+    return cost;
+  };
+
   // Seed: one node per family, keyed by a lower bound of its members; families a bound rules out are skipped.
   for (const f of fams) {
     if (f.ends_mm.length === 0 || f.pitches_mm.length === 0) continue;
@@ -314,7 +319,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     heap.push({
       kind: "family",
       f,
-      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCost(ctx, f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
+      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCostOf(f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
     });
   }
 
@@ -347,9 +352,28 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const least = taperedNmin(f);
     const stream = streams.get(f);
     if (variants || !stream) return least;
-    const open = stream.openLowerN((counts) => reported(f, counts));
+    const open = stream.openLowerN((i) => seen.has(stream.arrangementAt(i)));
     if (open === null) finished.add(f);
     return open === null ? null : Math.max(least, open);
+  };
+
+  /** Whether the bound of a shape (dimensions left out at their most favourable) is below the load or a service check fails. */
+  const boundFails = (f: Family, counts: number[], p: number | undefined, e: number | undefined, eb: number | undefined): boolean => {
+    const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, counts, p, e, eb));
+    return bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk;
+  };
+  /**
+   * Grid and staggered families, at a node (0, ie, ieb) of the lattice: which sub-lattice below it no
+   * layout of can pass (DEVELOPERS.md, "Sub-lattice bounds"). "end at butt": every layout at this end
+   * distance at the butt (the bound with the pitch unknown and the largest end distance fails; only
+   * ie = 0 roots them all); "pitch chain": every pitch at these end distances (the bound with the pitch
+   * unknown fails); "none": neither.
+   */
+  const subLatticeFails = (f: Family, counts: number[], ie: number, ieb: number): "end at butt" | "pitch chain" | "none" => {
+    const eb = f.endsAtButt_mm[ieb];
+    // At the last end distance at the butt the first test is the family's own seed bound: it passed.
+    if (ie === 0 && ieb < f.endsAtButt_mm.length - 1 && boundFails(f, counts, undefined, undefined, eb)) return "end at butt";
+    return f.lines > 1 && boundFails(f, counts, undefined, f.ends_mm[ie], eb) ? "pitch chain" : "none";
   };
 
   let lastRejection: { check: string; value: string } | null = null;
@@ -367,25 +391,26 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const variants = options.variants ?? false;
   /** Tapered families with no layout left to report (no count vector, or every one reported). */
   const finished = new Set<Family>();
+  /** The arrangement of every member of a grid or staggered family, written once per family (by index). */
+  const familyArrangements: Array<string | undefined> = [];
+  const familyArrangement = (f: Family & { countsPerLine: number[] }): string =>
+    (familyArrangements[f.index] ??= arrangementText(f.size_mm, f.propertyClass, f.pattern, f.countsPerLine));
   // Distinct arrangements: a node whose every layout belongs to an arrangement already reported is
-  // dropped unexpanded — none of its layouts could be reported.
-  const reported = (f: Family, counts?: number[]) => {
-    if (variants) return false;
-    const a = counts ? arrangementText(f.size_mm, f.propertyClass, f.pattern, counts) : familyArrangement(f);
-    return a !== null && seen.has(a);
-  };
+  // dropped unexpanded — none of its layouts could be reported. (Tapered families hold many.)
+  const familyReported = (f: Family): boolean => !variants && f.countsPerLine !== null && seen.has(familyArrangement(f as Family & { countsPerLine: number[] }));
   while (heap.size > 0 && results.length < options.top) {
     const node = heap.pop()!;
     stats.nodes++;
     if (options.onProgress && stats.nodes % PROGRESS_EVERY === 0) options.onProgress(stats, results.length);
     if (node.kind === "result") {
-      const id = variants ? identityOf(node.c) : arrangementOf(node.c);
+      const fc = node.c.family;
+      const id = variants ? identityOf(node.c) : fc.countsPerLine ? familyArrangement(fc as Family & { countsPerLine: number[] }) : arrangementOf(node.c);
       if (seen.has(id)) continue;
       seen.add(id);
       results.push(node.c);
       continue;
     }
-    if (finished.has(node.f) || (node.kind !== "tapered" && reported(node.f))) continue;
+    if (finished.has(node.f) || (node.kind !== "tapered" && familyReported(node.f))) continue;
     if (node.kind === "family") {
       const effUpper = -(node.key.numbers[0] ?? 0);
       if (model(node.f, node.f.countsPerLine ?? Array(node.f.lines).fill(1))) pushDims(node.f, 0, 0, 0, rankBy === "efficiency" ? effUpper : Infinity);
@@ -403,21 +428,27 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       const m = model(f, Array(f.lines).fill(1))!;
       const fresh = dimsKey(f, m, p, e, eb, N, effUpper, lengthAt(m, p, e, eb));
       if (compareKeys(fresh, node.key) > 0) {
-        heap.push({ ...node, key: fresh });
+        node.key = fresh; // popped, so no longer in the heap: it goes back with its new key
+        heap.push(node);
         continue;
       }
     }
     if (node.kind === "dims") {
-      // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing.
-      pushDims(f, node.ip + 1, node.ie, node.ieb, effUpper);
-      if (node.ip === 0) pushDims(f, 0, node.ie + 1, node.ieb, effUpper);
-      if (node.ip === 0 && node.ie === 0) pushDims(f, 0, 0, node.ieb + 1, effUpper);
       const p = f.pitches_mm[node.ip]!;
       const e = f.ends_mm[node.ie]!;
       const eb = f.endsAtButt_mm[node.ieb];
+      // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing — less
+      // the sub-lattices a bound rules out whole (grid and staggered: subLatticeFails).
+      const skipped = f.countsPerLine && node.ip === 0 ? subLatticeFails(f, f.countsPerLine, node.ie, node.ieb) : "none";
+      if (skipped === "none") pushDims(f, node.ip + 1, node.ie, node.ieb, effUpper);
+      if (node.ip === 0 && skipped !== "end at butt") pushDims(f, 0, node.ie + 1, node.ieb, effUpper);
+      if (node.ip === 0 && node.ie === 0) pushDims(f, 0, 0, node.ieb + 1, effUpper);
+      if (skipped !== "none") {
+        stats.candidatesSkippedByBound++;
+        continue;
+      }
       if (f.countsPerLine) {
-        const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, f.countsPerLine, p, e, eb));
-        if (bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk) {
+        if (boundFails(f, f.countsPerLine, p, e, eb)) {
           stats.candidatesSkippedByBound++;
           continue;
         }
@@ -465,11 +496,12 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const m = model(f, Array(f.lines).fill(1))!;
     const vectorKey = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N - f.lines) * m.cb, bolts: totalBolts(f, N), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
     if (compareKeys(vectorKey, node.key) > 0) {
-      heap.push({ ...node, key: vectorKey }); // this vector has more bolts: wait for its turn
+      node.key = vectorKey; // this vector has more bolts: wait for its turn
+      heap.push(node);
       continue;
     }
     heap.push({ ...node, index: node.index + 1, key: vectorKey });
-    if (reported(f, answer.counts)) continue;
+    if (!variants && seen.has(node.stream.arrangementAt(node.index))) continue;
     const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
@@ -483,9 +515,22 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }, rejected);
   }
 
-  const outcome: SearchOutcome = { space, spaceText: describeSpace(space, fams, scenario), results, stats };
+  const outcome = outcomeOf(space, fams, scenario, results, stats);
   if (results.length === 0) outcome.noResultReason = explainNothing(ctx, unperforated, boundReasons, lastRejection, space);
   return outcome;
+}
+
+/** A search's outcome; the statement of its space is written when the output reads it. */
+function outcomeOf(space: SearchSpace, fams: Family[], scenario: Scenario, results: Candidate[], stats: SearchStats): SearchOutcome {
+  let text: string[] | undefined;
+  return {
+    space,
+    get spaceText(): string[] {
+      return (text ??= describeSpace(space, fams, scenario));
+    },
+    results,
+    stats,
+  };
 }
 
 /**
@@ -494,10 +539,13 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
  */
 class TaperedStream {
   private readonly vectors: TaperedAnswer[] = [];
+  /** Arrangement text of each vector found, written when first asked. */
+  private readonly arrangements: string[] = [];
   private readonly tried: number[][];
   private N: number;
   private readonly maxN: number;
   constructor(
+    private readonly family: Family,
     private readonly problem: TaperedProblem,
     N0: number,
     private readonly stats: SearchStats,
@@ -515,13 +563,19 @@ class TaperedStream {
     return this.open;
   }
 
+  /** The arrangement (size, class, pattern, counts) of vector i, found already. */
+  arrangementAt(i: number): string {
+    const f = this.family;
+    return (this.arrangements[i] ??= arrangementText(f.size_mm, f.propertyClass, f.pattern, this.vectors[i]!.counts));
+  }
+
   /**
-   * A lower bound on the bolt total of every vector not passing `test` (reported), without solving
-   * more programmes: the first such vector found, else the level the stream has reached; null when
-   * the stream is exhausted and every vector passes. `test` must stay true once true.
+   * A lower bound on the bolt total of every vector whose index does not pass `test` (reported),
+   * without solving more programmes: the first such vector found, else the level the stream has
+   * reached; null when the stream is exhausted and every vector passes. `test` must stay true once true.
    */
-  openLowerN(test: (counts: number[]) => boolean): number | null {
-    while (this.open < this.vectors.length && test(this.vectors[this.open]!.counts)) this.open++;
+  openLowerN(test: (index: number) => boolean): number | null {
+    while (this.open < this.vectors.length && test(this.open)) this.open++;
     const v = this.vectors[this.open];
     if (v) return v.counts.reduce((a, b) => a + b, 0);
     return this.N > this.maxN ? null : this.N;
@@ -529,6 +583,11 @@ class TaperedStream {
 
   at(i: number): TaperedAnswer | null {
     while (this.vectors.length <= i && this.N <= this.maxN) {
+      // A bolt total with no vector left is settled by the exact walk, without the programme.
+      if (!anyOpenVector(this.problem, this.N, this.tried)) {
+        this.N++;
+        continue;
+      }
       this.stats.integerProgrammes++;
       const answer = nextTaperedCounts(this.problem, this.N, this.tried);
       if (answer) {

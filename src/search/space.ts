@@ -193,7 +193,9 @@ export function withCover(scenario: Scenario, t: number | undefined): Scenario {
 
 /** Counts per line of a staggered pattern: a, a − 1, a, … */
 export function staggeredCounts(across: number, lines: number): number[] {
-  return Array.from({ length: lines }, (_, i) => (i % 2 === 0 ? across : across - 1));
+  const counts = new Array<number>(lines);
+  for (let i = 0; i < lines; i++) counts[i] = i % 2 === 0 ? across : across - 1;
+  return counts;
 }
 
 /** Every family of the declared space, in a fixed order. */
@@ -213,9 +215,11 @@ export function families(scenario: Scenario, code: DesignCode, costs: CostTable,
           const maxAcrossByWidth = Math.floor((width - 2 * limits.edgeMin_mm) / limits.gaugeMin_mm + 1e-9) + 1;
           const maxAcross = Math.min(space.maxAcross ?? Infinity, maxAcrossByWidth);
           const minAcross = minAcrossOf(space, maxAcrossByWidth);
+          // Gauges depend on the number of gauge lines only: one list per G, shared (read only).
+          const gaugesByLines: number[][] = [];
           const push = (counts: number[] | null, lines: number, across: number, G: number) => {
             if (counts && counts.reduce((a, b) => a + b, 0) < space.minBolts) return;
-            const gauges = pattern === "tapered" ? [] : gaugesFor(G, width, limits, space);
+            const gauges = pattern === "tapered" ? [] : (gaugesByLines[G] ??= gaugesFor(G, width, limits, space));
             if ((pattern !== "tapered" && gauges.length === 0) || endsAtButt.length === 0) return;
             out.push({
               index: out.length,

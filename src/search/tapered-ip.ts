@@ -75,6 +75,39 @@ export function meetsConstraints(p: TaperedProblem, counts: number[]): boolean {
   return true;
 }
 
+/**
+ * Whether some count vector with N bolts meets the constraints and is not excluded. An exact walk over
+ * the declared shape only (line 0 from min_across, every count of line 0's parity, never rising from
+ * line 0, within kmax; each complete vector then tested by `meetsConstraints`), so it visits far fewer
+ * vectors than `enumerateNext`. Every answer `nextTaperedCounts` returns meets the constraints, has N
+ * bolts and is not excluded; so where this is false it can only return null, and the caller skips it.
+ */
+export function anyOpenVector(p: TaperedProblem, N: number, excluded: readonly number[][]): boolean {
+  const counts = new Array<number>(p.lines).fill(0);
+  const isExcluded = () => excluded.some((v) => v.length === counts.length && v.every((k, i) => k === counts[i]));
+  /** Lines i… take `remaining` bolts, each at most the line before and of the parity of `least`. */
+  const walk = (i: number, remaining: number, least: number): boolean => {
+    if (i === p.lines) return remaining === 0 && meetsConstraints(p, counts) && !isExcluded();
+    const rest = p.lines - i - 1;
+    let top = Math.min(counts[i - 1]!, p.kmax[i] ?? 0);
+    if ((top - least) % 2 !== 0) top--;
+    for (let k = top; k >= least; k -= 2) {
+      if (remaining - k < least * rest || remaining - k > k * rest) continue;
+      counts[i] = k;
+      if (walk(i + 1, remaining - k, least)) return true;
+    }
+    return false;
+  };
+  for (let k0 = Math.max(p.minFirst ?? 1, 1); k0 <= (p.kmax[0] ?? 0); k0++) {
+    const least = k0 % 2 === 1 ? 1 : 2;
+    const rest = p.lines - 1;
+    if (N - k0 < least * rest || N - k0 > k0 * rest) continue;
+    counts[0] = k0;
+    if (walk(1, N - k0, least)) return true;
+  }
+  return false;
+}
+
 function key(counts: number[]): string {
   return counts.join(",");
 }

@@ -55,10 +55,14 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutSh
     edgeMin_mm: edgeMin,
     edgeMax_mm: edgeMax,
     tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
-    statement:
-      `pitch ${staggered ? "1⅓d" : "2⅔d"} … ${staggered ? "min(24t, 12 in)/2" : "min(24t, 12 in)"}; gauge ${staggered ? "1⅓d" : "2⅔d"} … min(24t, 12 in) (J3.3, J3.5); ` +
-      `end and edge from Table J3.4 to min(12t, 6 in) (J3.4, J3.5): end distances to the maximum, since block shear still grows after tearout reaches bearing at lc = 2d; every top a code maximum` +
-      (covers.length > 0 ? "; at the butt also 2·e + gap within the covers' maximum spacing" : ""),
+    /** The range statement, written when the output reads it. */
+    get statement(): string {
+      return (
+        `pitch ${staggered ? "1⅓d" : "2⅔d"} … ${staggered ? "min(24t, 12 in)/2" : "min(24t, 12 in)"}; gauge ${staggered ? "1⅓d" : "2⅔d"} … min(24t, 12 in) (J3.3, J3.5); ` +
+        `end and edge from Table J3.4 to min(12t, 6 in) (J3.4, J3.5): end distances to the maximum, since block shear still grows after tearout reaches bearing at lc = 2d; every top a code maximum` +
+        (covers.length > 0 ? "; at the butt also 2·e + gap within the covers' maximum spacing" : "")
+      );
+    },
   };
 }
 

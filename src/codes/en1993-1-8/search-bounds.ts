@@ -63,11 +63,15 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     edgeMin_mm: (capped ? Math.max(factor, 1.5) : factor) * d0 + reach,
     edgeMax_mm: eMax,
     tops: { pitch: top, gauge: top, end: top, endAtButt: top },
-    statement:
-      `pitch ${pattern === "staggered" ? "1.1 d0 (2.2 d0 on a gauge line)" : "2.2 d0"} … min(14t, 200)${pattern === "staggered" ? "/2" : ""}; ` +
-      `gauge ${capped ? "3 d0 (declared: k1 = 2.5, so bearing does not change with the gauge)" : "2.4 d0"} … min(14t, 200); ` +
-      `end ${factor} d0 … ${exposed ? "4t + 40" : "the first step at or beyond 3 d0 (declared: αd's e1 term reaches 1; block tearing still grows)"}; edge ${capped ? "1.5 d0 (declared, k1 = 2.5)" : `${factor} d0`}${exposed ? " … 4t + 40" : ""} ` +
-      `(EN 1993-1-8 Table 3.3${exposed ? ", exposed to corrosion: every top a code maximum" : "; not exposed: Table 3.3 note 1 sets no maximum, so pitch and gauge run to the first step at or beyond min(14t, 200), a declared bound"})${covers && exposed ? "; at the butt also 2·e + gap ≤ min(14t, 200)" : ""}`,
+    /** The range statement, written when the output reads it. */
+    get statement(): string {
+      return (
+        `pitch ${pattern === "staggered" ? "1.1 d0 (2.2 d0 on a gauge line)" : "2.2 d0"} … min(14t, 200)${pattern === "staggered" ? "/2" : ""}; ` +
+        `gauge ${capped ? "3 d0 (declared: k1 = 2.5, so bearing does not change with the gauge)" : "2.4 d0"} … min(14t, 200); ` +
+        `end ${factor} d0 … ${exposed ? "4t + 40" : "the first step at or beyond 3 d0 (declared: αd's e1 term reaches 1; block tearing still grows)"}; edge ${capped ? "1.5 d0 (declared, k1 = 2.5)" : `${factor} d0`}${exposed ? " … 4t + 40" : ""} ` +
+        `(EN 1993-1-8 Table 3.3${exposed ? ", exposed to corrosion: every top a code maximum" : "; not exposed: Table 3.3 note 1 sets no maximum, so pitch and gauge run to the first step at or beyond min(14t, 200), a declared bound"})${covers && exposed ? "; at the butt also 2·e + gap ≤ min(14t, 200)" : ""}`
+      );
+    },
   };
 }
 
