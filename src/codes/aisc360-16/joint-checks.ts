@@ -35,7 +35,21 @@ export interface AiscBolt {
   threadsIncluded: boolean;
 }
 
-export function aiscBolt(bolts: Pick<BoltSpec, "size_mm" | "astmGrade" | "propertyClass" | "threadsInShearPlanes">): AiscBolt {
+type BoltFields = Pick<BoltSpec, "size_mm" | "astmGrade" | "propertyClass" | "threadsInShearPlanes">;
+
+/** The last bolt described, with the fields it was described from (a check asks about ten times). */
+let lastBolt: { fields: { size_mm: number; astmGrade: string | undefined; propertyClass: string; threadsInShearPlanes: boolean }; bolt: Readonly<AiscBolt> } | null = null;
+
+/** The bolt as the checks need it (its name, group, Ab, Fnv), from the scenario's bolt fields. */
+export function aiscBolt(bolts: BoltFields): Readonly<AiscBolt> {
+  const last = lastBolt;
+  if (last && last.fields.size_mm === bolts.size_mm && last.fields.astmGrade === bolts.astmGrade && last.fields.propertyClass === bolts.propertyClass && last.fields.threadsInShearPlanes === bolts.threadsInShearPlanes) return last.bolt;
+  const bolt = Object.freeze(describeBolt(bolts));
+  lastBolt = { fields: { size_mm: bolts.size_mm, astmGrade: bolts.astmGrade, propertyClass: bolts.propertyClass, threadsInShearPlanes: bolts.threadsInShearPlanes }, bolt };
+  return bolt;
+}
+
+function describeBolt(bolts: BoltFields): AiscBolt {
   const d = bolts.size_mm;
   const inch = inchBoltSize(d);
   const grade = astmGradeOf(bolts);

@@ -3,8 +3,9 @@
  * measured on the hole coordinates. Each result prints the governing value and its limit.
  */
 import { inchBoltSize } from "../../catalogue/bolts.js";
-import { distance, fartherThan, gaugeLines } from "../../geometry/lines.js";
-import type { Joint } from "../../model/joint.js";
+import { groupHoles } from "../../geometry/joint-builder.js";
+import { distance, fartherThan, gaugeLines, type Line } from "../../geometry/lines.js";
+import type { Hole, Joint } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
 import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
@@ -84,9 +85,16 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
   const inch = isInch(joint);
   let along: Worst | null = null;
   let across: Worst | null = null;
-  for (const plate of holePlates(joint)) {
-    const holes = platesHoles(joint, plate);
-    for (const line of gaugeLines(holes)) {
+  const plates = holePlates(joint);
+  const groupLines = joint.groups.map((g) => gaugeLines(g.holes));
+  const plateLines: Line[][] = [];
+  for (let k = 0; k < plates.length; k++) {
+    const plate = plates[k]!;
+    // A plate joined to one group has that group's lines; one joined to the groups of an earlier plate, its lines.
+    const earlier = plates.findIndex((p, m) => m < k && p.connections.length === plate.connections.length && p.connections.every((c, i) => c.group === plate.connections[i]!.group));
+    const lines = earlier >= 0 ? plateLines[earlier]! : plate.connections.length === 1 ? groupLines[joint.groups.findIndex((g) => g.id === plate.connections[0]!.group)]! : gaugeLines(platesHoles(joint, plate));
+    plateLines.push(lines);
+    for (const line of lines) {
       for (let k = 1; k < line.holes.length; k++) {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
@@ -95,9 +103,9 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
         if (beatsWorst(along, s, limit, "max")) along = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs ${u.len(limit)}` };
       }
     }
-    for (const g of joint.groups) {
-      if (!connects(plate, g.id)) continue;
-      const gl = gaugeLines(g.holes);
+    for (let gi = 0; gi < joint.groups.length; gi++) {
+      if (!connects(plate, joint.groups[gi]!.id)) continue;
+      const gl = groupLines[gi]!;
       for (let i = 1; i < gl.length; i++) {
         const a = gl[i - 1]!.holes[0]!;
         const b = gl[i]!.holes[0]!;
@@ -139,12 +147,20 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
       if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${isInch(joint) ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` };
     }
     for (const c of plate.connections) {
-      const us = holes.filter((h) => h.group === c.group).map((h) => ({ h, e: c.towardEnd * (c.endX_mm - h.x_mm) }));
-      for (const { h, e } of us) {
+      let nearest: Hole | null = null;
+      let nearestE = Infinity;
+      for (const h of groupHoles(joint, c.group)) {
+        const e = c.towardEnd * (c.endX_mm - h.x_mm);
         if (beatsWorst(minEnd, e, minLimit, "min")) minEnd = { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(minLimit)}` };
+        if (nearest === null || e < nearestE) {
+          nearest = h;
+          nearestE = e;
+        }
       }
-      const nearest = us.reduce((m, x) => (x.e < m.e ? x : m), us[0]!);
-      if (beatsWorst(maxEdge, nearest.e, maxLimit, "max")) maxEdge = { value: nearest.e, limit: maxLimit, where: plate.label, detail: () => `hole ${nearest.h.id} to the plate end: ${u.len(nearest.e)} vs ${u.len(maxLimit)}` };
+      if (nearest === null) continue;
+      const h = nearest;
+      const e = nearestE;
+      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(maxLimit)}` };
     }
   }
   const table = isInch(joint) ? "Table J3.4" : "Table J3.4M";
