@@ -47,6 +47,17 @@ function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; s
   return sets;
 }
 
+/*
+ * The measurements below are made by small functions called only for a new worst: a closure written
+ * inside a loop over holes would make V8 allocate the loop's variables for it at every turn, whether
+ * or not the closure is made (the checker's largest allocation before round 3).
+ */
+
+/** A pair's centre distance against 2.5 d (cl. 10.2.2), its working written on demand. */
+function spacingWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, d: number): Worst {
+  return { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` };
+}
+
 /** Minimum spacing between fastener centres, 2.5 d. IS 800:2007, cl. 10.2.2. */
 export function minSpacingRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
@@ -55,7 +66,7 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
     // The limit is the same for every pair: only a pair nearer than the nearest so far can govern.
     if (worst !== null && fartherThan(a, b, (worst as Worst).value)) return;
     const s = distance(a, b);
-    if (beatsWorst(worst, s, 2.5 * d, "min")) worst = { value: s, limit: 2.5 * d, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs 2.5d = 2.5 × ${d} = ${f(2.5 * d)} mm` };
+    if (beatsWorst(worst, s, 2.5 * d, "min")) worst = spacingWorst(plate, a, b, s, d);
   });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
 }
@@ -130,8 +141,23 @@ function acrossRule(joint: Joint, plate: PlatePiece, gl: readonly Line[], worst:
     const t = pairThickness(joint, a, b);
     const limit = Math.min(32 * t, 300);
     const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-    if (beatsWorst(worst.across, g, limit, "max")) worst.across = { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(gl[i - 1]!.at_mm)} and ${f(gl[i]!.at_mm)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+    if (beatsWorst(worst.across, g, limit, "max")) worst.across = acrossWorst(plate, gl[i - 1]!.at_mm, gl[i]!.at_mm, g, t, limit);
   }
+}
+
+/** A gauge between two lines against min(32 t, 300 mm) (cl. 10.2.3.1). */
+function acrossWorst(plate: PlatePiece, y0: number, y1: number, g: number, t: number, limit: number): Worst {
+  return { value: g, limit, where: plate.label, detail: () => `gauge between lines at y = ${f(y0)} and ${f(y1)}: ${f(g)} mm vs min(32t, 300) = min(32 × ${f(t)}, 300) = ${f(limit)} mm` };
+}
+
+/** A pitch against min(16 t, 200 mm), × 1.5 where staggered (cl. 10.2.3.2, 10.2.3.4). */
+function pitchWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, r: number, t: number, limit: number): Worst {
+  return { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` };
+}
+
+/** A pitch on a line next to an edge against min(100 + 4 t, 200 mm), × 1.5 where staggered (cl. 10.2.3.3, 10.2.3.4). */
+function edgeLineWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, r: number, tp: number, limit: number): Worst {
+  return { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` };
 }
 
 /**
@@ -148,12 +174,12 @@ function pitchRules(joint: Joint, plate: PlatePiece, line: readonly Hole[], rela
     if (measurePitch && seen.addNew(a, b)) {
       const t = pairThickness(joint, a, b);
       const limit = Math.min(Math.min(16 * t, 200) * r, Math.min(32 * t, 300));
-      if (beatsWorst(worst.pitch, s, limit, "max")) worst.pitch = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${f(s)} mm vs min(16t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(t)} → ${f(limit)} mm` };
+      if (beatsWorst(worst.pitch, s, limit, "max")) worst.pitch = pitchWorst(plate, a, b, s, r, t, limit);
     }
     if (edgeLine) {
       const tp = plate.spec.thickness_mm;
       const limit = Math.min(Math.min(100 + 4 * tp, 200) * r, Math.min(32 * tp, 300));
-      if (beatsWorst(worst.edgeLine, s, limit, "max")) worst.edgeLine = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id} on the edge line: ${f(s)} mm vs min(100 + 4t, 200)${r > 1 ? " × 1.5 (staggered, g ≤ 75)" : ""} with t = ${f(tp)} → ${f(limit)} mm` };
+      if (beatsWorst(worst.edgeLine, s, limit, "max")) worst.edgeLine = edgeLineWorst(plate, a, b, s, r, tp, limit);
     }
   }
 }
@@ -181,6 +207,16 @@ function maxEdgeText(exposedToCorrosion: boolean, outerT: number, eps: number): 
   return exposedToCorrosion ? `40 + 4t = 40 + 4 × ${f(outerT)}` : `12tε = 12 × ${f(outerT)} × ${f(eps, 3)}`;
 }
 
+/** A hole's edge or end distance against 1.5 d0 or 1.7 d0 (cl. 10.2.4.2); `to`: "" (edge) or " to the plate end". */
+function minDistanceWorst(plate: PlatePiece, h: Hole, to: string, e: number, factor: number, d0: number, limit: number): Worst {
+  return { value: e, limit, where: plate.label, detail: () => `hole ${h.id}${to}: ${f(e)} mm vs ${minDistanceText(plate)} = ${factor} × ${f(d0)} = ${f(limit)} mm` };
+}
+
+/** An edge or end distance against 12 t ε or 40 + 4 t (cl. 10.2.4.3); `what` names the distance. */
+function maxDistanceWorst(plate: PlatePiece, what: string, e: number, maxLimit: number, exposed: boolean, outerT: number, eps: number): Worst {
+  return { value: e, limit: maxLimit, where: plate.label, detail: () => `${what}: ${f(e)} mm vs ${maxEdgeText(exposed, outerT, eps)} = ${f(maxLimit)} mm` };
+}
+
 /**
  * Minimum end and edge distances: 1.5 d0 (rolled, machine flame cut, sawn, planed edges) or 1.7 d0
  * (sheared or hand flame cut). IS 800:2007, cl. 10.2.4.2, with d0 from Table 19.
@@ -203,7 +239,7 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
-      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = { value: edge, limit, where: plate.label, detail: () => `hole ${h.id}: ${f(edge)} mm vs ${minDistanceText(plate)} = ${factor} × ${f(h.across_mm)} = ${f(limit)} mm` };
+      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = minDistanceWorst(plate, h, "", edge, factor, h.across_mm, limit);
     }
     let yMin = Infinity;
     let yMax = -Infinity;
@@ -211,19 +247,20 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
       yMin = Math.min(yMin, h.y_mm);
       yMax = Math.max(yMax, h.y_mm);
     }
+    const exposed = scenario.options.exposedToCorrosion;
     const lower = half + yMin;
-    if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = { value: lower, limit: maxLimit, where: plate.label, detail: () => `lower edge to nearest gauge line: ${f(lower)} mm vs ${maxEdgeText(scenario.options.exposedToCorrosion, outerT, eps)} = ${f(maxLimit)} mm` };
+    if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "lower edge to nearest gauge line", lower, maxLimit, exposed, outerT, eps);
     const upper = half - yMax;
-    if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = { value: upper, limit: maxLimit, where: plate.label, detail: () => `upper edge to nearest gauge line: ${f(upper)} mm vs ${maxEdgeText(scenario.options.exposedToCorrosion, outerT, eps)} = ${f(maxLimit)} mm` };
+    if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "upper edge to nearest gauge line", upper, maxLimit, exposed, outerT, eps);
     for (const c of plate.connections) {
       let nearest = Infinity;
       for (const h of groupHoles(joint, c.group)) {
         const u = c.towardEnd * (c.endX_mm - h.x_mm);
         nearest = Math.min(nearest, u);
         const limit = factor * h.along_mm;
-        if (beatsWorst(minEnd, u, limit, "min")) minEnd = { value: u, limit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${f(u)} mm vs ${minDistanceText(plate)} = ${factor} × ${f(h.along_mm)} = ${f(limit)} mm` };
+        if (beatsWorst(minEnd, u, limit, "min")) minEnd = minDistanceWorst(plate, h, " to the plate end", u, factor, h.along_mm, limit);
       }
-      if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = { value: nearest, limit: maxLimit, where: plate.label, detail: () => `plate end to nearest transverse line: ${f(nearest)} mm vs ${maxEdgeText(scenario.options.exposedToCorrosion, outerT, eps)} = ${f(maxLimit)} mm` };
+      if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "plate end to nearest transverse line", nearest, maxLimit, exposed, outerT, eps);
     }
   }
   return [
@@ -233,12 +270,17 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
   ];
 }
 
+/** A group's grip against 8 d (cl. 10.3.3.2). */
+function gripWorst(joint: Joint, g: Joint["groups"][number], d: number): Worst {
+  return { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` };
+}
+
 /** Grip length not above 8 d. IS 800:2007, cl. 10.3.3.2. */
 export function gripRule(joint: Joint): RuleCheck[] {
   const d = joint.boltDiameter_mm;
   let worst: Worst | null = null;
   for (const g of joint.groups) {
-    if (beatsWorst(worst, g.grip_mm, 8 * d, "max")) worst = { value: g.grip_mm, limit: 8 * d, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `lg = ${f(g.grip_mm)} mm vs 8d = 8 × ${d} = ${f(8 * d)} mm` };
+    if (beatsWorst(worst, g.grip_mm, 8 * d, "max")) worst = gripWorst(joint, g, d);
   }
   return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
 }
