@@ -12,6 +12,11 @@ import { beatsWorst, holePlates, keepWorst, pairThickness, platesHoles, type Wor
 /** Effective length factor of a cover plate strut held by bolts at both ends: fixed-fixed, 0.65 (common practice). */
 export const COVER_STRUT_K = 0.65;
 
+/** A pitch against its compression limit, its working written on demand (made only for a new worst, so the loop below allocates nothing per pair for it). */
+function compressionPitchWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, t: number, limit_mm: number, text: () => string): Worst {
+  return { value: s, limit: limit_mm, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${s.toFixed(1)} mm vs ${text()} with t = ${t.toFixed(1)} → ${limit_mm.toFixed(1)} mm` };
+}
+
 /**
  * The worst pitch along the force against a limit that depends on the thinner plate of the pair.
  * Pairs are consecutive holes of one gauge line in one plate (across the butt too, on the covers).
@@ -26,7 +31,7 @@ export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => {
         const s = b.x_mm - a.x_mm;
         const t = pairThickness(joint, a, b);
         const { limit_mm, text } = limitOf(t);
-        if (beatsWorst(worst, s, limit_mm, "max")) worst = { value: s, limit: limit_mm, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${s.toFixed(1)} mm vs ${text()} with t = ${t.toFixed(1)} → ${limit_mm.toFixed(1)} mm` };
+        if (beatsWorst(worst, s, limit_mm, "max")) worst = compressionPitchWorst(plate, a, b, s, t, limit_mm, text);
       }
     }
   }

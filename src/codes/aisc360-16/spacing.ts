@@ -5,12 +5,12 @@
 import { inchBoltSize } from "../../catalogue/bolts.js";
 import { groupHoles } from "../../geometry/joint-builder.js";
 import { distance, fartherThan, gaugeLines, type Line } from "../../geometry/lines.js";
-import type { Hole, Joint } from "../../model/joint.js";
+import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
 import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
-import { unitText } from "./display.js";
+import { unitText, type UnitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
 
 /** Minimum spacing between centres of standard, oversized or slotted holes, 2⅔ d (3 d preferred). AISC 360-16 J3.3. */
@@ -49,6 +49,26 @@ export function maxSpacing_mm(t_mm: number, inch: boolean, corrosion: boolean): 
 
 const isInch = (joint: Joint) => inchBoltSize(joint.boltDiameter_mm) !== undefined;
 
+/*
+ * Governing measurements are made by small functions called only for a new worst: a text closure
+ * written inside a loop over holes would make V8 allocate the loop's variables at every turn.
+ */
+
+/** A pair's centre distance against 2⅔ d (J3.3), 3 d preferred. */
+function spacingWorst(u: UnitText, plate: PlatePiece, a: Hole, b: Hole, s: number, limit: number, d_mm: number): Worst {
+  return { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * d_mm)} preferred)` };
+}
+
+/** A pitch between holes a–b, or hole a's distance (b null; `to`: "" or " to the plate end"), against a limit. */
+function pairWorst(u: UnitText, plate: PlatePiece, a: Hole, b: Hole | null, to: string, value: number, limit: number): Worst {
+  return { value, limit, where: plate.label, detail: () => `${b ? `holes ${a.id}–${b.id}` : `hole ${a.id}`}${to}: ${u.len(value)} vs ${u.len(limit)}` };
+}
+
+/** A hole's side edge distance against 12 t, not above 6 in (150 mm) (J3.5). */
+function sideEdgeWorst(u: UnitText, plate: PlatePiece, h: Hole, e: number, maxLimit: number, inch: boolean): Worst {
+  return { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${inch ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` };
+}
+
 /** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
 export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
   const u = unitText(scenario);
@@ -58,7 +78,7 @@ export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
     // The limit is the same for every pair: only a pair nearer than the nearest so far can govern.
     if (worst !== null && fartherThan(a, b, (worst as Worst).value)) return;
     const s = distance(a, b);
-    if (beatsWorst(worst, s, limit, "min")) worst = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs 2⅔ d = ${u.len(limit)} (3 d = ${u.len(3 * joint.boltDiameter_mm)} preferred)` };
+    if (beatsWorst(worst, s, limit, "min")) worst = spacingWorst(u, plate, a, b, s, limit, joint.boltDiameter_mm);
   });
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("J3.3"), "s ≥ 2⅔ d", "min", worst);
 }
@@ -100,7 +120,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
         const b = line.holes[k]!;
         const limit = maxSpacing_mm(pairThickness(joint, a, b), inch, corrosion);
         const s = b.x_mm - a.x_mm;
-        if (beatsWorst(along, s, limit, "max")) along = { value: s, limit, where: plate.label, detail: () => `holes ${a.id}–${b.id}: ${u.len(s)} vs ${u.len(limit)}` };
+        if (beatsWorst(along, s, limit, "max")) along = pairWorst(u, plate, a, b, "", s, limit);
       }
     }
     for (let gi = 0; gi < joint.groups.length; gi++) {
@@ -143,15 +163,15 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     const maxLimit = maxEdge_mm(plate.spec.thickness_mm, isInch(joint));
     for (const h of holes) {
       const e = half - Math.abs(h.y_mm);
-      if (beatsWorst(minEdge, e, minLimit, "min")) minEdge = { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id}: ${u.len(e)} vs ${u.len(minLimit)}` };
-      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${isInch(joint) ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` };
+      if (beatsWorst(minEdge, e, minLimit, "min")) minEdge = pairWorst(u, plate, h, null, "", e, minLimit);
+      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = sideEdgeWorst(u, plate, h, e, maxLimit, isInch(joint));
     }
     for (const c of plate.connections) {
       let nearest: Hole | null = null;
       let nearestE = Infinity;
       for (const h of groupHoles(joint, c.group)) {
         const e = c.towardEnd * (c.endX_mm - h.x_mm);
-        if (beatsWorst(minEnd, e, minLimit, "min")) minEnd = { value: e, limit: minLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(minLimit)}` };
+        if (beatsWorst(minEnd, e, minLimit, "min")) minEnd = pairWorst(u, plate, h, null, " to the plate end", e, minLimit);
         if (nearest === null || e < nearestE) {
           nearest = h;
           nearestE = e;

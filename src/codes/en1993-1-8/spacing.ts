@@ -22,6 +22,21 @@ export function outerThickness(joint: Joint, plate: PlatePiece): number {
   return Math.min(...outsidePlates(joint).filter((p) => p.connections.some((c) => groups.has(c.group))).map((p) => p.spec.thickness_mm));
 }
 
+/*
+ * Governing measurements are made by small functions called only for a new worst: a text closure
+ * written inside a loop over holes would make V8 allocate the loop's variables at every turn.
+ */
+
+/** A hole's end or edge distance (`name`: e1…e4) against factor × d0 (Table 3.3); `to`: "" or " to the plate end". */
+function minDistanceWorst(plate: PlatePiece, h: Hole, to: string, name: string, e: number, factor: number, d0: number): Worst {
+  return { value: e, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id}${to}: ${name} = ${f(e)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
+}
+
+/** A pair's spacing (`what`: "p1 = 60", "(staggered): L = 56.6"…) against factor × d0 (Table 3.3). */
+function pairWorst(plate: PlatePiece, a: Hole, b: Hole, staggered: boolean, symbol: string, value: number, factor: number, d0: number): Worst {
+  return { value, limit: factor * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}${staggered ? " (staggered)" : ""}: ${symbol} = ${f(value)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
+}
+
 /**
  * Minimum end and edge distances. EN 1993-1-8, Table 3.3: e1 ≥ 1.2 d0 and e2 ≥ 1.2 d0; slotted holes
  * e3 ≥ 1.5 d0 (slot axis to the end) and e4 ≥ 1.5 d0 (centre of the end radius to the edge).
@@ -38,7 +53,7 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
       const factor = slot ? 1.5 : 1.2;
       const name = slot ? "e4" : "e2";
       const edge = half - Math.abs(h.y_mm) - (h.across_mm - d0) / 2;
-      if (beatsWorst(minEdge, edge, factor * d0, "min")) minEdge = { value: edge, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id}: ${name} = ${f(edge)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
+      if (beatsWorst(minEdge, edge, factor * d0, "min")) minEdge = minDistanceWorst(plate, h, "", name, edge, factor, d0);
     }
     for (const c of plate.connections) {
       for (const h of groupHoles(joint, c.group)) {
@@ -47,7 +62,7 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
         const factor = slot ? 1.5 : 1.2;
         const name = slot ? "e3" : "e1";
         const end = c.towardEnd * (c.endX_mm - h.x_mm) - (h.along_mm - d0) / 2;
-        if (beatsWorst(minEnd, end, factor * d0, "min")) minEnd = { value: end, limit: factor * d0, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${name} = ${f(end)} mm vs ${factor} d0 = ${factor} × ${f(d0)} = ${f(factor * d0)} mm` };
+        if (beatsWorst(minEnd, end, factor * d0, "min")) minEnd = minDistanceWorst(plate, h, " to the plate end", name, end, factor, d0);
       }
     }
   }
@@ -98,9 +113,9 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
     if (dy <= LINE_TOLERANCE_MM) {
-      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = { value: dx, limit: 2.2 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}: p1 = ${f(dx)} mm vs 2.2 d0 = 2.2 × ${f(d0)} = ${f(2.2 * d0)} mm` };
+      if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = pairWorst(plate, a, b, false, "p1", dx, 2.2, d0);
     } else if (dx <= LINE_TOLERANCE_MM) {
-      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = { value: dy, limit: 2.4 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id}: p2 = ${f(dy)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
+      if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = pairWorst(plate, a, b, false, "p2", dy, 2.4, d0);
     } else {
       const L = distance(a, b);
       // Whether the pair is a stagger is asked only when it could govern one of the two stagger rules.
@@ -108,8 +123,8 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
       let occupied = occupiedBy.get(plate);
       if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
       if (!staggeredPair(occupied, a, b)) return;
-      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = { value: dy, limit: 1.2 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id} (staggered): p2 = ${f(dy)} mm vs 1.2 d0 = 1.2 × ${f(d0)} = ${f(1.2 * d0)} mm` };
-      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = { value: L, limit: 2.4 * d0, where: plate.label, detail: () => `holes ${a.id}–${b.id} (staggered): L = ${f(L)} mm vs 2.4 d0 = 2.4 × ${f(d0)} = ${f(2.4 * d0)} mm` };
+      if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = pairWorst(plate, a, b, true, "p2", dy, 1.2, d0);
+      if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = pairWorst(plate, a, b, true, "L", L, 2.4, d0);
     }
   });
   const citation = cl("3.5", { table: "Table 3.3" });
