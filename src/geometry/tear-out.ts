@@ -5,24 +5,11 @@
  */
 import type { Hole, PlateConnection } from "../model/joint.js";
 
-export interface TearOut {
-  hole: Hole;
-  /** Distance from the hole centre to the plate end the group bears toward, mm. */
-  toEnd_mm: number;
-  /** Distance to the nearest hole ahead (toward the end) in the hole's own strip; null when none. */
-  toHoleAhead_mm: number | null;
-}
-
-/** Per hole of one group in one plate: distance to the end and to the nearest hole ahead in its strip. */
-export function tearOutDistances(holes: readonly Hole[], connection: PlateConnection): TearOut[] {
-  const out: TearOut[] = [];
-  forEachTearOut(holes, connection, (hole, toEnd_mm, toHoleAhead_mm) => out.push({ hole, toEnd_mm, toHoleAhead_mm }));
-  return out;
-}
-
 /**
- * The same measurements, handed to `visit` hole by hole in the group's order without building a list
- * (the bearing rules of a search read them for every candidate).
+ * Per hole of one group in one plate, in the group's order: the distance from its centre to the plate
+ * end the group bears toward, and to the nearest hole ahead (toward the end) in its own strip (null
+ * when none), handed to `visit` without building a list (the bearing rules of a search read them for
+ * every candidate).
  */
 export function forEachTearOut(holes: readonly Hole[], connection: PlateConnection, visit: (hole: Hole, toEnd_mm: number, toHoleAhead_mm: number | null) => void): void {
   for (const h of holes) {

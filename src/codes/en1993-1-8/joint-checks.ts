@@ -7,7 +7,7 @@ import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
-import { tearOutDistances } from "../../geometry/tear-out.js";
+import { forEachTearOut } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
@@ -168,7 +168,8 @@ export function boltBearings(holes: readonly Hole[], connection: PlateConnection
   const factor = bearingHoleFactor(bolts.hole, bolts.slotDirection);
   const half = plate.spec.width_mm / 2;
   const cap = oneLineLap ? singleLapLimit(fu, d, t, gM2) : Infinity;
-  return tearOutDistances(holes, connection).map(({ hole: h, toEnd_mm, toHoleAhead_mm }) => {
+  const out: BoltBearing[] = [];
+  forEachTearOut(holes, connection, (h, toEnd_mm, toHoleAhead_mm) => {
     const d0 = holeWidth(h);
     const end = toHoleAhead_mm === null;
     const along = end ? toEnd_mm - (h.along_mm - d0) / 2 : toHoleAhead_mm;
@@ -190,8 +191,9 @@ export function boltBearings(holes: readonly Hole[], connection: PlateConnection
     const k1 = edge ? k1_edge(e2, p2v, d0) : k1_inner(p2, d0);
     const ab = alpha_b(ad, fub, fu);
     const Fb = Fb_Rd(k1, ab, fu, d, t, gM2, factor);
-    return { hole: h, end, along_mm: along, alpha_d: ad, alpha_b: ab, edge, e2_mm: e2, p2_mm: p2v, k1, d0_mm: d0, Fb_N: Math.min(Fb, cap), limited: Fb > cap };
+    out.push({ hole: h, end, along_mm: along, alpha_d: ad, alpha_b: ab, edge, e2_mm: e2, p2_mm: p2v, k1, d0_mm: d0, Fb_N: Math.min(Fb, cap), limited: Fb > cap });
   });
+  return out;
 }
 
 function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: number, gM2: number, factor: number): string {

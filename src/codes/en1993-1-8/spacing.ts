@@ -5,7 +5,7 @@
  * d0 is the hole's diameter (a slot's width); t the thinner outer connected part (note 3).
  */
 import { groupHoles } from "../../geometry/joint-builder.js";
-import { distance, gaugeLines, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
+import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
@@ -117,12 +117,15 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
     } else if (dx <= LINE_TOLERANCE_MM) {
       if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = pairWorst(plate, a, b, false, "p2", dy, 2.4, d0);
     } else {
-      const L = distance(a, b);
-      // Whether the pair is a stagger is asked only when it could govern one of the two stagger rules.
-      if (!beatsWorst(staggerGauge, dy, 1.2 * d0, "min") && !beatsWorst(staggerDistance, L, 2.4 * d0, "min")) return;
+      // Whether the pair is a stagger is asked only when it could govern one of the two stagger rules:
+      // its gauge, or its distance L (certainly not when L is beyond the distance that would tie the worst).
+      const gaugeMayGovern = beatsWorst(staggerGauge, dy, 1.2 * d0, "min");
+      const distanceMayGovern = staggerDistance === null || !fartherThan(a, b, (2.4 * d0 * (staggerDistance as Worst).value) / (staggerDistance as Worst).limit);
+      if (!gaugeMayGovern && !distanceMayGovern) return;
       let occupied = occupiedBy.get(plate);
       if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
       if (!staggeredPair(occupied, a, b)) return;
+      const L = distance(a, b);
       if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = pairWorst(plate, a, b, true, "p2", dy, 1.2, d0);
       if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = pairWorst(plate, a, b, true, "L", L, 2.4, d0);
     }
