@@ -142,6 +142,23 @@ export function netHoles(holes: readonly Hole[], d_mm: number): Hole[] {
   return holes.map((h) => ({ ...h, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
 }
 
+/** The enlarged hole lists of the joint checked last, by the list they were made from. */
+let lastNetHoles: { jointHoles: readonly Hole[]; d_mm: number; lists: Map<readonly Hole[], Hole[]> } | null = null;
+
+/**
+ * netHoles of a list of one joint's holes, made once per list and joint: the plates that ask with the
+ * same list (both covers; a main plate's net section and block shear) get the same array, so the net
+ * path and the block shapes measured for one are handed to the next (net-section.ts, block-shear.ts).
+ */
+function netHolesOf(joint: Joint, holes: readonly Hole[]): Hole[] {
+  if (!lastNetHoles || lastNetHoles.jointHoles !== joint.holes || lastNetHoles.d_mm !== joint.boltDiameter_mm) {
+    lastNetHoles = { jointHoles: joint.holes, d_mm: joint.boltDiameter_mm, lists: new Map() };
+  }
+  let net = lastNetHoles.lists.get(holes);
+  if (!net) lastNetHoles.lists.set(holes, (net = netHoles(holes, joint.boltDiameter_mm)));
+  return net;
+}
+
 /**
  * Bolt group strength on one plate: plate force ≤ Σ over the bolts of min(shear, bearing, tearout).
  * AISC 360-16 J3.6 (shear per bolt, the planes through which this plate is loaded), J3.10(a) (bearing
@@ -275,7 +292,7 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
 export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
   const u = unitText(scenario);
   const { width_mm: b, thickness_mm: t } = plate.spec;
-  const holes = netHoles(holesOfPlate(joint, plate), joint.boltDiameter_mm);
+  const holes = netHolesOf(joint, holesOfPlate(joint, plate));
   const transferred = scenario.options.netSectionLoad === "transferred";
   const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
@@ -316,7 +333,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
  */
 export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
   const u = unitText(scenario);
-  const holes = netHoles(groupHoles(joint, connection.group), joint.boltDiameter_mm);
+  const holes = netHolesOf(joint, groupHoles(joint, connection.group));
   const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
