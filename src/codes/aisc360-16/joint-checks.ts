@@ -139,7 +139,9 @@ function planesFor(plate: PlatePiece, group: BoltGroupGeometry): number {
 /** Holes with their width and length enlarged by the B4.3b allowance (1/16 in, 2 mm) for net areas. */
 export function netHoles(holes: readonly Hole[], d_mm: number): Hole[] {
   const a = netAllowance_mm(d_mm);
-  return holes.map((h) => ({ ...h, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
+  // Written field by field in the joint builder's order, so that an enlarged hole has the same shape
+  // (hidden class) as a hole: the geometry then sees one kind of object and stays fast.
+  return holes.map((h) => ({ id: h.id, group: h.group, x_mm: h.x_mm, y_mm: h.y_mm, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
 }
 
 /** The enlarged hole lists of the joint checked last, by the list they were made from. */
