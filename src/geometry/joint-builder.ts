@@ -44,19 +44,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     stackIndex: number,
   ): PlatePiece => {
     const m = code.plateStrength(spec);
-    return {
-      id,
-      role,
-      label,
-      spec,
-      fy_MPa: m.fy_MPa,
-      fu_MPa: m.fu_MPa,
-      materialNote: m.note,
-      ...extent,
-      forceShare,
-      connections,
-      stackIndex,
-    };
+    return platePiece(id, role, label, spec, m.fy_MPa, m.fu_MPa, m.note, extent.x0_mm, extent.x1_mm, extent.continues, forceShare, connections, stackIndex);
   };
 
   const makeHole = (group: Hole["group"], index: number, x: number, y: number): Hole => ({
@@ -86,16 +74,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
       grip_mm: plates.mainA.thickness_mm + plates.mainB.thickness_mm,
       packing_mm: 0,
     };
-    return {
-      spliceType: splice.type,
-      boltDiameter_mm: bolts.size_mm,
-      plates: pieces,
-      holes,
-      groups: [group],
-      buttGap_mm: 0,
-      spliceLength_mm: L,
-      patternText,
-    };
+    return jointOf(splice.type, bolts.size_mm, pieces, holes, [group], 0, L, patternText);
   }
 
   const halfGap = splice.buttGap_mm / 2;
@@ -170,16 +149,45 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     };
   };
 
-  return {
-    spliceType: splice.type,
-    boltDiameter_mm: bolts.size_mm,
-    plates: pieces,
-    holes: [...holesA, ...holesB],
-    groups: [groupFor("A", holesA), groupFor("B", holesB)],
-    buttGap_mm: splice.buttGap_mm,
-    spliceLength_mm: 2 * halfCover,
-    patternText,
-  };
+  return jointOf(splice.type, bolts.size_mm, pieces, [...holesA, ...holesB], [groupFor("A", holesA), groupFor("B", holesB)], splice.buttGap_mm, 2 * halfCover, patternText);
+}
+
+/** A joint, its fields written in one order (one shape for every joint, built here or with other plates). */
+function jointOf(spliceType: Joint["spliceType"], boltDiameter_mm: number, plates: PlatePiece[], holes: Hole[], groups: BoltGroupGeometry[], buttGap_mm: number, spliceLength_mm: number, patternText: string): Joint {
+  return { spliceType, boltDiameter_mm, plates, holes, groups, buttGap_mm, spliceLength_mm, patternText };
+}
+
+/** The same joint with other plates (the plates with the bearing directions of another sense of the load). */
+export function withPlates(joint: Joint, plates: PlatePiece[]): Joint {
+  return jointOf(joint.spliceType, joint.boltDiameter_mm, plates, joint.holes, joint.groups, joint.buttGap_mm, joint.spliceLength_mm, joint.patternText);
+}
+
+/**
+ * A plate of the joint, its fields written one by one in one order: every plate, built here or with
+ * its connections changed (`withConnections`), has the same shape (hidden class), so the checks see
+ * one kind of plate object.
+ */
+function platePiece(
+  id: PlateId,
+  role: PlatePiece["role"],
+  label: string,
+  spec: PlateSpec,
+  fy_MPa: number,
+  fu_MPa: number,
+  materialNote: string,
+  x0_mm: number,
+  x1_mm: number,
+  continues: PlatePiece["continues"],
+  forceShare: number,
+  connections: PlatePiece["connections"],
+  stackIndex: number,
+): PlatePiece {
+  return { id, role, label, spec, fy_MPa, fu_MPa, materialNote, x0_mm, x1_mm, continues, forceShare, connections, stackIndex };
+}
+
+/** The same plate with other connections (the bearing directions of another sense of the load). */
+export function withConnections(p: PlatePiece, connections: PlatePiece["connections"]): PlatePiece {
+  return platePiece(p.id, p.role, p.label, p.spec, p.fy_MPa, p.fu_MPa, p.materialNote, p.x0_mm, p.x1_mm, p.continues, p.forceShare, connections, p.stackIndex);
 }
 
 /** Holes that pass through a plate: every hole of every group the plate connects to, or the packing's side. */
