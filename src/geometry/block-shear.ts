@@ -183,10 +183,10 @@ const sameNumbers = (a: readonly number[], b: readonly number[]): boolean => {
  * Every block shape that can form in a plate of width b for one bolt group (`holes`) bearing toward one
  * plate end. The shapes depend only on the holes as seen from that end (u, y and hole widths) and the
  * plate width, so within one joint (`jointHoles`: the joint builder's own hole list; default the
- * group's holes) a set is measured once and handed again to the next plate that asks
- * with the same numbers: both cover plates of a butt splice, and the mirror-image groups of its two
- * main plates (and of each cover's two ends). Every joint measures its own (a check never reads an
- * earlier joint's answer). The shapes hold numbers only, never hole names, and are only read.
+ * group's holes) a set is measured once and handed again to the next plate that asks with the same
+ * numbers: both cover plates of a butt splice, and the mirror-image groups of its two main plates (and
+ * of each cover's two ends). Every joint measures its own (a check never reads an earlier joint's
+ * answer). The shapes hold numbers only, never hole names, and are only read.
  */
 export function blockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number, jointHoles: readonly Hole[] = holes): readonly BlockShape[] {
   const local = localFrame(holes, connection);
