@@ -6,7 +6,6 @@
 import { Command, CommanderError, Option } from "commander";
 import { savedScenarioText } from "../io/save-scenario.js";
 import { parseYaml } from "../io/yaml.js";
-import { decodeText } from "../io/decode.js";
 import { searchJson } from "../report/search-json.js";
 import { RANK_BY, type RankBy } from "../search/ranking.js";
 import { searchLayouts } from "../search/search.js";

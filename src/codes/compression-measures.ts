@@ -7,7 +7,7 @@ import { groupHoles } from "../geometry/joint-builder.js";
 import { gaugeLines, transverseLines } from "../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
-import { beatsWorst, holePlates, keepWorst, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
+import { beatsWorst, holePlates, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
 
 /** Effective length factor of a cover plate strut held by bolts at both ends: fixed-fixed, 0.65 (common practice). */
 export const COVER_STRUT_K = 0.65;

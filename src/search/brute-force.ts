@@ -4,7 +4,7 @@
  */
 import { compareKeys, type RankBy } from "./ranking.js";
 import { arrangementOf, evaluate, identityOf, type Candidate, type SearchContext, type SearchStats } from "./search.js";
-import { families, layoutOf, resolveSpace, taperedGauges, type Family } from "./space.js";
+import { families, layoutOf, resolveSpace, taperedGauges } from "./space.js";
 import { countCandidates } from "./work-estimate.js";
 
 /** Every tapered count vector of the declared shape: one parity, never rising from line 0, not uniform. */

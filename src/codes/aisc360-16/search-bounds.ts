@@ -30,7 +30,6 @@ const loaded = (s: Scenario): PlateSpec[] => [s.plates.mainA, s.plates.mainB, ..
  */
 export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutShape["pattern"]): SearchLimits {
   const inch = inchBoltSize(d_mm) !== undefined;
-  const hole = holeDimensions(d_mm, scenario.bolts?.hole ?? "standard", scenario.bolts?.slotDirection);
   const plates = loaded(scenario);
   const tMin = Math.min(...plates.map((p) => p.thickness_mm));
   const spacingMax = maxSpacing_mm(tMin, inch, scenario.options.exposedToCorrosion);

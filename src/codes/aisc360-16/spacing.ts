@@ -8,7 +8,7 @@ import { distance, fartherThan, gaugeLines, type Line } from "../../geometry/lin
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
-import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, keepWorst, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { cl } from "./citation.js";
 import { unitText, type UnitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
