@@ -3,7 +3,7 @@
  * grip and packing of each bolt group as the joint builder forms them.
  */
 import type { Scenario } from "../model/scenario.js";
-import type { StrengthBound } from "./types.js";
+import type { SearchLimits, StrengthBound } from "./types.js";
 
 /** Collects the terms of a strength bound: the least capacity and its check, per bolt, plates only. */
 export class BoundBuilder {
@@ -50,4 +50,45 @@ export function groupGrips(scenario: Scenario): { grips: number[]; packs: number
   const coverT = plates.covers.reduce((s, c) => s + c.thickness_mm, 0);
   const packs = [tA <= tB ? scenario.packing_mm : 0, tB < tA ? scenario.packing_mm : 0];
   return { grips: [coverT + tA + packs[0]!, coverT + tB + packs[1]!], packs };
+}
+
+/**
+ * A code's search limits with their statement in words written when the output reads it. A class: an
+ * object literal with a getter is built on V8's slow path, and a search asks for limits hundreds of
+ * times (every size, class, cover and pattern, in the work estimate and the family list).
+ */
+class LimitsWithStatement implements SearchLimits {
+  readonly pitchMin_mm: number;
+  readonly pitchMax_mm: number;
+  readonly gaugeMin_mm: number;
+  readonly gaugeMax_mm: number;
+  readonly endMin_mm: number;
+  readonly endMax_mm: number;
+  readonly endAtButtMax_mm: number;
+  readonly edgeMin_mm: number;
+  readonly edgeMax_mm: number;
+  readonly tops: SearchLimits["tops"];
+  #statement: (() => string) | string;
+  constructor(l: Omit<SearchLimits, "statement">, statement: () => string) {
+    this.pitchMin_mm = l.pitchMin_mm;
+    this.pitchMax_mm = l.pitchMax_mm;
+    this.gaugeMin_mm = l.gaugeMin_mm;
+    this.gaugeMax_mm = l.gaugeMax_mm;
+    this.endMin_mm = l.endMin_mm;
+    this.endMax_mm = l.endMax_mm;
+    this.endAtButtMax_mm = l.endAtButtMax_mm;
+    this.edgeMin_mm = l.edgeMin_mm;
+    this.edgeMax_mm = l.edgeMax_mm;
+    this.tops = l.tops;
+    this.#statement = statement;
+  }
+  get statement(): string {
+    if (typeof this.#statement === "function") this.#statement = this.#statement();
+    return this.#statement;
+  }
+}
+
+/** Search limits whose statement is written on first read. */
+export function searchLimitsWith(limits: Omit<SearchLimits, "statement">, statement: () => string): SearchLimits {
+  return new LimitsWithStatement(limits, statement);
 }

@@ -44,13 +44,25 @@ export function rankKey(rankBy: RankBy, m: Measures, text: () => string): Key {
         : rankBy === "efficiency"
           ? [-m.efficiency, m.bolts, m.cost]
           : [m.length_mm, m.bolts, -m.efficiency, m.cost];
-  let written: string | undefined;
-  return {
-    numbers: rounded(numbers),
-    get text(): string {
-      return (written ??= text());
-    },
-  };
+  return new CheckedKey(rounded(numbers), text);
+}
+
+/**
+ * A checked layout's key, its fixed-order text a prototype getter written on first read (a class: an
+ * object literal with a getter is built on V8's slow path, and a search makes one key per full check).
+ */
+class CheckedKey implements Key {
+  #text: (() => string) | string;
+  constructor(
+    readonly numbers: number[],
+    text: () => string,
+  ) {
+    this.#text = text;
+  }
+  get text(): string {
+    if (typeof this.#text === "function") this.#text = this.#text();
+    return this.#text;
+  }
 }
 
 /**

@@ -138,7 +138,7 @@ export function scenarioRecord(yamlText: string, withSearch: boolean): Rec {
     const found = searchLayouts({ scenario, code, costs }, { top: 3, rankBy: "cost" });
     out.search = {
       stats: found.stats,
-      results: found.results.map((c) => ({ key: c.key, counts: c.counts, cost: c.cost.total, holes: holesRecord(c.joint), report: reportRecord(c.report) })),
+      results: found.results.map((c) => ({ key: { numbers: c.key.numbers, text: c.key.text }, counts: c.counts, cost: c.cost.total, holes: holesRecord(c.joint), report: reportRecord(c.report) })),
     };
   }
   return normalised(out);

@@ -9,7 +9,7 @@ import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenari
 import type { LayoutShape, RangeTop, SearchLimits, StrengthBound } from "../types.js";
 
 const RULE: RangeTop = { kind: "rule" };
-import { BoundBuilder, groupGrips } from "../bound-builder.js";
+import { BoundBuilder, searchLimitsWith, groupGrips } from "../bound-builder.js";
 import { bearingCoefficients, phiRnBearing, phiRnTearout } from "./bearing.js";
 import { a307GripFactor, fillerFactor, longJointFactor, phiRnShear } from "./bolt-shear.js";
 import { netAllowance_mm, holeDimensions } from "./holes.js";
@@ -43,7 +43,7 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutSh
   const endAtButtMax = covers.length > 0 ? (Math.min(...covers.map((c) => maxSpacing_mm(c.thickness_mm, inch, scenario.options.exposedToCorrosion))) - scenario.splice.buttGap_mm) / 2 : Infinity;
   // End distances run to the J3.5 maximum: tearout stops growing at lc = 2d (e = 2d + dh/2), block shear does not.
   const endMax = endMaxRule;
-  return {
+  const limits = {
     pitchMin_mm: staggered ? minSpacing_mm(d_mm) / 2 : minSpacing_mm(d_mm),
     pitchMax_mm: staggered ? spacingMax / 2 : spacingMax,
     gaugeMin_mm: staggered ? minSpacing_mm(d_mm) / 2 : minSpacing_mm(d_mm),
@@ -54,15 +54,13 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: LayoutSh
     edgeMin_mm: edgeMin,
     edgeMax_mm: edgeMax,
     tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
-    /** The range statement, written when the output reads it. */
-    get statement(): string {
-      return (
-        `pitch ${staggered ? "1⅓d" : "2⅔d"} … ${staggered ? "min(24t, 12 in)/2" : "min(24t, 12 in)"}; gauge ${staggered ? "1⅓d" : "2⅔d"} … min(24t, 12 in) (J3.3, J3.5); ` +
-        `end and edge from Table J3.4 to min(12t, 6 in) (J3.4, J3.5): end distances to the maximum, since block shear still grows after tearout reaches bearing at lc = 2d; every top a code maximum` +
-        (covers.length > 0 ? "; at the butt also 2·e + gap within the covers' maximum spacing" : "")
-      );
-    },
   };
+  // The range statement, written when the output reads it.
+  return searchLimitsWith(limits, () => (
+    `pitch ${staggered ? "1⅓d" : "2⅔d"} … ${staggered ? "min(24t, 12 in)/2" : "min(24t, 12 in)"}; gauge ${staggered ? "1⅓d" : "2⅔d"} … min(24t, 12 in) (J3.3, J3.5); ` +
+    `end and edge from Table J3.4 to min(12t, 6 in) (J3.4, J3.5): end distances to the maximum, since block shear still grows after tearout reaches bearing at lc = 2d; every top a code maximum` +
+    (covers.length > 0 ? "; at the butt also 2·e + gap within the covers' maximum spacing" : "")
+  ));
 }
 
 /**

@@ -7,7 +7,7 @@
 import { boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
 import type { LayoutShape, RangeTop, SearchLimits, StrengthBound } from "../types.js";
-import { BoundBuilder } from "../bound-builder.js";
+import { BoundBuilder, searchLimitsWith } from "../bound-builder.js";
 import { alpha_b, alpha_d_end, alpha_d_inner, Fb_Rd, singleLapLimit } from "./bearing.js";
 import { alpha_v, beta_Lf, beta_p, Fv_Rd, smallBoltHoleFactor } from "./bolt-shear.js";
 import { bearingHoleFactor, holeDimensions, holeWidth, ks, normalClearance_mm } from "./holes.js";
@@ -52,7 +52,7 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
   const covers = scenario.plates.covers.length > 0;
   const endAtButtMax = covers && exposed ? Math.min(endMax, (p1Outer - scenario.splice.buttGap_mm) / 2) : endMax;
   const top: RangeTop = exposed ? { kind: "rule" } : { kind: "declared", ruleMax_mm: Infinity };
-  return {
+  const limits = {
     pitchMin_mm: pattern === "staggered" ? 1.1 * d0 : 2.2 * d0,
     pitchMax_mm: pattern === "staggered" ? p1Outer / 2 : p1Outer,
     gaugeMin_mm: capped ? 3 * d0 : 2.4 * d0,
@@ -63,16 +63,14 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     edgeMin_mm: (capped ? Math.max(factor, 1.5) : factor) * d0 + reach,
     edgeMax_mm: eMax,
     tops: { pitch: top, gauge: top, end: top, endAtButt: top },
-    /** The range statement, written when the output reads it. */
-    get statement(): string {
-      return (
-        `pitch ${pattern === "staggered" ? "1.1 d0 (2.2 d0 on a gauge line)" : "2.2 d0"} … min(14t, 200)${pattern === "staggered" ? "/2" : ""}; ` +
-        `gauge ${capped ? "3 d0 (declared: k1 = 2.5, so bearing does not change with the gauge)" : "2.4 d0"} … min(14t, 200); ` +
-        `end ${factor} d0 … ${exposed ? "4t + 40" : "the first step at or beyond 3 d0 (declared: αd's e1 term reaches 1; block tearing still grows)"}; edge ${capped ? "1.5 d0 (declared, k1 = 2.5)" : `${factor} d0`}${exposed ? " … 4t + 40" : ""} ` +
-        `(EN 1993-1-8 Table 3.3${exposed ? ", exposed to corrosion: every top a code maximum" : "; not exposed: Table 3.3 note 1 sets no maximum, so pitch and gauge run to the first step at or beyond min(14t, 200), a declared bound"})${covers && exposed ? "; at the butt also 2·e + gap ≤ min(14t, 200)" : ""}`
-      );
-    },
   };
+  // The range statement, written when the output reads it.
+  return searchLimitsWith(limits, () => (
+    `pitch ${pattern === "staggered" ? "1.1 d0 (2.2 d0 on a gauge line)" : "2.2 d0"} … min(14t, 200)${pattern === "staggered" ? "/2" : ""}; ` +
+    `gauge ${capped ? "3 d0 (declared: k1 = 2.5, so bearing does not change with the gauge)" : "2.4 d0"} … min(14t, 200); ` +
+    `end ${factor} d0 … ${exposed ? "4t + 40" : "the first step at or beyond 3 d0 (declared: αd's e1 term reaches 1; block tearing still grows)"}; edge ${capped ? "1.5 d0 (declared, k1 = 2.5)" : `${factor} d0`}${exposed ? " … 4t + 40" : ""} ` +
+    `(EN 1993-1-8 Table 3.3${exposed ? ", exposed to corrosion: every top a code maximum" : "; not exposed: Table 3.3 note 1 sets no maximum, so pitch and gauge run to the first step at or beyond min(14t, 200), a declared bound"})${covers && exposed ? "; at the butt also 2·e + gap ≤ min(14t, 200)" : ""}`
+  ));
 }
 
 /**

@@ -7,7 +7,7 @@
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import type { CheckableScenario, PlateSpec, Scenario } from "../../model/scenario.js";
 import type { LayoutShape, RangeTop, SearchLimits, StrengthBound } from "../types.js";
-import { BoundBuilder, groupGrips } from "../bound-builder.js";
+import { BoundBuilder, searchLimitsWith, groupGrips } from "../bound-builder.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
 import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
 import { bearingHoleFactor, holeDimensions, holeFactorKh } from "./holes.js";
@@ -57,7 +57,7 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     covers.length > 0
       ? (Math.min(200, ...covers.map((c) => 16 * c.thickness_mm), ...covers.filter((c) => outside.includes(c)).map((c) => 100 + 4 * c.thickness_mm)) - scenario.splice.buttGap_mm) / 2
       : Infinity;
-  return {
+  const limits = {
     pitchMin_mm: staggered ? 1.25 * d_mm : 2.5 * d_mm,
     pitchMax_mm: staggered ? Math.min(1.5 * along, across) / 2 : along,
     gaugeMin_mm: staggered ? 1.25 * d_mm : 2.5 * d_mm,
@@ -68,14 +68,12 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     edgeMin_mm: factor * d0,
     edgeMax_mm: maxEdge,
     tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
-    /** The range statement, written when the output reads it. */
-    get statement(): string {
-      return (
-        `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200, 100 + 4t), 32t, 300)/2" : "min(16t, 200, 100 + 4t)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
-        `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances to the same maximum (kb's e-term stops growing at 3d0, block shear does not)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}; every top a code maximum`
-      );
-    },
   };
+  // The range statement, written when the output reads it.
+  return searchLimitsWith(limits, () => (
+    `pitch ${staggered ? "1.25d" : "2.5d"} … ${staggered ? "min(1.5 × min(16t, 200, 100 + 4t), 32t, 300)/2" : "min(16t, 200, 100 + 4t)"}; gauge ${staggered ? "1.25d" : "2.5d"} … min(32t, 300) (cl. 10.2.2, 10.2.3); ` +
+    `end and edge ${factor}d0 … ${scenario.options.exposedToCorrosion ? "40 + 4t" : "12tε"} (cl. 10.2.4), end distances to the same maximum (kb's e-term stops growing at 3d0, block shear does not)${covers.length > 0 ? "; at the butt also 2·e + gap within the covers' pitch limit" : ""}; every top a code maximum`
+  ));
 }
 
 /** A plate's part of the bound that does not depend on the layout. */
