@@ -127,3 +127,36 @@ describe("reductions and limits", () => {
     expect(run(butt({ layout, plates: platesFor("planed") })).report.checks.find((c) => c.id === "min-edge-distance")!.pass).toBe(true);
   });
 });
+
+describe("cl. 10.2.3.4 is cited only where its 50 % relaxation sets the governing limit", () => {
+  const rule = (r: CheckReport, id: string) => r.checks.find((c) => c.id === id) as unknown as { value_mm: number; limit_mm: number; citation: { also?: string[] } };
+  const lap = `
+name: behaviour test
+code: is800-2007
+splice: { type: lap }
+plates:
+  main: { width: 200, thickness: 8, grade: E250 }
+load: { factored_tension: 200 }
+bolts: { size: M20, class: "8.8" }
+layout: { pattern: staggered, across: 2, along: 4, pitch: 70, gauge: 60, end_distance: 40 }
+`;
+  it("staggered lap, g = 60 mm ≤ 75 mm: same-line pitch 2 × 70 = 140 mm against min(16 × 8, 200) × 1.5 = 192 mm, and min(100 + 4 × 8, 200) × 1.5 = 198 mm on the edge line; 10.2.3.4 cited", () => {
+    const r = run(lap).report;
+    expect(rule(r, "max-pitch").value_mm).toBeCloseTo(140, 9);
+    expect(rule(r, "max-pitch").limit_mm).toBeCloseTo(192, 9);
+    expect(rule(r, "max-pitch").citation.also).toEqual(["10.2.3.4 (staggered, g ≤ 75 mm)"]);
+    expect(rule(r, "max-edge-line-pitch").limit_mm).toBeCloseTo(198, 9);
+    expect(rule(r, "max-edge-line-pitch").citation.also).toEqual(["10.2.3.4 (staggered, g ≤ 75 mm)"]);
+  });
+  it("staggered butt: the governing pitches run across the butt, where the stagger is not at equal intervals: limits min(16 × 8, 200) = 128 mm and min(100 + 4 × 8, 200) = 132 mm unrelaxed, 10.2.3.4 not cited", () => {
+    const r = run(butt({ layout: "{ pattern: staggered, across: 2, along: 4, pitch: 50, gauge: 60, end_distance: 40, end_distance_at_butt: 40 }" })).report;
+    // Rows of 2 and 1 holes alternate: the middle gauge line holds each side's 2nd and 4th rows, so its
+    // consecutive holes across the butt are 2 × (40 + 50) + 10 = 190 mm apart; on the edge lines 2 × 40 + 10 = 90 mm.
+    expect(rule(r, "max-pitch").value_mm).toBeCloseTo(190, 9);
+    expect(rule(r, "max-pitch").limit_mm).toBeCloseTo(128, 9);
+    expect(rule(r, "max-pitch").citation.also).toBeUndefined();
+    expect(rule(r, "max-edge-line-pitch").value_mm).toBeCloseTo(90, 9);
+    expect(rule(r, "max-edge-line-pitch").limit_mm).toBeCloseTo(132, 9);
+    expect(rule(r, "max-edge-line-pitch").citation.also).toBeUndefined();
+  });
+});

@@ -79,10 +79,9 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
  *  - staggered at equal intervals with gauge ≤ 75 mm: the last two limits × 1.5, not above min(32 t, 300).
  */
 export function maxSpacingRules(joint: Joint): RuleCheck[] {
-  const worst: MaxSpacingWorst = { across: null, pitch: null, edgeLine: null };
+  const worst: MaxSpacingWorst = { across: null, pitch: null, edgeLine: null, pitchRelaxed: false, edgeLineRelaxed: false };
   const outside = outsidePlates(joint);
   const seen = new PairSet(joint.holes);
-  let relaxedAnywhere = false;
   const groups = groupHoleSets(joint);
   const plates = holePlates(joint);
   const linesOf: Line[][] = [];
@@ -97,7 +96,6 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     const first = plate.connections[0];
     const stagger = first ? groups.get(first.group)!.stagger : staggerOf(platesHoles(joint, plate));
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
-    if (relax > 1) relaxedAnywhere = true;
     if (!repeat) {
       for (const g of joint.groups) if (connects(plate, g.id)) acrossRule(joint, plate, groups.get(g.id)!.gaugeLines, worst);
     }
@@ -107,20 +105,25 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
       pitchRules(joint, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
     }
   }
-  // cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners applied.
-  const relaxed = relaxedAnywhere ? { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] } : {};
   return [
     ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", worst.across),
-    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxed), "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
-    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxed), "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxedCitation(worst.pitchRelaxed)), "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxedCitation(worst.edgeLineRelaxed)), "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
   ];
 }
 
-/** The governing measurements of the three maximum-spacing rules so far. */
+/** cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners set the governing limit. */
+function relaxedCitation(relaxed: boolean): { also?: string[] } {
+  return relaxed ? { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] } : {};
+}
+
+/** The governing measurements of the three maximum-spacing rules so far, and whether cl. 10.2.3.4 relaxed the governing limit. */
 interface MaxSpacingWorst {
   across: Worst | null;
   pitch: Worst | null;
   edgeLine: Worst | null;
+  pitchRelaxed: boolean;
+  edgeLineRelaxed: boolean;
 }
 
 /** Index of an earlier plate joined to exactly the groups of plates[k], in the same order (−1: none). */
@@ -174,12 +177,18 @@ function pitchRules(joint: Joint, plate: PlatePiece, line: readonly Hole[], rela
     if (measurePitch && seen.addNew(a, b)) {
       const t = pairThickness(joint, a, b);
       const limit = Math.min(Math.min(16 * t, 200) * r, Math.min(32 * t, 300));
-      if (beatsWorst(worst.pitch, s, limit, "max")) worst.pitch = pitchWorst(plate, a, b, s, r, t, limit);
+      if (beatsWorst(worst.pitch, s, limit, "max")) {
+        worst.pitch = pitchWorst(plate, a, b, s, r, t, limit);
+        worst.pitchRelaxed = r > 1;
+      }
     }
     if (edgeLine) {
       const tp = plate.spec.thickness_mm;
       const limit = Math.min(Math.min(100 + 4 * tp, 200) * r, Math.min(32 * tp, 300));
-      if (beatsWorst(worst.edgeLine, s, limit, "max")) worst.edgeLine = edgeLineWorst(plate, a, b, s, r, tp, limit);
+      if (beatsWorst(worst.edgeLine, s, limit, "max")) {
+        worst.edgeLine = edgeLineWorst(plate, a, b, s, r, tp, limit);
+        worst.edgeLineRelaxed = r > 1;
+      }
     }
   }
 }
