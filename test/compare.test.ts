@@ -78,6 +78,10 @@ describe("compare by design code", () => {
     expect(aisc.mapping).toContain("steel E250 → A36");
     expect(aisc.mapping).toContain("bolt class 8.8 → A325");
     expect(aisc.best).not.toBeNull();
+    // A metric bolt under AISC 360-16 is named by its ASTM F3125 metric grade (A325M for 8.8), not its ISO class.
+    expect(aisc.best.bolt).toMatch(/^M\d+ A325M$/);
+    const is800 = j.columns.find((c: { code: string }) => c.code === "is800-2007");
+    expect(is800.best.bolt).toMatch(/^M\d+ 8\.8$/);
   });
 
   it("the Eurocode column equals search run on the mapped scenario under that code alone", async () => {

@@ -146,6 +146,17 @@ export function boltGradeText(propertyClass: PropertyClass, d_mm: number): strin
   return astm ?? propertyClass;
 }
 
+/**
+ * The grade of a bolt as printed under a design code: under AISC 360-16 the ASTM grade of the class's
+ * strength level, A325M / A490M for a metric size (ASTM F3125; A307 has no metric grade, so a metric
+ * 4.6 bolt keeps its class); elsewhere as boltGradeText.
+ */
+export function boltGradeUnder(code: string, propertyClass: PropertyClass, d_mm: number): string {
+  if (code !== "aisc360-16" || inchBoltSize(d_mm) !== undefined) return boltGradeText(propertyClass, d_mm);
+  const astm = (Object.keys(ASTM_ISO_EQUIVALENT) as AstmBoltGrade[]).find((g) => ASTM_ISO_EQUIVALENT[g] === propertyClass);
+  return astm === undefined || astm === "A307" ? propertyClass : `${astm}M`;
+}
+
 /** The size of a cost-table key ("M20", "3/4 in", "1-1/8 in", "1 in"), mm; undefined if not a size. */
 export function sizeOfKey(key: string): number | undefined {
   const metric = /^M(\d+)$/.exec(key);

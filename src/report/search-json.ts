@@ -5,7 +5,7 @@ import type { Candidate, SearchOutcome } from "../search/search.js";
 import { boltWordsOf } from "../codes/words.js";
 import type { RankBy } from "../search/ranking.js";
 import { CAUTION } from "./check-json.js";
-import { boltGradeText, boltSizeText } from "../catalogue/bolts.js";
+import { boltGradeUnder, boltSizeText } from "../catalogue/bolts.js";
 import { citationText } from "./citation.js";
 import { foldTwins } from "./twins.js";
 import { detailingCell, detailingJson, tightestCell, detailingState, strengthFigures, UTILISATION_DEFINITIONS } from "./summary.js";
@@ -84,7 +84,7 @@ export function resultRow(c: RowSource, rank: number): ResultRow {
   const governing = governingFold?.check;
   const row: ResultRow = {
     rank,
-    bolt: `${boltSizeText(c.family.size_mm)} ${boltGradeText(c.family.propertyClass, c.family.size_mm)}`,
+    bolt: `${boltSizeText(c.family.size_mm)} ${boltGradeUnder(c.scenario.code, c.family.propertyClass, c.family.size_mm)}`,
     size_mm: c.family.size_mm,
     class: c.family.propertyClass,
     assembly: c.family.base.bolts.assembly,

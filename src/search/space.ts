@@ -4,7 +4,7 @@
  */
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
 import { boltWordsOf } from "../codes/words.js";
-import { boltGradeText, boltSizeText, INCH_BOLT_SIZES_IN, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
+import { boltGradeUnder, boltSizeText, INCH_BOLT_SIZES_IN, inchBoltSize, sizeOfKey, type PropertyClass } from "../catalogue/bolts.js";
 import { lengthNumber, lengthText } from "../report/format.js";
 import type { DesignCode, RangeTop, SearchLimits } from "../codes/types.js";
 import type { BoltAssembly, BoltSpec, CheckableScenario, LayoutSpec, PlateSpec, Scenario } from "../model/scenario.js";
@@ -281,7 +281,7 @@ function classesText(space: SearchSpace, scenario: Scenario): string {
   const assembly = boltWordsOf(scenario.code).assembly(space.assembly);
   if (scenario.code !== "aisc360-16") return `property classes: ${space.classes.join(", ")} (${assembly})`;
   const metric = space.sizes_mm.every((d) => inchBoltSize(d) === undefined);
-  const grades = space.classes.map((c) => `${boltGradeText(c, INCH_BOLT_SIZES_IN[0] * 25.4)}${metric ? "M" : ""}`);
+  const grades = space.classes.map((c) => boltGradeUnder(scenario.code, c, metric ? space.sizes_mm[0]! : INCH_BOLT_SIZES_IN[0] * 25.4));
   return `bolt grades (ASTM F3125 / A307): ${grades.join(", ")} (${assembly})`;
 }
 
