@@ -140,6 +140,17 @@ describe("materials and holes", () => {
     expect(is2062Strength("E350", 25).fy_MPa).toBe(330);
     expect(is2062Strength("E350", 50).fy_MPa).toBe(320);
   });
+  it.each([
+    ["E275", 430, 275, 265, 255],
+    ["E300", 440, 300, 290, 280],
+    ["E410", 540, 410, 390, 380],
+    ["E450", 570, 450, 430, 420],
+  ] as const)("IS 2062 %s: fu %i; fy %i / %i / %i MPa for t < 20, 20–40, > 40 mm (IS 2062:2011 Table 2, from memory; E450: E450A)", (grade, fu, fy1, fy2, fy3) => {
+    expect(is2062Strength(grade, 12)).toMatchObject({ fy_MPa: fy1, fu_MPa: fu });
+    expect(is2062Strength(grade, 20).fy_MPa).toBe(fy2);
+    expect(is2062Strength(grade, 40).fy_MPa).toBe(fy2);
+    expect(is2062Strength(grade, 45)).toMatchObject({ fy_MPa: fy3, fu_MPa: fu });
+  });
   it("standard clearance holes: +1 mm M12–M14, +2 mm M16–M24, +3 mm M27 up (IS 800:2007 Table 19; check values)", () => {
     expect([12, 16, 20, 22, 24, 27, 30, 36].map(is800.standardHoleDiameter_mm)).toEqual([13, 18, 22, 24, 26, 30, 33, 39]);
   });

@@ -28,7 +28,8 @@ interface SteelGrade {
 /**
  * IS 2062 (hot-rolled structural steel) grades used with IS 800:2007.
  * IS 2062 Table 2: yield stress for t < 20 mm, 20–40 mm, > 40 mm.
- * E250 values: IS 2062 (read in the table; see ../shared check values). E350 values: IS 2062 Table 2, from memory.
+ * E250 values: IS 2062 (read in the table; see ../shared check values). E275, E300, E350, E410, E450 values:
+ * IS 2062:2011 Table 2, from memory (E450: the E450A tensile strength, 570 MPa, the lower of its two qualities).
  */
 export const IS2062_GRADES: Record<string, SteelGrade> = {
   E250: {
@@ -40,12 +41,48 @@ export const IS2062_GRADES: Record<string, SteelGrade> = {
     ],
     source: "IS 2062, Table 2",
   },
+  E275: {
+    fu_MPa: 430,
+    bands: [
+      { upTo_mm: 20, fy_MPa: 275, label: "t < 20 mm" },
+      { upTo_mm: 40, fy_MPa: 265, label: "20 ≤ t ≤ 40 mm" },
+      { upTo_mm: Infinity, fy_MPa: 255, label: "t > 40 mm" },
+    ],
+    source: "IS 2062, Table 2; from memory",
+  },
+  E300: {
+    fu_MPa: 440,
+    bands: [
+      { upTo_mm: 20, fy_MPa: 300, label: "t < 20 mm" },
+      { upTo_mm: 40, fy_MPa: 290, label: "20 ≤ t ≤ 40 mm" },
+      { upTo_mm: Infinity, fy_MPa: 280, label: "t > 40 mm" },
+    ],
+    source: "IS 2062, Table 2; from memory",
+  },
   E350: {
     fu_MPa: 490,
     bands: [
       { upTo_mm: 20, fy_MPa: 350, label: "t < 20 mm" },
       { upTo_mm: 40, fy_MPa: 330, label: "20 ≤ t ≤ 40 mm" },
       { upTo_mm: Infinity, fy_MPa: 320, label: "t > 40 mm" },
+    ],
+    source: "IS 2062, Table 2; from memory",
+  },
+  E410: {
+    fu_MPa: 540,
+    bands: [
+      { upTo_mm: 20, fy_MPa: 410, label: "t < 20 mm" },
+      { upTo_mm: 40, fy_MPa: 390, label: "20 ≤ t ≤ 40 mm" },
+      { upTo_mm: Infinity, fy_MPa: 380, label: "t > 40 mm" },
+    ],
+    source: "IS 2062, Table 2; from memory",
+  },
+  E450: {
+    fu_MPa: 570,
+    bands: [
+      { upTo_mm: 20, fy_MPa: 450, label: "t < 20 mm" },
+      { upTo_mm: 40, fy_MPa: 430, label: "20 ≤ t ≤ 40 mm" },
+      { upTo_mm: Infinity, fy_MPa: 420, label: "t > 40 mm" },
     ],
     source: "IS 2062, Table 2; from memory",
   },
