@@ -11,7 +11,7 @@ import { XMLParser } from "fast-xml-parser";
 import { describe, expect, it } from "vitest";
 import { checkScenario } from "../src/engine/check.js";
 import { billOfMaterials } from "../src/export/bolt-list.js";
-import { buildDrawing, SCALES } from "../src/export/drawing.js";
+import { buildDrawing, chainTextLifts, SCALES } from "../src/export/drawing.js";
 import { exportFiles } from "../src/export/index.js";
 import { DRAWING_AREA, drawingLoadText, layoutSheet, LINE_PATTERNS_MM } from "../src/export/svg.js";
 import { parseScenario, requireCheckable } from "../src/io/scenario.js";
@@ -433,5 +433,38 @@ describe("the sheet's title names the splice by the sense of its load", () => {
     expect(svgOf(d)).not.toContain("tension splice");
     expect(dxfOf(d)).toContain("bolted splice under reversing load");
     expect(svgOf(demo("footbridge-tie.yaml"))).toContain("bolted tension splice");
+  });
+});
+
+describe("8. chain dimension values that are wider than their spaces", () => {
+  // ISO 129-1 (common practice): where the space between extension lines is too short for the value, the
+  // value stands off the dimension line; here each second value of a run of such values is set a row
+  // higher (2.5 mm lettering + 1 mm), so neighbours never overprint. Text width: 0.6 × height per character.
+  it("values that fit stay on the line; a run of three tight values is set low, high, low", () => {
+    expect(chainTextLifts([{ text: "40", space_mm: 20 }, { text: "65", space_mm: 32.5 }, { text: "10", space_mm: 5 }])).toEqual([0, 0, 0]);
+    // "1 1/2"" is 6 × 0.6 × 2.5 = 9 mm wide: tight in 7.62 mm (1 1/2 in at 1:5); "3/8"" (6 mm) in 1.9 mm.
+    expect(chainTextLifts([{ text: '3"', space_mm: 15.24 }, { text: '1 1/2"', space_mm: 7.62 }, { text: '3/8"', space_mm: 1.9 }, { text: '1 1/2"', space_mm: 7.62 }, { text: '3"', space_mm: 15.24 }])).toEqual([0, 0, 3.5, 0, 0]);
+  });
+
+  it("the canopy tie in the report's 1:5 view: no two values of the chain overprint", () => {
+    const { scenario, code } = parseScenario(readFileSync(scenarioPath("canopy-tie-us.yaml"), "utf8"));
+    const s = requireCheckable(scenario, code);
+    const { joint } = checkScenario(s, code);
+    const drawing = buildDrawing(joint, billOfMaterials(joint, s).lengths, { scale: 5, loadText: "T", senses: loadSenses(s.load), units: "us" });
+    const chain = drawing.primitives.filter((p): p is Extract<typeof p, { kind: "dim" }> => p.kind === "dim" && p.view === "plan" && p.direction === "x");
+    const level = Math.min(...chain.map((d) => d.at));
+    const boxes = chain
+      .filter((d) => d.at === level)
+      .map((d) => {
+        const mid = (d.from[0] + d.to[0]) / 2 / 5; // paper mm
+        const half = (0.6 * 2.5 * d.text.length) / 2;
+        return { lo: mid - half, hi: mid + half, lift: d.textLift_mm ?? 0 };
+      })
+      .sort((a, b) => a.lo - b.lo);
+    for (let i = 1; i < boxes.length; i++) {
+      const [a, b] = [boxes[i - 1]!, boxes[i]!];
+      if (a.lift === b.lift) expect(b.lo, `values ${i - 1} and ${i}`).toBeGreaterThanOrEqual(a.hi - 1e-9);
+    }
+    expect(boxes.some((b) => b.lift > 0)).toBe(true);
   });
 });

@@ -49,6 +49,20 @@ describe("HTML report content", () => {
     expect(html).toContain("qualified engineer");
   });
 
+  it("prints its drawing at the drawing's own ISO 5455 scale, dimension figures 2.5 mm high on paper (ISO 3098 lettering; LETTERING_MM), with a key to the part marks", () => {
+    const figure = /<figure class="drawing to-scale">(<svg\b[^>]*>)([\s\S]*?)<\/figure>/.exec(html)!;
+    const sheetWidth_mm = Number(/width="([\d.]+)mm"/.exec(figure[1]!)![1]);
+    const printedWidth_mm = Number(/figure\.drawing\.to-scale \{ width: ([\d.]+)mm; \}/.exec(html)![1]);
+    // Printed at 100 %: 1 mm of the figure is 1 mm of paper, so the stated lettering is the printed lettering.
+    expect(printedWidth_mm).toBeCloseTo(sheetWidth_mm, 6);
+    const dimFigures = [...figure[2]!.matchAll(/<g class="dim"[^>]*>[\s\S]*?<text[^>]*font-size="([\d.]+)"/g)].map((m) => Number(m[1]));
+    expect(dimFigures.length).toBeGreaterThan(5);
+    for (const h of dimFigures) expect(h).toBeGreaterThanOrEqual(2.5);
+    const scale = Number(/data-scale="([\d.]+)"/.exec(figure[1]!)![1]);
+    expect(html).toContain(`<b id="print-scale">1:${scale}</b>`);
+    expect(html).toContain("Marks: 1 cover plate A, 2 cover plate B, 3 main plate A (member), 4 main plate B (member)");
+  });
+
   it("reports on a search result with --rank and says where the layout came from", () => {
     const r = writeReport("footbridge-tie-search.yaml", ["--rank", "1"]);
     expect(r.code).toBe(0);

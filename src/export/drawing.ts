@@ -35,7 +35,7 @@ export type Primitive =
   | { kind: "poly"; layer: Layer; points: Point[]; closed: boolean; plate?: PlateId; fill?: "section" | "white"; role?: LineRole }
   | { kind: "circle"; layer: Layer; c: Point; r: number; hole?: Hole; fill?: "black" }
   | { kind: "text"; layer: Layer; at: Point; height: number; text: string; anchor: "start" | "middle" | "end"; rotate?: number; role?: "title" | "subtitle" | "callout" | "mark" | "load" | "cutting-plane" }
-  | { kind: "dim"; from: Point; to: Point; at: number; direction: "x" | "y"; value: number; text: string; extension: [boolean, boolean]; view: "plan" | "section"; textAt?: number }
+  | { kind: "dim"; from: Point; to: Point; at: number; direction: "x" | "y"; value: number; text: string; extension: [boolean, boolean]; view: "plan" | "section"; textAt?: number; textLift_mm?: number }
   | { kind: "arrow"; layer: Layer; from: Point; to: Point; role?: "load" | "cutting-plane" }
   | { kind: "hatch"; part: PlateId; angle_deg: number; spacing_mm: number; lines: Array<[Point, Point]> };
 
@@ -211,6 +211,23 @@ function planCentreLines(c: Ctx): void {
   for (const x of xs) prims.push({ kind: "line", layer: "centre", a: [x, -W / 2 - 2 * k], b: [x, W / 2 + (8 + EXTENSION_OVERRUN_MM) * k] });
 }
 
+/**
+ * Where values of a chain dimension are wider than their spaces (inch values at a small scale), each
+ * second one of a run of such values is set a row higher, so that neighbours never overprint (ISO 129-1
+ * lets a value stand off its line where space is short). Returns each value's lift on paper, mm.
+ */
+export function chainTextLifts(values: ReadonlyArray<{ text: string; space_mm: number }>): number[] {
+  const row = LETTERING_MM.dimension + 1;
+  const lifts: number[] = [];
+  let previousTight = false;
+  for (const v of values) {
+    const tight = TEXT_WIDTH_PER_HEIGHT * LETTERING_MM.dimension * v.text.length > v.space_mm - 0.5;
+    lifts.push(tight && previousTight && lifts[lifts.length - 1] === 0 ? row : 0);
+    previousTight = tight;
+  }
+  return lifts;
+}
+
 /** Chain dimensions along the force above the plan and across it to the right of the main plate's break (ISO 129-1). */
 function planDimensions(c: Ctx): void {
   const { joint, k, W, prims, xs, spliceX0, spliceX1, top } = c;
@@ -219,14 +236,16 @@ function planDimensions(c: Ctx): void {
   if (joint.spliceType !== "lap") for (const x of [-joint.buttGap_mm / 2, joint.buttGap_mm / 2]) stops.set(x, true);
   const chain = [...stops.keys()].sort((a, b) => a - b);
   const yDim1 = W / 2 + 8 * k;
-  const yDim2 = yDim1 + 7 * k;
   const edgeAt = (x: number) => (x === spliceX0 || x === spliceX1 ? top.spec.width_mm / 2 : W / 2);
-  for (let i = 1; i < chain.length; i++) {
-    const a = chain[i - 1]!;
-    const b = chain[i]!;
-    if (b - a < 1e-6) continue;
-    prims.push({ kind: "dim", view: "plan", from: [a, edgeAt(a)], to: [b, edgeAt(b)], at: yDim1, direction: "x", value: b - a, text: c.dimText(b - a), extension: [stops.get(a)!, stops.get(b)!] });
-  }
+  const spans: Array<[number, number]> = [];
+  for (let i = 1; i < chain.length; i++) if (chain[i]! - chain[i - 1]! >= 1e-6) spans.push([chain[i - 1]!, chain[i]!]);
+  const lifts = chainTextLifts(spans.map(([a, b]) => ({ text: c.dimText(b - a), space_mm: (b - a) / k })));
+  spans.forEach(([a, b], i) => {
+    const lift = lifts[i]! > 0 ? { textLift_mm: lifts[i]! } : {};
+    prims.push({ kind: "dim", view: "plan", from: [a, edgeAt(a)], to: [b, edgeAt(b)], at: yDim1, direction: "x", value: b - a, text: c.dimText(b - a), extension: [stops.get(a)!, stops.get(b)!], ...lift });
+  });
+  // The overall dimension 7 mm above the chain, and clear of its second row of values where there is one.
+  const yDim2 = yDim1 + (7 + Math.max(0, ...lifts)) * k;
   prims.push({ kind: "dim", view: "plan", from: [spliceX0, top.spec.width_mm / 2], to: [spliceX1, top.spec.width_mm / 2], at: yDim2, direction: "x", value: spliceX1 - spliceX0, text: c.dimText(spliceX1 - spliceX0), extension: [true, true] });
 
   // Across: edge, gauges, edge on the narrowest loaded plate, measured at the main plate's break, the

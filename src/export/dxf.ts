@@ -193,7 +193,7 @@ function writeDimension(c: DimCtx, p: Extract<Primitive, { kind: "dim" }>): void
   const a: Point = along ? [p.from[0], p.at] : [p.at, p.from[1]];
   const b: Point = along ? [p.to[0], p.at] : [p.at, p.to[1]];
   const f = p.textAt ?? 0.5;
-  const mid: Point = along ? [a[0] + (b[0] - a[0]) * f, p.at + 1 * k] : [p.at - 1 * k, a[1] + (b[1] - a[1]) * f];
+  const mid: Point = along ? [a[0] + (b[0] - a[0]) * f, p.at + (1 + (p.textLift_mm ?? 0)) * k] : [p.at - 1 * k, a[1] + (b[1] - a[1]) * f];
   const name = `*D${++c.count}`;
   const block = dxf.document.blocks.addBlock(name, dxf.document.objects, false) as DxfBlock;
   block.flags = 1; // anonymous

@@ -58,8 +58,19 @@ export function drawingName(name: string): string {
 /** Drawing area above the title block and parts list, paper mm. */
 export const DRAWING_AREA = { x: SHEET.margin + 4, y: SHEET.margin + 4, width: SHEET.width - 2 * SHEET.margin - 8, height: SHEET.height - 2 * SHEET.margin - SHEET.titleHeight - 6 } as const;
 
-/** Choose the largest ISO 5455 scale at which plan and section fit, and centre the drawing: the drawing and the paper transform. */
-export function layoutSheet(input: SvgInput): { drawing: Drawing; scale: number; origin: Point } {
+/** A rectangle of paper the views are drawn in, mm from the sheet's top left corner. */
+export interface PaperArea {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+/**
+ * Choose the largest ISO 5455 scale at which plan and section fit the area (default: the A3 sheet's
+ * drawing area), and centre the drawing there: the drawing and the paper transform.
+ */
+export function layoutSheet(input: SvgInput, area: PaperArea = DRAWING_AREA): { drawing: Drawing; scale: number; origin: Point } {
   const units = displayUnitsOf(input.scenario);
   const loadText = drawingLoadText(input.scenario.load, units);
   const senses = loadSenses(input.scenario.load);
@@ -67,14 +78,14 @@ export function layoutSheet(input: SvgInput): { drawing: Drawing; scale: number;
   for (const k of SCALES) {
     const drawing = buildDrawing(input.joint, input.bom.lengths, { scale: k, loadText, senses, units });
     chosen = { drawing, scale: k };
-    if ((drawing.max[0] - drawing.min[0]) / k <= DRAWING_AREA.width && (drawing.max[1] - drawing.min[1]) / k <= DRAWING_AREA.height) break;
+    if ((drawing.max[0] - drawing.min[0]) / k <= area.width && (drawing.max[1] - drawing.min[1]) / k <= area.height) break;
   }
   const { drawing, scale } = chosen!;
   const w = (drawing.max[0] - drawing.min[0]) / scale;
   const h = (drawing.max[1] - drawing.min[1]) / scale;
   // Paper point of model (x, y): X = ox + x/k, Y = oy − y/k (SVG y runs down).
-  const ox = DRAWING_AREA.x + (DRAWING_AREA.width - w) / 2 - drawing.min[0] / scale;
-  const oy = DRAWING_AREA.y + (DRAWING_AREA.height - h) / 2 + drawing.max[1] / scale;
+  const ox = area.x + (area.width - w) / 2 - drawing.min[0] / scale;
+  const oy = area.y + (area.height - h) / 2 + drawing.max[1] / scale;
   return { drawing, scale, origin: [ox, oy] };
 }
 
@@ -133,11 +144,41 @@ export function partsListRows(input: SvgInput, drawing: Drawing): string[][] {
   return rows;
 }
 
-export function renderSvg(input: SvgInput): string {
-  const { drawing, scale, origin } = layoutSheet(input);
+/** The views (plan and section) as SVG elements in paper mm, through the paper transform of layoutSheet. */
+function viewElements(drawing: Drawing, scale: number, origin: Point): string[] {
   const P = (p: Point): Point => [origin[0] + p[0] / scale, origin[1] - p[1] / scale];
   const body: string[] = [];
   for (const prim of drawing.primitives) body.push(renderPrimitive(prim, P, scale));
+  return body;
+}
+
+/** The SVG root of a sheet: its paper size in mm, its scale and paper origin (for readers of the file), its units. */
+function sheetRoot(input: SvgInput, width_mm: number, height_mm: number, scale: number, origin: Point): string {
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${width_mm}mm" height="${height_mm}mm" viewBox="0 0 ${width_mm} ${height_mm}" data-scale="${scale}" data-origin-x="${n(origin[0])}" data-origin-y="${n(origin[1])}" data-units="${displayUnitsOf(input.scenario)}">`;
+}
+
+/**
+ * The views alone, plan and section, on a sheet of the given paper size at the largest ISO 5455 scale
+ * at which they fit: no frame, title block or parts list (a report carries those in its own header and
+ * bill of materials). Lettering keeps its ISO 3098 height on paper, as on the A3 sheet.
+ */
+export function renderViewsSvg(input: SvgInput, paper: { width: number; height: number }): string {
+  const inset = 2;
+  const { drawing, scale, origin } = layoutSheet(input, { x: inset, y: inset, width: paper.width - 2 * inset, height: paper.height - 2 * inset });
+  return [
+    sheetRoot(input, paper.width, paper.height, scale, origin),
+    `<title>${esc(drawingName(input.scenario.name))}</title>`,
+    ...sheetStyle(),
+    `<g id="drawing">`,
+    ...viewElements(drawing, scale, origin),
+    `</g>`,
+    `</svg>`,
+  ].join("\n");
+}
+
+export function renderSvg(input: SvgInput): string {
+  const { drawing, scale, origin } = layoutSheet(input);
+  const body = viewElements(drawing, scale, origin);
   const tbW = SHEET.titleWidth;
   const tbX = SHEET.width - SHEET.margin - tbW;
   const tbY = SHEET.height - SHEET.margin - SHEET.titleHeight;
@@ -152,8 +193,26 @@ export function renderSvg(input: SvgInput): string {
   });
   return [
     `<?xml version="1.0" encoding="UTF-8"?>`,
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${SHEET.width}mm" height="${SHEET.height}mm" viewBox="0 0 ${SHEET.width} ${SHEET.height}" data-scale="${scale}" data-origin-x="${n(origin[0])}" data-origin-y="${n(origin[1])}" data-units="${displayUnitsOf(input.scenario)}">`,
+    sheetRoot(input, SHEET.width, SHEET.height, scale, origin),
     `<title>${esc(drawingName(input.scenario.name))}</title>`,
+    ...sheetStyle(),
+    `<rect class="frame" x="${SHEET.margin}" y="${SHEET.margin}" width="${SHEET.width - 2 * SHEET.margin}" height="${SHEET.height - 2 * SHEET.margin}"/>`,
+    `<g id="drawing">`,
+    ...body,
+    `</g>`,
+    `<g id="parts-list">`,
+    ...renderPartsList(input, drawing, tbX),
+    `</g>`,
+    `<g id="title-block">`,
+    ...title,
+    `</g>`,
+    `</svg>`,
+  ].join("\n");
+}
+
+/** The style sheet of a sheet: ISO 128-20 line widths and patterns, lettering. */
+function sheetStyle(): string[] {
+  return [
     `<style>`,
     `  .outline { stroke: #000; stroke-width: ${LINE_WIDTH_MM.wide}; fill: none; stroke-linecap: round; }`,
     `  .hidden { stroke: #000; stroke-width: ${LINE_WIDTH_MM.narrow}; stroke-dasharray: ${LINE_PATTERNS_MM.dashed.join(" ")}; fill: none; }`,
@@ -171,18 +230,7 @@ export function renderSvg(input: SvgInput): string {
     `  text { font-family: "DejaVu Sans", "Liberation Sans", Arial, Helvetica, sans-serif; fill: #000; }`,
     `  .tb-head { font-size: 4px; font-weight: bold; } .tb-key { font-size: 2.5px; } .tb-val { font-size: 2.5px; } .tb-note { font-size: 2.3px; } .pl { font-size: 2.3px; } .pl-head { font-size: 2.3px; font-weight: bold; }`,
     `</style>`,
-    `<rect class="frame" x="${SHEET.margin}" y="${SHEET.margin}" width="${SHEET.width - 2 * SHEET.margin}" height="${SHEET.height - 2 * SHEET.margin}"/>`,
-    `<g id="drawing">`,
-    ...body,
-    `</g>`,
-    `<g id="parts-list">`,
-    ...renderPartsList(input, drawing, tbX),
-    `</g>`,
-    `<g id="title-block">`,
-    ...title,
-    `</g>`,
-    `</svg>`,
-  ].join("\n");
+  ];
 }
 
 /** The parts list left of the title block, and the caution under it. */
@@ -285,7 +333,7 @@ function renderDim(p: Extract<Primitive, { kind: "dim" }>, P: (p: Point) => Poin
   const mid: Point = [a[0] + (b[0] - a[0]) * f, a[1] + (b[1] - a[1]) * f];
   const short = textW > len - 1;
   const text = along
-    ? `<text x="${n(mid[0])}" y="${n(mid[1] - 1 - (short ? 0 : 0))}" font-size="${h}" text-anchor="middle">${esc(p.text)}</text>`
+    ? `<text x="${n(mid[0])}" y="${n(mid[1] - 1 - (p.textLift_mm ?? 0))}" font-size="${h}" text-anchor="middle">${esc(p.text)}</text>`
     : short
       ? `<text x="${n(mid[0] + 1)}" y="${n(mid[1] + h * 0.35)}" font-size="${h}" text-anchor="start">${esc(p.text)}</text>`
       : `<text x="${n(mid[0] - 1)}" y="${n(mid[1])}" font-size="${h}" text-anchor="middle" transform="rotate(-90 ${n(mid[0] - 1)} ${n(mid[1])})">${esc(p.text)}</text>`;

@@ -2,10 +2,11 @@
  * How the report prints: the A4 page rules (portrait pages, a landscape page for the drawing), column
  * widths, page breaks, and the print scale of the embedded drawing. Pure.
  *
- * The drawing (src/export/svg.ts) is an A3 sheet whose root states its paper size in mm and its scale
- * (data-scale, or "1:N" in its text). The report prints it reduced onto a landscape A4 page at the
- * largest ISO 5455 reduction scale (1:2, 1:5, 1:10, 1:20 ...) at which the sheet fits, so the printed
- * scale is true; where the sheet states no paper size or scale, it is fitted and marked "not to scale".
+ * The drawing is a sheet whose root states its paper size in mm and its scale (data-scale, or "1:N" in
+ * its text): the report's own, plan and section drawn for the landscape page's drawing area
+ * (src/export/svg.ts renderViewsSvg), prints at its own scale; a larger sheet (the A3 sheet) prints
+ * reduced at the largest ISO 5455 reduction scale (1:2, 1:5, 1:10, 1:20 ...) at which it fits, so the
+ * printed scale is true; where the sheet states no paper size or scale, it is fitted and marked "not to scale".
  */
 import { lengthText, type DisplayUnits } from "./format.js";
 
@@ -48,7 +49,8 @@ export function drawingPrint(svg: string, box = DRAWING_BOX_MM): DrawingPrint | 
   if (!sheet) return null;
   const fit = Math.min(1, box.width / sheet.width_mm, box.height / sheet.height_mm);
   const least = sheet.denominator / fit;
-  const printDenominator = iso5455Denominators(Math.max(10, least * 10)).find((d) => d >= least - 1e-9);
+  // A sheet that fits prints at its own scale (2:1 included); a larger one at the next ISO reduction.
+  const printDenominator = fit >= 1 ? sheet.denominator : iso5455Denominators(Math.max(10, least * 10)).find((d) => d >= least - 1e-9);
   if (printDenominator === undefined) return null;
   const factor = sheet.denominator / printDenominator;
   return {
