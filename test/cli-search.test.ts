@@ -53,6 +53,10 @@ describe("splicewright search", () => {
     expect(report.jointStrength_kN).toBeCloseTo(row.jointStrength_kN, 2);
     expect(report.efficiency).toBeCloseTo(row.efficiency, 3);
     expect(report.bolt.count).toBe(row.bolts);
+    // The layout is found: the saved scenario (and every sheet made from it) drops "(layout to be found)".
+    const saved = readFileSync(file, "utf8");
+    expect(saved).toMatch(/^name: Footbridge FB-2 bottom tie, mid-span splice T1$/m);
+    expect(saved).not.toMatch(/layout to be found/);
   });
 
   it("--save refuses to overwrite without --force and leaves the file as it was", () => {

@@ -11,6 +11,7 @@ import type { CheckReport } from "../model/results.js";
 import type { CheckableScenario, Scenario } from "../model/scenario.js";
 import { boltGradeOf, type BillOfMaterials } from "./bolt-list.js";
 import { xmlText } from "../text/escape.js";
+import { foundLayoutName } from "../text/layout-name.js";
 import { detailingState, strengthFigures } from "../report/summary.js";
 import { dimensionText, forceText, type DisplayUnits } from "../report/format.js";
 import { toUnit } from "../units/units.js";
@@ -52,7 +53,7 @@ export function drawingLoadText(load: Scenario["load"], units: DisplayUnits): st
 
 /** The name on a drawing of a layout: a search scenario's "(layout to be found)" is dropped, the layout being found. */
 export function drawingName(name: string): string {
-  return name.replace(/\s*\(layout to be found\)\s*/gi, " ").trim();
+  return foundLayoutName(name);
 }
 
 /** Drawing area above the title block and parts list, paper mm. */

@@ -5,9 +5,11 @@
 import { stringify } from "yaml";
 import type { Candidate } from "../search/search.js";
 import { boltGradeText, boltSizeText, inchBoltSize, inchSizeText } from "../catalogue/bolts.js";
+import { foundLayoutName } from "../text/layout-name.js";
 
 export function savedScenarioText(original: Record<string, unknown>, c: Candidate, rank: number): string {
   const out: Record<string, unknown> = structuredClone(original);
+  if (typeof out.name === "string") out.name = foundLayoutName(out.name);
   // A file in US units (`units: us`) reads bare numbers as inches: write lengths in inches there.
   const us = original.units === "us";
   const len = (mm: number) => (us ? Math.round((mm / 25.4) * 1e6) / 1e6 : mm);
