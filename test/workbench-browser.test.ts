@@ -130,7 +130,9 @@ describe.skipIf(!haveBrowser)("the workbench in headless Chromium, opened from d
     expect(await page.locator("#verdict").getAttribute("data-pass")).toBe(String(cliCheck.pass));
     expect(await page.locator("#verdict .word").innerText()).toBe(cliCheck.pass ? "PASS" : "FAIL");
     expect(Number(await page.locator("#joint-strength [data-kn]").getAttribute("data-kn"))).toBe(cliCheck.jointStrength_kN);
-    expect(await page.locator("#joint-strength").innerText()).toBe(`${cliCheck.jointStrength_kN.toFixed(2)} kN`);
+    // As the CLI prints it (src/report/format.ts: forces to 0.1 kN).
+    expect(await page.locator("#joint-strength").innerText()).toBe(`${cliCheck.jointStrength_kN.toFixed(1)} kN`);
+    expect(cli(["check", scenarioPath("footbridge-tie.yaml")]).stdout).toContain(`Joint design strength:  ${cliCheck.jointStrength_kN.toFixed(1)} kN`);
     expect(await page.locator("#efficiency .num").innerText()).toBe(`${(cliCheck.efficiency * 100).toFixed(1)} %`);
     expect(await page.locator("#governing").innerText()).toContain(cliCheck.checks.find((c: { id: string }) => c.id === cliCheck.governing).clause);
     // The full check list, one click away: every check of the CLI, with its clause.

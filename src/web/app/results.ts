@@ -6,16 +6,12 @@
 import { words, type Words } from "../fields.js";
 import type { LiveState } from "../protocol.js";
 import type { SummaryCheck, WorkbenchSummary } from "../summary.js";
-import { toUnit } from "../../units/units.js";
+import { forceText, lengthText } from "../../report/format.js";
 import { byId, fixed, h } from "./dom.js";
 
-function force(N: number, units: "si" | "us"): string {
-  return units === "us" ? `${fixed(toUnit(N, "kip", "force"), 2)} kips` : `${fixed(toUnit(N, "kN", "force"), 2)} kN`;
-}
-
-function length(mm: number, units: "si" | "us"): string {
-  return units === "us" ? `${fixed(toUnit(mm, "in", "length"), 3)} in` : `${fixed(mm, 1)} mm`;
-}
+/** Forces and lengths as every shell prints them (src/report/format.ts): 0.1 kN or kips; lengths at their own precision. */
+const force = forceText;
+const length = lengthText;
 
 /** A utilisation bar: the figure in words beside it; past 1 the bar is drawn full and marked. */
 export function bar(u: number): HTMLElement {
@@ -147,10 +143,11 @@ export function renderChecks(state: LiveState): void {
   const us = json.units === "us";
   const checks = json.checks as CheckJson[];
   const components = [...new Set(checks.map((c) => c.component))];
+  const units = us ? "us" : "si";
   const figure = (c: CheckJson) =>
     c.demand_kN !== null
-      ? [us ? `${fixed(c.demand_kip ?? NaN, 2)} kips` : `${fixed(c.demand_kN, 2)} kN`, us ? `${fixed(c.resistance_kip ?? NaN, 2)} kips` : `${fixed(c.resistance_kN ?? NaN, 2)} kN`]
-      : [us ? `${fixed(c.value_in ?? NaN, 3)} in` : `${fixed(c.value_mm ?? NaN, 1)} mm`, us ? `${fixed(c.limit_in ?? NaN, 3)} in` : `${fixed(c.limit_mm ?? NaN, 1)} mm`];
+      ? [force(c.demand_kN * 1000, units), force((c.resistance_kN ?? NaN) * 1000, units)]
+      : [length(c.value_mm ?? NaN, units), length(c.limit_mm ?? NaN, units)];
   const groups = components.map((component) =>
     h(
       "tbody",
