@@ -84,6 +84,14 @@ describe("compare by design code", () => {
     expect(is800.best.bolt).toMatch(/^M\d+ 8\.8$/);
   });
 
+  it("piped, the table and its notes keep to 100 columns (cells wrap within their columns)", () => {
+    const r = cli(["compare", demo, "--codes", "is800,en1993,aisc360"]);
+    expect(r.code).toBe(0);
+    const widest = Math.max(...r.stdout.split("\n").map((l) => Array.from(l).length));
+    expect(widest).toBeLessThanOrEqual(100);
+    expect(r.stdout).toContain("Governing check");
+  });
+
   it("the Eurocode column equals search run on the mapped scenario under that code alone", async () => {
     const { compareCodes, mapScenario } = await import("../src/compare/compare.js");
     const { parseMappingText } = await import("../src/io/equivalents.js");

@@ -8,7 +8,7 @@ import { efficiencyBasisNote } from "../report/summary.js";
 import type { CheckableScenario, EfficiencyBasis } from "../model/scenario.js";
 import { boltWordsOf } from "../codes/words.js";
 import { assemblyOf } from "../export/bolt-list.js";
-import { strengthUtilisationWords } from "./text.js";
+import { PIPED_WIDTH, strengthUtilisationWords, wrap } from "./text.js";
 
 const fx = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? "—" : v.toFixed(d));
 const dim = (v: number | null | undefined) => (v === null || v === undefined ? "—" : lengthNumber(v));
@@ -57,23 +57,41 @@ export function compareRows(columns: CompareColumn[]): Array<[string, string[]]>
   return rows.map(([name, f]) => [name, columns.map(f)]);
 }
 
-export function formatCompare(title: string, columns: CompareColumn[], currency: string, basis: EfficiencyBasis, load: { factoredCompression_N?: number } = {}): string {
-  const table = new Table({ head: ["", ...columns.map((c) => c.label)], style: { head: [], border: [] }, wordWrap: true });
-  for (const [name, cells] of compareRows(columns)) table.push([name, ...cells]);
+/** Narrowest column of choices, characters: below it a column's words would break mid-word. */
+const MIN_CHOICE_COLUMN = 18;
+
+/**
+ * Column widths that fit the table to `width` columns: the row names as they are, the choices sharing
+ * the rest equally (at least MIN_CHOICE_COLUMN each, so many choices may still run wider), never wider
+ * than their widest cell.
+ */
+function columnWidths(rows: Array<[string, string[]]>, labels: string[], width: number): number[] {
+  const nameWidth = Math.max(...rows.map(([name]) => name.length)) + 2;
+  const share = Math.floor((width - nameWidth - (labels.length + 2)) / labels.length);
+  return [nameWidth, ...labels.map((label, i) => Math.min(Math.max(MIN_CHOICE_COLUMN, share), Math.max(label.length, ...rows.map(([, cells]) => cells[i]!.length)) + 2))];
+}
+
+/** The compare table and its notes, laid out for `width` columns (cells wrap within their columns). */
+export function formatCompare(title: string, columns: CompareColumn[], currency: string, basis: EfficiencyBasis, load: { factoredCompression_N?: number } = {}, width = PIPED_WIDTH): string {
+  const rows = compareRows(columns);
+  const labels = columns.map((c) => c.label);
+  const table = new Table({ head: ["", ...labels], style: { head: [], border: [] }, wordWrap: true, colWidths: columnWidths(rows, labels, width) });
+  for (const [name, cells] of rows) table.push([name, ...cells]);
+  const text = (t: string, indent = "") => wrap(t, width, indent, indent);
   const out = [
-    `splicewright — compare: ${title}`,
+    ...text(`splicewright — compare: ${title}`),
     "",
     table.toString(),
-    `Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`,
-    `Strength utilisation: ${strengthUtilisationWords(load)}; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length.`,
-    efficiencyBasisNote(basis),
+    ...text(`Cost in ${currency}. Each column is the best layout of \`splicewright search\` with that choice alone, proven over the declared space.`),
+    ...text(`Strength utilisation: ${strengthUtilisationWords(load)}; service utilisation: service tension / slip resistance at service. Detailing rules: all pass in every column; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length.`),
+    ...text(efficiencyBasisNote(basis)),
   ];
   const mapped = columns.filter((c) => c.mapping.length);
   if (mapped.length) {
-    out.push("", "Mapping of materials between codes (nearest equivalents — these are not identical materials; strengths, thickness bands and testing differ):");
-    for (const c of mapped) out.push(`  ${c.code.id}: ${c.mapping.join("; ")}`);
+    out.push("", ...text("Mapping of materials between codes (nearest equivalents — these are not identical materials; strengths, thickness bands and testing differ):"));
+    for (const c of mapped) out.push(...wrap(`${c.code.id}: ${c.mapping.join("; ")}`, width, "  ", "    "));
   }
-  for (const c of columns) if (!c.best && c.outcome.noResultReason) out.push(`${c.label}: ${c.outcome.noResultReason}`);
-  out.push("", `CAUTION: ${CAUTION}`);
+  for (const c of columns) if (!c.best && c.outcome.noResultReason) out.push(...text(`${c.label}: ${c.outcome.noResultReason}`));
+  out.push("", ...text(`CAUTION: ${CAUTION}`));
   return out.join("\n");
 }
