@@ -9,7 +9,7 @@ import type { SearchOutcome } from "../search/search.js";
 import type { Scenario } from "../model/scenario.js";
 import { toUnit } from "../units/units.js";
 import { loadWords, spliceKindWords } from "../model/load.js";
-import { strengthUtilisationWords } from "./text.js";
+import { PIPED_WIDTH, strengthUtilisationWords, wrap } from "./text.js";
 
 const fx = (v: number | null, d = 0) => (v === null ? "—" : v.toFixed(d));
 
@@ -25,23 +25,26 @@ function displayUnits(scenario: Scenario) {
   };
 }
 
-export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy: RankBy, currency: string, codeTitle: string, elapsed_ms: number, variants = false): string {
+/** The search results and their notes; prose wraps to `width` columns (the table keeps one row per layout). */
+export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy: RankBy, currency: string, codeTitle: string, elapsed_ms: number, variants = false, width = PIPED_WIDTH): string {
   const out: string[] = [];
+  const text = (t: string, first = "", rest = first) => wrap(t, width, first, rest);
   const butt = scenario.splice.type !== "lap";
   out.push(`splicewright — layout search: bolted ${spliceKindWords(scenario.load)}`);
-  out.push(`Scenario: ${scenario.name}${scenario.project ? `   Project: ${scenario.project}` : ""}`);
-  out.push(`Code:     ${codeTitle}`);
+  out.push(...text(scenario.name, "Scenario: ", "          "));
+  if (scenario.project) out.push(...text(scenario.project, "Project:  ", "          "));
+  out.push(...text(codeTitle, "Code:     ", "          "));
   const u = displayUnits(scenario);
   out.push(`Load:     ${scenario.load.factoredCompression_N === undefined ? "factored tension " : ""}${loadWords(scenario.load, (N) => `${u.force(N / 1000)} ${u.forceUnit}`)}`);
   out.push("");
   out.push("Search space (declared):");
-  for (const line of outcome.spaceText) out.push(`  - ${line}`);
+  for (const line of outcome.spaceText) out.push(...text(line, "  - ", "    "));
   out.push("");
   if (outcome.results.length === 0) {
-    out.push(`No compliant layout: ${outcome.noResultReason ?? "nothing in the space passes"}`);
+    out.push(...text(`No compliant layout: ${outcome.noResultReason ?? "nothing in the space passes"}`, "", "  "));
   } else {
     const what = variants ? "layouts (every variant)" : `arrangements (the best layout of each; --variants shows every variant)`;
-    out.push(`Best ${outcome.results.length} ${what} by ${rankBy}${butt ? "; counts, pitch and end distances per side of the butt" : ""}:`);
+    out.push(...text(`Best ${outcome.results.length} ${what} by ${rankBy}${butt ? "; counts, pitch and end distances per side of the butt" : ""}:`));
     const rows = outcome.results.map((c, i) => resultRow(c, i + 1));
     const service = rows.some((r) => r.serviceUtilisation !== null);
     const head = ["#", "Bolt", "Pattern", "Counts", "Pitch", "Gauge", butt ? "End / at butt" : "End", "Edge", ...(butt ? ["Cover t"] : []), "Bolts", "Length", `Strength ${u.forceUnit}`, "Str. util.", ...(service ? ["SLS util."] : []), "Eff.", "Tightest rule (all pass)", `Cost`];
@@ -68,23 +71,23 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
       ]);
     });
     out.push(table.toString());
-    out.push(`Dimensions in ${u.lengthUnit}; cost in ${currency}. Every row has passed every check of \`splicewright check\` on its hole coordinates.`);
-    out.push(`Proven over the declared space above: ${provenStatement(variants)} (DEVELOPERS.md).`);
+    out.push(...text(`Dimensions in ${u.lengthUnit}; cost in ${currency}. Every row has passed every check of \`splicewright check\` on its hole coordinates.`));
+    out.push(...text(`Proven over the declared space above: ${provenStatement(variants)} (DEVELOPERS.md).`));
     out.push(
-      `Str. util.: strength utilisation = ${strengthUtilisationWords(scenario.load)} (ultimate limit state)${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
-        "Tightest rule: every detailing rule (spacing, end and edge distances, grip) passes in every row; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length.",
+      ...text(`Str. util.: strength utilisation = ${strengthUtilisationWords(scenario.load)} (ultimate limit state)${service ? "; SLS util.: service tension / slip resistance at service" : ""}. ` +
+        "Tightest rule: every detailing rule (spacing, end and edge distances, grip) passes in every row; the cell names the one closest to its limit (by the ratio of value to limit) and its margin in length."),
     );
-    out.push(efficiencyBasisNote(scenario.options.efficiencyBasis));
-    out.push("Counts \"3/2 across\": a staggered pattern, 3 bolts on odd transverse lines and 2 on even ones.");
-    out.push("Ties: fewer bolts, then higher efficiency, then a fixed order of size, class, pattern, counts and dimensions.");
+    out.push(...text(efficiencyBasisNote(scenario.options.efficiencyBasis)));
+    out.push(...text("Counts \"3/2 across\": a staggered pattern, 3 bolts on odd transverse lines and 2 on even ones."));
+    out.push(...text("Ties: fewer bolts, then higher efficiency, then a fixed order of size, class, pattern, counts and dimensions."));
   }
   const s = outcome.stats;
   out.push("");
   out.push(
-    `Search effort: ${s.families} families (${s.familiesSkippedByBound} excluded by bound), ${s.nodes} nodes, ${s.candidatesSkippedByBound} candidates excluded by bound, ` +
-      `${s.fullChecks} full checks, ${s.integerProgrammes} integer programmes (${s.enumerationFallbacks} enumeration fallbacks), ${elapsed_ms.toFixed(0)} ms.`,
+    ...text(`Search effort: ${s.families} families (${s.familiesSkippedByBound} excluded by bound), ${s.nodes} nodes, ${s.candidatesSkippedByBound} candidates excluded by bound, ` +
+      `${s.fullChecks} full checks, ${s.integerProgrammes} integer programmes (${s.enumerationFallbacks} enumeration fallbacks), ${elapsed_ms.toFixed(0)} ms.`),
   );
   out.push("");
-  out.push(`CAUTION: ${CAUTION}`);
+  out.push(...text(`CAUTION: ${CAUTION}`));
   return out.join("\n");
 }
