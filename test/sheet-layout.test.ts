@@ -9,7 +9,7 @@ import { checkScenario } from "../src/engine/check.js";
 import { parseScenario, requireCheckable } from "../src/io/scenario.js";
 import { formatSheet } from "../src/cli/sheet.js";
 import { styleFor, styleMarksToAnsi, wantsColour } from "../src/cli/style.js";
-import { outputWidth, visibleLength, wrap } from "../src/cli/text.js";
+import { outputWidth, visibleLength, wrap, wrapProse } from "../src/cli/text.js";
 import { foldTwins } from "../src/report/twins.js";
 import { cli, ROOT, scenarioPath, tempScenario } from "./helpers/cli.js";
 import { readFileSync } from "node:fs";
@@ -114,5 +114,30 @@ describe("emphasis: colour only on a terminal, never with NO_COLOR", () => {
     const plain = formatSheet(s, joint, report, { width: 80, style: styleFor({ isTTY: true }, { NO_COLOR: "1" }) });
     expect(plain).not.toMatch(/\u001b\[/);
     expect(cli(["check", tempScenario(text)]).stdout).not.toMatch(/\u001b\[/);
+  });
+});
+
+describe("wrapProse: plain-text outputs laid out for a width, tables kept whole", () => {
+  it("wraps a labelled line under its label, an indented line two spaces in, and leaves table lines and short lines alone", () => {
+    const table = "│ M16 8.8 │ M16 × 35 class 8.8 hexagon head bolt │ 35     │ 60       │ " + "x".repeat(60);
+    const lines = wrapProse(["Rules:    at most 2 bolt types; fixed cost per type stocked 150; one property class per diameter", "  layouts 120.5 + 2 types stocked × 150 = 420.5; 402 bolts and a long tail of words", "short", table], 40);
+    expect(lines).toEqual([
+      "Rules:    at most 2 bolt types; fixed",
+      "          cost per type stocked 150; one",
+      "          property class per diameter",
+      "  layouts 120.5 + 2 types stocked × 150",
+      "    = 420.5; 402 bolts and a long tail",
+      "    of words",
+      "short",
+      table,
+    ]);
+  });
+
+  it("the schedule of the demo project, piped: every line but the tables' within 100 columns", () => {
+    const r = cli(["schedule", scenarioPath("warehouse-roof-project.yaml"), "--max-types", "2"]);
+    expect(r.code).toBe(0);
+    const prose = r.stdout.split("\n").filter((l) => !/^[┌│├└]/.test(l));
+    expect(prose.length).toBeGreaterThan(15);
+    for (const l of prose) expect(Array.from(l).length, l).toBeLessThanOrEqual(100);
   });
 });

@@ -1,6 +1,7 @@
 /** The job schedule as terminal text. */
 import { CAUTION } from "../report/check-json.js";
 import { BoxTable } from "./text-table.js";
+import { PIPED_WIDTH, wrapProse } from "./text.js";
 import type { Schedule } from "../schedule/schedule.js";
 import { lengthNumber } from "../report/format.js";
 import { efficiencyBasisNote } from "../report/summary.js";
@@ -58,7 +59,8 @@ function costTable(s: Schedule): BoxTable {
   return t;
 }
 
-export function formatSchedule(s: Schedule, codeTitle: string, currency: string, effort: ScheduleEffort): string {
+/** The schedule as text; prose wraps to `width` columns (the tables keep one row per line). */
+export function formatSchedule(s: Schedule, codeTitle: string, currency: string, effort: ScheduleEffort, width = PIPED_WIDTH): string {
   const out: string[] = [];
   const t = s.totals;
   const r = s.rules;
@@ -113,5 +115,5 @@ export function formatSchedule(s: Schedule, codeTitle: string, currency: string,
   );
   out.push("");
   out.push(`CAUTION: ${CAUTION}`);
-  return out.join("\n");
+  return wrapProse(out, width).join("\n");
 }

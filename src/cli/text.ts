@@ -93,3 +93,23 @@ export function strengthUtilisationWords(load: { factoredCompression_N?: number 
     ? "factored tension / joint design strength"
     : "the highest demand/resistance of either sense of the load (tension and compression checked separately)";
 }
+
+/**
+ * Lines of a plain-text output laid out for `width`: table lines (box drawing) kept as they are, any
+ * other line longer than the width wrapped with a hanging indent under its label ("Rules:    …") or
+ * two spaces past its own indent.
+ */
+export function wrapProse(lines: readonly string[], width: number): string[] {
+  const out: string[] = [];
+  for (const line of lines.flatMap((l) => l.split("\n"))) {
+    if (visibleLength(line) <= width || /^[┌│├└╔║╟╚]/.test(line)) {
+      out.push(line);
+      continue;
+    }
+    const label = /^(\s*)([A-Za-z][\w ]*:\s+)?/.exec(line)!;
+    const prefix = label[0];
+    const rest = label[2] ? " ".repeat(visibleLength(prefix)) : `${label[1]}  `;
+    out.push(...wrap(line.slice(prefix.length), width, prefix, rest));
+  }
+  return out;
+}
