@@ -4,7 +4,7 @@
  * "450 kN", "0.75 in", "100 kip" are converted. Fields are snake_case in the file.
  */
 import { z } from "zod";
-import { DEFAULT_INPUT_UNIT, parseQuantity, type Quantity, UnitError, US_INPUT_UNIT } from "../units/units.js";
+import { DEFAULT_INPUT_UNIT, parseQuantity, type Quantity, toUnit, UnitError, US_INPUT_UNIT } from "../units/units.js";
 import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
 import { EN10025_CONVENTIONS } from "../catalogue/steels.js";
 import { freeText } from "./text-field.js";
@@ -32,6 +32,12 @@ export function withInputUnits<T>(system: "si" | "us", run: () => T): T {
   } finally {
     inputUnits = saved;
   }
+}
+
+/** A limit in core units as the file would write it: "5000 mm", "1000000 kN"; with `units: us` also in the file's unit. */
+function limitText(q: Quantity, core: number): string {
+  const si = `${+toUnit(core, DEFAULT_INPUT_UNIT[q], q).toFixed(3)} ${DEFAULT_INPUT_UNIT[q]}`;
+  return inputUnits === US_INPUT_UNIT ? `${+toUnit(core, US_INPUT_UNIT[q], q).toFixed(3)} ${US_INPUT_UNIT[q]} (${si})` : si;
 }
 
 function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean; max?: number; min?: () => { value: number; text: string } } = {}) {
@@ -65,7 +71,7 @@ function quantity(q: Quantity, opts: { positive?: boolean; nonNegative?: boolean
       return z.NEVER;
     }
     if (opts.max !== undefined && v > opts.max) {
-      ctx.addIssue({ code: "custom", message: `${String(value)} is beyond the largest accepted value (${opts.max} in core units)` });
+      ctx.addIssue({ code: "custom", message: `${String(value)} is beyond the largest accepted value, ${limitText(q, opts.max)}` });
       return z.NEVER;
     }
     return v;
