@@ -80,6 +80,7 @@ describe("bad input: one line naming the field and the reason, exit 2, no stack 
     ["zero size", base.replace("width: 120", "width: 0"), /plates\.main\.width: must be greater than zero/],
     ["negative size", base.replace("thickness: 10", "thickness: -10"), /plates\.main\.thickness: must be greater than zero/],
     ["unknown grade", base.replace("grade: E250", "grade: E999"), /plates\.main\.grade: unknown IS 2062 grade "E999"/],
+    ["a project file instead of a scenario", readFileSync(scenarioPath("warehouse-roof-project.yaml"), "utf8"), /^splicewright: error: splices: unknown field — this is a project file \(a list of splices\);.* a project goes to `splicewright schedule`$/],
     ["beyond the largest width, the limit in mm", base.replace("width: 120", "width: 220 in"), /plates\.main\.width: 220 in is beyond the largest accepted value, 5000 mm$/],
     ["unknown unit", base.replace("pitch: 50", 'pitch: "50 furlongs"'), /layout\.pitch: unknown length unit "furlongs"/],
     ["force unit for a length", base.replace("pitch: 50", 'pitch: "50 kN"'), /layout\.pitch: unknown length unit "kN"/],

@@ -228,6 +228,7 @@ describe("schedule: bad input gives one line naming the field, exit 2, nothing e
     ["a negative --cost-per-type", () => small(), ["--cost-per-type", "-3"], /^splicewright: error: --cost-per-type: must be a number from 0 to 1000000000, got "-3"/],
     ["enumeration asked for with the minimum-bolts rule", () => small(), ["--method", "enumerate", "--min-bolts-per-type", "5"], /^splicewright: error: --method: enumerate cannot apply the minimum-bolts rule/],
     ["a missing file", () => "/nonexistent/job.yaml", [], /^splicewright: error: \/nonexistent\/job\.yaml: cannot read the file/],
+    ["a scenario file instead of a project", () => scenarioPath("footbridge-tie.yaml"), [], /^splicewright: error: splices: required — this is a scenario file \(one splice\); `schedule` reads a project file/],
   ];
   it.each(cases)("%s", (_, file, args, message) => {
     const r = run([file(), ...args]);

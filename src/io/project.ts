@@ -9,6 +9,7 @@
  * (bearing or friction grip, slip factor, threads, holes).
  */
 import { z } from "zod";
+import { refuseScenarioAsProject } from "./file-kind.js";
 import type { DesignCode } from "../codes/types.js";
 import type { Scenario } from "../model/scenario.js";
 import type { SelectionRules } from "../schedule/selection.js";
@@ -113,6 +114,7 @@ export const codeSpliceOf = (project: Project): ProjectSplice => project.splices
 export function parseProject(text: string): Project {
   const value = parseYaml(text);
   if (value === null || typeof value !== "object" || Array.isArray(value)) throw new InputError("", "the project must be a YAML mapping of fields (project, code, splices, ...)");
+  refuseScenarioAsProject(value as Raw);
   const parsed = projectSchema.safeParse(value);
   if (!parsed.success) throw firstIssue(parsed.error);
   const file = parsed.data;

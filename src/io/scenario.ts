@@ -13,6 +13,7 @@ import { InputError, MAX_FILE_BYTES, parseYaml } from "./yaml.js";
 import { validateCosts } from "./costs.js";
 import { boltTypeOf } from "./bolt-words.js";
 import { parseMapping } from "./equivalents.js";
+import { refuseProjectAsScenario } from "./file-kind.js";
 import type { En10025Convention } from "../catalogue/steels.js";
 
 /** The load section: tension, compression or both (reversal), each with its service value. */
@@ -51,6 +52,7 @@ export function validateFile(value: unknown): ScenarioFile {
   if (value === null || typeof value !== "object" || Array.isArray(value)) {
     throw new InputError("", "the scenario must be a YAML mapping of fields (name, code, splice, plates, load, ...)");
   }
+  refuseProjectAsScenario(value as Record<string, unknown>);
   refuseUnitsForCode(value as Record<string, unknown>);
   const system = (value as Record<string, unknown>).units === "us" ? "us" : "si";
   const result = withInputUnits(system, () => scenarioSchema.safeParse(value));
