@@ -64,6 +64,12 @@ describe("targets before any work", () => {
     const as = process.getuid?.() === 0 ? { uid: 65534, gid: 65534 } : {};
     oneLine(cli(["export", demo, "--format", "svg", "--out", join(dir, "out")], undefined, {}, as), /out: cannot be created: no permission to write in /);
   });
+  it.skipIf(!existsSync("/proc/self"))("a folder that cannot be made on a special file system (/proc) fails at once, one line, exit 2 — never Node's endless recursive mkdir as root", () => {
+    // A hang is killed after 20 s (SIGKILL: the old loop ignored SIGTERM) and fails the test.
+    const p = spawnSync(process.execPath, [BIN, "export", demo, "--format", "svg", "--out", `/proc/splicewright-test-${process.pid}/out`], { encoding: "utf8", timeout: 20_000, killSignal: "SIGKILL" });
+    expect(p.signal, "killed after 20 s").toBeNull();
+    oneLine({ code: p.status ?? -1, stdout: p.stdout, stderr: p.stderr }, /splicewright-test-\d+.*(cannot be created|cannot write the file)/);
+  }, 30_000);
   it("the targets are checked before the search: --save, export --rank and schedule --out name the file, not the search", () => {
     const dir = fresh();
     const taken = join(dir, "taken.yaml");

@@ -77,6 +77,19 @@ export function checkTargets(paths: readonly string[], force: boolean): void {
   }
 }
 
+/**
+ * Create a folder and its missing parents, one level at a time, so that any level that cannot be made
+ * fails at once (Node's recursive mkdir retries for ever on some special file systems, e.g. under /proc).
+ */
+async function makeFolders(dir: string): Promise<void> {
+  const missing: string[] = [];
+  for (let at = resolve(dir); lstatOrNull(at) === null; at = dirname(at)) {
+    missing.push(at);
+    if (dirname(at) === at) break;
+  }
+  for (const folder of missing.reverse()) await mkdir(folder);
+}
+
 /** Where signals come from and how the process ends by one (injectable for tests). */
 export interface SignalHooks {
   on(signal: NodeJS.Signals, listener: () => void): unknown;
@@ -139,7 +152,7 @@ export async function writeFileSet(files: readonly OutputFile[], force: boolean,
   try {
     for (const [i, f] of files.entries()) {
       at = f.path;
-      await mkdir(dirname(f.path), { recursive: true });
+      await makeFolders(dirname(f.path));
       await rm(steps[i]!.temp, { force: true }); // a stale one of an earlier process with this id
       await writeFile(steps[i]!.temp, f.content, { flag: "wx" });
       check(`wrote ${steps[i]!.temp}`);
