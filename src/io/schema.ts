@@ -8,17 +8,9 @@ import { DEFAULT_INPUT_UNIT, parseQuantity, type Quantity, UnitError, US_INPUT_U
 import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
 import { EN10025_CONVENTIONS } from "../catalogue/steels.js";
 import { freeText } from "./text-field.js";
+import { LIMITS } from "./limits.js";
 
-/** Largest values accepted, to stop absurd input before it reaches the core. */
-export const LIMITS = {
-  length_mm: 20_000,
-  thickness_mm: 200,
-  width_mm: 5_000,
-  force_kN: 1_000_000,
-  boltsAcross: 50,
-  linesAlong: 100,
-  holes: 2_000,
-} as const;
+export { LIMITS };
 
 /** What a bare number means while one file is validated (`units: us` → in, kip, ksi); SI otherwise. */
 let inputUnits: Record<Quantity, string> = DEFAULT_INPUT_UNIT;
