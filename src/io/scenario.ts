@@ -53,7 +53,7 @@ export function validateFile(value: unknown): ScenarioFile {
   }
   refuseUnitsForCode(value as Record<string, unknown>);
   const system = (value as Record<string, unknown>).units === "us" ? "us" : "si";
-  const result = withInputUnits(system, () => scenarioSchema.safeParse(value));
+  const result = withInputUnits(system, () => scenarioSchema().safeParse(value));
   if (result.success) return result.data;
   // An unknown field is reported first: a misspelt required field shows up as both "unknown" and
   // "required", and the misspelling is what the engineer has to see.
