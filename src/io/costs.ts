@@ -8,6 +8,7 @@ import { sizeOfKey } from "../catalogue/bolts.js";
 import { InputError, parseYaml } from "./yaml.js";
 import { freeText } from "./text-field.js";
 import { memo } from "./memo.js";
+import { PARSE_OPTIONS } from "./parse-options.js";
 
 /**
  * Largest price of one item (a bolt assembly, a hole, a kg of plate, a tightening): 10⁶ cost units.
@@ -42,7 +43,7 @@ function issueText(e: z.ZodError, prefix: string): InputError {
 
 /** Validate a cost section (from a file or a scenario), with `prefix` naming where it came from. */
 export function validateCosts(value: unknown, prefix: string): CostFile {
-  const r = costSchema().safeParse(value);
+  const r = costSchema().safeParse(value, PARSE_OPTIONS);
   if (!r.success) throw issueText(r.error, prefix);
   return r.data;
 }

@@ -3,6 +3,7 @@ import { z } from "zod";
 import type { CodeMapping } from "../compare/compare.js";
 import { InputError, parseYaml } from "./yaml.js";
 import { memo } from "./memo.js";
+import { PARSE_OPTIONS } from "./parse-options.js";
 
 /** The equivalents table's schema (steel and bolt rows), built on first use. */
 export const mappingSchema = memo(() => {
@@ -11,7 +12,7 @@ export const mappingSchema = memo(() => {
 });
 
 export function parseMapping(value: unknown, where: string): CodeMapping {
-  const r = mappingSchema().safeParse(value);
+  const r = mappingSchema().safeParse(value, PARSE_OPTIONS);
   if (!r.success) {
     const issue = r.error.issues[0]!;
     throw new InputError([where, ...issue.path.map(String)].join("."), issue.message);

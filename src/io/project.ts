@@ -19,6 +19,7 @@ import { scenarioSchema, type ScenarioFile } from "./schema.js";
 import { InputError, parseYaml } from "./yaml.js";
 import { freeText } from "./text-field.js";
 import { memo } from "./memo.js";
+import { PARSE_OPTIONS } from "./parse-options.js";
 
 /** Largest fixed cost of stocking one bolt type (cost units): finite, far beyond any real figure. */
 export const MAX_COST_PER_TYPE = 1_000_000_000;
@@ -122,7 +123,7 @@ export const codeSpliceOf = (project: Project): ProjectSplice => project.splices
 export function parseProject(text: string): Project {
   const value = parseYaml(text);
   if (value === null || typeof value !== "object" || Array.isArray(value)) throw new InputError("", "the project must be a YAML mapping of fields (project, code, splices, ...)");
-  const parsed = projectSchema().safeParse(value);
+  const parsed = projectSchema().safeParse(value, PARSE_OPTIONS);
   if (!parsed.success) throw firstIssue(parsed.error);
   const file = parsed.data;
   const raw = value as Raw;
@@ -160,13 +161,13 @@ export function parseProject(text: string): Project {
       plates: s.plates,
       load: s.load,
       costs: file.costs,
-      options: piece.options.parse(merged("options")),
+      options: piece.options.parse(merged("options"), PARSE_OPTIONS),
     };
     if (s.packing !== undefined) scenarioFile.packing = s.packing;
-    if (raw.search !== undefined || own.search !== undefined) scenarioFile.search = piece.search.parse(merged("search"));
+    if (raw.search !== undefined || own.search !== undefined) scenarioFile.search = piece.search.parse(merged("search"), PARSE_OPTIONS);
     if (raw.bolts !== undefined || own.bolts !== undefined) {
       // Size and class are the search's to choose; these stand in only until it does.
-      scenarioFile.bolts = { ...assembly.parse(merged("bolts")), size: 20, class: "8.8" };
+      scenarioFile.bolts = { ...assembly.parse(merged("bolts"), PARSE_OPTIONS), size: 20, class: "8.8" };
     }
     let scenario: Scenario;
     try {
