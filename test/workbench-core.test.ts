@@ -118,8 +118,8 @@ function fillFieldByField(file: Record<string, unknown>): ScenarioDocument {
 
 describe("the form covers the scenario file", () => {
   it("has one field for every field the schema accepts, and none it does not (costs and compare by their own schemas)", () => {
-    const leaves = schemaLeaves(scenarioSchema).filter((p) => p !== "costs" && p !== "compare");
-    leaves.push(...schemaLeaves(costSchema).map((p) => `costs.${p}`), ...schemaLeaves(mappingSchema).map((p) => `compare.${p}`));
+    const leaves = schemaLeaves(scenarioSchema()).filter((p) => p !== "costs" && p !== "compare");
+    leaves.push(...schemaLeaves(costSchema()).map((p) => `costs.${p}`), ...schemaLeaves(mappingSchema()).map((p) => `compare.${p}`));
     expect(FIELDS.map((f: Field) => fieldKey(f.path)).sort()).toEqual([...new Set(leaves)].sort());
   });
 

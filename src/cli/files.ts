@@ -14,7 +14,7 @@
 import { accessSync, constants, lstatSync, statSync, type Stats } from "node:fs";
 import { mkdir, rename, rm, writeFile } from "node:fs/promises";
 import { basename, dirname, join, resolve } from "node:path";
-import { InputError } from "../io/yaml.js";
+import { InputError } from "../io/input-error.js";
 
 export interface OutputFile {
   path: string;

@@ -2,7 +2,7 @@
  * Numbers given on the command line, each bounded: bad values are one-line input errors (exit 2).
  */
 import { availableParallelism } from "node:os";
-import { InputError } from "../io/yaml.js";
+import { InputError } from "../io/input-error.js";
 
 /** Most layouts `search --top` shows and the deepest `--rank` (search, export, report): 1000. */
 export const MAX_TOP = 1000;

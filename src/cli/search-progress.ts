@@ -44,3 +44,13 @@ export class SearchProgress {
     this.shown = false;
   }
 }
+
+/** A search with a progress line on a terminal after 2 s (search, and --rank of export and report). */
+export function withProgress<T>(top: number, run: (onProgress: SearchProgress["update"]) => T): T {
+  const progress = new SearchProgress(process.stderr, "searching", top);
+  try {
+    return run(progress.update);
+  } finally {
+    progress.finish();
+  }
+}

@@ -9,9 +9,9 @@ import { billOfMaterialsCsv, holeScheduleCsv } from "./csv.js";
 import { renderDxf } from "./dxf.js";
 import { exportJson } from "./json.js";
 import { layoutSheet, renderSvg } from "./svg.js";
+import { EXPORT_FORMATS, type ExportFormat } from "./formats.js";
 
-export const EXPORT_FORMATS = ["svg", "dxf", "csv", "json"] as const;
-export type ExportFormat = (typeof EXPORT_FORMATS)[number];
+export { EXPORT_FORMATS, type ExportFormat };
 
 export interface ExportFile {
   name: string;

@@ -7,6 +7,8 @@ import type { CostTable } from "../catalogue/costs.js";
 import { sizeOfKey } from "../catalogue/bolts.js";
 import { InputError, parseYaml } from "./yaml.js";
 import { freeText } from "./text-field.js";
+import { memo } from "./memo.js";
+import { PARSE_OPTIONS } from "./parse-options.js";
 
 /**
  * Largest price of one item (a bolt assembly, a hole, a kg of plate, a tightening): 10⁶ cost units.
@@ -14,18 +16,20 @@ import { freeText } from "./text-field.js";
  */
 export const MAX_PRICE = 1_000_000;
 
-const price = z.number().nonnegative("must not be negative").max(MAX_PRICE, `must be at most ${MAX_PRICE} (a price of one item)`);
-const classPrices = z.record(z.string().regex(/^(4\.6|5\.6|8\.8|10\.9)$/, "a property class: 4.6, 5.6, 8.8 or 10.9"), price);
-
-export const costSchema = z.strictObject({
-  currency: freeText().optional(),
-  bolt_assembly: z.record(z.string().refine((k) => sizeOfKey(k) !== undefined, "a bolt size such as M20 or 3/4 in"), classPrices).optional(),
-  hole: price.optional(),
-  plate_per_kg: price.optional(),
-  friction_grip_extra: price.optional(),
+/** The cost file's schema, built on first use (one price schema for every price field). */
+export const costSchema = memo(() => {
+  const price = z.number().nonnegative("must not be negative").max(MAX_PRICE, `must be at most ${MAX_PRICE} (a price of one item)`);
+  const classPrices = z.record(z.string().regex(/^(4\.6|5\.6|8\.8|10\.9)$/, "a property class: 4.6, 5.6, 8.8 or 10.9"), price);
+  return z.strictObject({
+    currency: freeText().optional(),
+    bolt_assembly: z.record(z.string().refine((k) => sizeOfKey(k) !== undefined, "a bolt size such as M20 or 3/4 in"), classPrices).optional(),
+    hole: price.optional(),
+    plate_per_kg: price.optional(),
+    friction_grip_extra: price.optional(),
+  });
 });
 
-export type CostFile = z.infer<typeof costSchema>;
+export type CostFile = z.infer<ReturnType<typeof costSchema>>;
 
 function issueText(e: z.ZodError, prefix: string): InputError {
   const issue = e.issues[0]!;
@@ -39,7 +43,7 @@ function issueText(e: z.ZodError, prefix: string): InputError {
 
 /** Validate a cost section (from a file or a scenario), with `prefix` naming where it came from. */
 export function validateCosts(value: unknown, prefix: string): CostFile {
-  const r = costSchema.safeParse(value);
+  const r = costSchema().safeParse(value, PARSE_OPTIONS);
   if (!r.success) throw issueText(r.error, prefix);
   return r.data;
 }

@@ -2,7 +2,7 @@
  * Scenario file or project file: a file of the other kind is refused with one line that says which it
  * is and which command reads it, before its fields are read as the wrong kind's.
  */
-import { InputError } from "./yaml.js";
+import { InputError } from "./input-error.js";
 
 /** A project file (a list of splices) given where one scenario is read. */
 export function refuseProjectAsScenario(file: Record<string, unknown>): void {

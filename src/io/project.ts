@@ -15,9 +15,12 @@ import type { Scenario } from "../model/scenario.js";
 import type { SelectionRules } from "../schedule/selection.js";
 import { validateCosts, type CostFile } from "./costs.js";
 import { toScenario } from "./scenario.js";
-import { scenarioSchema, LIMITS, type ScenarioFile } from "./schema.js";
+import { LIMITS } from "./limits.js";
+import { scenarioSchema, type ScenarioFile } from "./schema.js";
 import { InputError, parseYaml } from "./yaml.js";
 import { freeText } from "./text-field.js";
+import { memo } from "./memo.js";
+import { PARSE_OPTIONS } from "./parse-options.js";
 
 /** Largest fixed cost of stocking one bolt type (cost units): finite, far beyond any real figure. */
 export const MAX_COST_PER_TYPE = 1_000_000_000;
@@ -25,40 +28,47 @@ export const MAX_COST_PER_TYPE = 1_000_000_000;
 /** Most splices in one project file. */
 export const MAX_SPLICES = 5000;
 
-const piece = scenarioSchema.shape;
-/** The bolts section without size and class: the assembly kind and its details. */
-const assembly = piece.bolts.unwrap().omit({ size: true, class: true });
-
-const spliceEntry = z.strictObject({
-  id: freeText().pipe(z.string().trim().min(1, "must not be empty")),
-  mark: freeText().optional(),
-  description: freeText({ lines: true }).optional(),
-  quantity: z.number().int("must be a whole number").min(1, "must be at least 1").max(10_000, "must be at most 10000").default(1),
-  splice: piece.splice,
-  plates: piece.plates,
-  packing: piece.packing,
-  load: piece.load,
-  bolts: assembly.optional(),
-  search: piece.search,
-  options: piece.options.optional(),
+/** The scenario file's schema pieces a project reuses, and its bolts section without size and class (the assembly). */
+const scenarioPieces = memo(() => {
+  const piece = scenarioSchema().shape;
+  return { piece, assembly: piece.bolts.unwrap().omit({ size: true, class: true }) };
 });
 
-const scheduleSection = z.strictObject({
-  max_types: z.number().int("must be a whole number").min(1, "must be at least 1").max(LIMITS.holes).optional(),
-  cost_per_type: z.number().nonnegative("must not be negative").max(MAX_COST_PER_TYPE, `must be at most ${MAX_COST_PER_TYPE}`).default(0),
-  one_class_per_diameter: z.boolean().default(false),
-  min_bolts_per_type: z.number().int("must be a whole number").nonnegative("must not be negative").default(0),
-});
+/** The project file's schema, built on first use from the scenario file's own pieces. */
+export const projectSchema = memo(() => {
+  const { piece, assembly } = scenarioPieces();
+  const spliceEntry = z.strictObject({
+    id: freeText().pipe(z.string().trim().min(1, "must not be empty")),
+    mark: freeText().optional(),
+    description: freeText({ lines: true }).optional(),
+    quantity: z.number().int("must be a whole number").min(1, "must be at least 1").max(10_000, "must be at most 10000").default(1),
+    splice: piece.splice,
+    plates: piece.plates,
+    packing: piece.packing,
+    load: piece.load,
+    bolts: assembly.optional(),
+    search: piece.search,
+    options: piece.options.optional(),
+  });
 
-export const projectSchema = z.strictObject({
-  project: freeText().pipe(z.string().trim().min(1, "must not be empty")),
-  code: piece.code,
-  costs: piece.costs,
-  search: piece.search,
-  bolts: assembly.optional(),
-  options: piece.options.optional(),
-  schedule: scheduleSection.default({ cost_per_type: 0, one_class_per_diameter: false, min_bolts_per_type: 0 }),
-  splices: z.array(spliceEntry).min(1, "list at least one splice").max(MAX_SPLICES, `at most ${MAX_SPLICES} splices`),
+  const scheduleSection = z.strictObject({
+    max_types: z.number().int("must be a whole number").min(1, "must be at least 1").max(LIMITS.holes).optional(),
+    cost_per_type: z.number().nonnegative("must not be negative").max(MAX_COST_PER_TYPE, `must be at most ${MAX_COST_PER_TYPE}`).default(0),
+    one_class_per_diameter: z.boolean().default(false),
+    min_bolts_per_type: z.number().int("must be a whole number").nonnegative("must not be negative").default(0),
+  });
+
+  const project = z.strictObject({
+    project: freeText().pipe(z.string().trim().min(1, "must not be empty")),
+    code: piece.code,
+    costs: piece.costs,
+    search: piece.search,
+    bolts: assembly.optional(),
+    options: piece.options.optional(),
+    schedule: scheduleSection.default({ cost_per_type: 0, one_class_per_diameter: false, min_bolts_per_type: 0 }),
+    splices: z.array(spliceEntry).min(1, "list at least one splice").max(MAX_SPLICES, `at most ${MAX_SPLICES} splices`),
+  });
+  return project;
 });
 
 export interface ProjectSplice {
@@ -115,12 +125,13 @@ export function parseProject(text: string): Project {
   const value = parseYaml(text);
   if (value === null || typeof value !== "object" || Array.isArray(value)) throw new InputError("", "the project must be a YAML mapping of fields (project, code, splices, ...)");
   refuseScenarioAsProject(value as Raw);
-  const parsed = projectSchema.safeParse(value);
+  const parsed = projectSchema().safeParse(value, PARSE_OPTIONS);
   if (!parsed.success) throw firstIssue(parsed.error);
   const file = parsed.data;
   const raw = value as Raw;
   const rawSplices = raw.splices as unknown[];
   const costs = file.costs === undefined ? undefined : validateCosts(file.costs, "costs");
+  const { piece, assembly } = scenarioPieces();
   const seen = new Map<string, number>();
   let code: DesignCode | undefined;
   const splices = file.splices.map((s, i): ProjectSplice => {
@@ -152,13 +163,13 @@ export function parseProject(text: string): Project {
       plates: s.plates,
       load: s.load,
       costs: file.costs,
-      options: piece.options.parse(merged("options")),
+      options: piece.options.parse(merged("options"), PARSE_OPTIONS),
     };
     if (s.packing !== undefined) scenarioFile.packing = s.packing;
-    if (raw.search !== undefined || own.search !== undefined) scenarioFile.search = piece.search.parse(merged("search"));
+    if (raw.search !== undefined || own.search !== undefined) scenarioFile.search = piece.search.parse(merged("search"), PARSE_OPTIONS);
     if (raw.bolts !== undefined || own.bolts !== undefined) {
       // Size and class are the search's to choose; these stand in only until it does.
-      scenarioFile.bolts = { ...assembly.parse(merged("bolts")), size: 20, class: "8.8" };
+      scenarioFile.bolts = { ...assembly.parse(merged("bolts"), PARSE_OPTIONS), size: 20, class: "8.8" };
     }
     let scenario: Scenario;
     try {

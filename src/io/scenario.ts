@@ -14,6 +14,7 @@ import { validateCosts } from "./costs.js";
 import { boltTypeOf } from "./bolt-words.js";
 import { parseMapping } from "./equivalents.js";
 import { refuseProjectAsScenario } from "./file-kind.js";
+import { PARSE_OPTIONS } from "./parse-options.js";
 import type { En10025Convention } from "../catalogue/steels.js";
 
 /** The load section: tension, compression or both (reversal), each with its service value. */
@@ -55,7 +56,7 @@ export function validateFile(value: unknown): ScenarioFile {
   refuseProjectAsScenario(value as Record<string, unknown>);
   refuseUnitsForCode(value as Record<string, unknown>);
   const system = (value as Record<string, unknown>).units === "us" ? "us" : "si";
-  const result = withInputUnits(system, () => scenarioSchema.safeParse(value));
+  const result = withInputUnits(system, () => scenarioSchema().safeParse(value, PARSE_OPTIONS));
   if (result.success) return result.data;
   // An unknown field is reported first: a misspelt required field shows up as both "unknown" and
   // "required", and the misspelling is what the engineer has to see.

@@ -8,17 +8,10 @@ import { DEFAULT_INPUT_UNIT, parseQuantity, type Quantity, toUnit, UnitError, US
 import { EDGE_PREPARATIONS, HOLE_TYPES } from "../model/scenario.js";
 import { EN10025_CONVENTIONS } from "../catalogue/steels.js";
 import { freeText } from "./text-field.js";
+import { LIMITS } from "./limits.js";
+import { memo } from "./memo.js";
 
-/** Largest values accepted, to stop absurd input before it reaches the core. */
-export const LIMITS = {
-  length_mm: 20_000,
-  thickness_mm: 200,
-  width_mm: 5_000,
-  force_kN: 1_000_000,
-  boltsAcross: 50,
-  linesAlong: 100,
-  holes: 2_000,
-} as const;
+export { LIMITS };
 
 /** What a bare number means while one file is validated (`units: us` → in, kip, ksi); SI otherwise. */
 let inputUnits: Record<Quantity, string> = DEFAULT_INPUT_UNIT;
@@ -84,15 +77,15 @@ const force = () => quantity("force", { positive: true, max: LIMITS.force_kN * 1
 
 const count = (max: number) => z.number().int("must be a whole number").min(1, "must be at least 1").max(max, `must be at most ${max}`);
 
-const plate = z.strictObject({
+const plate = memo(() => z.strictObject({
   width: length(LIMITS.width_mm),
   thickness: length(LIMITS.thickness_mm),
   grade: z.string().min(1),
   edges: z.enum(EDGE_PREPARATIONS as [string, ...string[]]).default("rolled"),
-});
+}));
 
 /** Bolt size: "M20" or 20; an inch size "3/4 in", "0.75 in" (or 0.75 with units: us), as mm. */
-const boltSize = z.union([z.number(), z.string()]).transform((v, ctx): number => {
+const boltSize = memo(() => z.union([z.number(), z.string()]).transform((v, ctx): number => {
   const text = String(v).trim();
   if (inputUnits === US_INPUT_UNIT && typeof v === "number") return v * 25.4;
   if (/in$/i.test(text)) {
@@ -109,14 +102,14 @@ const boltSize = z.union([z.number(), z.string()]).transform((v, ctx): number =>
     return z.NEVER;
   }
   return Number(m[1]);
-});
+}));
 
 /** Property class "8.8" (a YAML number 8.8 is accepted too). */
-const propertyClass = z.union([z.number(), z.string()]).transform((v) => (typeof v === "number" ? v.toFixed(1) : v.trim()));
+const propertyClass = memo(() => z.union([z.number(), z.string()]).transform((v) => (typeof v === "number" ? v.toFixed(1) : v.trim())));
 
-const bolts = z.strictObject({
-  size: boltSize,
-  class: propertyClass,
+const bolts = memo(() => z.strictObject({
+  size: boltSize(),
+  class: propertyClass(),
   // No default: the bolt type may be given in the code's own words instead (src/io/bolt-words.ts).
   type: z.enum(["bearing", "friction-grip"]).optional(),
   /** EN 1993-1-8 3.4.1: Category A (bearing type), B (slip-resistant at SLS), C (slip-resistant at ULS). */
@@ -132,14 +125,14 @@ const bolts = z.strictObject({
   threads_in_shear_planes: z.boolean().optional(),
   hole: z.enum(HOLE_TYPES as [string, ...string[]]).default("standard"),
   slot_direction: z.enum(["along", "across"]).optional(),
-});
+}));
 
-const holePoint = z.union([
+const holePoint = memo(() => z.union([
   z.strictObject({ x: lengthOrZero(), y: quantity("length", { max: LIMITS.width_mm }) }),
   z.tuple([lengthOrZero(), quantity("length", { max: LIMITS.width_mm })]).transform(([x, y]) => ({ x, y })),
-]);
+]));
 
-const layout = z.strictObject({
+const layout = memo(() => z.strictObject({
   pattern: z.enum(["grid", "staggered", "tapered", "holes"]),
   across: count(LIMITS.boltsAcross).optional(),
   along: count(LIMITS.linesAlong).optional(),
@@ -149,8 +142,8 @@ const layout = z.strictObject({
   end_distance: length().optional(),
   end_distance_at_butt: length().optional(),
   edge_distance: length().optional(),
-  holes: z.array(holePoint).min(1).max(LIMITS.holes).optional(),
-});
+  holes: z.array(holePoint()).min(1).max(LIMITS.holes).optional(),
+}));
 
 /**
  * The smallest search step: 1 mm, or 1/16 in (1.5875 mm) for a file in US units — finer steps than a
@@ -161,12 +154,12 @@ export const MIN_SEARCH_STEP = { si: { value: 1, text: "1 mm" }, us: { value: 25
 /** Longest lists of the search section (sizes, classes, cover thicknesses), beyond any real choice. */
 export const MAX_SEARCH_LIST = 20;
 
-const search = z.strictObject({
+const search = memo(() => z.strictObject({
   patterns: z.array(z.enum(["grid", "staggered", "tapered"])).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
   max_along: count(LIMITS.linesAlong).optional(),
   min_bolts: count(LIMITS.holes).optional(),
-  sizes: z.array(boltSize).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
-  classes: z.array(propertyClass).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
+  sizes: z.array(boltSize()).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
+  classes: z.array(propertyClass()).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
   step: quantity("length", { positive: true, max: 1000, min: () => (inputUnits === US_INPUT_UNIT ? MIN_SEARCH_STEP.us : MIN_SEARCH_STEP.si) }).optional(),
   max_splice_length: length().optional(),
   max_end_distance: length().optional(),
@@ -174,9 +167,9 @@ const search = z.strictObject({
   min_across: count(LIMITS.boltsAcross).optional(),
   gauge: length().optional(),
   cover_thicknesses: z.array(length(LIMITS.thickness_mm)).min(1).max(MAX_SEARCH_LIST, `at most ${MAX_SEARCH_LIST} entries`).optional(),
-});
+}));
 
-const options = z.strictObject({
+const options = memo(() => z.strictObject({
   exposed_to_corrosion: z.boolean().default(false),
   // No default here: the design code supplies it (src/io/scenario.ts), so a code can tell an explicit choice.
   bolt_net_area: z.enum(["0.78-gross", "iso-stress-area"]).optional(),
@@ -188,21 +181,21 @@ const options = z.strictObject({
   fillers_developed: z.boolean().optional(),
   steel_strengths: z.enum(EN10025_CONVENTIONS as [string, ...string[]]).optional(),
   small_bolt_clearance: z.number().refine((v) => v === 1 || v === 2, "must be 1 or 2 (mm: the normal-hole clearance of M12 and M14 bolts)").optional(),
-});
+}));
 
 /** A partial factor of a national annex: a plain number from 1.0 to 2.0. */
 const partialFactor = () => z.number().min(1, "must be at least 1.0").max(2, "must be at most 2.0");
 
-const factors = z.strictObject({
+const factors = memo(() => z.strictObject({
   gamma_m0: partialFactor().optional(),
   gamma_m1: partialFactor().optional(),
   gamma_m2: partialFactor().optional(),
   gamma_m3: partialFactor().optional(),
   gamma_m3_ser: partialFactor().optional(),
-});
+}));
 
 /** The document fields a drawing's title block and a report's sign-off block carry (all optional, free text). */
-const documentInfo = z.strictObject({
+const documentInfo = memo(() => z.strictObject({
   job: freeText().optional(),
   drawing_number: freeText().optional(),
   calculation_number: freeText().optional(),
@@ -211,12 +204,13 @@ const documentInfo = z.strictObject({
   prepared_by: freeText().optional(),
   checked_by: freeText().optional(),
   date: freeText().optional(),
-});
+}));
 
-export const scenarioSchema = z.strictObject({
+/** The scenario file's schema, built on first use (with its pieces above). */
+export const scenarioSchema = memo(() => z.strictObject({
   name: freeText().pipe(z.string().min(1, "must not be empty")),
   project: freeText().optional(),
-  document: documentInfo.optional(),
+  document: documentInfo().optional(),
   units: z.enum(["si", "us"]).optional(),
   code: z.string().min(1),
   splice: z.strictObject({
@@ -225,10 +219,10 @@ export const scenarioSchema = z.strictObject({
     ends_in_contact: z.boolean().optional(),
   }),
   plates: z.strictObject({
-    main: plate,
-    main_b: plate.optional(),
-    cover: plate.optional(),
-    cover_b: plate.optional(),
+    main: plate(),
+    main_b: plate().optional(),
+    cover: plate().optional(),
+    cover_b: plate().optional(),
   }),
   packing: z.union([z.literal("auto"), lengthOrZero(LIMITS.thickness_mm)]).optional(),
   load: z.strictObject({
@@ -237,13 +231,13 @@ export const scenarioSchema = z.strictObject({
     factored_compression: force().optional(),
     service_compression: force().optional(),
   }),
-  bolts: bolts.optional(),
-  layout: layout.optional(),
-  search: search.optional(),
+  bolts: bolts().optional(),
+  layout: layout().optional(),
+  search: search().optional(),
   costs: z.unknown().optional(),
   compare: z.unknown().optional(),
-  options: options.default({ exposed_to_corrosion: false, net_section_load: "full", block_shear_load: "share", efficiency_basis: "lesser" }),
-  factors: factors.optional(),
-});
+  options: options().default({ exposed_to_corrosion: false, net_section_load: "full", block_shear_load: "share", efficiency_basis: "lesser" }),
+  factors: factors().optional(),
+}));
 
-export type ScenarioFile = z.infer<typeof scenarioSchema>;
+export type ScenarioFile = z.infer<ReturnType<typeof scenarioSchema>>;

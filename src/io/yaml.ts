@@ -1,17 +1,10 @@
 /**
- * YAML text → plain value, and the one error type for bad input.
+ * YAML text → plain value. The error type for bad input (input-error.ts) is exported here too.
  */
 import { isAlias, isMap, isScalar, isSeq, parseDocument, type Document, type Node } from "yaml";
+import { InputError } from "./input-error.js";
 
-/** Bad input: the field path and the reason. Printed as one line, exit code 2. */
-export class InputError extends Error {
-  constructor(
-    readonly path: string,
-    readonly reason: string,
-  ) {
-    super(path ? `${path}: ${reason}` : reason);
-  }
-}
+export { InputError };
 
 /** Largest scenario file accepted, bytes. */
 export const MAX_FILE_BYTES = 1_000_000;

@@ -4,10 +4,9 @@
  */
 import { readMipAnswer, type SelectionLp } from "./mip.js";
 import { enumerateSelection, evaluateAssignment, fewestTypes, subsetCount, type Assignment, type SelectionProblem } from "./selection.js";
+import { METHOD_REQUESTS, type Method, type MethodRequest } from "./method.js";
 
-export type Method = "enumeration" | "integer programme";
-export type MethodRequest = "auto" | "enumerate" | "mip";
-export const METHOD_REQUESTS: readonly MethodRequest[] = ["auto", "enumerate", "mip"];
+export { METHOD_REQUESTS, type Method, type MethodRequest };
 
 /** Above this many candidate subsets `auto` uses the integer programme (../shared/solvers.md). */
 export const ENUMERATION_LIMIT = 200_000;

@@ -13,6 +13,7 @@
  * against the families' own ranges.
  */
 import { boltPrice, type CostTable } from "../catalogue/costs.js";
+import { WorkLimitError } from "./work-limit.js";
 import type { DesignCode, SearchLimits } from "../codes/types.js";
 import type { Scenario, SearchSpec } from "../model/scenario.js";
 import { boltSpecFor, dimensionRanges, gaugesFor, minAcrossOf, narrowestWidth, resolveSpace, taperedGaugesFor, withCover, type SearchPattern, type SearchSpace } from "./space.js";
@@ -194,16 +195,7 @@ export function bestNarrowing(scenario: Scenario, code: DesignCode, costs: CostT
   return best;
 }
 
-/** A search refused for its size: bad input of the field it names (exit 2 in the CLI). */
-export class WorkLimitError extends Error {
-  constructor(
-    readonly path: string,
-    readonly reason: string,
-    readonly candidates: number,
-  ) {
-    super(`${path}: ${reason}`);
-  }
-}
+export { WorkLimitError };
 
 /** A count in words: "12 400", or "3.1 × 10^9" from ten million up. */
 export function countText(n: number): string {
