@@ -8,6 +8,7 @@ import { compareJson } from "../report/compare-json.js";
 import { formatCompare } from "./compare-table.js";
 import { BUNDLED_EQUIVALENTS, loadCosts, readScenarioText } from "./inputs.js";
 import type { Io } from "./output.js";
+import { outputWidth } from "./text.js";
 
 export interface CompareCommandOptions {
   classes?: string;
@@ -24,6 +25,6 @@ export function runCompare(file: string, opts: CompareCommandOptions, io: Io): n
   const costs = loadCosts(opts.costs, scenario.costs);
   const columns = compareRequest(scenario, code, opts, costs, () => readScenarioText(BUNDLED_EQUIVALENTS), opts.maxCandidates === undefined ? {} : { maxCandidates: opts.maxCandidates });
   const basis = scenario.options.efficiencyBasis;
-  io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis, scenario.load));
+  io.out(opts.json ? JSON.stringify(compareJson(scenario.name, columns, costs.currency, basis), null, 2) : formatCompare(scenario.name, columns, costs.currency, basis, scenario.load, outputWidth(io.stdout ?? {})));
   return columns.some((c) => c.best) ? 0 : 1;
 }

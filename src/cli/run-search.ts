@@ -11,6 +11,7 @@ import { searchLayouts } from "../search/search.js";
 import { checkTargets, writeFileSet } from "./files.js";
 import { loadCosts, readScenarioText } from "./inputs.js";
 import type { Io } from "./output.js";
+import { outputWidth } from "./text.js";
 import { withProgress } from "./search-progress.js";
 import { formatSearch } from "./search-table.js";
 
@@ -48,7 +49,7 @@ export async function runSearch(file: string, opts: SearchCommandOptions, io: Io
   io.out(
     opts.json
       ? JSON.stringify(searchJson(scenario.name, shown, opts.rankBy, costs.currency, { variants, efficiencyBasis: scenario.options.efficiencyBasis }), null, 2)
-      : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed, variants),
+      : formatSearch(scenario, shown, opts.rankBy, costs.currency, code.title, elapsed, variants, outputWidth(io.stdout ?? {})),
   );
   if (opts.save && outcome.results[opts.rank - 1]) io.err(`saved result ${opts.rank} to ${opts.save}`);
   return outcome.results.length > 0 ? 0 : 1;

@@ -8,11 +8,8 @@ import { LIMITS } from "../io/limits.js";
 import { METHOD_REQUESTS } from "../schedule/method.js";
 import { amount, MAX_AMOUNT, MAX_TIME_LIMIT_S, maxCandidatesOption, maxWorkers, wholeNumber } from "./options.js";
 import type { ScheduleOptions } from "./schedule-run.js";
+import type { Io } from "./output.js";
 
-interface Io {
-  out: (text: string) => void;
-  err: (text: string) => void;
-}
 
 /** Largest --min-bolts-per-type: every bolt of the largest job (10 000 of each of 5 000 splices × 2 000 bolts). */
 const MAX_MIN_BOLTS = 100_000_000_000;

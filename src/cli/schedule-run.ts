@@ -23,11 +23,9 @@ import { solveWithHighs } from "./schedule-highs.js";
 import { defaultWorkers, searchSplices, type PoolResult } from "./schedule-pool.js";
 import { ProgressBar } from "./schedule-progress.js";
 import { formatSchedule } from "./schedule-table.js";
+import { outputWidth } from "./text.js";
+import type { Io } from "./output.js";
 
-interface Io {
-  out: (text: string) => void;
-  err: (text: string) => void;
-}
 
 export interface ScheduleOptions {
   maxTypes?: number;
@@ -158,7 +156,7 @@ async function scheduleSearched(found: Searched, opts: ScheduleOptions, bar: Pro
       const [csvPath, orderPath, jsonPath] = targets as [string, string, string];
       await writeFileSet([{ path: csvPath, content: scheduleCsv(schedule) }, { path: orderPath, content: orderCsv(schedule) }, { path: jsonPath, content: JSON.stringify(json, null, 2) + "\n" }], opts.force ?? false);
     }
-    printed = opts.json ? JSON.stringify({ scheduled: true, ...json, effort }, null, 2) : formatSchedule(schedule, project.code.title, costs.currency, effort);
+    printed = opts.json ? JSON.stringify({ scheduled: true, ...json, effort }, null, 2) : formatSchedule(schedule, project.code.title, costs.currency, effort, outputWidth(io.stdout ?? {}));
   } finally {
     bar.finish();
   }
