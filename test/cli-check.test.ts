@@ -106,6 +106,14 @@ describe("bad input: one line naming the field and the reason, exit 2, no stack 
     expect(r.stderr).not.toMatch(/\n\s+at /);
   });
 
+  it.each([["--brief"], ["--width", "120"]])("%s with --json is one line naming the option, exit 2 (it lays out the sheet, which --json replaces)", (...option) => {
+    const r = cli(["check", scenarioPath("footbridge-tie.yaml"), "--json", ...option]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe("");
+    expect(r.stderr.trim().split("\n")).toHaveLength(1);
+    expect(r.stderr).toMatch(new RegExp(`^splicewright: error: ${option[0]}: lays out the calculation sheet, and --json prints every check in full instead`));
+  });
+
   it("a missing file names the file", () => {
     const r = cli(["check", "no-such-file.yaml"]);
     expect(r.code).toBe(2);

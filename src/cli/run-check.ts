@@ -5,6 +5,7 @@
 import { checkScenario, exitCodeOf } from "../engine/check.js";
 import { parseScenario, requireCheckable } from "../io/scenario.js";
 import { checkReportJson } from "../report/check-json.js";
+import { InputError } from "../io/input-error.js";
 import { readScenarioText } from "./inputs.js";
 import type { Io } from "./output.js";
 import { formatSheet } from "./sheet.js";
@@ -19,6 +20,9 @@ export interface CheckCommandOptions {
 
 /** Print the check; the exit code is 0 when every check passes, 1 when one fails. */
 export function runCheck(file: string, opts: CheckCommandOptions, io: Io): number {
+  if (opts.json && (opts.brief || opts.width !== undefined)) {
+    throw new InputError(opts.brief ? "--brief" : "--width", "lays out the calculation sheet, and --json prints every check in full instead: give one or the other");
+  }
   const parsed = parseScenario(readScenarioText(file));
   const scenario = requireCheckable(parsed.scenario, parsed.code);
   const { joint, report } = checkScenario(scenario, parsed.code);
