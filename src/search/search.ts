@@ -119,11 +119,28 @@ interface LinearModel {
   leb: number;
 }
 
-type Node =
-  | { kind: "family"; key: Key; f: Family }
-  | { kind: "dims"; key: Key; f: Family; ip: number; ie: number; ieb: number }
-  | { kind: "tapered"; key: Key; f: Family; ip: number; ie: number; ieb: number; gauges: number[]; stream: TaperedStream; index: number }
-  | { kind: "result"; key: Key; c: Candidate };
+/**
+ * A node of the search. Every kind has the same fields, made in the same order by `nodeOf`: one object
+ * shape, so the heap and the loop read nodes at one place each (fields a kind does not use are 0 or null).
+ */
+interface NodeFields {
+  kind: "family" | "dims" | "tapered" | "result";
+  key: Key;
+  f: Family;
+  ip: number;
+  ie: number;
+  ieb: number;
+  gauges: number[] | null;
+  stream: TaperedStream | null;
+  index: number;
+  c: Candidate | null;
+}
+
+type Node = NodeFields & ({ kind: "family" } | { kind: "dims" } | { kind: "tapered"; gauges: number[]; stream: TaperedStream } | { kind: "result"; c: Candidate });
+
+function nodeOf(kind: Node["kind"], key: Key, f: Family, ip: number, ie: number, ieb: number, gauges: number[] | null, stream: TaperedStream | null, index: number, c: Candidate | null): Node {
+  return { kind, key, f, ip, ie, ieb, gauges, stream, index, c } as Node;
+}
 
 export interface SearchContext {
   scenario: Scenario;
@@ -163,21 +180,33 @@ export function arrangementOf(c: Candidate): string {
   return arrangementText(c.family.size_mm, c.family.propertyClass, c.family.pattern, c.counts);
 }
 
-function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel | null {
+/**
+ * Joints built for cost fits, by their geometry (bolt size, cover thickness, pattern, counts and
+ * dimensions), within one search. Families that differ only in property class build the same joint:
+ * the geometry builder reads the bolt's size and hole, never its class, and a fit prices each joint
+ * with its own family's class.
+ */
+type FitJoints = Map<string, Joint>;
+
+function fitJoint(ctx: SearchContext, f: Family, joints: FitJoints, p: number, g: number, e: number, eb: number | undefined, counts: number[]): Joint {
+  const key = `${f.size_mm}|${f.coverThickness_mm}|${f.pattern}|${f.across}|${counts.join("-")}|${p}|${g}|${e}|${eb}`;
+  let joint = joints.get(key);
+  if (!joint) {
+    joint = buildJoint(scenarioOf(f, layoutOf(f, p, g, e, eb, counts)), ctx.code); // geometry only: the joint the checker builds
+    joints.set(key, joint);
+  }
+  return joint;
+}
+
+function fitLinear(ctx: SearchContext, f: Family, counts: number[], joints: FitJoints): LinearModel | null {
   const p0 = f.pitches_mm[0] ?? 0;
   const e0 = f.ends_mm[0];
   if (e0 === undefined) return null;
   const eb0 = f.endsAtButt_mm[0];
   const g = f.gauges_mm[0] ?? 0;
-  const atCounts = (c: number[]) => {
-    const joint = buildJoint(scenarioOf(f, layoutOf(f, p0, g, e0, eb0, c)), ctx.code);
-    return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
-  };
-  const at = (p: number, e: number, eb: number | undefined) => {
-    const layout = layoutOf(f, p, g, e, eb, counts);
-    const joint = buildJoint(scenarioOf(f, layout), ctx.code); // geometry only: the joint the checker builds
-    return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
-  };
+  const measure = (joint: Joint) => ({ cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm });
+  const atCounts = (c: number[]) => measure(fitJoint(ctx, f, joints, p0, g, e0, eb0, c));
+  const at = (p: number, e: number, eb: number | undefined) => measure(fitJoint(ctx, f, joints, p, g, e, eb, counts));
   const base = at(p0, e0, eb0);
   const dp = at(p0 + 1, e0, eb0);
   const de = at(p0, e0 + 1, eb0);
@@ -208,6 +237,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates };
   const heap = new MinHeap<Node>((a, b) => compareKeys(a.key, b.key) < 0);
   const models = new Map<Family, LinearModel | null>();
+  const fitJoints: FitJoints = new Map();
   const streams = new Map<Family, TaperedStream>();
   /**
    * The programme's constraints do not depend on pitch or end distances, so one stream of count vectors
@@ -259,7 +289,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   };
 
   const model = (f: Family, counts: number[]) => {
-    if (!models.has(f)) models.set(f, fitLinear(ctx, f, counts));
+    if (!models.has(f)) models.set(f, fitLinear(ctx, f, counts, fitJoints));
     return models.get(f)!;
   };
   const costAt = (m: LinearModel, p: number, e: number, eb: number | undefined) => m.c0 + m.cp * p + m.ce * e + m.ceb * (eb ?? 0);
@@ -316,11 +346,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     // In compression alone the joint strength can pass the unperforated tension strength (no net section).
     const cap = scenario.load.factoredTension_N > 0 ? unperforated : Infinity;
     const efficiencyUpper = Math.min(cap, strengthUpper_N) / denominator;
-    heap.push({
-      kind: "family",
-      f,
-      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCostOf(f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
-    });
+    heap.push(nodeOf("family", lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCostOf(f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }), f, 0, 0, 0, null, null, 0, null));
   }
 
   const results: Candidate[] = [];
@@ -338,7 +364,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     if (length > maxLength + 1e-9) return; // longer in every successor too
     const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedOpenN(f);
     if (N === null) return; // a tapered family with nothing left to report
-    heap.push({ kind: "dims", f, ip, ie, ieb, key: dimsKey(f, m, p, e, eb, N, efficiencyUpper, length) });
+    heap.push(nodeOf("dims", dimsKey(f, m, p, e, eb, N, efficiencyUpper, length), f, ip, ie, ieb, null, null, 0, null));
   };
   const dimsKey = (f: Family, m: LinearModel, p: number, e: number, eb: number | undefined, N: number, efficiencyUpper: number, length: number) =>
     lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * m.cb), bolts: totalBolts(f, N), efficiencyUpper, length_mm: length });
@@ -377,7 +403,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   };
 
   let lastRejection: { check: string; value: string } | null = null;
-  const found = (c: Candidate) => heap.push({ kind: "result", key: c.key, c });
+  const found = (c: Candidate) => heap.push(nodeOf("result", c.key, c.family, 0, 0, 0, null, null, 0, c));
   const rejected = (report: CheckReport) => {
     const first = report.checks.find((c) => !c.pass);
     if (first) {
@@ -472,17 +498,9 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
         }
         const N0 = Math.max(N0dims, open);
         const m = model(f, Array(f.lines).fill(1))!;
-        heap.push({
-          kind: "tapered",
-          f,
-          ip: node.ip,
-          ie: node.ie,
-          ieb: node.ieb,
-          gauges,
-          stream,
-          index: variants ? 0 : stream.firstOpen, // vectors before it are all reported
-          key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * m.cb, bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
-        });
+        const key = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * m.cb, bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
+        // Vectors before the stream's first open one are all reported.
+        heap.push(nodeOf("tapered", key, f, node.ip, node.ie, node.ieb, gauges, stream, variants ? 0 : stream.firstOpen, null));
       }
       continue;
     }
@@ -500,7 +518,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       heap.push(node);
       continue;
     }
-    heap.push({ ...node, index: node.index + 1, key: vectorKey });
+    heap.push(nodeOf("tapered", vectorKey, f, node.ip, node.ie, node.ieb, node.gauges, node.stream, node.index + 1, null));
     if (!variants && seen.has(node.stream.arrangementAt(node.index))) continue;
     const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
