@@ -402,6 +402,15 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return f.lines > 1 && boundFails(f, counts, undefined, f.ends_mm[ie], eb) ? "pitch chain" : "none";
   };
 
+  /**
+   * Staggered butt splices: whether the holes of transverse line 1 of the two groups lie farther apart
+   * on the covers' gauge line, gap + 2·(e_butt + p), than the code's pitch limit for them
+   * (`SearchLimits.staggeredButtSpanMax_mm`; proof in DEVELOPERS.md, "The stagger span across the butt").
+   * The margin of 1e-6 mm lies far above the checker's tolerances and the coordinates' rounding.
+   */
+  const staggerSpanFails = (f: Family, p: number, eb: number | undefined): boolean =>
+    f.pattern === "staggered" && eb !== undefined && scenario.splice.buttGap_mm + 2 * (eb + p) > f.limits.staggeredButtSpanMax_mm + 1e-6;
+
   let lastRejection: { check: string; value: string } | null = null;
   const found = (c: Candidate) => heap.push(nodeOf("result", c.key, c.family, 0, 0, 0, null, null, 0, c));
   const rejected = (report: CheckReport) => {
@@ -463,6 +472,12 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       const p = f.pitches_mm[node.ip]!;
       const e = f.ends_mm[node.ie]!;
       const eb = f.endsAtButt_mm[node.ieb];
+      // Beyond the stagger span across the butt every layout of this node's sub-lattice fails the
+      // maximum pitch (its pitch and end distance at the butt are at least this node's): nothing is pushed.
+      if (staggerSpanFails(f, p, eb)) {
+        stats.candidatesSkippedByBound++;
+        continue;
+      }
       // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing — less
       // the sub-lattices a bound rules out whole (grid and staggered: subLatticeFails).
       const skipped = f.countsPerLine && node.ip === 0 ? subLatticeFails(f, f.countsPerLine, node.ie, node.ieb) : "none";
