@@ -180,33 +180,18 @@ export function arrangementOf(c: Candidate): string {
   return arrangementText(c.family.size_mm, c.family.propertyClass, c.family.pattern, c.counts);
 }
 
-/**
- * Joints built for cost fits, by their geometry (bolt size, cover thickness, pattern, counts and
- * dimensions), within one search. Families that differ only in property class build the same joint:
- * the geometry builder reads the bolt's size and hole, never its class, and a fit prices each joint
- * with its own family's class.
- */
-type FitJoints = Map<string, Joint>;
-
-function fitJoint(ctx: SearchContext, f: Family, joints: FitJoints, p: number, g: number, e: number, eb: number | undefined, counts: number[]): Joint {
-  const key = `${f.size_mm}|${f.coverThickness_mm}|${f.pattern}|${f.across}|${counts.join("-")}|${p}|${g}|${e}|${eb}`;
-  let joint = joints.get(key);
-  if (!joint) {
-    joint = buildJoint(scenarioOf(f, layoutOf(f, p, g, e, eb, counts)), ctx.code); // geometry only: the joint the checker builds
-    joints.set(key, joint);
-  }
-  return joint;
-}
-
-function fitLinear(ctx: SearchContext, f: Family, counts: number[], joints: FitJoints): LinearModel | null {
+function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel | null {
   const p0 = f.pitches_mm[0] ?? 0;
   const e0 = f.ends_mm[0];
   if (e0 === undefined) return null;
   const eb0 = f.endsAtButt_mm[0];
   const g = f.gauges_mm[0] ?? 0;
-  const measure = (joint: Joint) => ({ cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm });
-  const atCounts = (c: number[]) => measure(fitJoint(ctx, f, joints, p0, g, e0, eb0, c));
-  const at = (p: number, e: number, eb: number | undefined) => measure(fitJoint(ctx, f, joints, p, g, e, eb, counts));
+  const measure = (p: number, e: number, eb: number | undefined, c: number[]) => {
+    const joint = buildJoint(scenarioOf(f, layoutOf(f, p, g, e, eb, c)), ctx.code); // geometry only: the joint the checker builds
+    return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
+  };
+  const atCounts = (c: number[]) => measure(p0, e0, eb0, c);
+  const at = (p: number, e: number, eb: number | undefined) => measure(p, e, eb, counts);
   const base = at(p0, e0, eb0);
   const dp = at(p0 + 1, e0, eb0);
   const de = at(p0, e0 + 1, eb0);
@@ -237,7 +222,6 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const stats: SearchStats = { families: fams.length, familiesSkippedByBound: 0, nodes: 0, candidatesSkippedByBound: 0, fullChecks: 0, integerProgrammes: 0, enumerationFallbacks: 0, declaredCandidates };
   const heap = new MinHeap<Node>((a, b) => compareKeys(a.key, b.key) < 0);
   const models = new Map<Family, LinearModel | null>();
-  const fitJoints: FitJoints = new Map();
   const streams = new Map<Family, TaperedStream>();
   /**
    * The programme's constraints do not depend on pitch or end distances, so one stream of count vectors
@@ -289,7 +273,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   };
 
   const model = (f: Family, counts: number[]) => {
-    if (!models.has(f)) models.set(f, fitLinear(ctx, f, counts, fitJoints));
+    if (!models.has(f)) models.set(f, fitLinear(ctx, f, counts));
     return models.get(f)!;
   };
   const costAt = (m: LinearModel, p: number, e: number, eb: number | undefined) => m.c0 + m.cp * p + m.ce * e + m.ceb * (eb ?? 0);
