@@ -67,9 +67,10 @@ class LimitsWithStatement implements SearchLimits {
   readonly endAtButtMax_mm: number;
   readonly edgeMin_mm: number;
   readonly edgeMax_mm: number;
+  readonly staggeredButtSpanMax_mm: number;
   readonly tops: SearchLimits["tops"];
   #statement: (() => string) | string;
-  constructor(l: Omit<SearchLimits, "statement">, statement: () => string) {
+  constructor(l: SearchLimitsInput, statement: () => string) {
     this.pitchMin_mm = l.pitchMin_mm;
     this.pitchMax_mm = l.pitchMax_mm;
     this.gaugeMin_mm = l.gaugeMin_mm;
@@ -79,6 +80,7 @@ class LimitsWithStatement implements SearchLimits {
     this.endAtButtMax_mm = l.endAtButtMax_mm;
     this.edgeMin_mm = l.edgeMin_mm;
     this.edgeMax_mm = l.edgeMax_mm;
+    this.staggeredButtSpanMax_mm = l.staggeredButtSpanMax_mm ?? Infinity;
     this.tops = l.tops;
     this.#statement = statement;
   }
@@ -88,7 +90,10 @@ class LimitsWithStatement implements SearchLimits {
   }
 }
 
+/** A code's search limits before their statement; a code without a stagger span limit leaves it out (Infinity). */
+type SearchLimitsInput = Omit<SearchLimits, "statement" | "staggeredButtSpanMax_mm"> & { staggeredButtSpanMax_mm?: number };
+
 /** Search limits whose statement is written on first read. */
-export function searchLimitsWith(limits: Omit<SearchLimits, "statement">, statement: () => string): SearchLimits {
+export function searchLimitsWith(limits: SearchLimitsInput, statement: () => string): SearchLimits {
   return new LimitsWithStatement(limits, statement);
 }

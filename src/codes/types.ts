@@ -44,6 +44,14 @@ export interface SearchLimits {
   endAtButtMax_mm: number;
   edgeMin_mm: number;
   edgeMax_mm: number;
+  /**
+   * Staggered patterns of butt splices: the largest gap + 2·(e_butt + p) the code's pitch rule admits
+   * between the two groups' holes of transverse line 1, which are consecutive on a gauge line of the
+   * covers (Infinity: the search takes no such limit). Not a range: a layout beyond it fails the
+   * checker's maximum pitch, and so does every layout with a larger pitch or end distance at the butt
+   * (DEVELOPERS.md, "The stagger span across the butt").
+   */
+  staggeredButtSpanMax_mm: number;
   /** Whether each top is a code rule or a declared cap (see RangeTop). */
   tops: { pitch: RangeTop; gauge: RangeTop; end: RangeTop; endAtButt: RangeTop };
   /** The limits in words, with their clauses, for the output. */

@@ -1,4 +1,7 @@
-/** A binary min-heap with a caller's comparison. */
+/**
+ * A binary min-heap with a caller's comparison. Items move by plain assignments (no destructuring
+ * swap: before the JIT has compiled it, a swap by destructuring builds and iterates an array).
+ */
 export class MinHeap<T> {
   private items: T[] = [];
   constructor(private readonly less: (a: T, b: T) => boolean) {}
@@ -9,14 +12,17 @@ export class MinHeap<T> {
 
   push(item: T): void {
     const a = this.items;
+    let i = a.length;
     a.push(item);
-    let i = a.length - 1;
+    // Sift up: parents larger than the item move down one level; the item fills the last hole.
     while (i > 0) {
       const parent = (i - 1) >> 1;
-      if (!this.less(a[i]!, a[parent]!)) break;
-      [a[i], a[parent]] = [a[parent]!, a[i]!];
+      const above = a[parent]!;
+      if (!this.less(item, above)) break;
+      a[i] = above;
       i = parent;
     }
+    a[i] = item;
   }
 
   pop(): T | undefined {
@@ -24,19 +30,20 @@ export class MinHeap<T> {
     if (a.length === 0) return undefined;
     const top = a[0]!;
     const last = a.pop()!;
-    if (a.length > 0) {
-      a[0] = last;
+    const n = a.length;
+    if (n > 0) {
+      // Sift down: the smaller child moves up one level while it is below the last item.
       let i = 0;
       for (;;) {
         const l = 2 * i + 1;
+        if (l >= n) break;
         const r = l + 1;
-        let m = i;
-        if (l < a.length && this.less(a[l]!, a[m]!)) m = l;
-        if (r < a.length && this.less(a[r]!, a[m]!)) m = r;
-        if (m === i) break;
-        [a[i], a[m]] = [a[m]!, a[i]!];
-        i = m;
+        const child = r < n && this.less(a[r]!, a[l]!) ? r : l;
+        if (!this.less(a[child]!, last)) break;
+        a[i] = a[child]!;
+        i = child;
       }
+      a[i] = last;
     }
     return top;
   }

@@ -44,18 +44,20 @@ export function rankKey(rankBy: RankBy, m: Measures, text: () => string): Key {
         : rankBy === "efficiency"
           ? [-m.efficiency, m.bolts, m.cost]
           : [m.length_mm, m.bolts, -m.efficiency, m.cost];
-  return new CheckedKey(rounded(numbers), text);
+  return new SearchKey(rounded(numbers), text);
 }
 
 /**
- * A checked layout's key, its fixed-order text a prototype getter written on first read (a class: an
- * object literal with a getter is built on V8's slow path, and a search makes one key per full check).
+ * A key of the search: a checked layout's, its fixed-order text a prototype getter written on first
+ * read, or a node's lower bound, its text "" (a class: an object literal with a getter is built on V8's
+ * slow path, and a search makes one key per full check; one class for both kinds keeps the heap's
+ * comparisons on one object shape).
  */
-class CheckedKey implements Key {
+class SearchKey implements Key {
   #text: (() => string) | string;
   constructor(
     readonly numbers: number[],
-    text: () => string,
+    text: (() => string) | string,
   ) {
     this.#text = text;
   }
@@ -78,7 +80,7 @@ export function lowerKey(rankBy: RankBy, known: { cost?: number; bolts?: number;
   const l = known.length_mm ?? lo;
   const numbers =
     rankBy === "cost" ? [c, lo, lo] : rankBy === "bolts" ? [b, known.bolts === undefined ? lo : c, lo] : rankBy === "efficiency" ? [e, b, known.bolts === undefined ? lo : c] : [l, lo, lo, lo];
-  return { numbers: rounded(numbers), text: "" };
+  return new SearchKey(rounded(numbers), "");
 }
 
 export function compareKeys(a: Key, b: Key): number {

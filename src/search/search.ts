@@ -119,11 +119,28 @@ interface LinearModel {
   leb: number;
 }
 
-type Node =
-  | { kind: "family"; key: Key; f: Family }
-  | { kind: "dims"; key: Key; f: Family; ip: number; ie: number; ieb: number }
-  | { kind: "tapered"; key: Key; f: Family; ip: number; ie: number; ieb: number; gauges: number[]; stream: TaperedStream; index: number }
-  | { kind: "result"; key: Key; c: Candidate };
+/**
+ * A node of the search. Every kind has the same fields, made in the same order by `nodeOf`: one object
+ * shape, so the heap and the loop read nodes at one place each (fields a kind does not use are 0 or null).
+ */
+interface NodeFields {
+  kind: "family" | "dims" | "tapered" | "result";
+  key: Key;
+  f: Family;
+  ip: number;
+  ie: number;
+  ieb: number;
+  gauges: number[] | null;
+  stream: TaperedStream | null;
+  index: number;
+  c: Candidate | null;
+}
+
+type Node = NodeFields & ({ kind: "family" } | { kind: "dims" } | { kind: "tapered"; gauges: number[]; stream: TaperedStream } | { kind: "result"; c: Candidate });
+
+function nodeOf(kind: Node["kind"], key: Key, f: Family, ip: number, ie: number, ieb: number, gauges: number[] | null, stream: TaperedStream | null, index: number, c: Candidate | null): Node {
+  return { kind, key, f, ip, ie, ieb, gauges, stream, index, c } as Node;
+}
 
 export interface SearchContext {
   scenario: Scenario;
@@ -169,15 +186,12 @@ function fitLinear(ctx: SearchContext, f: Family, counts: number[]): LinearModel
   if (e0 === undefined) return null;
   const eb0 = f.endsAtButt_mm[0];
   const g = f.gauges_mm[0] ?? 0;
-  const atCounts = (c: number[]) => {
-    const joint = buildJoint(scenarioOf(f, layoutOf(f, p0, g, e0, eb0, c)), ctx.code);
+  const measure = (p: number, e: number, eb: number | undefined, c: number[]) => {
+    const joint = buildJoint(scenarioOf(f, layoutOf(f, p, g, e, eb, c)), ctx.code); // geometry only: the joint the checker builds
     return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
   };
-  const at = (p: number, e: number, eb: number | undefined) => {
-    const layout = layoutOf(f, p, g, e, eb, counts);
-    const joint = buildJoint(scenarioOf(f, layout), ctx.code); // geometry only: the joint the checker builds
-    return { cost: spliceCost(joint, ctx.costs, f.propertyClass, f.base.bolts.assembly).total, length: joint.spliceLength_mm };
-  };
+  const atCounts = (c: number[]) => measure(p0, e0, eb0, c);
+  const at = (p: number, e: number, eb: number | undefined) => measure(p, e, eb, counts);
   const base = at(p0, e0, eb0);
   const dp = at(p0 + 1, e0, eb0);
   const de = at(p0, e0 + 1, eb0);
@@ -316,11 +330,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     // In compression alone the joint strength can pass the unperforated tension strength (no net section).
     const cap = scenario.load.factoredTension_N > 0 ? unperforated : Infinity;
     const efficiencyUpper = Math.min(cap, strengthUpper_N) / denominator;
-    heap.push({
-      kind: "family",
-      f,
-      key: lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCostOf(f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }),
-    });
+    heap.push(nodeOf("family", lowerKey(rankBy, { cost: totalBolts(f, N) * perBoltCostOf(f) / sidesOf(f), bolts: totalBolts(f, N), efficiencyUpper, length_mm: 0 }), f, 0, 0, 0, null, null, 0, null));
   }
 
   const results: Candidate[] = [];
@@ -338,7 +348,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     if (length > maxLength + 1e-9) return; // longer in every successor too
     const N = f.countsPerLine ? counts.reduce((a, b) => a + b, 0) : taperedOpenN(f);
     if (N === null) return; // a tapered family with nothing left to report
-    heap.push({ kind: "dims", f, ip, ie, ieb, key: dimsKey(f, m, p, e, eb, N, efficiencyUpper, length) });
+    heap.push(nodeOf("dims", dimsKey(f, m, p, e, eb, N, efficiencyUpper, length), f, ip, ie, ieb, null, null, 0, null));
   };
   const dimsKey = (f: Family, m: LinearModel, p: number, e: number, eb: number | undefined, N: number, efficiencyUpper: number, length: number) =>
     lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (f.countsPerLine ? 0 : (N - f.lines) * m.cb), bolts: totalBolts(f, N), efficiencyUpper, length_mm: length });
@@ -376,8 +386,17 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return f.lines > 1 && boundFails(f, counts, undefined, f.ends_mm[ie], eb) ? "pitch chain" : "none";
   };
 
+  /**
+   * Staggered butt splices: whether the holes of transverse line 1 of the two groups lie farther apart
+   * on the covers' gauge line, gap + 2·(e_butt + p), than the code's pitch limit for them
+   * (`SearchLimits.staggeredButtSpanMax_mm`; proof in DEVELOPERS.md, "The stagger span across the butt").
+   * The margin of 1e-6 mm lies far above the checker's tolerances and the coordinates' rounding.
+   */
+  const staggerSpanFails = (f: Family, p: number, eb: number | undefined): boolean =>
+    f.pattern === "staggered" && eb !== undefined && scenario.splice.buttGap_mm + 2 * (eb + p) > f.limits.staggeredButtSpanMax_mm + 1e-6;
+
   let lastRejection: { check: string; value: string } | null = null;
-  const found = (c: Candidate) => heap.push({ kind: "result", key: c.key, c });
+  const found = (c: Candidate) => heap.push(nodeOf("result", c.key, c.family, 0, 0, 0, null, null, 0, c));
   const rejected = (report: CheckReport) => {
     const first = report.checks.find((c) => !c.pass);
     if (first) {
@@ -437,6 +456,12 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       const p = f.pitches_mm[node.ip]!;
       const e = f.ends_mm[node.ie]!;
       const eb = f.endsAtButt_mm[node.ieb];
+      // Beyond the stagger span across the butt every layout of this node's sub-lattice fails the
+      // maximum pitch (its pitch and end distance at the butt are at least this node's): nothing is pushed.
+      if (staggerSpanFails(f, p, eb)) {
+        stats.candidatesSkippedByBound++;
+        continue;
+      }
       // Lattice successors: each (pitch, end, end at butt) exactly once, keys never decreasing — less
       // the sub-lattices a bound rules out whole (grid and staggered: subLatticeFails).
       const skipped = f.countsPerLine && node.ip === 0 ? subLatticeFails(f, f.countsPerLine, node.ie, node.ieb) : "none";
@@ -472,17 +497,9 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
         }
         const N0 = Math.max(N0dims, open);
         const m = model(f, Array(f.lines).fill(1))!;
-        heap.push({
-          kind: "tapered",
-          f,
-          ip: node.ip,
-          ie: node.ie,
-          ieb: node.ieb,
-          gauges,
-          stream,
-          index: variants ? 0 : stream.firstOpen, // vectors before it are all reported
-          key: lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * m.cb, bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) }),
-        });
+        const key = lowerKey(rankBy, { cost: costAt(m, p, e, eb) + (N0 - f.lines) * m.cb, bolts: totalBolts(f, N0), efficiencyUpper: effUpper, length_mm: lengthAt(m, p, e, eb) });
+        // Vectors before the stream's first open one are all reported.
+        heap.push(nodeOf("tapered", key, f, node.ip, node.ie, node.ieb, gauges, stream, variants ? 0 : stream.firstOpen, null));
       }
       continue;
     }
@@ -500,7 +517,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
       heap.push(node);
       continue;
     }
-    heap.push({ ...node, index: node.index + 1, key: vectorKey });
+    heap.push(nodeOf("tapered", vectorKey, f, node.ip, node.ie, node.ieb, node.gauges, node.stream, node.index + 1, null));
     if (!variants && seen.has(node.stream.arrangementAt(node.index))) continue;
     const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
     if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {

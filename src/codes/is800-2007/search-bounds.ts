@@ -57,6 +57,10 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     covers.length > 0
       ? (Math.min(200, ...covers.map((c) => 16 * c.thickness_mm), ...covers.filter((c) => outside.includes(c)).map((c) => 100 + 4 * c.thickness_mm)) - scenario.splice.buttGap_mm) / 2
       : Infinity;
+  // Staggered butt splices: the holes of transverse line 1 of the two groups are consecutive on a gauge
+  // line of the covers, gap + 2·(e(butt) + p) apart, in no group and on no edge line: the checker's pitch
+  // limit for them is min(16 t, 200) with t the thinner cover (cl. 10.2.3.2; maxSpacingRules, pitchRules).
+  const staggeredButtSpanMax = staggered && covers.length > 0 ? Math.min(200, ...covers.map((c) => 16 * c.thickness_mm)) : Infinity;
   const limits = {
     pitchMin_mm: staggered ? 1.25 * d_mm : 2.5 * d_mm,
     pitchMax_mm: staggered ? Math.min(1.5 * along, across) / 2 : along,
@@ -67,6 +71,7 @@ export function searchLimits(scenario: Scenario, d_mm: number, pattern: "grid" |
     endAtButtMax_mm: Math.min(maxEdge, endAtButtMax),
     edgeMin_mm: factor * d0,
     edgeMax_mm: maxEdge,
+    staggeredButtSpanMax_mm: staggeredButtSpanMax,
     tops: { pitch: RULE, gauge: RULE, end: RULE, endAtButt: RULE },
   };
   // The range statement, written when the output reads it.
