@@ -5,6 +5,7 @@
  * Both senses' strength checks are scaled to the reference load (model/load.ts).
  */
 import type { CodeChecks, DesignCode } from "../codes/types.js";
+import { mapped } from "../model/lists.js";
 import type { Joint, PlateConnection, PlatePiece } from "../model/joint.js";
 import { withConnections, withPlates } from "../geometry/joint-builder.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
@@ -33,7 +34,7 @@ export function compressionJoint(joint: Joint): Joint {
     const nearest = toward > 0 ? Math.min(...other.map((h) => h.x_mm)) : Math.max(...other.map((h) => h.x_mm));
     return { group: c.group, endX_mm: nearest - toward * 0.75 * d0, towardEnd: toward };
   };
-  return withPlates(joint, joint.plates.map((p) => withConnections(p, p.connections.map((c) => flip(p, c)))));
+  return withPlates(joint, mapped(joint.plates, (p) => withConnections(p, mapped(p.connections, (c) => flip(p, c)))));
 }
 
 /** The scenario with the given force standing for the tension of the code's checks. */

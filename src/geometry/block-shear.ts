@@ -18,6 +18,7 @@
  */
 import type { Hole, PlateConnection } from "../model/joint.js";
 import { LINE_TOLERANCE_MM } from "./lines.js";
+import { mapped } from "../model/lists.js";
 
 export interface BlockShape {
   description: string;
@@ -110,7 +111,7 @@ interface GaugeLineOfBlock {
 
 /** Gauge lines of the local holes, sorted by y (holes within the line tolerance share a line). */
 function blockGaugeLines(local: readonly LocalHole[]): GaugeLineOfBlock[] {
-  const ys = local.map((h) => h.y);
+  const ys = mapped(local, (h) => h.y);
   // Insertion sort: a group has tens of holes.
   for (let i = 1; i < ys.length; i++) {
     const y = ys[i]!;

@@ -10,6 +10,7 @@
  * and cover A.
  */
 import type { CheckableScenario, HoleType, PlateSpec, SlotDirection } from "../model/scenario.js";
+import { mapped } from "../model/lists.js";
 import type { BoltGroupGeometry, GroupId, Hole, Joint, PlateId, PlatePiece } from "../model/joint.js";
 import { describePattern, loadedEndDistance, patternHoles } from "./patterns.js";
 
@@ -58,7 +59,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
 
   if (!butt) {
     const L = xMaxLocal + farEnd;
-    const holes = local.map((h, i) => makeHole("J", i, h.x_mm, h.y_mm));
+    const holes = mapped(local, (h, i) => makeHole("J", i, h.x_mm, h.y_mm));
     const pieces: PlatePiece[] = [
       piece("mainA", "main", "main plate A", plates.mainA, { x0_mm: 0, x1_mm: L, continues: "left" }, 1,
         [{ group: "J", endX_mm: L, towardEnd: 1 }], 0),
@@ -79,12 +80,13 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
 
   const halfGap = splice.buttGap_mm / 2;
   const halfCover = halfGap + xMaxLocal + farEnd;
-  const holesB = local.map((h, i) => makeHole("B", i, halfGap + h.x_mm, h.y_mm));
-  const holesA = local.map((h, i) => makeHole("A", i, -(halfGap + h.x_mm), h.y_mm));
+  const holesB = mapped(local, (h, i) => makeHole("B", i, halfGap + h.x_mm, h.y_mm));
+  const holesA = mapped(local, (h, i) => makeHole("A", i, -(halfGap + h.x_mm), h.y_mm));
   const doubleCover = splice.type === "butt-double-cover";
   const coverSpecs = plates.covers;
-  const coverArea = coverSpecs.map((c) => c.width_mm * c.thickness_mm);
-  const totalCoverArea = coverArea.reduce((a, b) => a + b, 0);
+  const coverArea = mapped(coverSpecs, (c) => c.width_mm * c.thickness_mm);
+  let totalCoverArea = 0;
+  for (const a of coverArea) totalCoverArea += a;
 
   const tA = plates.mainA.thickness_mm;
   const tB = plates.mainB.thickness_mm;

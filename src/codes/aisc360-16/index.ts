@@ -4,6 +4,7 @@
  * plates A36 and A572 Grade 50; ASTM F3125 A325 / A490 and A307 bolts.
  */
 import { INCH_BOLT_SIZES_IN, inchBoltSize } from "../../catalogue/bolts.js";
+import { mapped } from "../../model/lists.js";
 import { MM_PER_IN } from "./factors.js";
 import { astmPlateGrade } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
@@ -57,7 +58,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
 
 function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   const checks: CheckResult[] = [];
-  const shears = joint.groups.map((g) => groupShear(joint, scenario, g));
+  const shears = mapped(joint.groups, (g) => groupShear(joint, scenario, g));
   const slipCritical = scenario.bolts.assembly === "friction-grip";
   for (const gs of shears) {
     if (slipCritical) checks.push(slipCheck(joint, scenario, gs));

@@ -3,6 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
+import { mapped } from "../../model/lists.js";
 import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
@@ -141,7 +142,7 @@ export function netHoles(holes: readonly Hole[], d_mm: number): Hole[] {
   const a = netAllowance_mm(d_mm);
   // Written field by field in the joint builder's order, so that an enlarged hole has the same shape
   // (hidden class) as a hole: the geometry then sees one kind of object and stays fast.
-  return holes.map((h) => ({ id: h.id, group: h.group, x_mm: h.x_mm, y_mm: h.y_mm, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
+  return mapped(holes, (h) => ({ id: h.id, group: h.group, x_mm: h.x_mm, y_mm: h.y_mm, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
 }
 
 /** The enlarged hole lists of the joint checked last, by the list they were made from. */

@@ -5,6 +5,7 @@
  * size; `EN1993_1_8` is bound to the recommended values and `settings.bind(scenario)` gives the others.
  */
 import { BOLT_SIZES_MM, PROPERTY_CLASSES } from "../../catalogue/bolts.js";
+import { mapped } from "../../model/lists.js";
 import { en10025Grade, EN10025_NAMES, EN10025_THICKNESS_RANGE } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
 import type { CheckResult, Warning } from "../../model/results.js";
@@ -155,7 +156,7 @@ function boundCode(bound: Ec3Settings): DesignCode {
   function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
     const s = settingsFor(scenario);
     const checks: CheckResult[] = [];
-    const groups = joint.groups.map((g) => groupOf(joint, scenario, s, g));
+    const groups = mapped(joint.groups, (g) => groupOf(joint, scenario, s, g));
     const smallHoles = groups.some((g) => g.inSmallHoles);
     for (const g of groups) {
       if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));

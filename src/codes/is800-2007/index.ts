@@ -2,6 +2,7 @@
  * IS 800:2007 (limit state method) as a design-code module.
  */
 import { ownEntry } from "../../catalogue/lookup.js";
+import { mapped } from "../../model/lists.js";
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
@@ -65,7 +66,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
 
 function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   const checks: CheckResult[] = [];
-  const gfs = joint.groups.map((g) => groupFactors(joint, g));
+  const gfs = mapped(joint.groups, (g) => groupFactors(joint, g));
   const friction = scenario.bolts.assembly === "friction-grip";
   // Friction-grip bolts are checked in bolt shear and bearing at the factored load whatever the slip
   // design: no clause is relied on to waive them (from memory; the reading that refuses more).
