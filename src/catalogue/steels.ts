@@ -25,6 +25,19 @@ interface SteelGrade {
   source: string;
 }
 
+/** An IS 2062 grade: fu, and fy in the bands of Table 2 (t < 20, 20 ≤ t ≤ 40, t > 40 mm). */
+function is2062Grade(fu_MPa: number, fy_MPa: [number, number, number], source: string): SteelGrade {
+  return {
+    fu_MPa,
+    bands: [
+      { upTo_mm: 20, fy_MPa: fy_MPa[0], label: "t < 20 mm" },
+      { upTo_mm: 40, fy_MPa: fy_MPa[1], label: "20 ≤ t ≤ 40 mm" },
+      { upTo_mm: Infinity, fy_MPa: fy_MPa[2], label: "t > 40 mm" },
+    ],
+    source,
+  };
+}
+
 /**
  * IS 2062 (hot-rolled structural steel) grades used with IS 800:2007.
  * IS 2062 Table 2: yield stress for t < 20 mm, 20–40 mm, > 40 mm.
@@ -32,60 +45,12 @@ interface SteelGrade {
  * IS 2062:2011 Table 2, from memory (E450: the E450A tensile strength, 570 MPa, the lower of its two qualities).
  */
 export const IS2062_GRADES: Record<string, SteelGrade> = {
-  E250: {
-    fu_MPa: 410,
-    bands: [
-      { upTo_mm: 20, fy_MPa: 250, label: "t < 20 mm" },
-      { upTo_mm: 40, fy_MPa: 240, label: "20 ≤ t ≤ 40 mm" },
-      { upTo_mm: Infinity, fy_MPa: 230, label: "t > 40 mm" },
-    ],
-    source: "IS 2062, Table 2",
-  },
-  E275: {
-    fu_MPa: 430,
-    bands: [
-      { upTo_mm: 20, fy_MPa: 275, label: "t < 20 mm" },
-      { upTo_mm: 40, fy_MPa: 265, label: "20 ≤ t ≤ 40 mm" },
-      { upTo_mm: Infinity, fy_MPa: 255, label: "t > 40 mm" },
-    ],
-    source: "IS 2062, Table 2; from memory",
-  },
-  E300: {
-    fu_MPa: 440,
-    bands: [
-      { upTo_mm: 20, fy_MPa: 300, label: "t < 20 mm" },
-      { upTo_mm: 40, fy_MPa: 290, label: "20 ≤ t ≤ 40 mm" },
-      { upTo_mm: Infinity, fy_MPa: 280, label: "t > 40 mm" },
-    ],
-    source: "IS 2062, Table 2; from memory",
-  },
-  E350: {
-    fu_MPa: 490,
-    bands: [
-      { upTo_mm: 20, fy_MPa: 350, label: "t < 20 mm" },
-      { upTo_mm: 40, fy_MPa: 330, label: "20 ≤ t ≤ 40 mm" },
-      { upTo_mm: Infinity, fy_MPa: 320, label: "t > 40 mm" },
-    ],
-    source: "IS 2062, Table 2; from memory",
-  },
-  E410: {
-    fu_MPa: 540,
-    bands: [
-      { upTo_mm: 20, fy_MPa: 410, label: "t < 20 mm" },
-      { upTo_mm: 40, fy_MPa: 390, label: "20 ≤ t ≤ 40 mm" },
-      { upTo_mm: Infinity, fy_MPa: 380, label: "t > 40 mm" },
-    ],
-    source: "IS 2062, Table 2; from memory",
-  },
-  E450: {
-    fu_MPa: 570,
-    bands: [
-      { upTo_mm: 20, fy_MPa: 450, label: "t < 20 mm" },
-      { upTo_mm: 40, fy_MPa: 430, label: "20 ≤ t ≤ 40 mm" },
-      { upTo_mm: Infinity, fy_MPa: 420, label: "t > 40 mm" },
-    ],
-    source: "IS 2062, Table 2; from memory",
-  },
+  E250: is2062Grade(410, [250, 240, 230], "IS 2062, Table 2"),
+  E275: is2062Grade(430, [275, 265, 255], "IS 2062, Table 2; from memory"),
+  E300: is2062Grade(440, [300, 290, 280], "IS 2062, Table 2; from memory"),
+  E350: is2062Grade(490, [350, 330, 320], "IS 2062, Table 2; from memory"),
+  E410: is2062Grade(540, [410, 390, 380], "IS 2062, Table 2; from memory"),
+  E450: is2062Grade(570, [450, 430, 420], "IS 2062, Table 2; from memory"),
 };
 
 /**
