@@ -9,29 +9,17 @@
  * (search-optimality, compression-search, declared-space) guards the use.
  */
 import { readFileSync } from "node:fs";
-import { parse, stringify } from "yaml";
 import { describe, expect, it } from "vitest";
 import { parseCostTable } from "../src/io/costs.js";
 import { parseScenario } from "../src/io/scenario.js";
 import { checkScenario } from "../src/engine/check.js";
 import { families, layoutOf, resolveSpace, scenarioOf } from "../src/search/space.js";
 import { ROOT } from "./helpers/cli.js";
+import { withSense } from "./helpers/senses.js";
 import { smallSearchScenario } from "./helpers/generate.js";
 
 const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
 
-/** The scenario text with its load as given, turned into compression alone, or reversing (C = 0.8 T). */
-function withSense(yaml: string, sense: "tension" | "compression" | "reversal"): string {
-  if (sense === "tension") return yaml;
-  const file = parse(yaml) as { load: Record<string, unknown> };
-  const T = file.load.factored_tension as number | string;
-  file.load.factored_compression = typeof T === "number" ? Math.round(0.8 * T) : `${Math.round(0.8 * parseFloat(T))} kN`;
-  if (sense === "compression") {
-    delete file.load.factored_tension;
-    delete file.load.service_tension;
-  }
-  return stringify(file);
-}
 
 /**
  * Every staggered family's layouts at the least pitch past the span limit and at the pitch below it

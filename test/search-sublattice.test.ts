@@ -10,7 +10,6 @@
  * The search against brute force (search-optimality, en1993-search, compression-search) guards the use.
  */
 import { readFileSync } from "node:fs";
-import { parse, stringify } from "yaml";
 import { describe, expect, it } from "vitest";
 import { parseCostTable } from "../src/io/costs.js";
 import { parseScenario } from "../src/io/scenario.js";
@@ -19,24 +18,11 @@ import { families, resolveSpace } from "../src/search/space.js";
 import type { CheckableScenario } from "../src/model/scenario.js";
 import type { LayoutShape } from "../src/codes/types.js";
 import { ROOT } from "./helpers/cli.js";
+import { withSense } from "./helpers/senses.js";
 import { aiscScenario, ec3Scenario, smallSearchScenario } from "./helpers/generate.js";
 
 const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
 
-type Sense = "tension" | "compression" | "reversal";
-
-/** The scenario text with its load as given, turned into compression alone, or reversing (C = 0.8 T). */
-function withSense(yaml: string, sense: Sense): string {
-  if (sense === "tension") return yaml;
-  const file = parse(yaml) as { load: Record<string, unknown> };
-  const T = file.load.factored_tension as number | string;
-  file.load.factored_compression = typeof T === "number" ? Math.round(0.8 * T) : `${Math.round(0.8 * parseFloat(T))} kip`;
-  if (sense === "compression") {
-    delete file.load.factored_tension;
-    delete file.load.service_tension;
-  }
-  return stringify(file);
-}
 
 /** Checks (1) and (2) on every `every`-th grid or staggered family; returns the comparisons made. */
 function checkFacts(yaml: string, every: number): number {
