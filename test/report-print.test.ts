@@ -48,8 +48,9 @@ function factorRows(html: string): Array<{ symbol: string; value: number; use: s
 }
 
 describe("design basis: the factors the checks use, against the codes' published values", () => {
-  // IS 800:2007 cl. 5.4.1, Table 5 (from memory): γm0 1.10 (yielding), γm1 1.25 (ultimate stress),
-  // γmb 1.25 (bolts, bearing type), γmf 1.10 slip designed at service load, 1.25 at ultimate load.
+  // IS 800:2007 cl. 5.4.1, Table 5: γm0 1.10 (yielding), γm1 1.25 (ultimate stress), γmb 1.25 (bolts,
+  // bearing type) as reproduced at https://infralens.in/code/IS-800-2007/clause/5-4-1; γmf 1.10 slip designed
+  // at service load, 1.25 at ultimate load (from memory; only a quiz page corroborates it).
   it("IS 800:2007, bearing-type bolts: γm0 1.10, γm1 1.25, γmb 1.25 (Table 5), no γmf", () => {
     const rows = factorRows(writeReport(scenarioPath("footbridge-tie.yaml")).html);
     expect(rows.map((r) => [r.symbol, r.value])).toEqual([["γm0", 1.1], ["γm1", 1.25], ["γmb", 1.25]]);

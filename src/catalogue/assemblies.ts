@@ -5,7 +5,8 @@
  *
  * Sources, beside each table below:
  *   - ISO 4014 / 4017 bolts, ISO 4032 nuts, ISO 7089 washers (EN 15048 non-preloaded assemblies; also the
- *     IS 800 bearing-type bolts of IS 1363/1364, which follow the ISO dimensions) — from memory;
+ *     IS 800 bearing-type bolts of IS 1363/1364, which follow the ISO dimensions) — sources in fasteners.ts
+ *     (that IS 1363/1364 follow the ISO dimensions: from memory);
  *   - EN 14399-3 (HR bolt and nut) with EN 14399-6 washers for preloaded EN 1993-1-8 assemblies — from memory;
  *   - IS 3757 / IS 6623 / IS 6649 friction-grip assemblies as tabulated in Indian design aids;
  *   - ASTM F3125 heavy hex structural bolts with ASTM A563 heavy hex nuts and ASTM F436 washers; the length
@@ -69,7 +70,8 @@ const pitch = (d: number) => THREAD_PITCH_MM[d] ?? 3;
 
 /**
  * ISO 4014 / 4017 bolt, ISO 4032 nut, ISO 7089 washer under the nut: EN 15048 non-preloaded assemblies
- * under EN 1993-1-8 and the IS 1363/1364 bearing-type bolts of IS 800 (ISO dimensions, from memory).
+ * under EN 1993-1-8 and the IS 1363/1364 bearing-type bolts of IS 800 (ISO dimensions: sources in
+ * fasteners.ts; that IS 1363/1364 follow them, from memory).
  * Length = grip + washer + nut + two thread pitches beyond the nut; ISO 4014 thread b = 2d + 6, 2d + 12
  * or 2d + 25 by length.
  */

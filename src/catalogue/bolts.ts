@@ -43,7 +43,12 @@ const NOMINAL_STRENGTHS: Readonly<Record<PropertyClass, readonly [number, number
   "8.8": [800, 640],
   "10.9": [1000, 900],
 };
-/** fub and fyb, MPa, minimum (ISO 898-1 Table 3, from memory); class 8.8 up to M16 here, above M16 next. */
+/**
+ * fub and fyb, MPa, minimum (EN ISO 898-1:2013 Table 3, as reproduced at
+ * http://nfgab.se/en/technology-quality/technical-pages/mechanical-properties-for-fasteners/mechanical-properties-screws-and-studs-en-iso-898-12013/);
+ * class 8.8 up to M16 here, above M16 next. Table 3 footnotes: the d ≤ 16 column does not apply to structural
+ * bolting, which takes the d > 16 column from M12 (not applied here; see the verify-is report).
+ */
 const MINIMUM_STRENGTHS: Readonly<Record<PropertyClass, readonly [number, number]>> = {
   "4.6": [400, 240],
   "5.6": [500, 300],
@@ -57,8 +62,8 @@ const MINIMUM_8_8_ABOVE_M16 = [830, 660] as const;
  * "nominal": ISO 898-1 nominal values (the class numbers: 8.8 → 800/640), as EN 1993-1-8 Table 3.1.
  * "minimum": ISO 898-1 minimum values, as IS 1367-3 lists them (8.8, d > 16 mm → 830/660; 10.9 → 1040/940),
  *   the figures Indian design aids use with IS 800.
- * Source: ISO 898-1, Table 3 (nominal and minimum Rm, ReL/Rp0.2) — minimum values from memory; nominal
- *   values EN 1993-1-8 Table 3.1.
+ * Source: ISO 898-1, Table 3 (nominal and minimum Rm, ReL/Rp0.2) — minimum values as EN ISO 898-1:2013
+ *   Table 3 (reproduction cited above); nominal values EN 1993-1-8 Table 3.1.
  */
 export function boltMaterial(propertyClass: PropertyClass, d_mm: number, basis: BoltStrengthBasis): BoltMaterial {
   if (basis === "nominal") {
