@@ -46,8 +46,9 @@ const NOMINAL_STRENGTHS: Readonly<Record<PropertyClass, readonly [number, number
 /**
  * fub and fyb, MPa, minimum (EN ISO 898-1:2013 Table 3, as reproduced at
  * http://nfgab.se/en/technology-quality/technical-pages/mechanical-properties-for-fasteners/mechanical-properties-screws-and-studs-en-iso-898-12013/);
- * class 8.8 up to M16 here, above M16 next. Table 3 footnotes: the d ≤ 16 column does not apply to structural
- * bolting, which takes the d > 16 column from M12 (not applied here; see the verify-is report).
+ * class 8.8 up to M16 here, above M16 next. Table 3's footnotes give structural bolting the d > 16 column
+ * from M12; that is not applied here: the Indian design aids tabulate 800 MPa up to M16 (../shared check
+ * values), and the lower figure is the reading that refuses more.
  */
 const MINIMUM_STRENGTHS: Readonly<Record<PropertyClass, readonly [number, number]>> = {
   "4.6": [400, 240],
