@@ -85,8 +85,9 @@ export type NetAreaConvention = "0.78-gross" | "iso-stress-area";
 
 /**
  * Net tensile stress area of the bolt at the threads, Anb (mm²).
- * "0.78-gross": 0.78 · π d²/4, the approximation IS 800:2007 cl. 10.3.3 allows for ISO threads and which
- *   Indian design aids tabulate; equals the ISO stress area for M16, M20 and M24 only.
+ * "0.78-gross": 0.78 · π d²/4, the approximation Indian design aids tabulate for ISO threads (common
+ *   practice; IS 800:2007 cl. 10.3.3 defines Anb at the threads and gives no factor); equals the ISO stress
+ *   area for M16, M20 and M24 only.
  * "iso-stress-area": the ISO 898-1 stress area As.
  */
 export function boltNetArea_mm2(d_mm: number, convention: NetAreaConvention): number {
