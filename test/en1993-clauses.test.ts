@@ -169,7 +169,7 @@ describe("EN 1993-1-8 3.9: slip resistance", () => {
     const FpC = ec3.Fp_C(800, As(d));
     [0.2, 0.3, 0.4, 0.5].forEach((mu, i) => within3sf(kN(ec3.Fs_Rd(1, 1, mu, FpC, 1.25)), values[i]!));
   });
-  it("ks, Table 3.6: 1.0 normal, 0.85 oversize and short slots across, 0.7 long slots across, 0.76 short slots along, 0.63 long slots along (from memory)", () => {
+  it("ks, Table 3.6: 1.0 normal, 0.85 oversize and short slots across, 0.7 long slots across, 0.76 short slots along, 0.63 long slots along (BS EN 1993-1-8 Table 3.6 as reproduced in Ellobody, FE Analysis and Design of Steel and Steel-Concrete Composite Bridges, Table 3.24, at what-when-how.com)", () => {
     expect([ec3.ks("standard", undefined), ec3.ks("oversize", undefined), ec3.ks("short-slot", "across"), ec3.ks("long-slot", "across"), ec3.ks("short-slot", "along"), ec3.ks("long-slot", "along")]).toEqual([1, 0.85, 0.85, 0.7, 0.76, 0.63]);
   });
 });
