@@ -130,7 +130,7 @@ describe("IS 800:2007 under compression alone and with pitch over 12 t", () => {
 });
 
 describe("EN 1993-1-8: sports-hall-chord-ec3.yaml in compression", () => {
-  it("butt ends in contact: splice material for 25 % of the compression (EN 1993-1-8 6.2.7.1(14), clause number from memory; the 25 % per SCI AD 393); bolt shear demand 0.25 × 600 = 150 kN, the main plates' cross-section the whole 600 kN", () => {
+  it("butt ends in contact: splice material for 25 % of the compression (EN 1993-1-8 6.2.7.1(14) as Steel Buildings in Europe Part 5 p. 5-85 cites it; the 25 % also per SCI AD 393); bolt shear demand 0.25 × 600 = 150 kN, the main plates' cross-section the whole 600 kN", () => {
     const { report } = variant("sports-hall-chord-ec3.yaml", (f) => {
       f.load!.factored_compression = 600;
       f.splice!.ends_in_contact = true;

@@ -142,7 +142,7 @@ describe("bolt assemblies of the code in use (lengths on each standard's dimensi
     expect(bom.bolts[0]!.standard).toMatch(/EN 15048/);
     expect(JSON.stringify(bom)).not.toMatch(/IS \d{3,4}/);
   });
-  it("EN 1993-1-8 preloaded (Category B): EN 14399-3 HR assembly with EN 14399-6 washers 4 mm under head and nut (from memory): 36 + 2 × 4 + 18 + 5 = 67 → M20 × 70", () => {
+  it("EN 1993-1-8 preloaded (Category B): EN 14399-3 HR assembly with EN 14399-6 washers 4 mm under head and nut (h nom. 4 for M20, BS EN 14399-6 table as torqbolt.com reproduces it): 36 + 2 × 4 + 18 + 5 = 67 → M20 × 70", () => {
     const text = readFileSync(scenarioPath("sports-hall-chord-ec3.yaml"), "utf8")
       .replace(/type: bearing.*\n/, "type: friction-grip\n  slip_factor: 0.4\n  slip_at: service\n")
       .replace(/factored_tension: (.*)/, "factored_tension: $1\n  service_tension: 600 kN");

@@ -64,8 +64,10 @@ describe("design basis: the factors the checks use, against the codes' published
     expect(ultimate.find((r) => r.symbol === "γmf")?.value).toBe(1.25); // Table 5: slip resistance designed at ultimate load
   });
 
-  // EN 1993-1-8:2005 Table 2.1 recommended values (from memory): γM2 1.25 (bolts, plates in bearing,
+  // EN 1993-1-8:2005 Table 2.1 recommended values: γM2 1.25 (bolts, plates in bearing,
   // net section), γM3 1.25 (slip at ULS), γM3,ser 1.10 (slip at SLS); EN 1993-1-1:2005 6.1 NOTE 2B: γM0 1.00, γM1 1.00.
+  // The same numbers are the UK National Annexes' (SCI Blue Book, steelforlifebluebook.co.uk, explanatory notes 5.1);
+  // that they are also the recommended values: from memory (one calculator web page says so too).
   it("EN 1993-1-8, Category A with the recommended values: γM0 1.00, γM2 1.25, said to be recommended", () => {
     const { html } = writeReport(scenarioPath("sports-hall-chord-ec3.yaml"));
     const rows = factorRows(html);

@@ -7,7 +7,8 @@
  *   - ISO 4014 / 4017 bolts, ISO 4032 nuts, ISO 7089 washers (EN 15048 non-preloaded assemblies; also the
  *     IS 800 bearing-type bolts of IS 1363/1364, which follow the ISO dimensions) — sources in fasteners.ts
  *     (that IS 1363/1364 follow the ISO dimensions: from memory);
- *   - EN 14399-3 (HR bolt and nut) with EN 14399-6 washers for preloaded EN 1993-1-8 assemblies — from memory;
+ *   - EN 14399-3 (HR bolt and nut) with EN 14399-6 washers for preloaded EN 1993-1-8 assemblies — washer
+ *     thicknesses and the four threads as sourced at en14399Hr below; the HR nut and thread lengths from memory;
  *   - IS 3757 / IS 6623 / IS 6649 friction-grip assemblies as tabulated in Indian design aids;
  *   - ASTM F3125 heavy hex structural bolts with ASTM A563 heavy hex nuts and ASTM F436 washers; the length
  *     found by the "add to grip" values of the RCSC Specification (Table C-2.1, reproduced in the AISC
@@ -109,8 +110,12 @@ export function nutClassOf(boltClass: string): string {
  * EN 14399-3 (system HR) preloaded assembly with EN 14399-6 chamfered washers under head and nut (the
  * washers the system is used with under EN 1090-2 for class 10.9, taken for 8.8 as well: the reading
  * that gives the longer bolt). HR nuts take the ISO 4032 heights and HR bolts the ISO 4014 thread
- * lengths; at least four full threads stay between the nut's seat and the plain shank (EN 1090-2) —
- * all from memory. Washer thickness h of EN 14399-6, from memory.
+ * lengths (from memory; EN 14399-7, the countersunk HR assembly, states "regular nut height ... EN ISO 4032"
+ * and "thread length ... ISO 888" in its scope, iteh.us). At least four full threads stay between the nut's
+ * seat and the plain shank: BS EN 1090-2:2008, 8.2.2, as reproduced at
+ * https://www.scribd.com/document/408631384/BS-EN-1090-2-2008-Technical-Requirements-pdf. Washer thickness
+ * h nominal of EN 14399-6 (M12 3, M16–M24 4, M27–M30 5, M36 6): the BS EN 14399-6 dimension table as a supplier
+ * reproduces it, https://torqbolt.com/bs-en-14399-6-chamfered-washers-plain-chamfered-washers-suppliers-manufacturers.
  */
 const EN14399_6_WASHER_MM: Record<number, number> = { 12: 3, 16: 4, 18: 4, 20: 4, 22: 4, 24: 4, 27: 5, 30: 5, 36: 6 };
 

@@ -92,7 +92,8 @@ interface EnBand {
 
 /**
  * Designations accepted for each grade; quality (impact-test) letters do not change fy or fu.
- * EN 10025-2, -3, -4, -6, Table 1 of each (from memory).
+ * EN 10025-2: JR/J0/J2 for S235 and S275, JR/J0/J2/K2 for S355 (BS EN 10025-2:2004 Table 7 as reproduced
+ * at https://readle.co.uk/references/steel-grades-eurocodes.php); EN 10025-3, -4, -6 from memory.
  */
 const EN10025_DESIGNATIONS: Record<En10025Grade, readonly string[]> = {
   S235: ["S235", "S235JR", "S235J0", "S235J2"],
@@ -119,10 +120,10 @@ const bands = (rows: Array<[number, number, number, number]>): EnBand[] => rows.
 
 /**
  * The product standards' values: minimum yield strength ReH by nominal thickness and the lower limit of
- * the tensile strength Rm (3 ≤ t ≤ 100 mm). S275 and S355 up to 40 mm and their Rm: read in the published
- * table (see ../shared check values); S235, the bands beyond 40 mm and every S460 value: from memory
- * (EN 10025-3 S460N Rm 540 throughout; EN 10025-4 S460M Rm 540/530/510/500; EN 10025-6 S460Q ReH 460 to
- * 50 mm, 440 to 100 mm, Rm 550).
+ * the tensile strength Rm (3 ≤ t ≤ 100 mm). S235, S275 and S355, every band and their Rm: BS EN 10025-2:2004
+ * Table 7 as reproduced at https://readle.co.uk/references/steel-grades-eurocodes.php (S275 and S355 to 40 mm
+ * also in ../shared check values). Every S460 value: from memory (EN 10025-3 S460N Rm 540 throughout;
+ * EN 10025-4 S460M Rm 540/530/510/500; EN 10025-6 S460Q ReH 460 to 50 mm, 440 to 100 mm, Rm 550).
  */
 export const EN10025_2_GRADES: Record<En10025Grade, EnBand[]> = {
   S235: bands([[0, 16, 235, 360], [16, 40, 225, 360], [40, 63, 215, 360], [63, 80, 215, 360], [80, 100, 215, 360]]),
@@ -134,7 +135,11 @@ export const EN10025_2_GRADES: Record<En10025Grade, EnBand[]> = {
   S460: bands([[0, 16, 460, 540], [16, 40, 440, 540], [40, 63, 430, 530], [63, 80, 410, 510], [80, 100, 400, 500]]),
 };
 
-/** Rm below 3 mm (the product standard tabulates thin products apart), MPa; from memory. S460 products start at 3 mm. */
+/**
+ * Rm below 3 mm (the product standard tabulates thin products apart), MPa: the lower limits of 360–510,
+ * 430–580 and 510–680 in BS EN 10025-2:2004 Table 7 (readle.co.uk reproduction, as above). S460 products
+ * start at 3 mm (from memory).
+ */
 const EN10025_2_FU_BELOW_3MM: Partial<Record<En10025Grade, number>> = { S235: 360, S275: 430, S355: 510 };
 
 /**

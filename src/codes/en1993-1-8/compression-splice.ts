@@ -18,8 +18,9 @@ import type { PartialFactors } from "./settings.js";
 
 /**
  * Where members are prepared for full contact in bearing, splice material transmits at least 25 % of the
- * maximum compressive force: the contact may carry the rest. EN 1993-1-8, 6.2.7.1(14) (clause number
- * from memory; the 25 % as SCI Advisory Desk note AD 393 reports it). A column-splice rule applied to a
+ * maximum compressive force: the contact may carry the rest. EN 1993-1-8, 6.2.7.1(14) (clause and 25 % as
+ * Steel Buildings in Europe, Part 5: Joint Design, p. 5-85, cites them, https://infosteel.be/images/Steel-Buildings-in-Europe/MSB05/96;
+ * the 25 % also in SCI Advisory Desk note AD 393, newsteelconstruction.com). A column-splice rule applied to a
  * plate splice whose butt ends bear (the reading stated in the output).
  */
 export const EN_CONTACT_SPLICE_SHARE = 0.25;

@@ -6,10 +6,14 @@
  * EN 1090-2 Table 11, nominal clearance, mm:
  *   normal round holes  +1 for M12–M14, +2 for M16–M24, +3 for M27 and above (read in the table; see ../shared
  *                       check values); M12 and M14 may take 2 mm under EN 1993-1-8, 3.6.1(5)
- *   oversize round      +3 for M12–M14, +4 for M16–M22, +6 for M24, +8 for M27 and above (from memory)
+ *   oversize round      +3 for M12–M14, +4 for M16–M22, +6 for M24, +8 for M27 and above
  *   short slots         length +4 for M12–M14, +6 for M16–M22, +8 for M24, +10 for M27 and above; width as a
- *                       normal hole (from memory)
- *   long slots          length + 1.5 d; width as a normal hole (from memory)
+ *                       normal hole
+ *   long slots          length + 1.5 d; width as a normal hole
+ * Oversize and slot rows: EN 1090-2 Table 11 as reproduced in a fabricator's holing procedure
+ * (https://www.scribd.com/document/754155168/4-Holing-Procedure; edition not stated there, its footnotes on
+ * d < 12 and d > 36 mm suggest the 2018 one); the M14 column read with an EN 1993-1-8 bolt data sheet
+ * (https://www.scribd.com/document/787032185/Suruburi-EC3: M14 oversize 17, short slot 18 mm).
  */
 import type { HoleDimensions } from "../../geometry/joint-builder.js";
 import type { HoleType, SlotDirection } from "../../model/scenario.js";
@@ -21,7 +25,7 @@ export function normalClearance_mm(d_mm: number, smallBoltClearance_mm: 1 | 2): 
   return 3;
 }
 
-/** Clearance of an oversize round hole, mm. EN 1090-2, Table 11 (from memory). */
+/** Clearance of an oversize round hole, mm. EN 1090-2, Table 11 (source in the header). */
 export function oversizeClearance_mm(d_mm: number): number {
   if (d_mm <= 14) return 3;
   if (d_mm <= 22) return 4;
@@ -29,7 +33,7 @@ export function oversizeClearance_mm(d_mm: number): number {
   return 8;
 }
 
-/** Clearance along the length of a short slot, mm. EN 1090-2, Table 11 (from memory). */
+/** Clearance along the length of a short slot, mm. EN 1090-2, Table 11 (source in the header). */
 export function shortSlotClearance_mm(d_mm: number): number {
   if (d_mm <= 14) return 4;
   if (d_mm <= 22) return 6;
