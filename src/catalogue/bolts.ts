@@ -72,7 +72,7 @@ export function boltMaterial(propertyClass: PropertyClass, d_mm: number, basis: 
     return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 nominal values, EN 1993-1-8 Table 3.1" };
   }
   const [fub, fyb] = propertyClass === "8.8" && d_mm > 16 ? MINIMUM_8_8_ABOVE_M16 : MINIMUM_STRENGTHS[propertyClass];
-  return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 Table 3 minimum values, IS 1367-3; from memory" };
+  return { fub_MPa: fub, fyb_MPa: fyb, source: "ISO 898-1 Table 3 minimum values, IS 1367-3" };
 }
 
 /** Nominal shank (gross) area of the bolt, π d²/4 (mm²). */

@@ -44,16 +44,16 @@ function is2062Grade(fu_MPa: number, fy_MPa: [number, number, number], source: s
  * E250 values: IS 2062 (read in the table; see ../shared check values). E275, E300, E350, E410, E450: fu and
  * fy for t < 20 mm as IS 2062:2011 lists them at https://infralens.in/handbook/structural-steel-grades; fy for
  * 20–40 mm of E300–E450 as IS 800:2007 Table 1 is reproduced at https://infralens.in/code/IS-800-2007/clause/table-1;
- * E275 below 20 mm and every t > 40 mm value other than E250's: from memory (E450: the E450A tensile strength,
+ * E275 from 20 mm and every t > 40 mm value other than E250's: from memory (E450: the E450A tensile strength,
  * 570 MPa, the lower of its two qualities).
  */
 export const IS2062_GRADES: Record<string, SteelGrade> = {
   E250: is2062Grade(410, [250, 240, 230], "IS 2062, Table 2"),
-  E275: is2062Grade(430, [275, 265, 255], "IS 2062, Table 2; from memory"),
-  E300: is2062Grade(440, [300, 290, 280], "IS 2062, Table 2; from memory"),
-  E350: is2062Grade(490, [350, 330, 320], "IS 2062, Table 2; from memory"),
-  E410: is2062Grade(540, [410, 390, 380], "IS 2062, Table 2; from memory"),
-  E450: is2062Grade(570, [450, 430, 420], "IS 2062, Table 2; from memory"),
+  E275: is2062Grade(430, [275, 265, 255], "IS 2062:2011, Table 2; t ≥ 20 mm from memory"),
+  E300: is2062Grade(440, [300, 290, 280], "IS 2062:2011, Table 2; t > 40 mm from memory"),
+  E350: is2062Grade(490, [350, 330, 320], "IS 2062:2011, Table 2; t > 40 mm from memory"),
+  E410: is2062Grade(540, [410, 390, 380], "IS 2062:2011, Table 2; t > 40 mm from memory"),
+  E450: is2062Grade(570, [450, 430, 420], "IS 2062:2011, Table 2; t > 40 mm from memory"),
 };
 
 /**

@@ -29,7 +29,7 @@ function spliceShare(scenario: Scenario): { value: number; text: string } {
   if (!scenario.splice.endsInContact) return { value: 1, text: "compression: butt ends not in contact — the bolts and covers carry the whole compression" };
   return {
     value: EN_CONTACT_SPLICE_SHARE,
-    text: "compression: butt ends prepared for full contact in bearing — the splice material (bolts, covers) carries 25 % of the compression and the contact 75 % (EN 1993-1-8 6.2.7.1(14), clause number from memory); the main plates' cross-section carries the whole force",
+    text: "compression: butt ends prepared for full contact in bearing — the splice material (bolts, covers) carries 25 % of the compression and the contact 75 % (EN 1993-1-8 6.2.7.1(14)); the main plates' cross-section carries the whole force",
   };
 }
 
