@@ -94,8 +94,10 @@ describe("design basis: the factors the checks use, against the codes' published
     expect(html).toMatch(/national annex values given by the scenario/);
   });
 
-  // AISC 360-16 (from memory): D2 φt 0.90 yielding, 0.75 rupture; J3.6 bolt shear φ 0.75; J3.10 bearing
-  // and tearout φ 0.75; J4.3 block shear φ 0.75; J3.8 slip φ 1.00 standard holes.
+  // AISC 360-16: J4.3 block shear φ 0.75 (T. B. Quimby, A Beginner's Guide to the Steel Construction Manual,
+  // 15th ed., §3.7, https://bgstructuralengineering.com/BGSCM15/BGSCM003/BGSCM00307.htm). From memory: D2 φt
+  // 0.90 yielding, 0.75 rupture; J3.6 bolt shear φ 0.75; J3.10 bearing and tearout φ 0.75; J3.8 slip φ 1.00
+  // (the same φ in 360-22 J4.1, J3.7, J3.11, J3.9 — OCR copy: github.com/phd-peter/kds-ocr-paddle).
   it("AISC 360-16 LRFD: φ 0.90 yield, 0.75 rupture, 0.75 bolt shear, bearing and block shear, with their sections", () => {
     const rows = factorRows(writeReport(scenarioPath("canopy-tie-us.yaml")).html);
     const by = (source: string) => rows.find((r) => r.source.includes(source))?.value;

@@ -12,7 +12,9 @@
  *   - IS 3757 / IS 6623 / IS 6649 friction-grip assemblies as tabulated in Indian design aids;
  *   - ASTM F3125 heavy hex structural bolts with ASTM A563 heavy hex nuts and ASTM F436 washers; the length
  *     found by the "add to grip" values of the RCSC Specification (Table C-2.1, reproduced in the AISC
- *     Manual) plus 5/32 in for each F436 washer, rounded up to the next 1/4 in — from memory.
+ *     Manual) plus 5/32 in for each F436 washer (CISC, "Bolt length selection aid",
+ *     https://www.cisc-icca.ca/bolt-length-selection-aid/), rounded up to the next 1/4 in — the add-to-grip
+ *     values and the rounding from memory.
  */
 import { inchBoltSize } from "./bolts.js";
 import { hyphenatedInches } from "../units/units.js";
@@ -168,11 +170,14 @@ function isHsfg(d: number, grade: string): AssemblySystem {
 }
 
 /**
- * ASTM F3125 heavy hex structural bolts (inch), ASTM A563 heavy hex nuts, ASTM F436 washers; from memory.
+ * ASTM F3125 heavy hex structural bolts (inch), ASTM A563 heavy hex nuts, ASTM F436 washers.
  * Add-to-grip values of the RCSC Specification (nut height plus the stick-out and tolerances), in:
- * ½ 11/16, ⅝ 7/8, ¾ 1, ⅞ 1-1/8, 1 1-1/4, 1⅛ 1-1/2; F436 washer 5/32 in nominal; A563 heavy hex nut
- * heights ½ 31/64, ⅝ 39/64, ¾ 47/64, ⅞ 55/64, 1 63/64, 1⅛ 1-7/64 in; heavy hex structural bolt thread
- * lengths ½ 1, ⅝ 1-1/4, ¾ 1-3/8, ⅞ 1-1/2, 1 1-3/4, 1⅛ 2 in; lengths in 1/4 in steps from 1 to 8 in.
+ * ½ 11/16, ⅝ 7/8, ¾ 1, ⅞ 1-1/8, 1 1-1/4, 1⅛ 1-1/2 (from memory); F436 washer 5/32 in nominal (CISC bolt
+ * length aid, https://www.cisc-icca.ca/bolt-length-selection-aid/); heavy hex nut heights ½ 31/64, ⅝ 39/64,
+ * ¾ 47/64, ⅞ 55/64, 1 63/64, 1⅛ 1-7/64 in (ASME B18.2.2 heavy hex nut table, as reproduced at
+ * https://tr.scribd.com/document/363879228/Tuercas-ASTM); heavy hex structural bolt thread lengths ½ 1,
+ * ⅝ 1-1/4, ¾ 1-3/8, ⅞ 1-1/2, 1 1-3/4, 1⅛ 2 in (Portland Bolt, "Bolt thread length",
+ * http://www.portlandbolt.com/faqs/bolt-thread-lengths/); lengths in 1/4 in steps from 1 to 8 in (from memory).
  */
 const ASTM_INCH: Record<string, { addToGrip: number; nut: number; thread: number }> = {
   "0.5": { addToGrip: 11 / 16, nut: 31 / 64, thread: 1 },
