@@ -127,7 +127,8 @@ export function inchSizeText(d_in: number): string {
  * ASTM A307 Grade A. `iso` is the ISO 898-1 property class of the same strength level (A325 ↔ 8.8,
  * A490 ↔ 10.9, A307 ↔ 4.6; common practice, as the metric F3125 grades A325M/A490M correspond to 8.8/10.9),
  * which code-neutral parts (cost table, bill of materials) key by. Fu: specified minimum tensile strength,
- * ksi (ASTM F3125: 120 ksi for A325 up to 1 in, 105 ksi over 1 in — from memory; 150 ksi A490; A307 60 ksi).
+ * ksi (ASTM F3125: 120 ksi for Grade A325 in every size — the 105 ksi above 1 in was the withdrawn ASTM A325's;
+ * 150 ksi A490; A307 60 ksi). No check reads Fu of a bolt under AISC 360-16: Table J3.2 gives Fnt and Fnv.
  */
 export const ASTM_BOLT_GRADES = ["A307", "A325", "A490"] as const;
 export type AstmBoltGrade = (typeof ASTM_BOLT_GRADES)[number];
