@@ -144,6 +144,12 @@ export interface DesignCode extends GeometryCode {
   netStrengthPerWidth(spec: PlateSpec): number;
   /** Property classes the code allows for an assembly (friction grip: 8.8 and 10.9 under IS 800). */
   classesFor(assembly: "bearing" | "friction-grip"): readonly string[];
+  /**
+   * The code's minimum design action on the connection of a tension member, as a condition on the
+   * joint's design strength in tension (`jointTension_N`, worked out from every other check), called
+   * when the load has a tension sense; absent or null: the code sets none here (engine/check.ts).
+   */
+  minimumDesignAction?: (scenario: CheckableScenario, jointTension_N: number) => CheckResult | null;
   /** Checks of a splice in compression (see engine/senses.ts); absent: the code checks tension only. */
   compression?: CompressionChecks;
   /** Scenario settings this code reads (absent: none). */

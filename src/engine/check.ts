@@ -55,6 +55,13 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
   const ref = referenceLoad_N(scenario.load);
   const bySense: { tension?: number; compression?: number } = {};
   for (const sense of senses) bySense[sense] = (sense === "tension" ? leastTension : leastCompression) * (factoredOf(scenario.load, sense) / ref);
+  // The code's minimum design action: a condition on the joint's design strength in tension, so made
+  // once every other check has set it (it sets no load itself, and never the joint strength).
+  const minimum = bySense.tension !== undefined && code.minimumDesignAction ? code.minimumDesignAction(scenario, bySense.tension) : null;
+  if (minimum) {
+    checks.push(minimum);
+    maxUtilisation = Math.max(maxUtilisation, minimum.utilisation);
+  }
   return new JointReport(code, bySenseChecks, jointStrength, governing, senses, bySense, plain, maxUtilisation);
 }
 

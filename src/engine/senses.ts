@@ -78,7 +78,7 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
     if (c.type === "rule") checks.push(c);
     else if (reversal) checks.push(labelled(c, "tension", 1, true));
   }
-  warnings.push(...(reversal ? base.warnings : base.warnings.filter((w) => w.id !== "below-minimum-design-action")));
+  warnings.push(...base.warnings);
   // Compression: the bolt checks with the bearing directions reversed, at the force the splice carries.
   const carried = share.value * C;
   const serviceC = scenario.load.serviceCompression_N;

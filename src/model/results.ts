@@ -30,6 +30,7 @@ export type CheckKind =
   | "min-edge-distance"
   | "max-edge-distance"
   | "group-centroid"
+  | "minimum-design-action"
   | "filler-thickness"
   | "gross-compression"
   | "strut-buckling"

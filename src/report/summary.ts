@@ -215,6 +215,7 @@ export const RULE_SHORT: Record<CheckKind, string> = {
   "min-edge-distance": "min. edge distance",
   "max-edge-distance": "max. edge distance",
   "group-centroid": "group on axis",
+  "minimum-design-action": "minimum action",
   "filler-thickness": "filler thickness",
   "gross-compression": "gross section in compression",
   "strut-buckling": "cover strut",

@@ -6,13 +6,14 @@ import { mapped } from "../../model/lists.js";
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
-import type { CheckResult, Warning } from "../../model/results.js";
+import type { CheckResult } from "../../model/results.js";
 import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
 import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
-import { codeChecks } from "../check-builders.js";
+import { codeChecks, strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
+import { cl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { holeDimensions } from "./holes.js";
 import {
@@ -86,10 +87,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   }
   checks.push(...minSpacingRule(joint), ...maxSpacingRules(joint), ...edgeRules(joint, scenario), ...gripRule(joint), ...centroidRule(joint));
 
-  const warnings = factorWarnings(joint, gfs);
-  const minimum = minimumDesignAction(scenario);
-  if (minimum) warnings.push(minimum);
-  return codeChecks(checks, warnings, () => conventionsOf(scenario));
+  return codeChecks(checks, factorWarnings(joint, gfs), () => conventionsOf(scenario));
 }
 
 /** The conventions of an IS 800 check in words (written when an output reads them). */
@@ -116,18 +114,37 @@ function conventionsOf(scenario: CheckableScenario): string[] {
 }
 
 /**
- * Minimum design action on fastenings: a connection of a tension member is designed for at least
- * 0.3 times the member's design capacity in tension. IS 800:2007, cl. 10.7 (from memory).
- * A warning, not a failed check: the engineer decides whether the member is fully utilised elsewhere.
+ * Minimum design action on fastenings: the connection of a tension member is designed for at least
+ * 0.3 times the member's design capacity in tension, so the joint's design strength in tension must
+ * reach 0.3·Td. IS 800:2007, cl. 10.7 (from memory). Read as a design action the connection must carry,
+ * not as advice: the reading that refuses more. The member's capacity is the unperforated main plate's
+ * (the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1 of the thinner main plate): the member's own holes, elsewhere,
+ * are not known here, and the larger figure refuses more. A condition: it sets no load (load ratio 0).
  */
-function minimumDesignAction(scenario: CheckableScenario): Warning | null {
-  const member = Math.min(unperforated(scenario.plates.mainA), unperforated(scenario.plates.mainB));
-  const T = scenario.load.factoredTension_N;
-  if (T >= 0.3 * member - 1e-9) return null;
-  return {
-    id: "below-minimum-design-action",
-    message: `factored tension ${f(T / 1000)} kN is below 0.3 × the main plate's tension capacity (0.3 × ${f(member / 1000)} = ${f((0.3 * member) / 1000)} kN), the minimum design action for connections of tension members (IS 800:2007 cl. 10.7, from memory)`,
-  };
+function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: number): CheckResult | null {
+  if (!(scenario.load.factoredTension_N > 0)) return null;
+  const member_N = Math.min(unperforated(scenario.plates.mainA), unperforated(scenario.plates.mainB));
+  const minimum_N = 0.3 * member_N;
+  const holds = minimum_N <= jointTension_N * (1 + 1e-9);
+  // Under reversal every tension check is labelled with its sense (engine/senses.ts).
+  const reversal = (scenario.load.factoredCompression_N ?? 0) > 0;
+  return strength({
+    id: "minimum-design-action",
+    kind: "minimum-design-action",
+    title: reversal ? "Minimum design action on the connection (tension)" : "Minimum design action on the connection",
+    ...(reversal ? { sense: "tension" as const } : {}),
+    component: "joint",
+    citation: cl("10.7"),
+    formula: "0.3·Td ≤ Td,joint;  Td = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) of the main plate without holes",
+    substituted: () => `0.3 × ${kN(member_N)} = ${kN(minimum_N)} ${holds ? "≤" : ">"} ${kN(jointTension_N)}, the joint's design strength in tension`,
+    limitState: "ULS",
+    demand_N: minimum_N,
+    resistance_N: jointTension_N,
+    loadRatio: 0,
+    notes: () => [
+      "a condition on the joint: it sets no load; the connection of a tension member is designed for at least 0.3 × the member's design capacity in tension (cl. 10.7, from memory: read as a design action, the reading that refuses more)",
+    ],
+  });
 }
 
 const unperforated = (spec: PlateSpec) => unperforatedStrength(spec).value_N;
@@ -168,6 +185,7 @@ export const IS800_2007: DesignCode = {
   searchLimits,
   strengthBound,
   compression: IS800_COMPRESSION,
+  minimumDesignAction: minimumDesignActionCheck,
   netStrengthPerWidth: (spec) => Tdn(spec.thickness_mm, plateStrength(spec).fu_MPa),
   classesFor: (assembly) => (assembly === "friction-grip" ? ["8.8", "10.9"] : PROPERTY_CLASSES),
 };
