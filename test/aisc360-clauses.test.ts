@@ -62,6 +62,10 @@ describe("J3.6 bolt shear φRn = 0.75·Fnv·Ab (Table J3.2), one shear plane", (
     expect(a307GripFactor("Group A", 4.5 * IN, 0.75 * IN)).toBe(1);
     expect(a307GripFactor("A307", 3.75 * IN, 0.75 * IN)).toBe(1);
   });
+  it("Table J3.2 note [c], metric: −1 % per 2 mm, the note's metric step (\"1/16 in. (2 mm)\", 360-10 and 360-22 print the same): M20, grip 130 mm → 1 − 0.01 × (130 − 100)/2 = 0.85 (F)", () => {
+    expect(a307GripFactor("A307", 130, 20)).toBeCloseTo(0.85, 12);
+    expect(a307GripFactor("A307", 100, 20)).toBe(1);
+  });
 });
 
 describe("J3.10 bearing and tearout per inch of plate thickness", () => {

@@ -1,6 +1,7 @@
 /**
  * Bolt shear of bearing-type connections, AISC 360-16 J3.6 with Table J3.2 and the filler rule of J5.2.
  */
+import { inchBoltSize } from "../../catalogue/bolts.js";
 import { MM_PER_IN, MPA_PER_KSI, PHI } from "./factors.js";
 import type { BoltGroup } from "./materials.js";
 
@@ -43,15 +44,20 @@ export function fillerFactor(t_mm: number, developed: boolean): number {
   return 1 - 0.4 * (Math.min(t_in, 0.75) - 0.25);
 }
 
+/** The grip step of Table J3.2's A307 note: 1/16 in for an inch bolt, 2 mm for a metric one, mm. */
+export function a307GripStep_mm(d_mm: number): number {
+  return inchBoltSize(d_mm) !== undefined ? MM_PER_IN / 16 : 2;
+}
+
 /**
- * A307 long-grip factor: the tabulated shear reduced by 1 % for each 1/16 in (2 mm) of grip over five
- * diameters. AISC 360-16 Table J3.2, note [c] (from memory; the same wording, "1/16 in. (2 mm)", is printed
+ * A307 long-grip factor: the tabulated shear reduced by 1 % for each 1/16 in (2 mm for a metric bolt) of
+ * grip over five diameters. AISC 360-16 Table J3.2, note [c] (from memory; the same wording, "1/16 in. (2 mm)", is printed
  * in 360-10 note [c] and 360-22 note [d] — scribd copy of 360-10 Table J3.2, document 511246167; OCR copy
  * of 360-22: github.com/phd-peter/kds-ocr-paddle, aisc360-22_contents.md). Other groups: 1.
  */
 export function a307GripFactor(group: BoltGroup, grip_mm: number, d_mm: number): number {
   if (group !== "A307" || grip_mm <= 5 * d_mm + 1e-9) return 1.0;
-  return Math.max(0, 1 - 0.01 * ((grip_mm - 5 * d_mm) / (MM_PER_IN / 16)));
+  return Math.max(0, 1 - 0.01 * ((grip_mm - 5 * d_mm) / a307GripStep_mm(d_mm)));
 }
 
 /**

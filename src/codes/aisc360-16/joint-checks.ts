@@ -99,7 +99,7 @@ function reductionNotes(gs: GroupShear, scenario: CheckableScenario): string[] {
     gs.group.packing_mm > 0
       ? `filler ${u.len(gs.group.packing_mm)}: ${gs.filler < 1 ? `1 − 0.4(t − 0.25) = ${f(gs.filler, 3)} (J5.2)` : scenario.options.fillersDeveloped ? "developed, no reduction (J5.2)" : "≤ 1/4 in, no reduction (J5.2)"}`
       : "no filler",
-    ...(bolt.group === "A307" ? [`A307 grip ${u.len(gs.group.grip_mm)}: factor ${f(gs.grip, 3)} (1 % per 1/16 in over 5d; Table J3.2 note [c], from memory)`] : []),
+    ...(bolt.group === "A307" ? [`A307 grip ${u.len(gs.group.grip_mm)}: factor ${f(gs.grip, 3)} (1 % per ${inchBoltSize(bolt.d_mm) !== undefined ? "1/16 in" : "2 mm"} over 5d; Table J3.2 note [c], from memory)`] : []),
   ];
 }
 
