@@ -4,7 +4,8 @@
  *     the formula of cl. 7.1.2.1 written out beside each (F).
  *   - EN 1993-1-1 6.3.1.2: χ of curve c at λ̄ 0.5 = 0.843 and at 1.0 = 0.540, as the handbook tables of χ print
  *     them (from memory); (6.49) written out (F).
- *   - AISC Manual Table 4-22 (available critical stress): Fy 36 ksi, KL/r 50 → φFcr = 28.4 ksi (from memory);
+ *   - AISC Manual Table 4-14 of the 15th edition (Table 4-22 of the 14th; available critical stress): Fy 36 ksi,
+ *     KL/r 50 → φFcr = 28.4 ksi (from memory; the E3 formula gives the same);
  *     E3 written out (F). J4.4: Lc/r ≤ 25 → Fy·Ag (Eq. J4-6).
  */
 import { describe, expect, it } from "vitest";
@@ -40,7 +41,7 @@ describe("EN 1993-1-1 6.3.1.2, curve c (α 0.49)", () => {
 });
 
 describe("AISC 360-16 E3 and J4.4", () => {
-  it("Fy 36 ksi, KL/r 50: Fe = π² × 29000/2500 = 114.5 ksi, Fcr = 0.658^(36/114.5) × 36 = 31.6 ksi, φFcr = 28.4 ksi (Manual Table 4-22)", () => {
+  it("Fy 36 ksi, KL/r 50: Fe = π² × 29000/2500 = 114.5 ksi, Fcr = 0.658^(36/114.5) × 36 = 31.6 ksi, φFcr = 28.4 ksi (Manual Table 4-14, 15th ed.)", () => {
     expect((0.9 * Fcr_MPa(36 * KSI, 50).Fcr_MPa) / KSI).toBeCloseTo(28.4, 1);
   });
   it("Fy 50 ksi, KL/r 100 ≤ 4.71√(E/Fy) = 113.4: Fe = 28.62 ksi, φFcr = 0.9 × 0.658^(50/28.62) × 50 = 21.7 ksi (F); KL/r 150: 0.9 × 0.877 × 12.72 = 10.0 ksi (F)", () => {
