@@ -18,18 +18,35 @@ import { smallSearchScenario } from "./helpers/generate.js";
 
 const costs = parseCostTable(readFileSync(`${ROOT}/catalogue/costs.yaml`, "utf8"), "catalogue");
 
-function compare(seed: number, rankBy: RankBy, top: number, options: { variants?: boolean; minAcross?: number } = {}) {
+function compare(seed: number, rankBy: RankBy, top: number, options: { variants?: boolean; minAcross?: number; tensionFactor?: number } = {}) {
   const g = smallSearchScenario(seed);
-  const file = parse(g.yaml) as { search: Record<string, unknown> };
+  const file = parse(g.yaml) as { search: Record<string, unknown>; load: Record<string, number> };
   if (options.minAcross !== undefined) file.search.min_across = options.minAcross;
+  if (options.tensionFactor !== undefined) {
+    for (const k of ["factored_tension", "service_tension"]) if (file.load[k] !== undefined) file.load[k] = Math.max(1, Math.round(file.load[k]! * options.tensionFactor));
+  }
   const { scenario, code } = parseScenario(stringify(file));
   const ctx = { scenario, code, costs };
   const variants = options.variants ?? false;
   const fast = searchLayouts(ctx, { top, rankBy, variants });
   const brute = bruteForceLayouts(ctx, top, rankBy, { variants });
   const line = (c: { key: { numbers: number[]; text: string } }) => `${c.key.numbers.join(" ")} ${c.key.text}`;
-  return { g, fast: fast.results.map(line), brute: brute.results.map(line), checksFast: fast.stats.fullChecks, checksBrute: brute.checks, passAll: fast.results.every((c) => c.report.pass) };
+  return { g, scenario, fast: fast.results.map(line), brute: brute.results.map(line), checksFast: fast.stats.fullChecks, checksBrute: brute.checks, passAll: fast.results.every((c) => c.report.pass), reports: fast.results.map((c) => c.report) };
 }
+
+describe("search = brute force where the minimum design action governs (light loads; IS 800:2007 cl. 10.7, from memory)", () => {
+  // A tenth of the generated load: below 0.3 × the main plate's capacity, so the condition, not the load,
+  // sets the strength a layout must reach — and the search's bounds test against it.
+  it.each([1000, 1001, 1002, 1003, 1004, 1005])("seed %i, load × 0.1", (seed) => {
+    const r = compare(seed, "cost", 5, { tensionFactor: 0.1 });
+    expect(r.fast, r.g.description).toEqual(r.brute);
+    expect(r.passAll).toBe(true);
+    for (const report of r.reports) {
+      const minimum = report.checks.find((c) => c.id === "minimum-design-action");
+      expect(minimum && minimum.type === "strength" && minimum.demand_N > r.scenario.load.factoredTension_N).toBe(true);
+    }
+  });
+});
 
 describe("search = brute force on generated scenarios (ranked by cost)", () => {
   const seeds = Array.from({ length: 24 }, (_, i) => 1000 + i);

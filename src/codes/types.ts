@@ -4,7 +4,7 @@
  */
 import type { GeometryCode } from "../geometry/joint-builder.js";
 import type { Joint } from "../model/joint.js";
-import type { CheckResult, Warning } from "../model/results.js";
+import type { CheckResult, StrengthCheck, Warning } from "../model/results.js";
 import type { CheckableScenario, CheckOptions, EfficiencyBasis, PlateSpec, Scenario } from "../model/scenario.js";
 
 /** An input the code cannot accept, with the scenario path it concerns. */
@@ -149,7 +149,7 @@ export interface DesignCode extends GeometryCode {
    * joint's design strength in tension (`jointTension_N`, worked out from every other check), called
    * when the load has a tension sense; absent or null: the code sets none here (engine/check.ts).
    */
-  minimumDesignAction?: (scenario: CheckableScenario, jointTension_N: number) => CheckResult | null;
+  minimumDesignAction?: (scenario: CheckableScenario, jointTension_N: number) => StrengthCheck | null;
   /** Checks of a splice in compression (see engine/senses.ts); absent: the code checks tension only. */
   compression?: CompressionChecks;
   /** Scenario settings this code reads (absent: none). */

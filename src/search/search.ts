@@ -236,6 +236,28 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     return stream;
   };
   const boundReasons = new Map<string, number>();
+  /**
+   * The least joint strength a layout of family f must reach: the load T, or the code's minimum design
+   * action where it is higher (a condition on the joint's strength in tension; IS 800 cl. 10.7). Its
+   * figure is the demand of the condition the checker itself lists (code.minimumDesignAction, whose
+   * demand does not depend on the joint strength it is given), once per family scenario. Tension only:
+   * under reversal a strength bound is the lesser of the two senses', and the condition reads the
+   * tension sense's alone, so the bound is tested against T as before.
+   */
+  const requiredOf = (f: Family): number => {
+    let required = requiredByBase.get(f.base);
+    if (required === undefined) {
+      const tensionOnly = scenario.load.factoredTension_N > 0 && !((scenario.load.factoredCompression_N ?? 0) > 0);
+      const minimum = tensionOnly && code.minimumDesignAction ? code.minimumDesignAction(f.base as CheckableScenario, 0) : null;
+      required = Math.max(T, minimum ? minimum.demand_N : 0);
+      requiredByBase.set(f.base, required);
+    }
+    return required;
+  };
+  const requiredByBase = new Map<Family["base"], number>();
+  /** The bound's reason for a family it rules out: its governing check, or the minimum design action. */
+  const reasonOf = (f: Family, strengthUpper_N: number, check: string): string =>
+    strengthUpper_N >= T * (1 - 1e-9) && strengthUpper_N < requiredOf(f) * (1 - 1e-9) ? "minimum design action" : check;
   const rankBy = options.rankBy;
   const width = narrowest(scenario);
   const transferred = scenario.options.netSectionLoad === "transferred";
@@ -295,7 +317,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const known = p === undefined ? familyNmin.get(f) : undefined;
     if (known !== undefined) return known;
     const b = loadBound(code, f.base as CheckableScenario, shapeOf(f, Array(f.lines).fill(1), p, e, eb));
-    const N = Math.max(f.lines, space.minBolts, Math.ceil(T / b.perBolt_N - 1e-9));
+    const N = Math.max(f.lines, space.minBolts, Math.ceil(requiredOf(f) / b.perBolt_N - 1e-9));
     if (p === undefined) familyNmin.set(f, N);
     return N;
   };
@@ -315,10 +337,10 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const bound = f.countsPerLine ? loadBound(code, f.base as CheckableScenario, shapeOf(f, counts)) : null;
     // Tapered families: the plates' bound, whatever the counts (worked out once per family).
     const strengthUpper_N = bound ? bound.jointStrength_N : taperedPlateBound(f);
-    const infeasible = strengthUpper_N < T * (1 - 1e-9) || (bound !== null && !bound.serviceOk);
+    const infeasible = strengthUpper_N < requiredOf(f) * (1 - 1e-9) || (bound !== null && !bound.serviceOk);
     if (infeasible) {
       stats.familiesSkippedByBound++;
-      const check = bound ? bound.check : "plate (gross yield or net section)";
+      const check = reasonOf(f, strengthUpper_N, bound ? bound.check : "plate (gross yield or net section)");
       boundReasons.set(check, (boundReasons.get(check) ?? 0) + 1);
       continue;
     }
@@ -370,7 +392,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   /** Whether the bound of a shape (dimensions left out at their most favourable) is below the load or a service check fails. */
   const boundFails = (f: Family, counts: number[], p: number | undefined, e: number | undefined, eb: number | undefined): boolean => {
     const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, counts, p, e, eb));
-    return bound.jointStrength_N < T * (1 - 1e-9) || !bound.serviceOk;
+    return bound.jointStrength_N < requiredOf(f) * (1 - 1e-9) || !bound.serviceOk;
   };
   /**
    * Grid and staggered families, at a node (0, ie, ieb) of the lattice: which sub-lattice below it no
@@ -520,7 +542,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     heap.push(nodeOf("tapered", vectorKey, f, node.ip, node.ie, node.ieb, node.gauges, node.stream, node.index + 1, null));
     if (!variants && seen.has(node.stream.arrangementAt(node.index))) continue;
     const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
-    if (vectorBound.jointStrength_N < T * (1 - 1e-9) || !vectorBound.serviceOk) {
+    if (vectorBound.jointStrength_N < requiredOf(f) * (1 - 1e-9) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
       continue;
     }

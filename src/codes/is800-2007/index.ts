@@ -6,7 +6,7 @@ import { mapped } from "../../model/lists.js";
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
-import type { CheckResult } from "../../model/results.js";
+import type { CheckResult, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
 import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
@@ -121,7 +121,7 @@ function conventionsOf(scenario: CheckableScenario): string[] {
  * (the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1 of the thinner main plate): the member's own holes, elsewhere,
  * are not known here, and the larger figure refuses more. A condition: it sets no load (load ratio 0).
  */
-function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: number): CheckResult | null {
+function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: number): StrengthCheck | null {
   if (!(scenario.load.factoredTension_N > 0)) return null;
   const member_N = Math.min(unperforated(scenario.plates.mainA), unperforated(scenario.plates.mainB));
   const minimum_N = 0.3 * member_N;
