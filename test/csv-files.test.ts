@@ -11,8 +11,7 @@
  * - 1 in = 25.4 mm exactly, 1 lb = 0.45359237 kg exactly (international yard and pound, 1959);
  * - standard holes: M20 → 22 mm (IS 800:2007 Table 19; EN 1090-2 Table 11), 3/4 in → 13/16 in
  *   (AISC 360-16 Table J3.3: d + 1/16 below 1 in, as summarised in the wcfrobert.github.io "Primer: AISC
- *   360-16 Chapter J Connection Design"; 13/16 in is printed in AISC 360-22 Table J3.3, OCR copy:
- *   github.com/phd-peter/kds-ocr-paddle, aisc360-22_contents.md);
+ *   360-16 Chapter J Connection Design"; 13/16 in is printed in AISC 360-22 Table J3.3);
  * - plate lengths and hole positions worked by hand from the scenario files' own pitch, end distances
  *   and butt gap (read here with the YAML library, not through the project's scenario reader).
  */

@@ -183,7 +183,7 @@ describe("EN 1090-2 Table 11: hole clearances", () => {
     expect(ec3.holeDimensions(12, "standard", undefined, 2).across_mm).toBe(14);
     expect(ec3.holeDimensions(20, "standard", undefined, 2).across_mm).toBe(22);
   });
-  it("oversize M20 → 24, M24 → 30; short slot M20 22 × 26; long slot M20 22 × 50 (EN 1090-2 Table 11 as reproduced at scribd.com/document/754155168, +4, +6, +6, 1.5 d)", () => {
+  it("oversize M20 → 24, M24 → 30; short slot M20 22 × 26; long slot M20 22 × 50 (EN 1090-2 Table 11 as a fabricator's holing procedure reproduces it: +4, +6, +6, 1.5 d)", () => {
     expect(ec3.holeDimensions(20, "oversize", undefined, 1)).toEqual({ across_mm: 24, along_mm: 24 });
     expect(ec3.holeDimensions(24, "oversize", undefined, 1).across_mm).toBe(30);
     expect(ec3.holeDimensions(20, "short-slot", "across", 1)).toEqual({ across_mm: 26, along_mm: 22 });

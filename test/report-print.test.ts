@@ -67,7 +67,7 @@ describe("design basis: the factors the checks use, against the codes' published
   // EN 1993-1-8:2005 Table 2.1 recommended values: γM2 1.25 (bolts, plates in bearing,
   // net section), γM3 1.25 (slip at ULS), γM3,ser 1.10 (slip at SLS); EN 1993-1-1:2005 6.1 NOTE 2B: γM0 1.00, γM1 1.00.
   // The same numbers are the UK National Annexes' (SCI Blue Book, steelforlifebluebook.co.uk, explanatory notes 5.1);
-  // that they are also the recommended values: from memory (one calculator web page says so too).
+  // that they are also the recommended values: from memory.
   it("EN 1993-1-8, Category A with the recommended values: γM0 1.00, γM2 1.25, said to be recommended", () => {
     const { html } = writeReport(scenarioPath("sports-hall-chord-ec3.yaml"));
     const rows = factorRows(html);
@@ -97,7 +97,7 @@ describe("design basis: the factors the checks use, against the codes' published
   // AISC 360-16: J4.3 block shear φ 0.75 (T. B. Quimby, A Beginner's Guide to the Steel Construction Manual,
   // 15th ed., §3.7, https://bgstructuralengineering.com/BGSCM15/BGSCM003/BGSCM00307.htm). From memory: D2 φt
   // 0.90 yielding, 0.75 rupture; J3.6 bolt shear φ 0.75; J3.10 bearing and tearout φ 0.75; J3.8 slip φ 1.00
-  // (the same φ in 360-22 J4.1, J3.7, J3.11, J3.9 — OCR copy: github.com/phd-peter/kds-ocr-paddle).
+  // (the same φ in 360-22 J4.1, J3.7, J3.11, J3.9).
   it("AISC 360-16 LRFD: φ 0.90 yield, 0.75 rupture, 0.75 bolt shear, bearing and block shear, with their sections", () => {
     const rows = factorRows(writeReport(scenarioPath("canopy-tie-us.yaml")).html);
     const by = (source: string) => rows.find((r) => r.source.includes(source))?.value;

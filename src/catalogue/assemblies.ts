@@ -114,8 +114,7 @@ export function nutClassOf(boltClass: string): string {
  * that gives the longer bolt). HR nuts take the ISO 4032 heights and HR bolts the ISO 4014 thread
  * lengths (from memory; EN 14399-7, the countersunk HR assembly, states "regular nut height ... EN ISO 4032"
  * and "thread length ... ISO 888" in its scope, iteh.us). At least four full threads stay between the nut's
- * seat and the plain shank: BS EN 1090-2:2008, 8.2.2, as reproduced at
- * https://www.scribd.com/document/408631384/BS-EN-1090-2-2008-Technical-Requirements-pdf. Washer thickness
+ * seat and the plain shank: BS EN 1090-2:2008, 8.2.2. Washer thickness
  * h nominal of EN 14399-6 (M12 3, M16–M24 4, M27–M30 5, M36 6): the BS EN 14399-6 dimension table as a supplier
  * reproduces it, https://torqbolt.com/bs-en-14399-6-chamfered-washers-plain-chamfered-washers-suppliers-manufacturers.
  */
@@ -174,8 +173,8 @@ function isHsfg(d: number, grade: string): AssemblySystem {
  * Add-to-grip values of the RCSC Specification (nut height plus the stick-out and tolerances), in:
  * ½ 11/16, ⅝ 7/8, ¾ 1, ⅞ 1-1/8, 1 1-1/4, 1⅛ 1-1/2 (from memory); F436 washer 5/32 in nominal (CISC bolt
  * length aid, https://www.cisc-icca.ca/bolt-length-selection-aid/); heavy hex nut heights ½ 31/64, ⅝ 39/64,
- * ¾ 47/64, ⅞ 55/64, 1 63/64, 1⅛ 1-7/64 in (ASME B18.2.2 heavy hex nut table, as reproduced at
- * https://tr.scribd.com/document/363879228/Tuercas-ASTM); heavy hex structural bolt thread lengths ½ 1,
+ * ¾ 47/64, ⅞ 55/64, 1 63/64, 1⅛ 1-7/64 in (ASME B18.2.2 heavy hex nut table); heavy hex structural bolt
+ * thread lengths ½ 1,
  * ⅝ 1-1/4, ¾ 1-3/8, ⅞ 1-1/2, 1 1-3/4, 1⅛ 2 in (Portland Bolt, "Bolt thread length",
  * http://www.portlandbolt.com/faqs/bolt-thread-lengths/); lengths in 1/4 in steps from 1 to 8 in (from memory).
  */

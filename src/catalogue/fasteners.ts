@@ -12,8 +12,8 @@ export const THREAD_PITCH_MM: Record<number, number> = { 12: 1.75, 16: 2, 18: 2.
  * https://www.trojansf.co.uk/standards/iso-4032), washer thickness h of ISO 7089 plain washers (as tabulated
  * at https://engineeringhardware.com/guide/standard/iso-7089-cad-svg-086-washer/; M22 and M27, not listed
  * there, from memory); thread length b (reference) of ISO 4014:
- * b = 2d + 6 (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 (l > 200) (EN ISO 4014 table, as reproduced at
- * https://de.scribd.com/document/597428886/4014-DIN-931-All-3: M12 30/36/49, M20 46/52/65, M24 54/60/73).
+ * b = 2d + 6 (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 (l > 200) (the EN ISO 4014 table of b: M12
+ * 30/36/49, M20 46/52/65, M24 54/60/73).
  */
 export const HEX_NUT_HEIGHT_MM: Record<number, number> = { 12: 10.8, 16: 14.8, 18: 15.8, 20: 18, 22: 19.4, 24: 21.5, 27: 23.8, 30: 25.6, 36: 31 };
 export const PLAIN_WASHER_MM: Record<number, number> = { 12: 2.5, 16: 3, 18: 3, 20: 3, 22: 3, 24: 4, 27: 4, 30: 4, 36: 5 };

@@ -52,8 +52,7 @@ export function a307GripStep_mm(d_mm: number): number {
 /**
  * A307 long-grip factor: the tabulated shear reduced by 1 % for each 1/16 in (2 mm for a metric bolt) of
  * grip over five diameters. AISC 360-16 Table J3.2, note [c] (from memory; the same wording, "1/16 in. (2 mm)", is printed
- * in 360-10 note [c] and 360-22 note [d] — scribd copy of 360-10 Table J3.2, document 511246167; OCR copy
- * of 360-22: github.com/phd-peter/kds-ocr-paddle, aisc360-22_contents.md). Other groups: 1.
+ * in 360-10 note [c] and 360-22 note [d]). Other groups: 1.
  */
 export function a307GripFactor(group: BoltGroup, grip_mm: number, d_mm: number): number {
   if (group !== "A307" || grip_mm <= 5 * d_mm + 1e-9) return 1.0;

@@ -22,8 +22,7 @@ import { MM_PER_IN } from "./factors.js";
  * Compression members other than columns with ends finished to bear: splice material and its
  * connectors hold all parts in line, for the lesser of (1) a tension of 50 % of the required compressive
  * strength and (2) the effects of a transverse load of 2 %. AISC 360-16 J1.4(b) (wording as printed in
- * AISC 360-22 J1.4(b), OCR copy: github.com/phd-peter/kds-ocr-paddle, aisc360-22_contents.md; the 360-16
- * text not re-read).
+ * AISC 360-22 J1.4(b); the 360-16 text not re-read).
  * Read here as: the bolts and covers carry 50 % of the compression, the contact the rest; (2) is not
  * evaluated ((1) is taken, the reading that refuses more).
  */
@@ -97,8 +96,8 @@ function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: Plate
  * Longitudinal spacing of fasteners in plates in compression: besides the J3.5 limit (24 t, 12 in),
  * 0.75·t·√(E/Fy) and 12 in, t the thinner plate (AISC 360-16 E6.2(a) as J3.5 refers to it for members in
  * compression; from memory, the reading that refuses more). Fy the highest of the plates. AISC 360-22 prints
- * the limit in E6.2(b) (0.75 t √(E/Fy), 12 in (300 mm); staggered fasteners 1.12 t √(E/Fy), 18 in; OCR copy:
- * github.com/phd-peter/kds-ocr-paddle, aisc360-22_contents.md); the 360-16 item letter not re-read.
+ * the limit in E6.2(b) (0.75 t √(E/Fy), 12 in (300 mm); staggered fasteners 1.12 t √(E/Fy), 18 in); the
+ * 360-16 item letter not re-read.
  */
 function compressionPitchRule(joint: Joint): RuleCheck[] {
   const Fy = Math.max(...holePlates(joint).map((p) => p.fy_MPa));

@@ -3,9 +3,8 @@
  * and long-slotted nominal dimensions (width × length). Standard values as in ../shared check values
  * (J3.3M). Inch standard holes d + 1/16, d ≥ 1 in: d + 1/8 for 360-16 as summarised in the
  * wcfrobert.github.io "Primer: AISC 360-16 Chapter J Connection Design" (2023); every inch and metric
- * size here is also printed in AISC 360-22 Tables J3.3 / J3.3M (OCR copy: github.com/phd-peter/
- * kds-ocr-paddle, aisc360-22_contents.md; its 1 in short-slot length cell is garbled). The 360-16
- * oversize and slot sizes themselves from memory.
+ * size here is also printed in AISC 360-22 Tables J3.3 / J3.3M (the 1 in short-slot length not read).
+ * The 360-16 oversize and slot sizes themselves from memory.
  */
 import { inchBoltSize } from "../../catalogue/bolts.js";
 import type { HoleDimensions } from "../../geometry/joint-builder.js";

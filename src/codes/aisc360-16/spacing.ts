@@ -195,10 +195,8 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
  * Undeveloped fillers not over ¾ in (19 mm). The project's reading of J5.2 (AISC 360-16): fillers over
  * ¼ in reduce the bolt shear by 1 − 0.4(t − 0.25) (J5.2(a)), here with t capped at ¾ in and thicker
  * fillers refused unless developed (J5.2(b), extended and secured). That follows the older wording of
- * the provision; as recalled, 360-16 floors the factor at 0.85 and sets no ¾ in limit (from memory; a user
- * forum quoting 360-16 J5.2 agrees, and AISC 360-22 J5.2(a) prints "not less than 0.85" with no ¾ in
- * limit — OCR copy: github.com/phd-peter/kds-ocr-paddle, aisc360-22_contents.md), so this rule refuses
- * more than 360-16 may.
+ * the provision; as recalled, 360-16 floors the factor at 0.85 and sets no ¾ in limit (from memory; AISC
+ * 360-22 J5.2(a) prints "not less than 0.85" with no ¾ in limit), so this rule refuses more than 360-16 may.
  */
 export function fillerRule(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
   if (scenario.options.fillersDeveloped) return [];

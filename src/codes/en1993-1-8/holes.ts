@@ -11,9 +11,8 @@
  *                       normal hole
  *   long slots          length + 1.5 d; width as a normal hole
  * Oversize and slot rows: EN 1090-2 Table 11 as reproduced in a fabricator's holing procedure
- * (https://www.scribd.com/document/754155168/4-Holing-Procedure; edition not stated there, its footnotes on
- * d < 12 and d > 36 mm suggest the 2018 one); the M14 column read with an EN 1993-1-8 bolt data sheet
- * (https://www.scribd.com/document/787032185/Suruburi-EC3: M14 oversize 17, short slot 18 mm).
+ * (edition not stated there; its footnotes on d < 12 and d > 36 mm suggest the 2018 one); the M14 column
+ * read with an EN 1993-1-8 bolt data sheet (M14 oversize 17, short slot 18 mm).
  */
 import type { HoleDimensions } from "../../geometry/joint-builder.js";
 import type { HoleType, SlotDirection } from "../../model/scenario.js";
