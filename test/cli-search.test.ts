@@ -102,6 +102,22 @@ describe("splicewright search", () => {
     expect(r.stdout).toMatch(/No compliant layout: no layout in the declared space passes every check \(/);
   });
 
+  it("nothing complies because of the minimum design action: the reason gives the condition, its clause and its figure", () => {
+    const text = [
+      "name: light lap",
+      "code: is800-2007",
+      "splice: { type: lap }",
+      "plates:",
+      "  main: { width: 200, thickness: 12, grade: E250, edges: sawn }",
+      "load: { factored_tension: 20 kN }",
+      'search: { sizes: [12], classes: ["4.6"], max_along: 1, patterns: [grid] }',
+    ].join("\n");
+    const r = cli(["search", tempScenario(text)]);
+    expect(r.code).toBe(1);
+    // 0.3 × min(2400 × 250/1.10, 0.9 × 2400 × 410/1.25) = 0.3 × 545.45 = 163.6 kN (IS 800:2007 cl. 10.7, from memory; cl. 6.2, 6.3.1)
+    expect(r.stdout.replace(/\s+/g, " ")).toMatch(/ruled out by the minimum design action on the connection \(IS 800:2007 cl\. 10\.7: 163\.6 kN\) bound/);
+  });
+
   it("bad options exit 2 with one line", () => {
     const r = cli(["search", demo, "--rank-by", "beauty"]);
     expect(r.code).toBe(2);

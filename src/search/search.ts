@@ -22,6 +22,7 @@ import { anyOpenVector, nextTaperedCounts, type TaperedAnswer, type TaperedProbl
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
 import { loadBound } from "../codes/sense-bound.js";
 import { referenceLoad_N } from "../model/load.js";
+import { citationText } from "../report/citation.js";
 
 export interface Candidate {
   family: Family;
@@ -244,20 +245,24 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
    * under reversal a strength bound is the lesser of the two senses', and the condition reads the
    * tension sense's alone, so the bound is tested against T as before.
    */
-  const requiredOf = (f: Family): number => {
-    let required = requiredByBase.get(f.base);
-    if (required === undefined) {
+  const requiredOf = (f: Family): number => minimumOf(f).required_N;
+  const minimumOf = (f: Family): { required_N: number; words: string } => {
+    let known = minimumByBase.get(f.base);
+    if (known === undefined) {
       const tensionOnly = scenario.load.factoredTension_N > 0 && !((scenario.load.factoredCompression_N ?? 0) > 0);
       const minimum = tensionOnly && code.minimumDesignAction ? code.minimumDesignAction(f.base as CheckableScenario, 0) : null;
-      required = Math.max(T, minimum ? minimum.demand_N : 0);
-      requiredByBase.set(f.base, required);
+      known = {
+        required_N: Math.max(T, minimum ? minimum.demand_N : 0),
+        words: minimum ? `${minimum.title.toLowerCase()} (${citationText(minimum.citation)}: ${(minimum.demand_N / 1000).toFixed(1)} kN)` : "",
+      };
+      minimumByBase.set(f.base, known);
     }
-    return required;
+    return known;
   };
-  const requiredByBase = new Map<Family["base"], number>();
+  const minimumByBase = new Map<Family["base"], { required_N: number; words: string }>();
   /** The bound's reason for a family it rules out: its governing check, or the minimum design action. */
   const reasonOf = (f: Family, strengthUpper_N: number, check: string): string =>
-    strengthUpper_N >= T * (1 - 1e-9) && strengthUpper_N < requiredOf(f) * (1 - 1e-9) ? "minimum design action" : check;
+    strengthUpper_N >= T * (1 - 1e-9) && strengthUpper_N < requiredOf(f) * (1 - 1e-9) ? minimumOf(f).words : check;
   const rankBy = options.rankBy;
   const width = narrowest(scenario);
   const transferred = scenario.options.netSectionLoad === "transferred";

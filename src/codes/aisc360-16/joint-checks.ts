@@ -16,7 +16,7 @@ import { strength } from "../check-builders.js";
 import { f } from "../format.js";
 import { groupLabel } from "../is800-2007/joint-checks.js";
 import { bearingCoefficients, clearDistance_mm, phiRnBearing, phiRnTearout } from "./bearing.js";
-import { a307GripFactor, fillerFactor, Fnv_MPa, longJointFactor, phiRnShear } from "./bolt-shear.js";
+import { a307GripFactor, a307GripStep_mm, fillerFactor, Fnv_MPa, longJointFactor, phiRnShear } from "./bolt-shear.js";
 import { cl } from "./citation.js";
 import { unitText } from "./display.js";
 import { netAllowance_mm } from "./holes.js";
@@ -99,7 +99,7 @@ function reductionNotes(gs: GroupShear, scenario: CheckableScenario): string[] {
     gs.group.packing_mm > 0
       ? `filler ${u.len(gs.group.packing_mm)}: ${gs.filler < 1 ? `1 − 0.4(t − 0.25) = ${f(gs.filler, 3)} (J5.2)` : scenario.options.fillersDeveloped ? "developed, no reduction (J5.2)" : "≤ 1/4 in, no reduction (J5.2)"}`
       : "no filler",
-    ...(bolt.group === "A307" ? [`A307 grip ${u.len(gs.group.grip_mm)}: factor ${f(gs.grip, 3)} (1 % per ${inchBoltSize(bolt.d_mm) !== undefined ? "1/16 in" : "2 mm"} over 5d; Table J3.2 note [c], from memory)`] : []),
+    ...(bolt.group === "A307" ? [`A307 grip ${u.len(gs.group.grip_mm)}: factor ${f(gs.grip, 3)} (1 % per ${a307GripStep_mm(bolt.d_mm) === 2 ? "2 mm" : "1/16 in"} over 5d; Table J3.2 note [c], from memory)`] : []),
   ];
 }
 
