@@ -346,6 +346,19 @@ describe.skipIf(!haveBrowser)("the workbench in headless Chromium, opened from d
     }
   });
 
+  it("the checks table prints each check's own figures, as the sheet does (not the JSON's 0.01 kN rounded again)", async () => {
+    // Two M16 4.6 bolts in single shear, threads in the plane: 2 × 400/(√3 × 1.25) × 0.78 × π × 16²/4 = 57.949 kN
+    // (IS 800:2007 cl. 10.3.3): 57.9 kN to one decimal; the JSON's 57.95 rounded again would print 58.0.
+    const lap = ["name: light lap", "code: is800-2007", "splice: { type: lap }", "plates:", "  main: { width: 200, thickness: 12, grade: E250, edges: sawn }", "load: { factored_tension: 50 kN }", 'bolts: { size: M16, class: "4.6", type: bearing, threads_in_shear_planes: true }', "layout: { pattern: grid, across: 2, along: 1, gauge: 100, end_distance: 40 }"].join("\n");
+    const file = tempScenario(lap);
+    expect(cliJson(["check", file, "--json"]).json.checks.find((c: { id: string }) => c.id === "bolt-shear:J").resistance_kN).toBe(57.95);
+    await openFile(page, file);
+    await tab(page, "checks");
+    const cells = await page.locator('#checks-body tr[data-check="bolt-shear:J"] td.num').allInnerTexts();
+    expect(cells[1]).toBe("57.9 kN");
+    expect(cli(["check", file]).stdout).toContain("57.9 kN");
+  }, 60_000);
+
   it("made no request beyond the page's own files and raised no error", () => {
     expect(requests).toEqual([]);
     expect(errors).toEqual([]);

@@ -41,17 +41,23 @@ export interface WorkbenchSummary {
   maxUtilisation: number;
   warnings: Warning[];
   checks: number;
+  /** Every check's figures by id, unrounded: the checks table prints these (the JSON's kN are rounded to 0.01). */
+  figuresById: Record<string, SummaryCheck["figures"]>;
 }
 
 export function workbenchSummary(scenario: CheckableScenario, report: CheckReport): WorkbenchSummary {
+  const figures = (c: CheckReport["checks"][number]): SummaryCheck["figures"] =>
+    c.type === "strength" ? { kind: "strength", demand_N: c.demand_N, resistance_N: c.resistance_N } : { kind: "rule", value_mm: c.value_mm, limit_mm: c.limit_mm, bound: c.bound };
   const row = (c: CheckReport["checks"][number]): SummaryCheck => ({
     id: c.id,
     title: c.title,
     component: c.component,
     clause: citationText(c.citation),
     utilisation: c.utilisation,
-    figures: c.type === "strength" ? { kind: "strength", demand_N: c.demand_N, resistance_N: c.resistance_N } : { kind: "rule", value_mm: c.value_mm, limit_mm: c.limit_mm, bound: c.bound },
+    figures: figures(c),
   });
+  const figuresById: Record<string, SummaryCheck["figures"]> = {};
+  for (const c of report.checks) figuresById[c.id] = figures(c);
   const core = summarise(scenario, report);
   const units = scenario.units === "us" ? "us" : "si";
   const governing = report.checks.find((c) => c.id === report.governing);
@@ -73,5 +79,6 @@ export function workbenchSummary(scenario: CheckableScenario, report: CheckRepor
     maxUtilisation: report.maxUtilisation,
     warnings: report.warnings,
     checks: report.checks.length,
+    figuresById,
   };
 }
