@@ -118,6 +118,18 @@ describe("splicewright search", () => {
     expect(r.stdout.replace(/\s+/g, " ")).toMatch(/ruled out by the minimum design action on the connection \(IS 800:2007 cl\. 10\.7: 163\.6 kN\) bound/);
   });
 
+  it("a load below the minimum design action: the search says the condition sets the least strength, and every row reaches it", () => {
+    const text = readFileSync(demo, "utf8").replace("factored_tension: 620 kN", "factored_tension: 100 kN");
+    const file = tempScenario(text);
+    const r = cli(["search", file]);
+    expect(r.code).toBe(0);
+    // 0.3 × min(220 × 16 × 250/1.10, 0.9 × 3520 × 410/1.25) = 0.3 × 800.0 = 240.0 kN (IS 800:2007 cl. 10.7, from memory; cl. 6.2, 6.3.1)
+    expect(r.stdout.replace(/\s+/g, " ")).toContain("Note: every layout must also reach the minimum design action on the connection (IS 800:2007 cl. 10.7: 240.0 kN), above the load");
+    const json = JSON.parse(cli(["search", file, "--json"]).stdout);
+    expect(json.minimumDesignAction).toMatch(/240\.0 kN/);
+    for (const row of json.results) expect(row.jointStrength_kN).toBeGreaterThanOrEqual(240);
+  });
+
   it("bad options exit 2 with one line", () => {
     const r = cli(["search", demo, "--rank-by", "beauty"]);
     expect(r.code).toBe(2);

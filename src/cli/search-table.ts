@@ -40,6 +40,7 @@ export function formatSearch(scenario: Scenario, outcome: SearchOutcome, rankBy:
   out.push("Search space (declared):");
   for (const line of outcome.spaceText) out.push(...text(line, "  - ", "    "));
   out.push("");
+  if (outcome.minimumDesignAction) out.push(...text(`Note: ${outcome.minimumDesignAction}.`), "");
   if (outcome.results.length === 0) {
     out.push(...text(`No compliant layout: ${outcome.noResultReason ?? "nothing in the space passes"}`, "", "  "));
   } else {

@@ -136,6 +136,7 @@ export function searchJson(name: string, outcome: SearchOutcome, rankBy: RankBy,
     currency,
     results: outcome.results.map((c, i) => resultRow(c, i + 1)),
     ...(outcome.noResultReason ? { noResult: outcome.noResultReason } : {}),
+    ...(outcome.minimumDesignAction ? { minimumDesignAction: outcome.minimumDesignAction } : {}),
     stats: outcome.stats,
     caution: CAUTION,
   };

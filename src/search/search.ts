@@ -57,6 +57,11 @@ export interface SearchOutcome {
   stats: SearchStats;
   /** Why nothing complies, when results is empty. */
   noResultReason?: string;
+  /**
+   * Where the code's minimum design action lies above the load, the condition that sets the strength
+   * every layout must reach, in words with its figure (IS 800:2007 cl. 10.7).
+   */
+  minimumDesignAction?: string;
 }
 
 export interface SearchOptions {
@@ -561,6 +566,8 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
 
   const outcome = outcomeOf(space, fams, scenario, results, stats);
   if (results.length === 0) outcome.noResultReason = explainNothing(ctx, unperforated, boundReasons, lastRejection, space);
+  const first = fams[0];
+  if (first && requiredOf(first) > T) outcome.minimumDesignAction = `every layout must also reach the ${minimumOf(first).words}, above the load: it, not the load, sets the least joint strength`;
   return outcome;
 }
 
