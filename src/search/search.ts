@@ -250,6 +250,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
    * under reversal a strength bound is the lesser of the two senses', and the condition reads the
    * tension sense's alone, so the bound is tested against T as before.
    */
+  const minimumByBase = new Map<Family["base"], { required_N: number; words: string }>();
   const requiredOf = (f: Family): number => minimumOf(f).required_N;
   const minimumOf = (f: Family): { required_N: number; words: string } => {
     let known = minimumByBase.get(f.base);
@@ -264,7 +265,6 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     }
     return known;
   };
-  const minimumByBase = new Map<Family["base"], { required_N: number; words: string }>();
   /** The bound's reason for a family it rules out: its governing check, or the minimum design action. */
   const reasonOf = (f: Family, strengthUpper_N: number, check: string): string =>
     strengthUpper_N >= T * (1 - 1e-9) && strengthUpper_N < requiredOf(f) * (1 - 1e-9) ? minimumOf(f).words : check;

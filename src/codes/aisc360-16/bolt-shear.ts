@@ -51,8 +51,8 @@ export function a307GripStep_mm(d_mm: number): number {
 
 /**
  * A307 long-grip factor: the tabulated shear reduced by 1 % for each 1/16 in (2 mm for a metric bolt) of
- * grip over five diameters. AISC 360-16 Table J3.2, note [c] (from memory; the same wording, "1/16 in. (2 mm)", is printed
- * in 360-10 note [c] and 360-22 note [d]). Other groups: 1.
+ * grip over five diameters. AISC 360-16 Table J3.2, note [c] (from memory; the same wording, "1/16 in.
+ * (2 mm)", is printed in 360-10 note [c] and 360-22 note [d]). Other groups: 1.
  */
 export function a307GripFactor(group: BoltGroup, grip_mm: number, d_mm: number): number {
   if (group !== "A307" || grip_mm <= 5 * d_mm + 1e-9) return 1.0;

@@ -56,8 +56,7 @@ export function boltGroupOf(grade: AstmBoltGrade): BoltGroup {
  * Pretension Tb of Table J3.1 (kips, inch bolts) and J3.1M (kN, metric bolts), Group A and Group B.
  * AISC 360-16 Table J3.1 / J3.1M (from memory: ¾ in Group A 28 kips is also in ../shared check values).
  * Every value here is printed in AISC 360-22 Tables J3.1 / J3.1M (Groups 120 / 150) and, except 1⅛ in
- * Group A (56 kips under
- * the old 105 ksi A325), in 360-05 Tables J3.1 / J3.1M.
+ * Group A (56 kips under the old 105 ksi A325), in 360-05 Tables J3.1 / J3.1M.
  */
 const TB_KIPS: Record<string, Record<"Group A" | "Group B", number>> = {
   "0.5": { "Group A": 12, "Group B": 15 },

@@ -117,8 +117,8 @@ function conventionsOf(scenario: CheckableScenario): string[] {
  * Minimum design action on fastenings: the connection of a tension member is designed for at least
  * 0.3 times the member's design capacity in tension, so the joint's design strength in tension must
  * reach 0.3·Td. IS 800:2007, cl. 10.7 (from memory). Read as a design action the connection must carry,
- * not as advice: the reading that refuses more. The member's capacity is the unperforated main plate's
- * (the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1 of the thinner main plate): the member's own holes, elsewhere,
+ * not as advice: the reading that refuses more. The member's capacity is the unperforated main plate's:
+ * the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1, of the weaker main plate. The member's own holes, elsewhere,
  * are not known here, and the larger figure refuses more. A condition: it sets no load (load ratio 0).
  */
 function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: number): StrengthCheck | null {

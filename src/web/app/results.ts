@@ -144,15 +144,12 @@ export function renderChecks(state: LiveState): void {
   const checks = json.checks as CheckJson[];
   const components = [...new Set(checks.map((c) => c.component))];
   const units = us ? "us" : "si";
-  // The check's own figures (unrounded, from the summary); the JSON's kN are rounded to 0.01, and
-  // rounding them again for print would differ from the sheet in the last digit.
-  const own = state.check?.summary.figuresById ?? {};
+  // The check's own figures (unrounded, from the summary of the same check); the JSON's kN are rounded
+  // to 0.01, and rounding them again for print would differ from the sheet in the last digit.
+  const own = state.check!.summary.figuresById;
   const figure = (c: CheckJson) => {
-    const f = Object.hasOwn(own, c.id) ? own[c.id] : undefined;
-    if (f) return f.kind === "strength" ? [force(f.demand_N, units), force(f.resistance_N, units)] : [length(f.value_mm, units), length(f.limit_mm, units)];
-    return c.demand_kN !== null
-      ? [force(c.demand_kN * 1000, units), force((c.resistance_kN ?? NaN) * 1000, units)]
-      : [length(c.value_mm ?? NaN, units), length(c.limit_mm ?? NaN, units)];
+    const f = own[c.id]!;
+    return f.kind === "strength" ? [force(f.demand_N, units), force(f.resistance_N, units)] : [length(f.value_mm, units), length(f.limit_mm, units)];
   };
   const groups = components.map((component) =>
     h(
