@@ -24,21 +24,30 @@ function compressionScenario(code: DesignCode, compression: CompressionChecks, s
   return made;
 }
 
-export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: LayoutShape): StrengthBound {
+/** A bound of every sense of the load, with the tension sense's own joint-strength bound (null: no tension sense), N. */
+export interface SenseBound extends StrengthBound {
+  tension_N: number | null;
+}
+
+export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: LayoutShape): SenseBound {
   // Tension alone (no compression sense): the code's own bound.
-  if (!((scenario.load.factoredCompression_N ?? 0) > 0) || !code.compression) return code.strengthBound(scenario, shape);
+  if (!((scenario.load.factoredCompression_N ?? 0) > 0) || !code.compression) {
+    const t = code.strengthBound(scenario, shape);
+    return { ...t, tension_N: t.jointStrength_N };
+  }
   const senses = loadSenses(scenario.load);
   const ref = referenceLoad_N(scenario.load);
   const { carried_N: carried, scenario: asCompression } = compressionScenario(code, code.compression, scenario);
   const { endDistance_mm: _e, endDistanceAtButt_mm: _eb, ...rest } = shape;
   const c = code.strengthBound(asCompression, { ...rest, sense: "compression" });
   const scale = ref / carried;
-  const inRef: StrengthBound = {
+  const inRef: SenseBound = {
     jointStrength_N: c.jointStrength_N * scale,
     check: `${c.check} (compression)`,
     serviceOk: c.serviceOk,
     perBolt_N: c.perBolt_N * scale,
     plates_N: c.plates_N * scale,
+    tension_N: null,
   };
   if (!senses.includes("tension")) return inRef;
   const t = code.strengthBound(scenario, shape);
@@ -48,5 +57,6 @@ export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: 
     serviceOk: t.serviceOk && inRef.serviceOk,
     perBolt_N: Math.min(t.perBolt_N, inRef.perBolt_N),
     plates_N: Math.min(t.plates_N, inRef.plates_N),
+    tension_N: t.jointStrength_N,
   };
 }

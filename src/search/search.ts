@@ -20,7 +20,7 @@ import { arrangementText, compareKeys, fixedOrderText, lowerKey, rankKey, type K
 import { describeSpace, families, layoutOf, resolveSpace, scenarioOf, taperedGauges, type Family, type SearchSpace } from "./space.js";
 import { anyOpenVector, nextTaperedCounts, type TaperedAnswer, type TaperedProblem } from "./tapered-ip.js";
 import { assertWithinLimit, DEFAULT_MAX_CANDIDATES } from "./work-estimate.js";
-import { loadBound } from "../codes/sense-bound.js";
+import { loadBound, type SenseBound } from "../codes/sense-bound.js";
 import { referenceLoad_N } from "../model/load.js";
 import { citationText } from "../report/citation.js";
 
@@ -243,31 +243,38 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   };
   const boundReasons = new Map<string, number>();
   /**
-   * The least joint strength a layout of family f must reach: the load T, or the code's minimum design
-   * action where it is higher (a condition on the joint's strength in tension; IS 800 cl. 10.7). Its
-   * figure is the demand of the condition the checker itself lists (code.minimumDesignAction, whose
-   * demand does not depend on the joint strength it is given), once per family scenario. Tension only:
-   * under reversal a strength bound is the lesser of the two senses', and the condition reads the
-   * tension sense's alone, so the bound is tested against T as before.
+   * The code's minimum design action for family f: a condition on the joint's design strength in
+   * tension (IS 800 cl. 10.7), 0 where the code sets none or the load has no tension sense. Its figure
+   * is the demand of the condition the checker itself lists (code.minimumDesignAction, whose demand
+   * does not depend on the joint strength it is given), once per family scenario.
    */
-  const minimumByBase = new Map<Family["base"], { required_N: number; words: string }>();
-  const requiredOf = (f: Family): number => minimumOf(f).required_N;
-  const minimumOf = (f: Family): { required_N: number; words: string } => {
+  const minimumByBase = new Map<Family["base"], { minimum_N: number; words: string }>();
+  const minimumOf = (f: Family): { minimum_N: number; words: string } => {
     let known = minimumByBase.get(f.base);
     if (known === undefined) {
-      const tensionOnly = scenario.load.factoredTension_N > 0 && !((scenario.load.factoredCompression_N ?? 0) > 0);
-      const minimum = tensionOnly && code.minimumDesignAction ? code.minimumDesignAction(f.base as CheckableScenario, 0) : null;
-      known = {
-        required_N: Math.max(T, minimum ? minimum.demand_N : 0),
-        words: minimum ? `${minimum.title.toLowerCase()} (${citationText(minimum.citation)}: ${(minimum.demand_N / 1000).toFixed(1)} kN)` : "",
-      };
+      const minimum = scenario.load.factoredTension_N > 0 && code.minimumDesignAction ? code.minimumDesignAction(f.base as CheckableScenario, 0) : null;
+      known = minimum
+        ? { minimum_N: minimum.demand_N, words: `${minimum.title.replace(/ \(tension\)$/, "").toLowerCase()} (${citationText(minimum.citation)}: ${(minimum.demand_N / 1000).toFixed(1)} kN)` }
+        : { minimum_N: 0, words: "" };
       minimumByBase.set(f.base, known);
     }
     return known;
   };
+  const tensionOnly = scenario.load.factoredTension_N > 0 && !((scenario.load.factoredCompression_N ?? 0) > 0);
+  /**
+   * Whether no layout under a bound can pass: the bound is below the load T, or its tension sense's
+   * bound is below the minimum design action (a layout's strength in tension is at most that bound).
+   */
+  const belowRequired = (f: Family, bound: SenseBound): boolean =>
+    bound.jointStrength_N < T * (1 - 1e-9) || (bound.tension_N !== null && bound.tension_N < minimumOf(f).minimum_N * (1 - 1e-9));
+  /**
+   * The least joint strength any layout of f must reach, for the bounds that are the lesser of the
+   * senses' (plates, per bolt): T, or under tension alone the minimum design action where higher.
+   */
+  const requiredOf = (f: Family): number => (tensionOnly ? Math.max(T, minimumOf(f).minimum_N) : T);
   /** The bound's reason for a family it rules out: its governing check, or the minimum design action. */
-  const reasonOf = (f: Family, strengthUpper_N: number, check: string): string =>
-    strengthUpper_N >= T * (1 - 1e-9) && strengthUpper_N < requiredOf(f) * (1 - 1e-9) ? minimumOf(f).words : check;
+  const reasonOf = (f: Family, strengthUpper_N: number, tension_N: number | null, check: string): string =>
+    strengthUpper_N >= T * (1 - 1e-9) && (tension_N ?? Infinity) < minimumOf(f).minimum_N * (1 - 1e-9) ? minimumOf(f).words : check;
   const rankBy = options.rankBy;
   const width = narrowest(scenario);
   const transferred = scenario.options.netSectionLoad === "transferred";
@@ -347,10 +354,11 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     const bound = f.countsPerLine ? loadBound(code, f.base as CheckableScenario, shapeOf(f, counts)) : null;
     // Tapered families: the plates' bound, whatever the counts (worked out once per family).
     const strengthUpper_N = bound ? bound.jointStrength_N : taperedPlateBound(f);
-    const infeasible = strengthUpper_N < requiredOf(f) * (1 - 1e-9) || (bound !== null && !bound.serviceOk);
+    const infeasible = (bound ? belowRequired(f, bound) : strengthUpper_N < requiredOf(f) * (1 - 1e-9)) || (bound !== null && !bound.serviceOk);
     if (infeasible) {
       stats.familiesSkippedByBound++;
-      const check = reasonOf(f, strengthUpper_N, bound ? bound.check : "plate (gross yield or net section)");
+      const tension_N = bound ? bound.tension_N : tensionOnly ? strengthUpper_N : null;
+      const check = reasonOf(f, strengthUpper_N, tension_N, bound ? bound.check : "plate (gross yield or net section)");
       boundReasons.set(check, (boundReasons.get(check) ?? 0) + 1);
       continue;
     }
@@ -402,7 +410,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   /** Whether the bound of a shape (dimensions left out at their most favourable) is below the load or a service check fails. */
   const boundFails = (f: Family, counts: number[], p: number | undefined, e: number | undefined, eb: number | undefined): boolean => {
     const bound = loadBound(code, f.base as CheckableScenario, shapeOf(f, counts, p, e, eb));
-    return bound.jointStrength_N < requiredOf(f) * (1 - 1e-9) || !bound.serviceOk;
+    return belowRequired(f, bound) || !bound.serviceOk;
   };
   /**
    * Grid and staggered families, at a node (0, ie, ieb) of the lattice: which sub-lattice below it no
@@ -552,7 +560,7 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
     heap.push(nodeOf("tapered", vectorKey, f, node.ip, node.ie, node.ieb, node.gauges, node.stream, node.index + 1, null));
     if (!variants && seen.has(node.stream.arrangementAt(node.index))) continue;
     const vectorBound = loadBound(code, f.base as CheckableScenario, shapeOf(f, answer.counts, p, e, eb));
-    if (vectorBound.jointStrength_N < requiredOf(f) * (1 - 1e-9) || !vectorBound.serviceOk) {
+    if (belowRequired(f, vectorBound) || !vectorBound.serviceOk) {
       stats.candidatesSkippedByBound++;
       continue;
     }
@@ -567,7 +575,11 @@ export function searchLayouts(ctx: SearchContext, options: SearchOptions): Searc
   const outcome = outcomeOf(space, fams, scenario, results, stats);
   if (results.length === 0) outcome.noResultReason = explainNothing(ctx, unperforated, boundReasons, lastRejection, space);
   const first = fams[0];
-  if (first && requiredOf(first) > T) outcome.minimumDesignAction = `every layout must also reach the ${minimumOf(first).words}, above the load: it, not the load, sets the least joint strength`;
+  if (first && minimumOf(first).minimum_N > T) {
+    outcome.minimumDesignAction = tensionOnly
+      ? `every layout must also reach the ${minimumOf(first).words}, above the load: it, not the load, sets the least joint strength`
+      : `every layout's design strength in tension must also reach the ${minimumOf(first).words}, above the factored tension`;
+  }
   return outcome;
 }
 
