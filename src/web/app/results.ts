@@ -19,9 +19,15 @@ export function bar(u: number): HTMLElement {
   return h("span", { class: `ubar${u > 1 ? " over" : ""}`, role: "img", "aria-label": `utilisation ${fixed(u, 3)}` }, h("span", { class: "fill", style: `width:${width.toFixed(1)}%` }), h("span", { class: "tick" }));
 }
 
+/** A check's two figures as printed: demand and resistance, or value and limit. */
+function figureTexts(f: SummaryCheck["figures"], units: "si" | "us"): [string, string] {
+  return f.kind === "strength" ? [force(f.demand_N, units), force(f.resistance_N, units)] : [length(f.value_mm, units), length(f.limit_mm, units)];
+}
+
 function checkLine(c: SummaryCheck, units: "si" | "us"): string {
   const f = c.figures;
-  const numbers = f.kind === "strength" ? `${force(f.demand_N, units)} against ${force(f.resistance_N, units)}` : `${length(f.value_mm, units)} against a ${f.bound === "min" ? "minimum" : "maximum"} of ${length(f.limit_mm, units)}`;
+  const [a, b] = figureTexts(f, units);
+  const numbers = f.kind === "strength" ? `${a} against ${b}` : `${a} against a ${f.bound === "min" ? "minimum" : "maximum"} of ${b}`;
   return `${c.title} (${c.component}), ${c.clause}: ${numbers}`;
 }
 
@@ -119,14 +125,6 @@ type CheckJson = {
   formula: string;
   substituted: string;
   limitState: string;
-  demand_kN: number | null;
-  resistance_kN: number | null;
-  value_mm: number | null;
-  limit_mm: number | null;
-  demand_kip?: number | null;
-  resistance_kip?: number | null;
-  value_in?: number | null;
-  limit_in?: number | null;
   utilisation: number;
   pass: boolean;
   notes: string[];
@@ -147,10 +145,7 @@ export function renderChecks(state: LiveState): void {
   // The check's own figures (unrounded, from the summary of the same check); the JSON's kN are rounded
   // to 0.01, and rounding them again for print would differ from the sheet in the last digit.
   const own = state.check!.summary.figuresById;
-  const figure = (c: CheckJson) => {
-    const f = own[c.id]!;
-    return f.kind === "strength" ? [force(f.demand_N, units), force(f.resistance_N, units)] : [length(f.value_mm, units), length(f.limit_mm, units)];
-  };
+  const figure = (c: CheckJson) => figureTexts(own[c.id]!, units);
   const groups = components.map((component) =>
     h(
       "tbody",
