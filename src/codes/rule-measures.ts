@@ -2,7 +2,7 @@
  * What spacing, end and edge rules of any design code measure on a joint: the plates a hole passes,
  * the outside plates of a bolt stack, and the governing (worst) measurement of a rule.
  */
-import { groupHoles } from "../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../geometry/joint-builder.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { Citation, RuleCheck } from "../model/results.js";
 import { rule } from "./check-builders.js";
@@ -45,9 +45,13 @@ export function holePlates(joint: Joint): PlatePiece[] {
   return joint.plates.filter((p) => p.role !== "packing");
 }
 
-/** Every hole of every bolt group a plate connects to. */
-export function platesHoles(joint: Joint, plate: PlatePiece): Hole[] {
-  return joint.holes.filter((h) => connects(plate, h.group));
+/**
+ * Every hole of every bolt group a plate connects to, in the joint's hole order: the joint builder's
+ * own arrays (a group's list, or the joint's list for a cover joined to both groups), shared, so only
+ * read; none for packing, which takes no load.
+ */
+export function platesHoles(joint: Joint, plate: PlatePiece): readonly Hole[] {
+  return plate.connections.length === 0 ? [] : holesOfPlate(joint, plate);
 }
 
 /** One measurement of a rule: the value, its limit, where, and the text of its working (built on demand). */

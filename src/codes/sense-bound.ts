@@ -33,7 +33,7 @@ export function loadBound(code: DesignCode, scenario: CheckableScenario, shape: 
   // Tension alone (no compression sense): the code's own bound.
   if (!((scenario.load.factoredCompression_N ?? 0) > 0) || !code.compression) {
     const t = code.strengthBound(scenario, shape);
-    return { ...t, tension_N: t.jointStrength_N };
+    return { jointStrength_N: t.jointStrength_N, check: t.check, serviceOk: t.serviceOk, perBolt_N: t.perBolt_N, plates_N: t.plates_N, tension_N: t.jointStrength_N };
   }
   const senses = loadSenses(scenario.load);
   const ref = referenceLoad_N(scenario.load);

@@ -22,6 +22,8 @@ function thinnerPlateStrength(scenario: CheckableScenario, code: DesignCode): { 
   const { mainA, mainB } = scenario.plates;
   const basis = scenario.options.efficiencyBasis;
   if (mainA.thickness_mm !== mainB.thickness_mm) return code.unperforatedStrength(mainA.thickness_mm < mainB.thickness_mm ? mainA : mainB, basis);
+  // The same plate both sides (width, thickness and grade: all the strength reads): main plate A.
+  if (mainA.width_mm === mainB.width_mm && mainA.grade === mainB.grade) return code.unperforatedStrength(mainA, basis);
   const a = code.unperforatedStrength(mainA);
   const b = code.unperforatedStrength(mainB);
   if (basis === "lesser") return a.value_N <= b.value_N ? a : b;

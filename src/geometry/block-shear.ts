@@ -169,16 +169,26 @@ const RECENT_SHAPES = 6;
 
 /** The holes in the local frame of one plate end, flat: u, y, across, along of each hole in turn. */
 function localFrame(holes: readonly Hole[], connection: PlateConnection): number[] {
-  const local: number[] = [];
-  for (const h of holes) local.push(connection.towardEnd * (connection.endX_mm - h.x_mm), h.y_mm, h.across_mm, h.along_mm);
+  const local: number[] = new Array(4 * holes.length);
+  for (let k = 0; k < holes.length; k++) {
+    const h = holes[k]!;
+    local[4 * k] = connection.towardEnd * (connection.endX_mm - h.x_mm);
+    local[4 * k + 1] = h.y_mm;
+    local[4 * k + 2] = h.across_mm;
+    local[4 * k + 3] = h.along_mm;
+  }
   return local;
 }
 
-const sameNumbers = (a: readonly number[], b: readonly number[]): boolean => {
-  if (a.length !== b.length) return false;
-  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+/** Whether the holes seen from this plate end have exactly the numbers of a frame measured before. */
+function sameFrame(frame: readonly number[], holes: readonly Hole[], connection: PlateConnection): boolean {
+  if (frame.length !== 4 * holes.length) return false;
+  for (let k = 0; k < holes.length; k++) {
+    const h = holes[k]!;
+    if (frame[4 * k] !== connection.towardEnd * (connection.endX_mm - h.x_mm) || frame[4 * k + 1] !== h.y_mm || frame[4 * k + 2] !== h.across_mm || frame[4 * k + 3] !== h.along_mm) return false;
+  }
   return true;
-};
+}
 
 /**
  * Every block shape that can form in a plate of width b for one bolt group (`holes`) bearing toward one
@@ -190,8 +200,8 @@ const sameNumbers = (a: readonly number[], b: readonly number[]): boolean => {
  * answer). The shapes hold numbers only, never hole names, and are only read.
  */
 export function blockShapes(holes: readonly Hole[], connection: PlateConnection, width_mm: number, jointHoles: readonly Hole[] = holes): readonly BlockShape[] {
+  for (const m of recentShapes) if (m.jointHoles === jointHoles && m.width_mm === width_mm && sameFrame(m.local, holes, connection)) return m.shapes;
   const local = localFrame(holes, connection);
-  for (const m of recentShapes) if (m.jointHoles === jointHoles && m.width_mm === width_mm && sameNumbers(m.local, local)) return m.shapes;
   const shapes = measureBlockShapes(local, width_mm);
   recentShapes.push({ jointHoles, local, width_mm, shapes });
   if (recentShapes.length > RECENT_SHAPES) recentShapes.shift();

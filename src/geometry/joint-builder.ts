@@ -199,11 +199,16 @@ export function holesOfPlate(joint: Joint, plate: PlatePiece): readonly Hole[] {
     return group ? group.holes : [];
   }
   if (plate.connections.length === 1) return groupHoles(joint, plate.connections[0]!.group);
-  const groups = new Set(plate.connections.map((c) => c.group));
   // A plate joined to every group (the covers of a butt splice) has the joint's own hole list, one
   // array for both covers, so measurements made from it can be shared (net-section.ts, netPathFor).
-  if (joint.holes.every((h) => groups.has(h.group))) return joint.holes;
-  return joint.holes.filter((h) => groups.has(h.group));
+  if (joint.groups.every((g) => joinsGroup(plate, g.id))) return joint.holes;
+  return joint.holes.filter((h) => joinsGroup(plate, h.group));
+}
+
+/** Whether a plate takes load from a bolt group. */
+function joinsGroup(plate: PlatePiece, group: GroupId): boolean {
+  for (const c of plate.connections) if (c.group === group) return true;
+  return false;
 }
 
 /** The holes of one bolt group, as the joint builder sorted them (no filtering per call). */
