@@ -118,3 +118,8 @@ class CodeCheckList implements CodeChecks {
 export function codeChecks(checks: CheckResult[], warnings: Warning[], conventions: () => string[]): CodeChecks {
   return new CodeCheckList(checks, warnings, conventions);
 }
+
+/** The bolt-group checks of a joint alone (DesignCode.checkJoint with scope "bolts"): no warnings, no conventions. */
+export function boltChecksOnly(checks: CheckResult[]): CodeChecks {
+  return new CodeCheckList(checks, [], NO_NOTES);
+}

@@ -119,6 +119,9 @@ export interface CompressionChecks {
   checks(joint: Joint, scenario: CheckableScenario, spliceShare: number): { checks: CheckResult[]; conventions: string[] };
 }
 
+/** Which of a code's checks of a joint to make (DesignCode.checkJoint). */
+export type CheckScope = "all" | "bolts";
+
 export interface DesignCode extends GeometryCode {
   id: string;
   title: string;
@@ -128,8 +131,13 @@ export interface DesignCode extends GeometryCode {
   boltSizes_mm: readonly number[];
   /** Inputs this code cannot check (grade unknown to it, a bolt class not allowed for friction grip...). */
   scopeErrors(scenario: Scenario): ScopeError[];
-  /** Run every check on the joint's geometry. */
-  checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks;
+  /**
+   * Run the checks on the joint's geometry: every check ("all", the default), or the bolt-group checks
+   * alone ("bolts": slip, bolt shear and bearing, made by the same functions and in the same order as in
+   * "all"; no warnings or conventions), which is all the compression sense of the load reads from the
+   * joint with its bearing directions reversed (engine/senses.ts).
+   */
+  checkJoint(joint: Joint, scenario: CheckableScenario, scope?: CheckScope): CodeChecks;
   /**
    * Design tension strength of an unperforated plate under this code, the denominator of efficiency, on
    * the basis given (default "lesser": the lesser of gross yield and rupture with An = Ag). Whatever the

@@ -82,7 +82,7 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
   // Compression: the bolt checks with the bearing directions reversed, at the force the splice carries.
   const carried = share.value * C;
   const serviceC = scenario.load.serviceCompression_N;
-  const flipped = code.checkJoint(compressionJoint(joint), asLoad(scenario, carried, serviceC === undefined ? undefined : share.value * serviceC));
+  const flipped = code.checkJoint(compressionJoint(joint), asLoad(scenario, carried, serviceC === undefined ? undefined : share.value * serviceC), "bolts");
   const symbol = share.value === 1 ? "C" : `${share.value} C`;
   for (const c of flipped.checks) if (c.type === "strength" && BOLT_KINDS.has(c.kind)) checks.push(labelled(c, "compression", carried / ref, reversal, symbol));
   const own = comp.checks(joint, scenario, share.value);

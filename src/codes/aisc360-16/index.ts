@@ -13,8 +13,8 @@ import { platesWithPaths, type CheckableScenario, type EfficiencyBasis, type Pla
 import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import { factorWarnings } from "../is800-2007/joint-checks.js";
-import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
-import { codeChecks } from "../check-builders.js";
+import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { boltChecksOnly, codeChecks } from "../check-builders.js";
 import { unitText, type UnitText } from "./display.js";
 import { holeDimensions } from "./holes.js";
 import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearingCheck, groupShear, netSectionCheck, slipCheck } from "./joint-checks.js";
@@ -56,7 +56,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
   return errors;
 }
 
-function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
+function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
   const checks: CheckResult[] = [];
   const shears = mapped(joint.groups, (g) => groupShear(joint, scenario, g));
   const slipCritical = scenario.bolts.assembly === "friction-grip";
@@ -68,6 +68,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   for (const plate of plates) {
     for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shears.find((s) => s.group.id === c.group)!));
   }
+  if (scope === "bolts") return boltChecksOnly(checks);
   for (const plate of plates) {
     checks.push(grossYieldCheck(scenario, plate));
     checks.push(netSectionCheck(joint, scenario, plate));

@@ -14,8 +14,8 @@ import { unperforatedOnBasis, type UnperforatedTerms } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import { f, kN } from "../format.js";
 import { groupLabel } from "../is800-2007/joint-checks.js";
-import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
-import { codeChecks } from "../check-builders.js";
+import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { boltChecksOnly, codeChecks } from "../check-builders.js";
 import { holeDimensions } from "./holes.js";
 import {
   bearingCheck,
@@ -153,7 +153,7 @@ function boundCode(bound: Ec3Settings): DesignCode {
     return s;
   };
 
-  function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
+  function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
     const s = settingsFor(scenario);
     const checks: CheckResult[] = [];
     const groups = mapped(joint.groups, (g) => groupOf(joint, scenario, s, g));
@@ -167,6 +167,7 @@ function boundCode(bound: Ec3Settings): DesignCode {
     for (const plate of loaded) {
       for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groups.find((g) => g.group.id === c.group)!));
     }
+    if (scope === "bolts") return boltChecksOnly(checks);
     for (const plate of loaded) {
       checks.push(grossYieldCheck(scenario, s, plate));
       checks.push(netSectionCheck(joint, scenario, s, plate));

@@ -10,8 +10,8 @@ import type { CheckResult, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
 import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
-import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
-import { codeChecks, strength } from "../check-builders.js";
+import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js";
+import { boltChecksOnly, codeChecks, strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
 import { cl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
@@ -65,7 +65,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
   return errors;
 }
 
-function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
+function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
   const checks: CheckResult[] = [];
   const gfs = mapped(joint.groups, (g) => groupFactors(joint, g));
   const friction = scenario.bolts.assembly === "friction-grip";
@@ -77,6 +77,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
   }
   const loaded = joint.plates.filter((p) => p.role !== "packing");
   for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c));
+  if (scope === "bolts") return boltChecksOnly(checks);
   for (const plate of loaded) {
     checks.push(grossYieldCheck(scenario, plate));
     checks.push(netSectionCheck(joint, scenario, plate));
