@@ -13,7 +13,7 @@ import { blockShearConvention } from "../../geometry/block-shear.js";
 import type { CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { codeChecks, strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { holeDimensions } from "./holes.js";
 import {
@@ -113,6 +113,8 @@ function conventionsOf(scenario: CheckableScenario): string[] {
   return conventions;
 }
 
+const MINIMUM_DESIGN_ACTION_CITATION = fixedCl("10.7");
+
 /**
  * Minimum design action on fastenings: the connection of a tension member is designed for at least
  * 0.3 times the member's design capacity in tension, so the joint's design strength in tension must
@@ -134,7 +136,7 @@ function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: n
     title: reversal ? "Minimum design action on the connection (tension)" : "Minimum design action on the connection",
     ...(reversal ? { sense: "tension" as const } : {}),
     component: "joint",
-    citation: cl("10.7"),
+    citation: MINIMUM_DESIGN_ACTION_CITATION,
     formula: "0.3·Td ≤ Td,joint;  Td = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) of the main plate without holes",
     substituted: () => `0.3 × ${kN(member_N)} = ${kN(minimum_N)} ${holds ? "≤" : ">"} ${kN(jointTension_N)}, the joint's design strength in tension`,
     limitState: "ULS",

@@ -9,17 +9,27 @@ import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { forEachTearOut } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
-import type { StrengthCheck, Warning } from "../../model/results.js";
+import type { Citation, StrengthCheck, Warning } from "../../model/results.js";
+import { mapped } from "../../model/lists.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
 import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { bearingHoleFactor, holeFactorKh } from "./holes.js";
 import { F0, Vdsf } from "./slip.js";
-import { Tdb, Tdg, Tdn } from "./tension-member.js";
+import { Tdb, Tdb1_N, Tdb2_N, Tdg, Tdn } from "./tension-member.js";
+
+/** The citations of the checks below, made once (frozen; results share them). */
+const BEARING_CITATION = fixedCl("10.3.4");
+const SLIP_CITATION = fixedCl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf"] });
+/** Slip of a long joint: βlj applied to slip resistance too (cl. 10.3.3.1). */
+const SLIP_CITATION_LONG_JOINT = fixedCl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf", "10.3.3.1 for βlj"] });
+const GROSS_YIELD_CITATION = fixedCl("6.2");
+const NET_SECTION_CITATION = fixedCl("6.3.1");
+const BLOCK_SHEAR_CITATION = fixedCl("6.4.1");
 
 export interface GroupFactors {
   group: BoltGroupGeometry;
@@ -80,7 +90,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, gf.group),
-    citation: cl("10.3.3", reductionClauses(gf)),
+    citation: boltShearCitation(gf),
     formula: "T ≤ n·Vdsb;  Vdsb = fub/√3 · (nn·Anb + ns·Asb) · βlj·βlg·βpkg / γmb",
     substituted: () =>
       `Vdsb = ${mat.fub_MPa}/√3 × (${nn} × ${f(Anb)} + ${ns} × ${f(Asb)}) × ${f(gf.beta_lj, 3)} × ${f(gf.beta_lg, 3)} × ${f(gf.beta_pkg, 3)} / ${PARTIAL_FACTORS.gamma_mb}` +
@@ -93,14 +103,21 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
   });
 }
 
-/** The reduction clauses a group's bolt shear applies (cited only when they reduce). */
-function reductionClauses(gf: GroupFactors): { also?: string[] } {
-  const also = [
-    ...(gf.beta_lj < 1 ? ["10.3.3.1 (βlj)"] : []),
-    ...(gf.beta_lg < 1 ? ["10.3.3.2 (βlg)"] : []),
-    ...(gf.beta_pkg < 1 ? ["10.3.3.3 (βpkg)"] : []),
-  ];
-  return also.length > 0 ? { also } : {};
+/**
+ * Bolt shear's citation: cl. 10.3.3 with the reduction clauses it applies (cited only when they
+ * reduce), one frozen citation for each of the eight combinations of βlj, βlg and βpkg.
+ */
+const BOLT_SHEAR_CITATIONS = mapped([0, 1, 2, 3, 4, 5, 6, 7], (reduces) => {
+  const also: string[] = [];
+  if (reduces & 1) also.push("10.3.3.1 (βlj)");
+  if (reduces & 2) also.push("10.3.3.2 (βlg)");
+  if (reduces & 4) also.push("10.3.3.3 (βpkg)");
+  return fixedCl("10.3.3", also.length > 0 ? { also } : {});
+});
+
+/** The reduction clauses a group's bolt shear applies, in its citation. */
+function boltShearCitation(gf: GroupFactors): Citation {
+  return BOLT_SHEAR_CITATIONS[(gf.beta_lj < 1 ? 1 : 0) | (gf.beta_lg < 1 ? 2 : 0) | (gf.beta_pkg < 1 ? 4 : 0)]!;
 }
 
 /** kb of one plate for one group, from coordinates; with the e and p that set it. */
@@ -148,7 +165,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     kind: "bolt-bearing",
     title: "Bolt bearing",
     component: `${plate.label}${sideText}`,
-    citation: cl("10.3.4"),
+    citation: BEARING_CITATION,
     formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
     substituted: () =>
       `kb = min(${eTermText(b)}, ${pTermText(b)}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
@@ -187,7 +204,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFa
     kind: "slip",
     title: slipAt === "service" ? "Slip resistance at service load" : "Slip resistance at factored load",
     component: groupLabel(joint, gf.group),
-    citation: cl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf", ...(gf.beta_lj < 1 ? ["10.3.3.1 for βlj"] : [])] }),
+    citation: gf.beta_lj < 1 ? SLIP_CITATION_LONG_JOINT : SLIP_CITATION,
     formula: "F ≤ n·Vdsf;  Vdsf = μf·ne·Kh·F0·βlj / γmf;  F0 = 0.7·fub·Anb",
     substituted: () =>
       `F0 = 0.7 × ${mat.fub_MPa} × ${f(Anb)} = ${kN(proof, 2)};  Vdsf = ${f(mu, 2)} × ${ne} × ${Kh} × ${kN(proof, 2)} × ${f(gf.beta_lj, 3)} / ${gamma} = ${kN(perBolt, 2)};  ` +
@@ -217,7 +234,7 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
     kind: "gross-yield",
     title: "Gross-section yield",
     component: plate.label,
-    citation: cl("6.2"),
+    citation: GROSS_YIELD_CITATION,
     formula: "F ≤ Tdg = Ag·fy / γm0",
     substituted: () => `Tdg = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${PARTIAL_FACTORS.gamma_m0} = ${kN(R)}` + shareText(plate),
     limitState: "ULS",
@@ -251,7 +268,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "net-section",
     title: "Net-section rupture",
     component: plate.label,
-    citation: cl("6.3.1"),
+    citation: NET_SECTION_CITATION,
     formula: transferred
       ? "F·k/n ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t; k = bolts not yet passed; highest F·k/n / Tdn over all paths"
       : "F ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t, least over all paths",
@@ -282,8 +299,11 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
   const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => resistance(shape).Tdb_N, resistance);
+  const { fy_MPa: fy, fu_MPa: fu } = plate;
+  // Every shape's Tdb as a number (no object per shape); the two terms of the governing one for its text.
+  const value = (shape: BlockShape) => Math.min(Tdb1_N(shape.shearGross_mm * t, shape.tensionNet_mm * t, fy, fu), Tdb2_N(shape.shearNet_mm * t, shape.tensionGross_mm * t, fy, fu));
+  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, fy, fu);
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, value, resistance);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;
@@ -293,7 +313,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "block-shear",
     title: "Block shear",
     component: `${plate.label}${sideText}`,
-    citation: cl("6.4.1"),
+    citation: BLOCK_SHEAR_CITATION,
     formula: `${load === "full" ? "F" : "F·k/n"} ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)`,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Avg = ${f(s.shearGross_mm)} × ${f(t)} = ${f(s.shearGross_mm * t)}, ` +

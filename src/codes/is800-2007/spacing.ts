@@ -9,8 +9,22 @@ import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
 import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { epsilon } from "./materials.js";
+
+/** The citations of the rules below, made once (frozen; results share them). */
+const MIN_SPACING_CITATION = fixedCl("10.2.2");
+const MAX_SPACING_CITATION = fixedCl("10.2.3.1");
+const MAX_PITCH_CITATION = fixedCl("10.2.3.2");
+const EDGE_LINE_CITATION = fixedCl("10.2.3.3");
+/** cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners set the governing limit. */
+const RELAXED = { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] };
+const MAX_PITCH_RELAXED_CITATION = fixedCl("10.2.3.2", RELAXED);
+const EDGE_LINE_RELAXED_CITATION = fixedCl("10.2.3.3", RELAXED);
+const MIN_DISTANCE_CITATION = fixedCl("10.2.4.2");
+const MAX_EDGE_CITATION = fixedCl("10.2.4.3");
+const GRIP_CITATION = fixedCl("10.3.3.2");
+const CENTROID_CITATION = Object.freeze({ standard: "general", clause: "concentric bolt group, assumed by the IS 800:2007 checks of Section 6 and cl. 10.3, 10.4" });
 
 /**
  * Whether a plate's fasteners are staggered at equal intervals (cl. 10.2.3.4): consecutive transverse
@@ -68,7 +82,7 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
     const s = distance(a, b);
     if (beatsWorst(worst, s, 2.5 * d, "min")) worst = spacingWorst(plate, a, b, s, d);
   });
-  return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
+  return worstRule("min-spacing", "min-spacing", "Minimum spacing", MIN_SPACING_CITATION, "s ≥ 2.5 d", "min", worst);
 }
 
 /**
@@ -106,16 +120,12 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     }
   }
   return [
-    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", worst.across),
-    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxedCitation(worst.pitchRelaxed)), "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
-    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxedCitation(worst.edgeLineRelaxed)), "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", MAX_SPACING_CITATION, "g ≤ min(32 t, 300 mm)", "max", worst.across),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", worst.pitchRelaxed ? MAX_PITCH_RELAXED_CITATION : MAX_PITCH_CITATION, "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", worst.edgeLineRelaxed ? EDGE_LINE_RELAXED_CITATION : EDGE_LINE_CITATION, "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
   ];
 }
 
-/** cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners set the governing limit. */
-function relaxedCitation(relaxed: boolean): { also?: string[] } {
-  return relaxed ? { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] } : {};
-}
 
 /** The governing measurements of the three maximum-spacing rules so far, and whether cl. 10.2.3.4 relaxed the governing limit. */
 interface MaxSpacingWorst {
@@ -273,9 +283,9 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     }
   }
   return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("10.2.4.2"), "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("10.2.4.2"), "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge),
-    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("10.2.4.3"), scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", MIN_DISTANCE_CITATION, "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", MIN_DISTANCE_CITATION, "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge),
+    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", MAX_EDGE_CITATION, scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
   ];
 }
 
@@ -291,7 +301,7 @@ export function gripRule(joint: Joint): RuleCheck[] {
   for (const g of joint.groups) {
     if (beatsWorst(worst, g.grip_mm, 8 * d, "max")) worst = gripWorst(joint, g, d);
   }
-  return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
+  return worstRule("grip-length", "grip-length", "Grip length", GRIP_CITATION, "lg ≤ 8 d", "max", worst);
 }
 
 /**
@@ -299,5 +309,5 @@ export function gripRule(joint: Joint): RuleCheck[] {
  * group is reported as failing rather than accepted silently.
  */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by the IS 800:2007 checks of Section 6 and cl. 10.3, 10.4" });
+  return groupCentroidRule(joint, CENTROID_CITATION);
 }
