@@ -19,15 +19,17 @@ import { holeDimensions } from "./holes.js";
 import {
   bearingCheck,
   blockShearCheck,
+  BlockShapesOf,
   boltShearCheck,
   factorWarnings,
   grossYieldCheck,
   groupFactors,
   netSectionCheck,
   slipCheck,
+  TearOuts,
 } from "./joint-checks.js";
 import { GRADES, plateStrength } from "./materials.js";
-import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule } from "./spacing.js";
+import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule, spacingLayout } from "./spacing.js";
 import { Tdg, Tdn } from "./tension-member.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
 import { IS800_COMPRESSION } from "./compression-splice.js";
@@ -75,19 +77,33 @@ function checkJoint(joint: Joint, scenario: CheckableScenario): CodeChecks {
     if (friction) checks.push(slipCheck(joint, scenario, gf));
     checks.push(boltShearCheck(joint, scenario, gf));
   }
-  const loaded = joint.plates.filter((p) => p.role !== "packing");
-  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c));
-  for (const plate of loaded) {
+  // The plates that carry load (every plate but packing), with their holes, measured once for every check below.
+  const layout = spacingLayout(joint);
+  const loaded = layout.plates;
+  const tearOuts = new TearOuts(joint);
+  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c, tearOuts));
+  const shapesOf = new BlockShapesOf(joint);
+  for (let k = 0; k < loaded.length; k++) {
+    const plate = loaded[k]!;
     checks.push(grossYieldCheck(scenario, plate));
-    checks.push(netSectionCheck(joint, scenario, plate));
+    checks.push(netSectionCheck(joint, scenario, plate, layout.holesOf[k]));
     for (const c of plate.connections) {
-      const block = blockShearCheck(joint, scenario, plate, c);
+      const block = blockShearCheck(joint, scenario, plate, c, shapesOf);
       if (block) checks.push(block);
     }
   }
-  checks.push(...minSpacingRule(joint), ...maxSpacingRules(joint), ...edgeRules(joint, scenario), ...gripRule(joint), ...centroidRule(joint));
+  pushAll(checks, minSpacingRule(joint));
+  pushAll(checks, maxSpacingRules(joint, layout));
+  pushAll(checks, edgeRules(joint, scenario, layout));
+  pushAll(checks, gripRule(joint));
+  pushAll(checks, centroidRule(joint));
 
   return codeChecks(checks, factorWarnings(joint, gfs), () => conventionsOf(scenario));
+}
+
+/** Appends each of `more` to `list` (no spread into arguments). */
+function pushAll<T>(list: T[], more: readonly T[]): void {
+  for (let i = 0; i < more.length; i++) list.push(more[i]!);
 }
 
 /** The conventions of an IS 800 check in words (written when an output reads them). */
@@ -149,7 +165,12 @@ function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: n
   });
 }
 
-const unperforated = (spec: PlateSpec) => unperforatedStrength(spec).value_N;
+/** The unperforated plate's design tension strength, the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1 (cl. 6.2, 6.3.1), as a number. */
+function unperforated(spec: PlateSpec): number {
+  const m = plateStrength(spec);
+  const Ag = spec.width_mm * spec.thickness_mm;
+  return Math.min(Tdg(Ag, m.fy_MPa), Tdn(Ag, m.fu_MPa));
+}
 
 /**
  * Design tension strength of the unperforated plate on an efficiency basis: cl. 6.2 gross yield

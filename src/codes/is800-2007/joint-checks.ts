@@ -120,8 +120,15 @@ function boltShearCitation(gf: GroupFactors): Citation {
   return BOLT_SHEAR_CITATIONS[(gf.beta_lj < 1 ? 1 : 0) | (gf.beta_lg < 1 ? 2 : 0) | (gf.beta_pkg < 1 ? 4 : 0)]!;
 }
 
-/** kb of one plate for one group, from coordinates; with the e and p that set it. */
-export function bearingFactor(holes: readonly Hole[], connection: PlateConnection, fub_MPa: number, fu_MPa: number) {
+/** The least end distance e and pitch p toward a plate end of one group's holes, and the largest d0 along (cl. 10.3.4). */
+export interface TearOut {
+  e_mm: number;
+  p_mm: number;
+  d0_mm: number;
+}
+
+/** e, p and d0 of one group's holes bearing toward one plate end, from coordinates. */
+export function tearOutOf(holes: readonly Hole[], connection: PlateConnection): TearOut {
   let e = Infinity;
   let p = Infinity;
   let d0 = 0;
@@ -130,7 +137,36 @@ export function bearingFactor(holes: readonly Hole[], connection: PlateConnectio
     if (toHoleAhead_mm === null) e = Math.min(e, toEnd_mm);
     else p = Math.min(p, toHoleAhead_mm);
   });
-  return { e_mm: e, p_mm: p, d0_mm: d0, kb: kbFactor(e, p, d0, fub_MPa, fu_MPa) };
+  return { e_mm: e, p_mm: p, d0_mm: d0 };
+}
+
+/**
+ * The tear-out measurements of one check's joint, each measured once and handed to every plate that
+ * bears toward the same end with the same group (both cover plates of a butt splice). Made afresh for
+ * each call (never kept between calls): the holes of a group are those of this joint.
+ */
+export class TearOuts {
+  readonly #measured: { connection: PlateConnection; tearOut: TearOut }[] = [];
+  constructor(private readonly joint: Joint) {}
+  of(connection: PlateConnection): TearOut {
+    for (const m of this.#measured) {
+      const c = m.connection;
+      if (c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd) return m.tearOut;
+    }
+    const tearOut = tearOutOf(groupHoles(this.joint, connection.group), connection);
+    this.#measured.push({ connection, tearOut });
+    return tearOut;
+  }
+}
+
+/** kb of one plate for one group, from coordinates; with the e and p that set it. */
+export function bearingFactor(holes: readonly Hole[], connection: PlateConnection, fub_MPa: number, fu_MPa: number) {
+  return bearingFactorOf(tearOutOf(holes, connection), fub_MPa, fu_MPa);
+}
+
+/** kb from a group's tear-out measurements (cl. 10.3.4). */
+function bearingFactorOf(t: TearOut, fub_MPa: number, fu_MPa: number) {
+  return { e_mm: t.e_mm, p_mm: t.p_mm, d0_mm: t.d0_mm, kb: kbFactor(t.e_mm, t.p_mm, t.d0_mm, fub_MPa, fu_MPa) };
 }
 
 /** The e-term of kb in words: "e/3d0 = 40/(3 × 22) = 0.606", or "e: —" where no bolt bears on an end. */
@@ -148,12 +184,12 @@ function pTermText(b: { p_mm: number; d0_mm: number }): string {
  * IS 800:2007, cl. 10.3.4. Each plate bears with its own kb (its own end distance and pitch toward its
  * own end); the cover plates of a double-cover splice are checked one by one against their share.
  */
-export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck {
+export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, tearOuts: TearOuts = new TearOuts(joint)): StrengthCheck {
   const { bolts, options } = scenario;
   const d = bolts.size_mm;
   const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
   const holes = groupHoles(joint, connection.group);
-  const b = bearingFactor(holes, connection, mat.fub_MPa, plate.fu_MPa);
+  const b = bearingFactorOf(tearOuts.of(connection), mat.fub_MPa, plate.fu_MPa);
   const holeFactor = bearingHoleFactor(bolts.hole);
   const t = plate.spec.thickness_mm;
   const perBolt = Vdpb(b.kb, d, t, plate.fu_MPa, holeFactor);
@@ -255,9 +291,8 @@ function shareText(plate: PlatePiece): string {
  * (the clause as written); with "transferred", each path carries only what the plate has not yet passed
  * to bolts ahead of it (see governingNetPath), and the governing path has the highest demand/resistance.
  */
-export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
+export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, holes: readonly Hole[] = holesOfPlate(joint, plate)): StrengthCheck {
   const { width_mm: b, thickness_mm: t } = plate.spec;
-  const holes = holesOfPlate(joint, plate);
   const transferred = scenario.options.netSectionLoad === "transferred";
   const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
@@ -289,14 +324,33 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
 }
 
 /**
+ * The block shapes of one check's joint (blockShapes), each asked once and handed to every plate of the
+ * same width that one group bears on toward the same end (both cover plates of a butt splice). Made
+ * afresh for each call (never kept between calls).
+ */
+export class BlockShapesOf {
+  readonly #asked: { connection: PlateConnection; width_mm: number; shapes: readonly BlockShape[] }[] = [];
+  constructor(private readonly joint: Joint) {}
+  of(connection: PlateConnection, width_mm: number): readonly BlockShape[] {
+    for (const m of this.#asked) {
+      const c = m.connection;
+      if (m.width_mm === width_mm && c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd) return m.shapes;
+    }
+    const shapes = blockShapes(groupHoles(this.joint, connection.group), connection, width_mm, this.joint.holes);
+    this.#asked.push({ connection, width_mm, shapes });
+    return shapes;
+  }
+}
+
+/**
  * Block shear of a plate for one bolt group: the governing shape of all that can form.
  * IS 800:2007, cl. 6.4.1: Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1, 0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0).
  * A block holding k of the group's n bolts carries k/n of the plate's force (options.block_shear_load:
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
-export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, shapesOf: BlockShapesOf = new BlockShapesOf(joint)): StrengthCheck | null {
   const holes = groupHoles(joint, connection.group);
-  const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
+  const shapes = shapesOf.of(connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
   const { fy_MPa: fy, fu_MPa: fu } = plate;

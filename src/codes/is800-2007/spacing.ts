@@ -2,7 +2,8 @@
  * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
-import { groupHoles } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
+import { mapped } from "../../model/lists.js";
 import { distance, fartherThan, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
@@ -50,15 +51,58 @@ function sharesGaugeLine(a: Line, b: Line): boolean {
   return false;
 }
 
-/** Each bolt group's holes with their gauge lines and stagger, worked out once per rule. */
-function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }> {
-  const sets = new Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }>();
-  for (const g of joint.groups) {
-    const holes = groupHoles(joint, g.id);
-    const lines = gaugeLines(holes);
-    sets.set(g.id, { gaugeLines: lines, stagger: staggerOf(holes, lines) });
-  }
-  return sets;
+/** A bolt group's gauge lines and stagger (cl. 10.2.3.4). */
+interface GroupLines {
+  gaugeLines: Line[];
+  stagger: { staggered: boolean; gauge_mm: number };
+}
+
+/**
+ * What the spacing and edge rules of one check measure on its joint, worked out once and handed to
+ * each rule of the same call (never kept between calls): the plates that carry load, the outside
+ * plates of the bolt stacks, each plate's holes, each group's gauge lines and stagger, and the
+ * thickness of the thinner plate each pair of groups passes through.
+ */
+export interface SpacingLayout {
+  plates: PlatePiece[];
+  outside: PlatePiece[];
+  /** The holes through plates[k], every group it connects to, in the joint's order (holesOfPlate: the joint's own lists, read only). */
+  holesOf: (readonly Hole[])[];
+  /** Each group's lines, in the order of joint.groups. */
+  groups: GroupLines[];
+  /** pairThickness of a hole of group i and one of group j, at i × groups + j. */
+  groupPairThickness: number[];
+}
+
+/** The joint's spacing layout (see SpacingLayout). */
+export function spacingLayout(joint: Joint): SpacingLayout {
+  const plates = holePlates(joint);
+  const holesOf = mapped(plates, (plate) => holesOfPlate(joint, plate));
+  const groups = mapped(joint.groups, (g): GroupLines => {
+    const lines = gaugeLines(g.holes);
+    return { gaugeLines: lines, stagger: staggerOf(g.holes, lines) };
+  });
+  const groupPairThickness: number[] = [];
+  // pairThickness reads only the holes' groups: one hole of each group stands for all of them.
+  for (const gi of joint.groups) for (const gj of joint.groups) groupPairThickness.push(gi.holes[0] && gj.holes[0] ? pairThickness(joint, gi.holes[0], gj.holes[0]) : Infinity);
+  return { plates, outside: outsidePlates(joint), holesOf, groups, groupPairThickness };
+}
+
+/** Index of a bolt group in joint.groups. */
+function groupIndex(joint: Joint, group: Hole["group"]): number {
+  const groups = joint.groups;
+  for (let i = 0; i < groups.length; i++) if (groups[i]!.id === group) return i;
+  return -1;
+}
+
+/** The lines of a group, from the layout. */
+function linesOfGroup(joint: Joint, layout: SpacingLayout, group: Hole["group"]): GroupLines {
+  return layout.groups[groupIndex(joint, group)]!;
+}
+
+/** Thickness of the thinner plate both holes pass through (pairThickness), from the layout. */
+function thinnerPlate(joint: Joint, layout: SpacingLayout, a: Hole, b: Hole): number {
+  return layout.groupPairThickness[groupIndex(joint, a.group) * joint.groups.length + groupIndex(joint, b.group)]!;
 }
 
 /*
@@ -92,12 +136,10 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
  *  - on a line next to an edge of an outside plate ≤ min(100 + 4 t, 200 mm);
  *  - staggered at equal intervals with gauge ≤ 75 mm: the last two limits × 1.5, not above min(32 t, 300).
  */
-export function maxSpacingRules(joint: Joint): RuleCheck[] {
+export function maxSpacingRules(joint: Joint, layout: SpacingLayout = spacingLayout(joint)): RuleCheck[] {
   const worst: MaxSpacingWorst = { across: null, pitch: null, edgeLine: null, pitchRelaxed: false, edgeLineRelaxed: false };
-  const outside = outsidePlates(joint);
   const seen = new PairSet(joint.holes);
-  const groups = groupHoleSets(joint);
-  const plates = holePlates(joint);
+  const plates = layout.plates;
   const linesOf: Line[][] = [];
   for (let k = 0; k < plates.length; k++) {
     const plate = plates[k]!;
@@ -105,18 +147,18 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     // that plate's, already measured, and its lines the same; only its own edge-line limit (its thickness) is new.
     const earlier = sameGroupsEarlier(plates, k);
     const repeat = earlier >= 0;
-    const lines = repeat ? linesOf[earlier]! : plate.connections.length === 1 ? groups.get(plate.connections[0]!.group)!.gaugeLines : gaugeLines(platesHoles(joint, plate));
+    const lines = repeat ? linesOf[earlier]! : plate.connections.length === 1 ? linesOfGroup(joint, layout, plate.connections[0]!.group).gaugeLines : gaugeLines(layout.holesOf[k]!);
     linesOf.push(lines);
     const first = plate.connections[0];
-    const stagger = first ? groups.get(first.group)!.stagger : staggerOf(platesHoles(joint, plate));
+    const stagger = first ? linesOfGroup(joint, layout, first.group).stagger : staggerOf(layout.holesOf[k]!);
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (!repeat) {
-      for (const g of joint.groups) if (connects(plate, g.id)) acrossRule(joint, plate, groups.get(g.id)!.gaugeLines, worst);
+      for (let g = 0; g < joint.groups.length; g++) if (connects(plate, joint.groups[g]!.id)) acrossRule(joint, layout, plate, layout.groups[g]!.gaugeLines, worst);
     }
-    const isOutside = outside.includes(plate);
+    const isOutside = layout.outside.includes(plate);
     for (let index = 0; index < lines.length; index++) {
       const edge = index === 0 || index === lines.length - 1;
-      pitchRules(joint, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
+      pitchRules(joint, layout, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
     }
   }
   return [
@@ -147,11 +189,11 @@ function sameGroupsEarlier(plates: readonly PlatePiece[], k: number): number {
 }
 
 /** cl. 10.2.3.1 across the force: adjacent gauge lines of one group, ≤ min(32 t, 300 mm). */
-function acrossRule(joint: Joint, plate: PlatePiece, gl: readonly Line[], worst: MaxSpacingWorst): void {
+function acrossRule(joint: Joint, layout: SpacingLayout, plate: PlatePiece, gl: readonly Line[], worst: MaxSpacingWorst): void {
   for (let i = 1; i < gl.length; i++) {
     const a = gl[i - 1]!.holes[0]!;
     const b = gl[i]!.holes[0]!;
-    const t = pairThickness(joint, a, b);
+    const t = thinnerPlate(joint, layout, a, b);
     const limit = Math.min(32 * t, 300);
     const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
     if (beatsWorst(worst.across, g, limit, "max")) worst.across = acrossWorst(plate, gl[i - 1]!.at_mm, gl[i]!.at_mm, g, t, limit);
@@ -178,14 +220,14 @@ function edgeLineWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, r: number
  * (each pair once over all plates), and on a line next to an edge of an outside plate ≤ min(100 + 4 t,
  * 200 mm) with that plate's t; × relax (cl. 10.2.3.4) within a group, not above min(32 t, 300 mm).
  */
-function pitchRules(joint: Joint, plate: PlatePiece, line: readonly Hole[], relax: number, measurePitch: boolean, edgeLine: boolean, seen: PairSet, worst: MaxSpacingWorst): void {
+function pitchRules(joint: Joint, layout: SpacingLayout, plate: PlatePiece, line: readonly Hole[], relax: number, measurePitch: boolean, edgeLine: boolean, seen: PairSet, worst: MaxSpacingWorst): void {
   for (let k = 1; k < line.length; k++) {
     const a = line[k - 1]!;
     const b = line[k]!;
     const s = b.x_mm - a.x_mm;
     const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
     if (measurePitch && seen.addNew(a, b)) {
-      const t = pairThickness(joint, a, b);
+      const t = thinnerPlate(joint, layout, a, b);
       const limit = Math.min(Math.min(16 * t, 200) * r, Math.min(32 * t, 300));
       if (beatsWorst(worst.pitch, s, limit, "max")) {
         worst.pitch = pitchWorst(plate, a, b, s, r, t, limit);
@@ -242,13 +284,14 @@ function maxDistanceWorst(plate: PlatePiece, what: string, e: number, maxLimit: 
  * Maximum edge distance: 12 t ε (t of the thinner outer plate), or 40 + 4 t where exposed to corrosion.
  * IS 800:2007, cl. 10.2.4.3 — applied here to side edges and to plate ends.
  */
-export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+export function edgeRules(joint: Joint, scenario: CheckableScenario, layout: SpacingLayout = spacingLayout(joint)): RuleCheck[] {
   let minEnd: Worst | null = null;
   let minEdge: Worst | null = null;
   let maxEdge: Worst | null = null;
-  const outside = outsidePlates(joint);
-  for (const plate of holePlates(joint)) {
-    const holes = platesHoles(joint, plate);
+  const outside = layout.outside;
+  for (let k = 0; k < layout.plates.length; k++) {
+    const plate = layout.plates[k]!;
+    const holes = layout.holesOf[k]!;
     if (holes.length === 0) continue;
     const factor = minDistanceFactor(plate);
     const half = plate.spec.width_mm / 2;
