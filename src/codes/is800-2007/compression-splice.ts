@@ -66,8 +66,7 @@ export function grossCompressionCheck(joint: Joint, scenario: CheckableScenario,
  * side of the butt with K = 0.65 (both ends held in position and direction, Table 11; common practice),
  * r = t/√12, buckling class c (α = 0.49). IS 800:2007, cl. 7.1.2, 7.1.2.1, Tables 7 and 11.
  */
-export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, share: number): StrengthCheck {
-  const L = coverStrutLength_mm(joint);
+export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, share: number, L: number = coverStrutLength_mm(joint)): StrengthCheck {
   const t = plate.spec.thickness_mm;
   const slenderness = (COVER_STRUT_K * L) / plateRadius_mm(t);
   const r = fcd_MPa(plate.fy_MPa, slenderness, IMPERFECTION.c);
@@ -92,9 +91,12 @@ export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
+/** The compression pitch limit in symbols, for the substituted text. */
+const COMPRESSION_PITCH_LIMIT_TEXT = (): string => "min(12t, 200)";
+
 /** Pitch along the force in compression: p ≤ min(12 t, 200 mm), t the thinner plate. IS 800:2007, cl. 10.2.3.2. */
 export function compressionPitchRule(joint: Joint): RuleCheck[] {
-  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(12 * t, 200), text: () => "min(12t, 200)" }));
+  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(12 * t, 200), text: COMPRESSION_PITCH_LIMIT_TEXT }));
   if (!worst) return [];
   return [
     rule({
@@ -116,8 +118,10 @@ function checks(joint: Joint, scenario: CheckableScenario, share: number): { che
   const out: CheckResult[] = [];
   for (const plate of holePlates(joint)) out.push(grossCompressionCheck(joint, scenario, plate, share));
   const covers = joint.plates.filter((p) => p.role === "cover");
-  for (const cover of covers) out.push(coverStrutCheck(joint, scenario, cover, share));
-  out.push(...compressionPitchRule(joint));
+  // Both covers span the same length across the butt.
+  const L = covers.length > 0 ? coverStrutLength_mm(joint) : 0;
+  for (const cover of covers) out.push(coverStrutCheck(joint, scenario, cover, share, L));
+  for (const c of compressionPitchRule(joint)) out.push(c);
   return {
     checks: out,
     conventions: [

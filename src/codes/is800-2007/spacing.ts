@@ -9,7 +9,7 @@ import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, pairThickness, worstRule, type Worst } from "../rule-measures.js";
 import { fixedCl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
@@ -248,8 +248,14 @@ function pitchRules(joint: Joint, layout: SpacingLayout, plate: PlatePiece, line
 /** Thickness of the thinner outside plate of the bolt stacks a plate belongs to (cl. 10.2.4.3). */
 function outerThickness(outside: readonly PlatePiece[], plate: PlatePiece): number {
   let t = Infinity;
-  for (const p of outside) if (p.connections.some((c) => plate.connections.some((k) => k.group === c.group))) t = Math.min(t, p.spec.thickness_mm);
+  for (const p of outside) if (sharesGroup(p, plate)) t = Math.min(t, p.spec.thickness_mm);
   return t;
+}
+
+/** Whether two plates take load from a common bolt group. */
+function sharesGroup(p: PlatePiece, q: PlatePiece): boolean {
+  for (const c of p.connections) if (connects(q, c.group)) return true;
+  return false;
 }
 
 /** The minimum end and edge distance factor on d0 of cl. 10.2.4.2: 1.7 for sheared or hand flame cut edges, else 1.5. */
@@ -298,14 +304,12 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario, layout: Spa
     const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
+    let yMin = Infinity;
+    let yMax = -Infinity;
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
       if (beatsWorst(minEdge, edge, limit, "min")) minEdge = minDistanceWorst(plate, h, "", edge, factor, h.across_mm, limit);
-    }
-    let yMin = Infinity;
-    let yMax = -Infinity;
-    for (const h of holes) {
       yMin = Math.min(yMin, h.y_mm);
       yMax = Math.max(yMax, h.y_mm);
     }
