@@ -10,10 +10,15 @@ import type { CompressionChecks } from "../types.js";
 import type { Joint, PlatePiece } from "../../model/joint.js";
 import type { CheckResult, RuleCheck, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { fcd_MPa, IMPERFECTION, Pd_gross } from "./compression-member.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { holePlates } from "../rule-measures.js";
+
+/** The citations of the checks below, made once (frozen; results share them). */
+const GROSS_COMPRESSION_CITATION = fixedCl("7.1.2", { also: ["7.3.2 (holes filled by bolts, from memory)"] });
+const COVER_STRUT_CITATION = fixedCl("7.1.2.1", { table: "Table 7", also: ["Table 11 (K = 0.65)"] });
+const COMPRESSION_PITCH_CITATION = fixedCl("10.2.3.2");
 
 /**
  * Butt ends in contact. IS 800:2007 gives no share of the force that machined or sawn butt ends of a
@@ -43,7 +48,7 @@ export function grossCompressionCheck(joint: Joint, scenario: CheckableScenario,
     kind: "gross-compression",
     title: "Gross section in compression",
     component: plate.label,
-    citation: cl("7.1.2", { also: ["7.3.2 (holes filled by bolts, from memory)"] }),
+    citation: GROSS_COMPRESSION_CITATION,
     formula: "C ≤ Pd = Ae·fy/γm0",
     substituted: () =>
       `Ae = ${filled ? `Ag = ${f(plate.spec.width_mm)} × ${f(plate.spec.thickness_mm)}` : `Ag − holes of the fullest line = ${f(plate.spec.width_mm * plate.spec.thickness_mm)} − ${f(a.deducted)}`} = ${f(a.A_mm2)} mm²;  ` +
@@ -61,8 +66,7 @@ export function grossCompressionCheck(joint: Joint, scenario: CheckableScenario,
  * side of the butt with K = 0.65 (both ends held in position and direction, Table 11; common practice),
  * r = t/√12, buckling class c (α = 0.49). IS 800:2007, cl. 7.1.2, 7.1.2.1, Tables 7 and 11.
  */
-export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, share: number): StrengthCheck {
-  const L = coverStrutLength_mm(joint);
+export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, share: number, L: number = coverStrutLength_mm(joint)): StrengthCheck {
   const t = plate.spec.thickness_mm;
   const slenderness = (COVER_STRUT_K * L) / plateRadius_mm(t);
   const r = fcd_MPa(plate.fy_MPa, slenderness, IMPERFECTION.c);
@@ -74,7 +78,7 @@ export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "strut-buckling",
     title: "Cover plate as a strut across the butt",
     component: plate.label,
-    citation: cl("7.1.2.1", { table: "Table 7", also: ["Table 11 (K = 0.65)"] }),
+    citation: COVER_STRUT_CITATION,
     formula: "F ≤ Pd = Ag·fcd;  fcd = (fy/γm0)/(φ + √(φ² − λ²));  φ = 0.5[1 + α(λ − 0.2) + λ²];  λ = √(fy/fcc), fcc = π²E/(KL/r)²",
     substituted: () =>
       `L = ${f(L)} mm between the innermost bolt lines; KL/r = ${COVER_STRUT_K} × ${f(L)} / (${f(t)}/√12) = ${f(slenderness, 2)};  λ = ${f(r.lambda, 3)}, φ = ${f(r.phi, 3)}, α = ${IMPERFECTION.c} (class c);  ` +
@@ -87,9 +91,12 @@ export function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
+/** The compression pitch limit in symbols, for the substituted text. */
+const COMPRESSION_PITCH_LIMIT_TEXT = (): string => "min(12t, 200)";
+
 /** Pitch along the force in compression: p ≤ min(12 t, 200 mm), t the thinner plate. IS 800:2007, cl. 10.2.3.2. */
 export function compressionPitchRule(joint: Joint): RuleCheck[] {
-  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(12 * t, 200), text: () => "min(12t, 200)" }));
+  const worst = worstCompressionPitch(joint, (t) => ({ limit_mm: Math.min(12 * t, 200), text: COMPRESSION_PITCH_LIMIT_TEXT }));
   if (!worst) return [];
   return [
     rule({
@@ -97,7 +104,7 @@ export function compressionPitchRule(joint: Joint): RuleCheck[] {
       kind: "max-pitch",
       title: "Maximum pitch along the force (compression member)",
       component: worst.where,
-      citation: cl("10.2.3.2"),
+      citation: COMPRESSION_PITCH_CITATION,
       formula: "p ≤ min(12 t, 200 mm)",
       substituted: worst.detail,
       value_mm: worst.value,
@@ -111,8 +118,10 @@ function checks(joint: Joint, scenario: CheckableScenario, share: number): { che
   const out: CheckResult[] = [];
   for (const plate of holePlates(joint)) out.push(grossCompressionCheck(joint, scenario, plate, share));
   const covers = joint.plates.filter((p) => p.role === "cover");
-  for (const cover of covers) out.push(coverStrutCheck(joint, scenario, cover, share));
-  out.push(...compressionPitchRule(joint));
+  // Both covers span the same length across the butt.
+  const L = covers.length > 0 ? coverStrutLength_mm(joint) : 0;
+  for (const cover of covers) out.push(coverStrutCheck(joint, scenario, cover, share, L));
+  for (const c of compressionPitchRule(joint)) out.push(c);
   return {
     checks: out,
     conventions: [

@@ -12,22 +12,25 @@ import { unperforatedOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { boltChecksOnly, codeChecks, strength } from "../check-builders.js";
+import { holePlates } from "../rule-measures.js";
 import { f, kN } from "../format.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { holeDimensions } from "./holes.js";
 import {
   bearingCheck,
   blockShearCheck,
+  BlockShapesOf,
   boltShearCheck,
   factorWarnings,
   grossYieldCheck,
   groupFactors,
   netSectionCheck,
   slipCheck,
+  TearOuts,
 } from "./joint-checks.js";
 import { GRADES, plateStrength } from "./materials.js";
-import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule } from "./spacing.js";
+import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule, spacingLayout } from "./spacing.js";
 import { Tdg, Tdn } from "./tension-member.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
 import { IS800_COMPRESSION } from "./compression-splice.js";
@@ -75,20 +78,35 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
     if (friction) checks.push(slipCheck(joint, scenario, gf));
     checks.push(boltShearCheck(joint, scenario, gf));
   }
-  const loaded = joint.plates.filter((p) => p.role !== "packing");
-  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c));
-  if (scope === "bolts") return boltChecksOnly(checks);
-  for (const plate of loaded) {
+  // The plates that carry load (every plate but packing), with their holes, measured once for every
+  // check below (the bolt checks alone need only the plates).
+  const layout = scope === "bolts" ? null : spacingLayout(joint);
+  const loaded = layout ? layout.plates : holePlates(joint);
+  const tearOuts = new TearOuts(joint);
+  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c, tearOuts));
+  if (!layout) return boltChecksOnly(checks);
+  const shapesOf = new BlockShapesOf(joint);
+  for (let k = 0; k < loaded.length; k++) {
+    const plate = loaded[k]!;
     checks.push(grossYieldCheck(scenario, plate));
-    checks.push(netSectionCheck(joint, scenario, plate));
+    checks.push(netSectionCheck(joint, scenario, plate, layout.holesOf[k]));
     for (const c of plate.connections) {
-      const block = blockShearCheck(joint, scenario, plate, c);
+      const block = blockShearCheck(joint, scenario, plate, c, shapesOf);
       if (block) checks.push(block);
     }
   }
-  checks.push(...minSpacingRule(joint), ...maxSpacingRules(joint), ...edgeRules(joint, scenario), ...gripRule(joint), ...centroidRule(joint));
+  pushAll(checks, minSpacingRule(joint));
+  pushAll(checks, maxSpacingRules(joint, layout));
+  pushAll(checks, edgeRules(joint, scenario, layout));
+  pushAll(checks, gripRule(joint));
+  pushAll(checks, centroidRule(joint));
 
   return codeChecks(checks, factorWarnings(joint, gfs), () => conventionsOf(scenario));
+}
+
+/** Appends each of `more` to `list` (no spread into arguments). */
+function pushAll<T>(list: T[], more: readonly T[]): void {
+  for (let i = 0; i < more.length; i++) list.push(more[i]!);
 }
 
 /** The conventions of an IS 800 check in words (written when an output reads them). */
@@ -114,6 +132,8 @@ function conventionsOf(scenario: CheckableScenario): string[] {
   return conventions;
 }
 
+const MINIMUM_DESIGN_ACTION_CITATION = fixedCl("10.7");
+
 /**
  * Minimum design action on fastenings: the connection of a tension member is designed for at least
  * 0.3 times the member's design capacity in tension, so the joint's design strength in tension must
@@ -135,7 +155,7 @@ function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: n
     title: reversal ? "Minimum design action on the connection (tension)" : "Minimum design action on the connection",
     ...(reversal ? { sense: "tension" as const } : {}),
     component: "joint",
-    citation: cl("10.7"),
+    citation: MINIMUM_DESIGN_ACTION_CITATION,
     formula: "0.3·Td ≤ Td,joint;  Td = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) of the main plate without holes",
     substituted: () => `0.3 × ${kN(member_N)} = ${kN(minimum_N)} ${holds ? "≤" : ">"} ${kN(jointTension_N)}, the joint's design strength in tension`,
     limitState: "ULS",
@@ -148,7 +168,12 @@ function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: n
   });
 }
 
-const unperforated = (spec: PlateSpec) => unperforatedStrength(spec).value_N;
+/** The unperforated plate's design tension strength, the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1 (cl. 6.2, 6.3.1), as a number. */
+function unperforated(spec: PlateSpec): number {
+  const m = plateStrength(spec);
+  const Ag = spec.width_mm * spec.thickness_mm;
+  return Math.min(Tdg(Ag, m.fy_MPa), Tdn(Ag, m.fu_MPa));
+}
 
 /**
  * Design tension strength of the unperforated plate on an efficiency basis: cl. 6.2 gross yield

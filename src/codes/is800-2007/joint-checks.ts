@@ -9,17 +9,27 @@ import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { forEachTearOut } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
-import type { StrengthCheck, Warning } from "../../model/results.js";
+import type { Citation, StrengthCheck, Warning } from "../../model/results.js";
+import { mapped } from "../../model/lists.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
 import { kb as kbFactor, Vdpb } from "./bearing.js";
 import { beta_lg, beta_lj, beta_pkg, Vdsb } from "./bolt-shear.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { bearingHoleFactor, holeFactorKh } from "./holes.js";
 import { F0, Vdsf } from "./slip.js";
-import { Tdb, Tdg, Tdn } from "./tension-member.js";
+import { Tdb, Tdb1_N, Tdb2_N, Tdg, Tdn } from "./tension-member.js";
+
+/** The citations of the checks below, made once (frozen; results share them). */
+const BEARING_CITATION = fixedCl("10.3.4");
+const SLIP_CITATION = fixedCl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf"] });
+/** Slip of a long joint: βlj applied to slip resistance too (cl. 10.3.3.1). */
+const SLIP_CITATION_LONG_JOINT = fixedCl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf", "10.3.3.1 for βlj"] });
+const GROSS_YIELD_CITATION = fixedCl("6.2");
+const NET_SECTION_CITATION = fixedCl("6.3.1");
+const BLOCK_SHEAR_CITATION = fixedCl("6.4.1");
 
 export interface GroupFactors {
   group: BoltGroupGeometry;
@@ -80,7 +90,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, gf.group),
-    citation: cl("10.3.3", reductionClauses(gf)),
+    citation: boltShearCitation(gf),
     formula: "T ≤ n·Vdsb;  Vdsb = fub/√3 · (nn·Anb + ns·Asb) · βlj·βlg·βpkg / γmb",
     substituted: () =>
       `Vdsb = ${mat.fub_MPa}/√3 × (${nn} × ${f(Anb)} + ${ns} × ${f(Asb)}) × ${f(gf.beta_lj, 3)} × ${f(gf.beta_lg, 3)} × ${f(gf.beta_pkg, 3)} / ${PARTIAL_FACTORS.gamma_mb}` +
@@ -93,18 +103,32 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gf: Gr
   });
 }
 
-/** The reduction clauses a group's bolt shear applies (cited only when they reduce). */
-function reductionClauses(gf: GroupFactors): { also?: string[] } {
-  const also = [
-    ...(gf.beta_lj < 1 ? ["10.3.3.1 (βlj)"] : []),
-    ...(gf.beta_lg < 1 ? ["10.3.3.2 (βlg)"] : []),
-    ...(gf.beta_pkg < 1 ? ["10.3.3.3 (βpkg)"] : []),
-  ];
-  return also.length > 0 ? { also } : {};
+/**
+ * Bolt shear's citation: cl. 10.3.3 with the reduction clauses it applies (cited only when they
+ * reduce), one frozen citation for each of the eight combinations of βlj, βlg and βpkg.
+ */
+const BOLT_SHEAR_CITATIONS = mapped([0, 1, 2, 3, 4, 5, 6, 7], (reduces) => {
+  const also: string[] = [];
+  if (reduces & 1) also.push("10.3.3.1 (βlj)");
+  if (reduces & 2) also.push("10.3.3.2 (βlg)");
+  if (reduces & 4) also.push("10.3.3.3 (βpkg)");
+  return fixedCl("10.3.3", also.length > 0 ? { also } : {});
+});
+
+/** The reduction clauses a group's bolt shear applies, in its citation. */
+function boltShearCitation(gf: GroupFactors): Citation {
+  return BOLT_SHEAR_CITATIONS[(gf.beta_lj < 1 ? 1 : 0) | (gf.beta_lg < 1 ? 2 : 0) | (gf.beta_pkg < 1 ? 4 : 0)]!;
 }
 
-/** kb of one plate for one group, from coordinates; with the e and p that set it. */
-export function bearingFactor(holes: readonly Hole[], connection: PlateConnection, fub_MPa: number, fu_MPa: number) {
+/** The least end distance e and pitch p toward a plate end of one group's holes, and the largest d0 along (cl. 10.3.4). */
+export interface TearOut {
+  e_mm: number;
+  p_mm: number;
+  d0_mm: number;
+}
+
+/** e, p and d0 of one group's holes bearing toward one plate end, from coordinates. */
+export function tearOutOf(holes: readonly Hole[], connection: PlateConnection): TearOut {
   let e = Infinity;
   let p = Infinity;
   let d0 = 0;
@@ -113,7 +137,36 @@ export function bearingFactor(holes: readonly Hole[], connection: PlateConnectio
     if (toHoleAhead_mm === null) e = Math.min(e, toEnd_mm);
     else p = Math.min(p, toHoleAhead_mm);
   });
-  return { e_mm: e, p_mm: p, d0_mm: d0, kb: kbFactor(e, p, d0, fub_MPa, fu_MPa) };
+  return { e_mm: e, p_mm: p, d0_mm: d0 };
+}
+
+/**
+ * The tear-out measurements of one check's joint, each measured once and handed to every plate that
+ * bears toward the same end with the same group (both cover plates of a butt splice). Made afresh for
+ * each call (never kept between calls): the holes of a group are those of this joint.
+ */
+export class TearOuts {
+  readonly #measured: { connection: PlateConnection; tearOut: TearOut }[] = [];
+  constructor(private readonly joint: Joint) {}
+  of(connection: PlateConnection): TearOut {
+    for (const m of this.#measured) {
+      const c = m.connection;
+      if (c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd) return m.tearOut;
+    }
+    const tearOut = tearOutOf(groupHoles(this.joint, connection.group), connection);
+    this.#measured.push({ connection, tearOut });
+    return tearOut;
+  }
+}
+
+/** kb of one plate for one group, from coordinates; with the e and p that set it. */
+export function bearingFactor(holes: readonly Hole[], connection: PlateConnection, fub_MPa: number, fu_MPa: number) {
+  return bearingFactorOf(tearOutOf(holes, connection), fub_MPa, fu_MPa);
+}
+
+/** kb from a group's tear-out measurements (cl. 10.3.4). */
+function bearingFactorOf(t: TearOut, fub_MPa: number, fu_MPa: number) {
+  return { e_mm: t.e_mm, p_mm: t.p_mm, d0_mm: t.d0_mm, kb: kbFactor(t.e_mm, t.p_mm, t.d0_mm, fub_MPa, fu_MPa) };
 }
 
 /** The e-term of kb in words: "e/3d0 = 40/(3 × 22) = 0.606", or "e: —" where no bolt bears on an end. */
@@ -131,12 +184,12 @@ function pTermText(b: { p_mm: number; d0_mm: number }): string {
  * IS 800:2007, cl. 10.3.4. Each plate bears with its own kb (its own end distance and pitch toward its
  * own end); the cover plates of a double-cover splice are checked one by one against their share.
  */
-export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck {
+export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, tearOuts: TearOuts = new TearOuts(joint)): StrengthCheck {
   const { bolts, options } = scenario;
   const d = bolts.size_mm;
   const mat = boltMaterial(bolts.propertyClass, d, options.boltStrength);
   const holes = groupHoles(joint, connection.group);
-  const b = bearingFactor(holes, connection, mat.fub_MPa, plate.fu_MPa);
+  const b = bearingFactorOf(tearOuts.of(connection), mat.fub_MPa, plate.fu_MPa);
   const holeFactor = bearingHoleFactor(bolts.hole);
   const t = plate.spec.thickness_mm;
   const perBolt = Vdpb(b.kb, d, t, plate.fu_MPa, holeFactor);
@@ -148,7 +201,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, plate: P
     kind: "bolt-bearing",
     title: "Bolt bearing",
     component: `${plate.label}${sideText}`,
-    citation: cl("10.3.4"),
+    citation: BEARING_CITATION,
     formula: "F ≤ n·Vdpb;  Vdpb = 2.5·kb·d·t·fu / γmb;  kb = min(e/3d0, p/3d0 − 0.25, fub/fu, 1.0)",
     substituted: () =>
       `kb = min(${eTermText(b)}, ${pTermText(b)}, fub/fu = ${mat.fub_MPa}/${plate.fu_MPa} = ${f(mat.fub_MPa / plate.fu_MPa, 3)}, 1.0) = ${f(b.kb, 3)};  ` +
@@ -187,7 +240,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gf: GroupFa
     kind: "slip",
     title: slipAt === "service" ? "Slip resistance at service load" : "Slip resistance at factored load",
     component: groupLabel(joint, gf.group),
-    citation: cl("10.4.3", { table: "Table 20", also: ["Table 5 for γmf", ...(gf.beta_lj < 1 ? ["10.3.3.1 for βlj"] : [])] }),
+    citation: gf.beta_lj < 1 ? SLIP_CITATION_LONG_JOINT : SLIP_CITATION,
     formula: "F ≤ n·Vdsf;  Vdsf = μf·ne·Kh·F0·βlj / γmf;  F0 = 0.7·fub·Anb",
     substituted: () =>
       `F0 = 0.7 × ${mat.fub_MPa} × ${f(Anb)} = ${kN(proof, 2)};  Vdsf = ${f(mu, 2)} × ${ne} × ${Kh} × ${kN(proof, 2)} × ${f(gf.beta_lj, 3)} / ${gamma} = ${kN(perBolt, 2)};  ` +
@@ -217,7 +270,7 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
     kind: "gross-yield",
     title: "Gross-section yield",
     component: plate.label,
-    citation: cl("6.2"),
+    citation: GROSS_YIELD_CITATION,
     formula: "F ≤ Tdg = Ag·fy / γm0",
     substituted: () => `Tdg = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${PARTIAL_FACTORS.gamma_m0} = ${kN(R)}` + shareText(plate),
     limitState: "ULS",
@@ -238,9 +291,8 @@ function shareText(plate: PlatePiece): string {
  * (the clause as written); with "transferred", each path carries only what the plate has not yet passed
  * to bolts ahead of it (see governingNetPath), and the governing path has the highest demand/resistance.
  */
-export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece): StrengthCheck {
+export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, holes: readonly Hole[] = holesOfPlate(joint, plate)): StrengthCheck {
   const { width_mm: b, thickness_mm: t } = plate.spec;
-  const holes = holesOfPlate(joint, plate);
   const transferred = scenario.options.netSectionLoad === "transferred";
   const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
@@ -251,7 +303,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "net-section",
     title: "Net-section rupture",
     component: plate.label,
-    citation: cl("6.3.1"),
+    citation: NET_SECTION_CITATION,
     formula: transferred
       ? "F·k/n ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t; k = bolts not yet passed; highest F·k/n / Tdn over all paths"
       : "F ≤ Tdn = 0.9·An·fu / γm1;  An = (b − Σd0 + Σ s²/4g)·t, least over all paths",
@@ -272,18 +324,40 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
 }
 
 /**
+ * The block shapes of one check's joint (blockShapes), each asked once and handed to every plate of the
+ * same width that one group bears on toward the same end (both cover plates of a butt splice). Made
+ * afresh for each call (never kept between calls).
+ */
+export class BlockShapesOf {
+  readonly #asked: { connection: PlateConnection; width_mm: number; shapes: readonly BlockShape[] }[] = [];
+  constructor(private readonly joint: Joint) {}
+  of(connection: PlateConnection, width_mm: number): readonly BlockShape[] {
+    for (const m of this.#asked) {
+      const c = m.connection;
+      if (m.width_mm === width_mm && c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd) return m.shapes;
+    }
+    const shapes = blockShapes(groupHoles(this.joint, connection.group), connection, width_mm, this.joint.holes);
+    this.#asked.push({ connection, width_mm, shapes });
+    return shapes;
+  }
+}
+
+/**
  * Block shear of a plate for one bolt group: the governing shape of all that can form.
  * IS 800:2007, cl. 6.4.1: Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1, 0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0).
  * A block holding k of the group's n bolts carries k/n of the plate's force (options.block_shear_load:
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
-export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, shapesOf: BlockShapesOf = new BlockShapesOf(joint)): StrengthCheck | null {
   const holes = groupHoles(joint, connection.group);
-  const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
+  const shapes = shapesOf.of(connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => resistance(shape).Tdb_N, resistance);
+  const { fy_MPa: fy, fu_MPa: fu } = plate;
+  // Every shape's Tdb as a number (no object per shape); the two terms of the governing one for its text.
+  const value = (shape: BlockShape) => Math.min(Tdb1_N(shape.shearGross_mm * t, shape.tensionNet_mm * t, fy, fu), Tdb2_N(shape.shearNet_mm * t, shape.tensionGross_mm * t, fy, fu));
+  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, fy, fu);
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, value, resistance);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;
@@ -293,7 +367,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "block-shear",
     title: "Block shear",
     component: `${plate.label}${sideText}`,
-    citation: cl("6.4.1"),
+    citation: BLOCK_SHEAR_CITATION,
     formula: `${load === "full" ? "F" : "F·k/n"} ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)`,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Avg = ${f(s.shearGross_mm)} × ${f(t)} = ${f(s.shearGross_mm * t)}, ` +

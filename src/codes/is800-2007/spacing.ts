@@ -2,15 +2,30 @@
  * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
-import { groupHoles } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
+import { mapped } from "../../model/lists.js";
 import { distance, fartherThan, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
-import { cl } from "./citation.js";
+import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, pairThickness, worstRule, type Worst } from "../rule-measures.js";
+import { fixedCl } from "./citation.js";
 import { epsilon } from "./materials.js";
+
+/** The citations of the rules below, made once (frozen; results share them). */
+const MIN_SPACING_CITATION = fixedCl("10.2.2");
+const MAX_SPACING_CITATION = fixedCl("10.2.3.1");
+const MAX_PITCH_CITATION = fixedCl("10.2.3.2");
+const EDGE_LINE_CITATION = fixedCl("10.2.3.3");
+/** cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners set the governing limit. */
+const RELAXED = { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] };
+const MAX_PITCH_RELAXED_CITATION = fixedCl("10.2.3.2", RELAXED);
+const EDGE_LINE_RELAXED_CITATION = fixedCl("10.2.3.3", RELAXED);
+const MIN_DISTANCE_CITATION = fixedCl("10.2.4.2");
+const MAX_EDGE_CITATION = fixedCl("10.2.4.3");
+const GRIP_CITATION = fixedCl("10.3.3.2");
+const CENTROID_CITATION = Object.freeze({ standard: "general", clause: "concentric bolt group, assumed by the IS 800:2007 checks of Section 6 and cl. 10.3, 10.4" });
 
 /**
  * Whether a plate's fasteners are staggered at equal intervals (cl. 10.2.3.4): consecutive transverse
@@ -36,15 +51,58 @@ function sharesGaugeLine(a: Line, b: Line): boolean {
   return false;
 }
 
-/** Each bolt group's holes with their gauge lines and stagger, worked out once per rule. */
-function groupHoleSets(joint: Joint): Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }> {
-  const sets = new Map<Hole["group"], { gaugeLines: Line[]; stagger: { staggered: boolean; gauge_mm: number } }>();
-  for (const g of joint.groups) {
-    const holes = groupHoles(joint, g.id);
-    const lines = gaugeLines(holes);
-    sets.set(g.id, { gaugeLines: lines, stagger: staggerOf(holes, lines) });
-  }
-  return sets;
+/** A bolt group's gauge lines and stagger (cl. 10.2.3.4). */
+interface GroupLines {
+  gaugeLines: Line[];
+  stagger: { staggered: boolean; gauge_mm: number };
+}
+
+/**
+ * What the spacing and edge rules of one check measure on its joint, worked out once and handed to
+ * each rule of the same call (never kept between calls): the plates that carry load, the outside
+ * plates of the bolt stacks, each plate's holes, each group's gauge lines and stagger, and the
+ * thickness of the thinner plate each pair of groups passes through.
+ */
+export interface SpacingLayout {
+  plates: PlatePiece[];
+  outside: PlatePiece[];
+  /** The holes through plates[k], every group it connects to, in the joint's order (holesOfPlate: the joint's own lists, read only). */
+  holesOf: (readonly Hole[])[];
+  /** Each group's lines, in the order of joint.groups. */
+  groups: GroupLines[];
+  /** pairThickness of a hole of group i and one of group j, at i × groups + j. */
+  groupPairThickness: number[];
+}
+
+/** The joint's spacing layout (see SpacingLayout). */
+export function spacingLayout(joint: Joint): SpacingLayout {
+  const plates = holePlates(joint);
+  const holesOf = mapped(plates, (plate) => holesOfPlate(joint, plate));
+  const groups = mapped(joint.groups, (g): GroupLines => {
+    const lines = gaugeLines(g.holes);
+    return { gaugeLines: lines, stagger: staggerOf(g.holes, lines) };
+  });
+  const groupPairThickness: number[] = [];
+  // pairThickness reads only the holes' groups: one hole of each group stands for all of them.
+  for (const gi of joint.groups) for (const gj of joint.groups) groupPairThickness.push(gi.holes[0] && gj.holes[0] ? pairThickness(joint, gi.holes[0], gj.holes[0]) : Infinity);
+  return { plates, outside: outsidePlates(joint), holesOf, groups, groupPairThickness };
+}
+
+/** Index of a bolt group in joint.groups. */
+function groupIndex(joint: Joint, group: Hole["group"]): number {
+  const groups = joint.groups;
+  for (let i = 0; i < groups.length; i++) if (groups[i]!.id === group) return i;
+  return -1;
+}
+
+/** The lines of a group, from the layout. */
+function linesOfGroup(joint: Joint, layout: SpacingLayout, group: Hole["group"]): GroupLines {
+  return layout.groups[groupIndex(joint, group)]!;
+}
+
+/** Thickness of the thinner plate both holes pass through (pairThickness), from the layout. */
+function thinnerPlate(joint: Joint, layout: SpacingLayout, a: Hole, b: Hole): number {
+  return layout.groupPairThickness[groupIndex(joint, a.group) * joint.groups.length + groupIndex(joint, b.group)]!;
 }
 
 /*
@@ -68,7 +126,7 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
     const s = distance(a, b);
     if (beatsWorst(worst, s, 2.5 * d, "min")) worst = spacingWorst(plate, a, b, s, d);
   });
-  return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("10.2.2"), "s ≥ 2.5 d", "min", worst);
+  return worstRule("min-spacing", "min-spacing", "Minimum spacing", MIN_SPACING_CITATION, "s ≥ 2.5 d", "min", worst);
 }
 
 /**
@@ -78,12 +136,10 @@ export function minSpacingRule(joint: Joint): RuleCheck[] {
  *  - on a line next to an edge of an outside plate ≤ min(100 + 4 t, 200 mm);
  *  - staggered at equal intervals with gauge ≤ 75 mm: the last two limits × 1.5, not above min(32 t, 300).
  */
-export function maxSpacingRules(joint: Joint): RuleCheck[] {
+export function maxSpacingRules(joint: Joint, layout: SpacingLayout = spacingLayout(joint)): RuleCheck[] {
   const worst: MaxSpacingWorst = { across: null, pitch: null, edgeLine: null, pitchRelaxed: false, edgeLineRelaxed: false };
-  const outside = outsidePlates(joint);
   const seen = new PairSet(joint.holes);
-  const groups = groupHoleSets(joint);
-  const plates = holePlates(joint);
+  const plates = layout.plates;
   const linesOf: Line[][] = [];
   for (let k = 0; k < plates.length; k++) {
     const plate = plates[k]!;
@@ -91,31 +147,27 @@ export function maxSpacingRules(joint: Joint): RuleCheck[] {
     // that plate's, already measured, and its lines the same; only its own edge-line limit (its thickness) is new.
     const earlier = sameGroupsEarlier(plates, k);
     const repeat = earlier >= 0;
-    const lines = repeat ? linesOf[earlier]! : plate.connections.length === 1 ? groups.get(plate.connections[0]!.group)!.gaugeLines : gaugeLines(platesHoles(joint, plate));
+    const lines = repeat ? linesOf[earlier]! : plate.connections.length === 1 ? linesOfGroup(joint, layout, plate.connections[0]!.group).gaugeLines : gaugeLines(layout.holesOf[k]!);
     linesOf.push(lines);
     const first = plate.connections[0];
-    const stagger = first ? groups.get(first.group)!.stagger : staggerOf(platesHoles(joint, plate));
+    const stagger = first ? linesOfGroup(joint, layout, first.group).stagger : staggerOf(layout.holesOf[k]!);
     const relax = stagger.staggered && stagger.gauge_mm <= 75 ? 1.5 : 1.0;
     if (!repeat) {
-      for (const g of joint.groups) if (connects(plate, g.id)) acrossRule(joint, plate, groups.get(g.id)!.gaugeLines, worst);
+      for (let g = 0; g < joint.groups.length; g++) if (connects(plate, joint.groups[g]!.id)) acrossRule(joint, layout, plate, layout.groups[g]!.gaugeLines, worst);
     }
-    const isOutside = outside.includes(plate);
+    const isOutside = layout.outside.includes(plate);
     for (let index = 0; index < lines.length; index++) {
       const edge = index === 0 || index === lines.length - 1;
-      pitchRules(joint, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
+      pitchRules(joint, layout, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
     }
   }
   return [
-    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", cl("10.2.3.1"), "g ≤ min(32 t, 300 mm)", "max", worst.across),
-    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", cl("10.2.3.2", relaxedCitation(worst.pitchRelaxed)), "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
-    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", cl("10.2.3.3", relaxedCitation(worst.edgeLineRelaxed)), "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
+    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", MAX_SPACING_CITATION, "g ≤ min(32 t, 300 mm)", "max", worst.across),
+    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", worst.pitchRelaxed ? MAX_PITCH_RELAXED_CITATION : MAX_PITCH_CITATION, "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
+    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", worst.edgeLineRelaxed ? EDGE_LINE_RELAXED_CITATION : EDGE_LINE_CITATION, "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
   ];
 }
 
-/** cl. 10.2.3.4 is cited only where its 50 % relaxation for staggered fasteners set the governing limit. */
-function relaxedCitation(relaxed: boolean): { also?: string[] } {
-  return relaxed ? { also: ["10.2.3.4 (staggered, g ≤ 75 mm)"] } : {};
-}
 
 /** The governing measurements of the three maximum-spacing rules so far, and whether cl. 10.2.3.4 relaxed the governing limit. */
 interface MaxSpacingWorst {
@@ -137,11 +189,11 @@ function sameGroupsEarlier(plates: readonly PlatePiece[], k: number): number {
 }
 
 /** cl. 10.2.3.1 across the force: adjacent gauge lines of one group, ≤ min(32 t, 300 mm). */
-function acrossRule(joint: Joint, plate: PlatePiece, gl: readonly Line[], worst: MaxSpacingWorst): void {
+function acrossRule(joint: Joint, layout: SpacingLayout, plate: PlatePiece, gl: readonly Line[], worst: MaxSpacingWorst): void {
   for (let i = 1; i < gl.length; i++) {
     const a = gl[i - 1]!.holes[0]!;
     const b = gl[i]!.holes[0]!;
-    const t = pairThickness(joint, a, b);
+    const t = thinnerPlate(joint, layout, a, b);
     const limit = Math.min(32 * t, 300);
     const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
     if (beatsWorst(worst.across, g, limit, "max")) worst.across = acrossWorst(plate, gl[i - 1]!.at_mm, gl[i]!.at_mm, g, t, limit);
@@ -168,14 +220,14 @@ function edgeLineWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, r: number
  * (each pair once over all plates), and on a line next to an edge of an outside plate ≤ min(100 + 4 t,
  * 200 mm) with that plate's t; × relax (cl. 10.2.3.4) within a group, not above min(32 t, 300 mm).
  */
-function pitchRules(joint: Joint, plate: PlatePiece, line: readonly Hole[], relax: number, measurePitch: boolean, edgeLine: boolean, seen: PairSet, worst: MaxSpacingWorst): void {
+function pitchRules(joint: Joint, layout: SpacingLayout, plate: PlatePiece, line: readonly Hole[], relax: number, measurePitch: boolean, edgeLine: boolean, seen: PairSet, worst: MaxSpacingWorst): void {
   for (let k = 1; k < line.length; k++) {
     const a = line[k - 1]!;
     const b = line[k]!;
     const s = b.x_mm - a.x_mm;
     const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
     if (measurePitch && seen.addNew(a, b)) {
-      const t = pairThickness(joint, a, b);
+      const t = thinnerPlate(joint, layout, a, b);
       const limit = Math.min(Math.min(16 * t, 200) * r, Math.min(32 * t, 300));
       if (beatsWorst(worst.pitch, s, limit, "max")) {
         worst.pitch = pitchWorst(plate, a, b, s, r, t, limit);
@@ -196,8 +248,14 @@ function pitchRules(joint: Joint, plate: PlatePiece, line: readonly Hole[], rela
 /** Thickness of the thinner outside plate of the bolt stacks a plate belongs to (cl. 10.2.4.3). */
 function outerThickness(outside: readonly PlatePiece[], plate: PlatePiece): number {
   let t = Infinity;
-  for (const p of outside) if (p.connections.some((c) => plate.connections.some((k) => k.group === c.group))) t = Math.min(t, p.spec.thickness_mm);
+  for (const p of outside) if (sharesGroup(p, plate)) t = Math.min(t, p.spec.thickness_mm);
   return t;
+}
+
+/** Whether two plates take load from a common bolt group. */
+function sharesGroup(p: PlatePiece, q: PlatePiece): boolean {
+  for (const c of p.connections) if (connects(q, c.group)) return true;
+  return false;
 }
 
 /** The minimum end and edge distance factor on d0 of cl. 10.2.4.2: 1.7 for sheared or hand flame cut edges, else 1.5. */
@@ -232,27 +290,26 @@ function maxDistanceWorst(plate: PlatePiece, what: string, e: number, maxLimit: 
  * Maximum edge distance: 12 t ε (t of the thinner outer plate), or 40 + 4 t where exposed to corrosion.
  * IS 800:2007, cl. 10.2.4.3 — applied here to side edges and to plate ends.
  */
-export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
+export function edgeRules(joint: Joint, scenario: CheckableScenario, layout: SpacingLayout = spacingLayout(joint)): RuleCheck[] {
   let minEnd: Worst | null = null;
   let minEdge: Worst | null = null;
   let maxEdge: Worst | null = null;
-  const outside = outsidePlates(joint);
-  for (const plate of holePlates(joint)) {
-    const holes = platesHoles(joint, plate);
+  const outside = layout.outside;
+  for (let k = 0; k < layout.plates.length; k++) {
+    const plate = layout.plates[k]!;
+    const holes = layout.holesOf[k]!;
     if (holes.length === 0) continue;
     const factor = minDistanceFactor(plate);
     const half = plate.spec.width_mm / 2;
     const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
+    let yMin = Infinity;
+    let yMax = -Infinity;
     for (const h of holes) {
       const edge = half - Math.abs(h.y_mm);
       const limit = factor * h.across_mm;
       if (beatsWorst(minEdge, edge, limit, "min")) minEdge = minDistanceWorst(plate, h, "", edge, factor, h.across_mm, limit);
-    }
-    let yMin = Infinity;
-    let yMax = -Infinity;
-    for (const h of holes) {
       yMin = Math.min(yMin, h.y_mm);
       yMax = Math.max(yMax, h.y_mm);
     }
@@ -273,9 +330,9 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
     }
   }
   return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("10.2.4.2"), "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("10.2.4.2"), "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge),
-    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("10.2.4.3"), scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", MIN_DISTANCE_CITATION, "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", MIN_DISTANCE_CITATION, "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge),
+    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", MAX_EDGE_CITATION, scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
   ];
 }
 
@@ -291,7 +348,7 @@ export function gripRule(joint: Joint): RuleCheck[] {
   for (const g of joint.groups) {
     if (beatsWorst(worst, g.grip_mm, 8 * d, "max")) worst = gripWorst(joint, g, d);
   }
-  return worstRule("grip-length", "grip-length", "Grip length", cl("10.3.3.2"), "lg ≤ 8 d", "max", worst);
+  return worstRule("grip-length", "grip-length", "Grip length", GRIP_CITATION, "lg ≤ 8 d", "max", worst);
 }
 
 /**
@@ -299,5 +356,5 @@ export function gripRule(joint: Joint): RuleCheck[] {
  * group is reported as failing rather than accepted silently.
  */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by the IS 800:2007 checks of Section 6 and cl. 10.3, 10.4" });
+  return groupCentroidRule(joint, CENTROID_CITATION);
 }

@@ -31,8 +31,19 @@ export interface BlockShearResult {
  * Tdb1 = Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1;   Tdb2 = 0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0.
  */
 export function Tdb(Avg_mm2: number, Avn_mm2: number, Atg_mm2: number, Atn_mm2: number, fy_MPa: number, fu_MPa: number): BlockShearResult {
-  const { gamma_m0, gamma_m1 } = PARTIAL_FACTORS;
-  const Tdb1 = (Avg_mm2 * fy_MPa) / (Math.sqrt(3) * gamma_m0) + (0.9 * Atn_mm2 * fu_MPa) / gamma_m1;
-  const Tdb2 = (0.9 * Avn_mm2 * fu_MPa) / (Math.sqrt(3) * gamma_m1) + (Atg_mm2 * fy_MPa) / gamma_m0;
+  const Tdb1 = Tdb1_N(Avg_mm2, Atn_mm2, fy_MPa, fu_MPa);
+  const Tdb2 = Tdb2_N(Avn_mm2, Atg_mm2, fy_MPa, fu_MPa);
   return { Tdb1_N: Tdb1, Tdb2_N: Tdb2, Tdb_N: Math.min(Tdb1, Tdb2) };
+}
+
+/** Block shear, yield of the gross shear planes with rupture of the net tension planes (cl. 6.4.1): Tdb1 = Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1 (N). */
+export function Tdb1_N(Avg_mm2: number, Atn_mm2: number, fy_MPa: number, fu_MPa: number): number {
+  const { gamma_m0, gamma_m1 } = PARTIAL_FACTORS;
+  return (Avg_mm2 * fy_MPa) / (Math.sqrt(3) * gamma_m0) + (0.9 * Atn_mm2 * fu_MPa) / gamma_m1;
+}
+
+/** Block shear, rupture of the net shear planes with yield of the gross tension planes (cl. 6.4.1): Tdb2 = 0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0 (N). */
+export function Tdb2_N(Avn_mm2: number, Atg_mm2: number, fy_MPa: number, fu_MPa: number): number {
+  const { gamma_m0, gamma_m1 } = PARTIAL_FACTORS;
+  return (0.9 * Avn_mm2 * fu_MPa) / (Math.sqrt(3) * gamma_m1) + (Atg_mm2 * fy_MPa) / gamma_m0;
 }
