@@ -23,7 +23,7 @@ import { phiPnRupture, phiPnYield } from "./tension.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
 import { AISC_COMPRESSION } from "./compression-splice.js";
 import { SLIP_CLASSES } from "./slip.js";
-import { centroidRule, edgeRules, fillerRule, maxSpacingRule, minSpacingRule, preferredSpacingWarning } from "./spacing.js";
+import { centroidRule, edgeRules, fillerRule, maxSpacingRule, spacingRuleAndWarning } from "./spacing.js";
 
 export const AISC360_ID = "aisc360-16";
 
@@ -89,7 +89,9 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
       if (block) checks.push(block);
     }
   }
-  pushAll(checks, minSpacingRule(joint, scenario));
+  // J3.3's minimum spacing and its preferred 3 d come from one walk over the hole pairs.
+  const spacing = spacingRuleAndWarning(joint, scenario);
+  pushAll(checks, spacing.rules);
   pushAll(checks, maxSpacingRule(joint, scenario));
   pushAll(checks, edgeRules(joint, scenario));
   pushAll(checks, fillerRule(joint, scenario));
@@ -100,8 +102,7 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
   for (const gs of shears) {
     if (gs.longJoint < 1) warnings.push({ id: "long-joint", message: `${gs.group.id}: fastener pattern longer than ${bolt.inch !== undefined ? "38 in" : "950 mm"}, Fnv × 0.833 (Table J3.2 note [b])` });
   }
-  const spacing = preferredSpacingWarning(joint, scenario);
-  if (spacing) warnings.push(spacing);
+  if (spacing.warning) warnings.push(spacing.warning);
   return codeChecks(checks, warnings, () => conventionsOf(joint, scenario, bolt, slipCritical));
 }
 

@@ -73,18 +73,33 @@ function sideEdgeWorst(u: UnitText, plate: PlatePiece, h: Hole, e: number, maxLi
 
 const MIN_SPACING_CITATION = fixedCl("J3.3");
 
-/** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
-export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
-  const u = unitText(scenario);
+/**
+ * One walk over the hole pairs for J3.3: the governing pair against 2⅔ d, and the least centre
+ * distance of all pairs (for the 3 d preference). A pair is measured only when it may be nearer than
+ * the governing one so far; a pair farther than that one cannot be the least either.
+ */
+function measureSpacing(joint: Joint, u: UnitText): { worst: Worst | null; least_mm: number } {
   const limit = minSpacing_mm(joint.boltDiameter_mm);
   let worst: Worst | null = null;
+  let least = Infinity;
   forEachHolePair(joint, (plate, a, b) => {
     // The limit is the same for every pair: only a pair nearer than the nearest so far can govern.
     if (worst !== null && fartherThan(a, b, (worst as Worst).value)) return;
     const s = distance(a, b);
+    least = Math.min(least, s);
     if (beatsWorst(worst, s, limit, "min")) worst = spacingWorst(u, plate, a, b, s, limit, joint.boltDiameter_mm);
   });
+  return { worst, least_mm: least };
+}
+
+/** The rule of the governing pair. AISC 360-16 J3.3. */
+function minSpacingOf(worst: Worst | null): RuleCheck[] {
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", MIN_SPACING_CITATION, "s ≥ 2⅔ d", "min", worst);
+}
+
+/** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
+export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
+  return minSpacingOf(measureSpacing(joint, unitText(scenario)).worst);
 }
 
 /**
@@ -92,13 +107,20 @@ export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
  * AISC 360-16 J3.3 ("a distance of 3d is preferred").
  */
 export function preferredSpacingWarning(joint: Joint, scenario: Scenario): Warning | null {
-  const d = joint.boltDiameter_mm;
-  let least = Infinity;
-  forEachHolePair(joint, (_plate, a, b) => {
-    if (!fartherThan(a, b, least)) least = Math.min(least, distance(a, b));
-  });
-  if (!(least < 3 * d - 1e-9)) return null;
+  return preferredSpacingOf(joint, unitText(scenario), measureSpacing(joint, unitText(scenario)).least_mm);
+}
+
+/** The minimum spacing rule and the 3 d warning of J3.3 from one walk over the hole pairs. */
+export function spacingRuleAndWarning(joint: Joint, scenario: Scenario): { rules: RuleCheck[]; warning: Warning | null } {
   const u = unitText(scenario);
+  const m = measureSpacing(joint, u);
+  return { rules: minSpacingOf(m.worst), warning: preferredSpacingOf(joint, u, m.least_mm) };
+}
+
+/** The 3 d warning for the least centre distance (AISC 360-16 J3.3). */
+function preferredSpacingOf(joint: Joint, u: UnitText, least: number): Warning | null {
+  const d = joint.boltDiameter_mm;
+  if (!(least < 3 * d - 1e-9)) return null;
   return { id: "spacing-below-3d", message: `least bolt spacing ${u.len(least)} is below the preferred 3 d = ${u.len(3 * d)} (AISC 360-16 J3.3; the minimum 2⅔ d is checked)` };
 }
 
