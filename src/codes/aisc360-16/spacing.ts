@@ -136,6 +136,32 @@ function gaugeGapWorst(u: UnitText, plate: PlatePiece, lines: readonly Line[], i
   return { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(lines[i - 1]!.at_mm)} and ${u.len(lines[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` };
 }
 
+/**
+ * The thinner part two holes both pass through (pairThickness), which depends only on the holes' bolt
+ * groups: worked out once per pair of groups of one joint, within one rule.
+ */
+class GroupPairThickness {
+  readonly #joint: Joint;
+  /** By index of a's group × group count + index of b's group; NaN until measured. */
+  readonly #t_mm: number[] = [];
+  constructor(joint: Joint) {
+    this.#joint = joint;
+    const n = joint.groups.length;
+    for (let k = 0; k < n * n; k++) this.#t_mm.push(NaN);
+  }
+  of(a: Hole, b: Hole): number {
+    const key = this.#groupIndex(a.group) * this.#joint.groups.length + this.#groupIndex(b.group);
+    let t = this.#t_mm[key]!;
+    if (Number.isNaN(t)) this.#t_mm[key] = t = pairThickness(this.#joint, a, b);
+    return t;
+  }
+  #groupIndex(group: Hole["group"]): number {
+    const groups = this.#joint.groups;
+    for (let i = 0; i < groups.length; i++) if (groups[i]!.id === group) return i;
+    throw new RangeError(`hole of bolt group ${group}, which the joint does not have`);
+  }
+}
+
 /** J3.5(a) (painted, or not subject to corrosion) and J3.5(b) (weathering steel exposed to corrosion), with their formulas by bolt unit. */
 const MAX_SPACING_TEXTS = {
   painted: { citation: fixedCl("J3.5(a)"), inch: "s ≤ min(24 t, 12 in)", metric: "s ≤ min(24 t, 305 mm)" },
@@ -155,6 +181,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
   let across: Worst | null = null;
   const plates = holePlates(joint);
   const groupLines = mapped(joint.groups, (g) => gaugeLines(g.holes));
+  const thinner = new GroupPairThickness(joint);
   const plateLines: Line[][] = [];
   for (let k = 0; k < plates.length; k++) {
     const plate = plates[k]!;
@@ -163,7 +190,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
       for (let n = 1; n < line.holes.length; n++) {
         const a = line.holes[n - 1]!;
         const b = line.holes[n]!;
-        const limit = maxSpacing_mm(pairThickness(joint, a, b), inch, corrosion);
+        const limit = maxSpacing_mm(thinner.of(a, b), inch, corrosion);
         const s = b.x_mm - a.x_mm;
         if (beatsWorst(along, s, limit, "max")) along = pairWorst(u, plate, a, b, "", s, limit);
       }
@@ -172,7 +199,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
       if (!connects(plate, joint.groups[gi]!.id)) continue;
       const gl = groupLines[gi]!;
       for (let i = 1; i < gl.length; i++) {
-        const limit = maxSpacing_mm(pairThickness(joint, gl[i - 1]!.holes[0]!, gl[i]!.holes[0]!), inch, corrosion);
+        const limit = maxSpacing_mm(thinner.of(gl[i - 1]!.holes[0]!, gl[i]!.holes[0]!), inch, corrosion);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
         if (beatsWorst(across, g, limit, "max")) across = gaugeGapWorst(u, plate, gl, i, g, limit);
       }
