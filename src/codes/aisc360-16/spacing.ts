@@ -252,18 +252,15 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
   let maxEdge: Worst | null = null;
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
+    const holes = platesHoles(joint, plate);
+    if (holes.length === 0) continue;
     const half = plate.spec.width_mm / 2;
     const maxLimit = maxEdge_mm(plate.spec.thickness_mm, inch);
-    let holes = 0;
-    // Side edges: every hole of every group the plate connects to, in the joint's order.
-    for (const h of joint.holes) {
-      if (!connects(plate, h.group)) continue;
-      holes++;
+    for (const h of holes) {
       const e = half - Math.abs(h.y_mm);
       if (beatsWorst(minEdge, e, minLimit, "min")) minEdge = pairWorst(u, plate, h, null, "", e, minLimit);
       if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = sideEdgeWorst(u, plate, h, e, maxLimit, inch);
     }
-    if (holes === 0) continue;
     for (const c of plate.connections) {
       let nearest: Hole | null = null;
       let nearestE = Infinity;
