@@ -13,7 +13,7 @@ import type { Joint, PlatePiece } from "../../model/joint.js";
 import type { CheckResult, RuleCheck, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
 import { inchBoltSize } from "../../catalogue/bolts.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { E_STEEL_MPA, phiPnCompressionElement } from "./compression.js";
 import { unitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
@@ -36,6 +36,11 @@ function spliceShare(scenario: Scenario): { value: number; text: string } {
   };
 }
 
+/** J4.4 with Eq. J4-6 (Lc/r ≤ 25), or with Chapter E past it (E3); J3.5 with E6.2(a) for the pitch. */
+const J4_4_ELEMENT = fixedCl("J4.4", { equation: "J4-6" });
+const J4_4_WITH_E3 = fixedCl("J4.4", { also: ["E3 (Eq. E3-2, E3-3)"] });
+const J3_5_WITH_E6_2 = fixedCl("J3.5", { also: ["E6.2(a) (from memory)"] });
+
 /**
  * A plate in compression as a connecting element: F ≤ φPn = 0.90·Fy·Ag (Lc/r ≤ 25, Eq. J4-6), standard
  * holes filled by the bolts not deducted (J4.4 uses Ag), other holes deducted. AISC 360-16 J4.4.
@@ -51,7 +56,7 @@ function grossCompressionCheck(joint: Joint, scenario: CheckableScenario, plate:
     kind: "gross-compression",
     title: "Gross section in compression",
     component: plate.label,
-    citation: cl("J4.4", { equation: "J4-6" }),
+    citation: J4_4_ELEMENT,
     formula: "Pu ≤ φPn = 0.90·Fy·Ag",
     substituted: () => `Ag = ${u.area(a.A_mm2)}${filled ? "" : " (holes of the fullest line deducted)"};  φPn = 0.90 × ${u.stress(plate.fy_MPa)} × ${u.area(a.A_mm2)} = ${u.force(r.phiPn_N)}` + (s !== 1 ? `;  F = ${f(s, 3)} × C` : ""),
     limitState: "ULS",
@@ -79,7 +84,7 @@ function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: Plate
     kind: "strut-buckling",
     title: "Cover plate as a strut across the butt",
     component: plate.label,
-    citation: cl("J4.4", r.chapterE ? { also: ["E3 (Eq. E3-2, E3-3)"] } : { equation: "J4-6" }),
+    citation: r.chapterE ? J4_4_WITH_E3 : J4_4_ELEMENT,
     formula: "F ≤ φPn;  Lc/r ≤ 25: Pn = Fy·Ag;  else Pn = Fcr·Ag (E3);  φ = 0.90",
     substituted: () =>
       `L = ${u.len(L)} between the innermost bolt lines; Lc/r = ${COVER_STRUT_K} × ${u.len(L)} / (t/√12) = ${f(slenderness, 2)}${r.chapterE ? ` > 25: Fcr = ${u.stress(r.Fcr_MPa)} (E3)` : " ≤ 25: Fy"};  ` +
@@ -111,7 +116,7 @@ function compressionPitchRule(joint: Joint): RuleCheck[] {
       kind: "max-pitch",
       title: "Maximum pitch along the force (plates in compression)",
       component: worst.where,
-      citation: cl("J3.5", { also: ["E6.2(a) (from memory)"] }),
+      citation: J3_5_WITH_E6_2,
       formula: "p ≤ min(0.75 t √(E/Fy), 12 in)",
       substituted: worst.detail,
       value_mm: worst.value,

@@ -58,8 +58,10 @@ export function holeJ33M_mm(d_mm: number, hole: HoleType): [number, number] {
 /** Hole dimensions across and along the force, mm (Table J3.3 for inch bolts, J3.3M for metric). */
 export function holeDimensions(d_mm: number, hole: HoleType, slot: SlotDirection | undefined): HoleDimensions {
   const inch = inchBoltSize(d_mm);
-  const [width, length] = inch !== undefined ? holeJ33_in(inch, hole).map((v) => v * MM_PER_IN) as [number, number] : holeJ33M_mm(d_mm, hole);
-  return slot === "across" ? { across_mm: length, along_mm: width } : { across_mm: width, along_mm: length };
+  const [width, length] = inch !== undefined ? holeJ33_in(inch, hole) : holeJ33M_mm(d_mm, hole);
+  const toMm = inch !== undefined ? MM_PER_IN : 1;
+  // Inch sizes converted exactly; metric sizes as printed (× 1 changes no figure).
+  return slot === "across" ? { across_mm: length * toMm, along_mm: width * toMm } : { across_mm: width * toMm, along_mm: length * toMm };
 }
 
 /**

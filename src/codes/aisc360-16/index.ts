@@ -17,13 +17,13 @@ import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js
 import { boltChecksOnly, codeChecks } from "../check-builders.js";
 import { unitText, type UnitText } from "./display.js";
 import { holeDimensions } from "./holes.js";
-import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearingCheck, groupShear, netSectionCheck, slipCheck } from "./joint-checks.js";
+import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearingCheck, groupShear, netSectionCheck, slipCheck, type GroupShear } from "./joint-checks.js";
 import { astmGradeOf, GRADES, plateStrength, Tb_N } from "./materials.js";
 import { phiPnRupture, phiPnYield } from "./tension.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
 import { AISC_COMPRESSION } from "./compression-splice.js";
 import { SLIP_CLASSES } from "./slip.js";
-import { centroidRule, edgeRules, fillerRule, maxSpacingRule, minSpacingRule, preferredSpacingWarning } from "./spacing.js";
+import { centroidRule, edgeRules, fillerRule, maxSpacingRule, spacingRuleAndWarning } from "./spacing.js";
 
 export const AISC360_ID = "aisc360-16";
 
@@ -56,6 +56,17 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
   return errors;
 }
 
+/** The bolt shear of the group with this id. */
+function shearOf(shears: readonly GroupShear[], group: GroupShear["group"]["id"]): GroupShear {
+  for (const s of shears) if (s.group.id === group) return s;
+  throw new RangeError(`no bolt group ${group} in the joint`);
+}
+
+/** Appends a rule's results (none or one) to the checks. */
+function pushAll(checks: CheckResult[], results: readonly CheckResult[]): void {
+  for (const r of results) checks.push(r);
+}
+
 function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
   const checks: CheckResult[] = [];
   const shears = mapped(joint.groups, (g) => groupShear(joint, scenario, g));
@@ -64,12 +75,13 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
     if (slipCritical) checks.push(slipCheck(joint, scenario, gs));
     checks.push(boltShearCheck(joint, scenario, gs));
   }
-  const plates = joint.plates.filter((p) => p.role !== "packing");
-  for (const plate of plates) {
-    for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shears.find((s) => s.group.id === c.group)!));
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
+    for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shearOf(shears, c.group)));
   }
   if (scope === "bolts") return boltChecksOnly(checks);
-  for (const plate of plates) {
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
     checks.push(grossYieldCheck(scenario, plate));
     checks.push(netSectionCheck(joint, scenario, plate));
     for (const c of plate.connections) {
@@ -77,15 +89,20 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
       if (block) checks.push(block);
     }
   }
-  checks.push(...minSpacingRule(joint, scenario), ...maxSpacingRule(joint, scenario), ...edgeRules(joint, scenario), ...fillerRule(joint, scenario), ...centroidRule(joint));
+  // J3.3's minimum spacing and its preferred 3 d come from one walk over the hole pairs.
+  const spacing = spacingRuleAndWarning(joint, scenario);
+  pushAll(checks, spacing.rules);
+  pushAll(checks, maxSpacingRule(joint, scenario));
+  pushAll(checks, edgeRules(joint, scenario));
+  pushAll(checks, fillerRule(joint, scenario));
+  pushAll(checks, centroidRule(joint));
   const bolt = aiscBolt(scenario.bolts);
   // IS 800 and AISC share the eccentric single-shear warning; the long-joint texts there name IS factors, so keep only that one.
   const warnings = factorWarnings(joint, []);
   for (const gs of shears) {
     if (gs.longJoint < 1) warnings.push({ id: "long-joint", message: `${gs.group.id}: fastener pattern longer than ${bolt.inch !== undefined ? "38 in" : "950 mm"}, Fnv × 0.833 (Table J3.2 note [b])` });
   }
-  const spacing = preferredSpacingWarning(joint, scenario);
-  if (spacing) warnings.push(spacing);
+  if (spacing.warning) warnings.push(spacing.warning);
   return codeChecks(checks, warnings, () => conventionsOf(joint, scenario, bolt, slipCritical));
 }
 

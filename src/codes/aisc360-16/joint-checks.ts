@@ -15,14 +15,14 @@ import type { BoltSpec, CheckableScenario, Scenario } from "../../model/scenario
 import { strength } from "../check-builders.js";
 import { f } from "../format.js";
 import { groupLabel } from "../is800-2007/joint-checks.js";
-import { bearingCoefficients, clearDistance_mm, phiRnBearing, phiRnTearout } from "./bearing.js";
+import { BEARING_CASES, bearingCoefficients, clearDistance_mm, phiRnBearing, phiRnTearout, type BearingCoefficients } from "./bearing.js";
 import { a307GripFactor, a307GripStep_mm, fillerFactor, Fnv_MPa, longJointFactor, phiRnShear } from "./bolt-shear.js";
-import { cl } from "./citation.js";
-import { unitText } from "./display.js";
+import { fixedCl } from "./citation.js";
+import { unitText, type UnitText } from "./display.js";
 import { netAllowance_mm } from "./holes.js";
 import { astmGradeOf, boltGroupOf, Tb_N, type BoltGroup } from "./materials.js";
 import { hf, phiRnSlip, phiSlip } from "./slip.js";
-import { phiPnRupture, phiPnYield, phiRnBlockShear, spliceEffectiveArea } from "./tension.js";
+import { phiPnRupture, phiPnYield, phiRnBlockShear, phiRnBlockShear_N, spliceEffectiveArea } from "./tension.js";
 
 /** What the checks need to know about the bolt, from the scenario. */
 export interface AiscBolt {
@@ -103,6 +103,9 @@ function reductionNotes(gs: GroupShear, scenario: CheckableScenario): string[] {
   ];
 }
 
+/** J3.6 with Table J3.2 and Eq. J3-1, cited by every bolt shear check. */
+const BOLT_SHEAR_CITATION = fixedCl("J3.6", { table: "Table J3.2", equation: "J3-1" });
+
 /**
  * Bolt shear of a group: T ≤ n·ns·φRn, φRn = φ·Fnv·Ab with the long-joint, filler and A307 grip
  * reductions. AISC 360-16 J3.6, Table J3.2, J5.2.
@@ -118,7 +121,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, gs: Gr
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, gs.group),
-    citation: cl("J3.6", { table: "Table J3.2", equation: "J3-1" }),
+    citation: BOLT_SHEAR_CITATION,
     formula: "T ≤ n·ns·φRn;  φRn = φ·Fnv·Ab·(long joint)·(filler)·(A307 grip), φ = 0.75, Ab = π d²/4",
     substituted: () =>
       `${bolt.name}, threads ${bolt.threadsIncluded ? "included (N)" : "excluded (X)"}: Fnv = ${u.stress(bolt.Fnv_MPa)}, Ab = ${u.area(bolt.Ab_mm2)};  ` +
@@ -145,8 +148,11 @@ export function netHoles(holes: readonly Hole[], d_mm: number): Hole[] {
   return mapped(holes, (h) => ({ id: h.id, group: h.group, x_mm: h.x_mm, y_mm: h.y_mm, across_mm: h.across_mm + a, along_mm: h.along_mm + a }));
 }
 
-/** The enlarged hole lists of the joint checked last, by the list they were made from. */
-let lastNetHoles: { jointHoles: readonly Hole[]; d_mm: number; lists: Map<readonly Hole[], Hole[]> } | null = null;
+/**
+ * The enlarged hole lists of the joint checked last: `sources[k]` (a list of the joint's holes) was
+ * enlarged to `nets[k]`. A joint asks with a few lists (its groups', its own), so two short arrays.
+ */
+let lastNetHoles: { jointHoles: readonly Hole[]; d_mm: number; sources: Array<readonly Hole[]>; nets: Hole[][] } | null = null;
 
 /**
  * netHoles of a list of one joint's holes, made once per list and joint: the plates that ask with the
@@ -155,11 +161,71 @@ let lastNetHoles: { jointHoles: readonly Hole[]; d_mm: number; lists: Map<readon
  */
 function netHolesOf(joint: Joint, holes: readonly Hole[]): Hole[] {
   if (!lastNetHoles || lastNetHoles.jointHoles !== joint.holes || lastNetHoles.d_mm !== joint.boltDiameter_mm) {
-    lastNetHoles = { jointHoles: joint.holes, d_mm: joint.boltDiameter_mm, lists: new Map() };
+    lastNetHoles = { jointHoles: joint.holes, d_mm: joint.boltDiameter_mm, sources: [], nets: [] };
   }
-  let net = lastNetHoles.lists.get(holes);
-  if (!net) lastNetHoles.lists.set(holes, (net = netHoles(holes, joint.boltDiameter_mm)));
+  const k = lastNetHoles.sources.indexOf(holes);
+  if (k >= 0) return lastNetHoles.nets[k]!;
+  const net = netHoles(holes, joint.boltDiameter_mm);
+  lastNetHoles.sources.push(holes);
+  lastNetHoles.nets.push(net);
   return net;
+}
+
+/** The citation and formula of the group bearing check for each case of J3.10(a), made once. */
+const BEARING_TEXTS = new Map<BearingCoefficients, { citation: ReturnType<typeof fixedCl>; formula: string }>();
+for (const c of BEARING_CASES) {
+  BEARING_TEXTS.set(c, { citation: fixedCl("J3.10", { equation: c.equation }), formula: `F ≤ Σ min(ns·φFnv·Ab, φ·${c.cb}·d·t·Fu, φ·${c.ct}·lc·t·Fu), φ = 0.75` });
+}
+
+/** The notes of the group bearing check: which items of J3.10(a) apply. */
+const BEARING_NOTES_CONSIDERED = (): string[] => ["deformation at the bolt hole at service load is a design consideration: bearing J3.10(a)(1)(i), tearout J3.10(a)(2)(i)"];
+const BEARING_NOTES_NOT_CONSIDERED = (): string[] => ["deformation at the bolt hole at service load is not a design consideration: bearing J3.10(a)(1)(ii), tearout J3.10(a)(2)(ii)"];
+
+/** What one plate's bolts of a group resist in J3.6 and J3.10(a): the strengths per bolt, N. */
+interface PlateBolts {
+  holes: readonly Hole[];
+  connection: PlateConnection;
+  ct: number;
+  t_mm: number;
+  Fu_MPa: number;
+  /** Shear of one bolt through the plate's planes, φRn·ns. */
+  shear_N: number;
+  /** Bearing of one bolt on the plate, φ·cb·d·t·Fu. */
+  bearing_N: number;
+}
+
+/**
+ * Each bolt's least of shear, bearing and tearout, φ·ct·lc·t·Fu with lc its clear distance (J3.10(a)),
+ * handed to `visit` in the group's order. The sum and the words both walk the bolts with this.
+ */
+function forEachBoltStrength(b: PlateBolts, visit: (least_N: number, lc_mm: number, toEnd: boolean) => void): void {
+  forEachTearOut(b.holes, b.connection, (hole, toEnd_mm, toHoleAhead_mm) => {
+    const lc = clearDistance_mm(toEnd_mm, toHoleAhead_mm, hole.along_mm);
+    const tear = phiRnTearout(b.ct, lc, b.t_mm, b.Fu_MPa);
+    visit(Math.min(b.shear_N, b.bearing_N, tear), lc, toHoleAhead_mm === null);
+  });
+}
+
+/** Σ min(shear, bearing, tearout) over the bolts, N. AISC 360-16 J3.6, J3.10(a). */
+function groupStrength_N(b: PlateBolts): number {
+  let total = 0;
+  forEachBoltStrength(b, (least) => {
+    total += least;
+  });
+  return total;
+}
+
+/** The bolts grouped by what governs each, in words: "4 × 98.2 kN (bolt shear) + 2 × … (tearout, …)". */
+function tallyText(b: PlateBolts, u: UnitText): string {
+  const tally = new Map<string, { count: number; each: number; text: string }>();
+  forEachBoltStrength(b, (least, lc, toEnd) => {
+    const [key, text] =
+      least === b.shear_N ? ["shear", "bolt shear"] : least === b.bearing_N ? ["bearing", "bearing"] : [`tearout ${f(lc, 3)}`, `tearout, lc = ${u.len(lc)} (${toEnd ? "to the end" : "to the hole ahead"})`];
+    const entry = tally.get(key) ?? { count: 0, each: least, text };
+    entry.count += 1;
+    tally.set(key, entry);
+  });
+  return [...tally.values()].map((e) => `${e.count} × ${u.force(e.each)} (${e.text})`).join(" + ");
 }
 
 /**
@@ -172,56 +238,39 @@ export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, pla
   const bolt = aiscBolt(bolts);
   const u = unitText(scenario);
   const considered = (options.bearingDeformation ?? "considered") === "considered";
-  const { cb, ct, equation } = bearingCoefficients(considered, bolts.hole, bolts.slotDirection);
+  const coefficients = bearingCoefficients(considered, bolts.hole, bolts.slotDirection);
+  const { cb, ct } = coefficients;
+  const texts = BEARING_TEXTS.get(coefficients)!;
   const t = plate.spec.thickness_mm;
   const Fu = plate.fu_MPa;
-  const shear = gs.perPlane_N * planesFor(plate, gs.group);
+  const planes = planesFor(plate, gs.group);
+  const shear = gs.perPlane_N * planes;
   const bearing = phiRnBearing(cb, bolt.d_mm, t, Fu);
-  let total = 0;
-  // Each bolt's least strength and its clear distance: the sum is the group's; the words are tallied on read.
-  const perBolt: Array<{ least: number; lc: number; toEnd: boolean }> = [];
-  forEachTearOut(gs.holes, connection, (hole, toEnd_mm, toHoleAhead_mm) => {
-    const lc = clearDistance_mm(toEnd_mm, toHoleAhead_mm, hole.along_mm);
-    const tear = phiRnTearout(ct, lc, t, Fu);
-    const least = Math.min(shear, bearing, tear);
-    total += least;
-    perBolt.push({ least, lc, toEnd: toHoleAhead_mm === null });
-  });
-  /** The bolts grouped by what governs each, in words: "4 × 98.2 kN (bolt shear) + 2 × … (tearout, …)". */
-  const tallyText = (): string => {
-    const tally = new Map<string, { count: number; each: number; text: string }>();
-    for (const { least, lc, toEnd } of perBolt) {
-      const [key, text] =
-        least === shear ? ["shear", "bolt shear"] : least === bearing ? ["bearing", "bearing"] : [`tearout ${f(lc, 3)}`, `tearout, lc = ${u.len(lc)} (${toEnd ? "to the end" : "to the hole ahead"})`];
-      const entry = tally.get(key) ?? { count: 0, each: least, text };
-      entry.count += 1;
-      tally.set(key, entry);
-    }
-    return [...tally.values()].map((e) => `${e.count} × ${u.force(e.each)} (${e.text})`).join(" + ");
-  };
-  const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
+  const plateBolts: PlateBolts = { holes: gs.holes, connection, ct, t_mm: t, Fu_MPa: Fu, shear_N: shear, bearing_N: bearing };
+  const total = groupStrength_N(plateBolts);
   return strength({
     id: `bearing:${plate.id}:${connection.group}`,
     kind: "bolt-bearing",
     title: "Bolt group: shear, bearing, tearout",
-    component: `${plate.label}${sideText}`,
-    citation: cl("J3.10", { equation }),
-    formula: `F ≤ Σ min(ns·φFnv·Ab, φ·${cb}·d·t·Fu, φ·${ct}·lc·t·Fu), φ = 0.75`,
+    component: joint.spliceType === "lap" ? plate.label : `${plate.label}, side ${connection.group}`,
+    citation: texts.citation,
+    formula: texts.formula,
     substituted: () =>
-      `per bolt: shear ${planesFor(plate, gs.group)} × ${u.force(gs.perPlane_N)} = ${u.force(shear)}; bearing 0.75 × ${cb} × ${u.len(bolt.d_mm)} × ${u.len(t)} × ${u.stress(Fu)} = ${u.force(bearing)};  ` +
-      `Σ = ${tallyText()} = ${u.force(total)}` +
+      `per bolt: shear ${planes} × ${u.force(gs.perPlane_N)} = ${u.force(shear)}; bearing 0.75 × ${cb} × ${u.len(bolt.d_mm)} × ${u.len(t)} × ${u.stress(Fu)} = ${u.force(bearing)};  ` +
+      `Σ = ${tallyText(plateBolts, u)} = ${u.force(total)}` +
       (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T` : ""),
     limitState: "ULS",
     demand_N: scenario.load.factoredTension_N * plate.forceShare,
     resistance_N: total,
     loadRatio: plate.forceShare,
-    notes: () => [
-      considered
-        ? "deformation at the bolt hole at service load is a design consideration: bearing J3.10(a)(1)(i), tearout J3.10(a)(2)(i)"
-        : "deformation at the bolt hole at service load is not a design consideration: bearing J3.10(a)(1)(ii), tearout J3.10(a)(2)(ii)",
-    ],
+    notes: considered ? BEARING_NOTES_CONSIDERED : BEARING_NOTES_NOT_CONSIDERED,
   });
 }
+
+/** J3.8, Eq. J3-4, with Tb from Table J3.1 (inch bolts) or J3.1M (metric). */
+const SLIP_CITATION_INCH = fixedCl("J3.8", { table: "Table J3.1", equation: "J3-4" });
+const SLIP_CITATION_METRIC = fixedCl("J3.8", { table: "Table J3.1M", equation: "J3-4" });
+const SLIP_NOTES = (): string[] => ["slip checked at the factored (LRFD) load; the bolts are also checked in shear, bearing and tearout (J3.8)"];
 
 /**
  * Slip resistance of a slip-critical group at the factored load: T ≤ n·φ·μ·Du·hf·Tb·ns.
@@ -245,7 +294,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gs: GroupSh
     kind: "slip",
     title: "Slip resistance (slip-critical)",
     component: groupLabel(joint, gs.group),
-    citation: cl("J3.8", { table: bolt.inch !== undefined ? "Table J3.1" : "Table J3.1M", equation: "J3-4" }),
+    citation: bolt.inch !== undefined ? SLIP_CITATION_INCH : SLIP_CITATION_METRIC,
     formula: "T ≤ n·φRn;  φRn = φ·μ·Du·hf·Tb·ns, Du = 1.13",
     substituted: () =>
       `Class ${mu >= 0.5 ? "B" : "A"} μ = ${f(mu, 2)}, Tb = ${u.force(Tb)} (${group}), hf = ${f(h, 2)} (${fillers} filler${fillers === 1 ? "" : "s"}), ns = ${ns}, φ = ${f(phi, 2)};  ` +
@@ -254,12 +303,16 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, gs: GroupSh
     demand_N: scenario.load.factoredTension_N,
     resistance_N: n * perBolt,
     loadRatio: 1,
-    notes: () => ["slip checked at the factored (LRFD) load; the bolts are also checked in shear, bearing and tearout (J3.8)"],
+    notes: SLIP_NOTES,
   });
 }
 
 /** Main plates are tension members (Chapter D); cover plates are connecting elements (J4.1). */
 const isSplicePlate = (plate: PlatePiece) => plate.role === "cover";
+
+/** Gross yielding: J4.1(a), Eq. J4-1, for splice plates; D2(a), Eq. D2-1, for main plates. */
+const GROSS_YIELD_CITATION_COVER = fixedCl("J4.1(a)", { equation: "J4-1" });
+const GROSS_YIELD_CITATION_MAIN = fixedCl("D2(a)", { equation: "D2-1" });
 
 /**
  * Tensile yielding of the gross section: F ≤ 0.90·Fy·Ag.
@@ -276,7 +329,7 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
     kind: "gross-yield",
     title: "Tensile yielding (gross section)",
     component: plate.label,
-    citation: cover ? cl("J4.1(a)", { equation: "J4-1" }) : cl("D2(a)", { equation: "D2-1" }),
+    citation: cover ? GROSS_YIELD_CITATION_COVER : GROSS_YIELD_CITATION_MAIN,
     formula: "F ≤ φ·Fy·Ag, φ = 0.90",
     substituted: () => `φPn = 0.90 × ${u.stress(plate.fy_MPa)} × ${u.len(b)} × ${u.len(t)} = ${u.force(R)}` + (plate.forceShare !== 1 ? `;  F = ${f(plate.forceShare, 3)} × T (covers share by area)` : ""),
     limitState: "ULS",
@@ -286,6 +339,20 @@ export function grossYieldCheck(scenario: CheckableScenario, plate: PlatePiece):
     notes: () => [plate.materialNote],
   });
 }
+
+/** Net section rupture: J4.1(b), Eq. J4-2, for splice plates; D2(b), Eq. D2-2 with D3, for main plates; An by B4.3b. */
+const NET_SECTION_CITATION_COVER = fixedCl("J4.1(b)", { equation: "J4-2", also: ["B4.3b for An"] });
+const NET_SECTION_CITATION_MAIN = fixedCl("D2(b)", { equation: "D2-2", also: ["B4.3b for An", "D3, Table D3.1 case 1 (U = 1)"] });
+
+/** The net section formula of a splice plate (J4.1(b)) or a main plate (D2(b)), hole widths + 1/16 in or 2 mm (B4.3b). */
+function netSectionFormula(cover: boolean, inch: boolean): string {
+  if (cover) return inch ? NET_FORMULA_COVER_INCH : NET_FORMULA_COVER_METRIC;
+  return inch ? NET_FORMULA_MAIN_INCH : NET_FORMULA_MAIN_METRIC;
+}
+const NET_FORMULA_COVER_INCH = "F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + 1/16 in) + Σ s²/4g)·t, φ = 0.75";
+const NET_FORMULA_COVER_METRIC = "F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + 2 mm) + Σ s²/4g)·t, φ = 0.75";
+const NET_FORMULA_MAIN_INCH = "F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + 1/16 in) + Σ s²/4g)·t, φ = 0.75";
+const NET_FORMULA_MAIN_METRIC = "F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + 2 mm) + Σ s²/4g)·t, φ = 0.75";
 
 /**
  * Tensile rupture of the net section over the least straight or staggered path, hole widths + 1/16 in:
@@ -300,7 +367,7 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   const { path, fraction } = netPathFor(plate, holes, scenario.options.netSectionLoad);
   const An = path.netWidth_mm * t;
   const Ag = b * t;
-  const allowance = inchBoltSize(joint.boltDiameter_mm) !== undefined ? "1/16 in" : "2 mm";
+  const inch = inchBoltSize(joint.boltDiameter_mm) !== undefined;
   const cover = isSplicePlate(plate);
   const Ae = cover ? spliceEffectiveArea(An, Ag) : An;
   const R = phiPnRupture(Ae, plate.fu_MPa);
@@ -310,10 +377,8 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
     kind: "net-section",
     title: "Tensile rupture (net section)",
     component: plate.label,
-    citation: cover ? cl("J4.1(b)", { equation: "J4-2", also: ["B4.3b for An"] }) : cl("D2(b)", { equation: "D2-2", also: ["B4.3b for An", "D3, Table D3.1 case 1 (U = 1)"] }),
-    formula: cover
-      ? `F ≤ φ·Fu·Ae, Ae = An ≤ 0.85·Ag, An = (b − Σ(dh + ${allowance}) + Σ s²/4g)·t, φ = 0.75`
-      : `F ≤ φ·Fu·Ae, Ae = U·An, U = 1, An = (b − Σ(dh + ${allowance}) + Σ s²/4g)·t, φ = 0.75`,
+    citation: cover ? NET_SECTION_CITATION_COVER : NET_SECTION_CITATION_MAIN,
+    formula: netSectionFormula(cover, inch),
     substituted: () =>
       `${transferred ? "governing" : "least"} path ${pathLabel(path)}: An = (${u.n(b)} − ${u.n(path.holeDeduction_mm)} + ${u.n(path.staggerAddition_mm)}) × ${u.n(t)} = ${u.area(An)}` +
       (cover ? `;  Ae = min(An, 0.85 × ${u.area(Ag)}) = ${u.area(Ae)}` : `;  Ae = 1.0 × An = ${u.area(Ae)}`) +
@@ -328,6 +393,11 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
+/** Block shear, J4.3, Eq. J4-5; the block's demand F (whole plate force) or F·k/n (its bolts' share). */
+const BLOCK_SHEAR_CITATION = fixedCl("J4.3", { equation: "J4-5" });
+const BLOCK_FORMULA_FULL = "F ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1";
+const BLOCK_FORMULA_SHARE = "F·k/n ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1";
+
 /**
  * Block shear of a plate for one group over every block shape the pattern forms; a block holding k of
  * the n bolts carries k/n of the plate's force (options.block_shear_load: share), or the whole plate
@@ -340,19 +410,21 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
   const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const resistance = (shape: BlockShape) => phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, plate.fy_MPa, plate.fu_MPa);
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => resistance(shape).phiRn_N, resistance);
+  const { fy_MPa: Fy, fu_MPa: Fu } = plate;
+  // Every shape is compared by its φRn alone; the rupture and yield terms are worked out for the governing one.
+  const phiRn = (shape: BlockShape) => phiRnBlockShear_N(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, Fy, Fu);
+  const terms = (shape: BlockShape) => phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, Fy, Fu);
+  const best = governingBlock(shapes, holes.length, plate.forceShare, load, phiRn, terms);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;
-  const sideText = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
   return strength({
     id: `block-shear:${plate.id}:${connection.group}`,
     kind: "block-shear",
     title: "Block shear",
-    component: `${plate.label}${sideText}`,
-    citation: cl("J4.3", { equation: "J4-5" }),
-    formula: `${load === "full" ? "F" : "F·k/n"} ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1`,
+    component: joint.spliceType === "lap" ? plate.label : `${plate.label}, side ${connection.group}`,
+    citation: BLOCK_SHEAR_CITATION,
+    formula: load === "full" ? BLOCK_FORMULA_FULL : BLOCK_FORMULA_SHARE,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Agv = ${u.area(s.shearGross_mm * t)}, Anv = ${u.area(s.shearNet_mm * t)}, Ant = ${u.area(s.tensionNet_mm * t)};  ` +
       `rupture 0.75 × (0.60 × ${u.stress(plate.fu_MPa)} × Anv + ${u.stress(plate.fu_MPa)} × Ant) = ${u.force(r.rupture_N)}, ` +

@@ -9,14 +9,20 @@ import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
 import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
-import { cl } from "./citation.js";
+import { fixedCl } from "./citation.js";
 import { unitText, type UnitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
+import { mapped } from "../../model/lists.js";
 
 /** Minimum spacing between centres of standard, oversized or slotted holes, 2⅔ d (3 d preferred). AISC 360-16 J3.3. */
 export function minSpacing_mm(d_mm: number): number {
   return (8 / 3) * d_mm;
 }
+
+/** Table J3.4, in, by bolt size in inches. */
+const MIN_EDGE_J34_IN: Readonly<Record<string, number>> = Object.freeze({ "0.5": 0.75, "0.625": 0.875, "0.75": 1, "0.875": 1.125, "1": 1.25, "1.125": 1.5 });
+/** Table J3.4M, mm, by bolt size in mm. */
+const MIN_EDGE_J34M_MM: Readonly<Record<number, number>> = Object.freeze({ 16: 22, 20: 26, 22: 28, 24: 30, 27: 34, 30: 38, 36: 46 });
 
 /**
  * Minimum edge distance from the centre of a standard hole to an edge of a connected part, mm.
@@ -25,12 +31,8 @@ export function minSpacing_mm(d_mm: number): number {
  */
 export function minEdge_mm(d_mm: number): number {
   const inch = inchBoltSize(d_mm);
-  if (inch !== undefined) {
-    const table: Record<string, number> = { "0.5": 0.75, "0.625": 0.875, "0.75": 1, "0.875": 1.125, "1": 1.25, "1.125": 1.5 };
-    return (table[String(inch)] ?? 1.25 * inch) * MM_PER_IN;
-  }
-  const metric: Record<number, number> = { 16: 22, 20: 26, 22: 28, 24: 30, 27: 34, 30: 38, 36: 46 };
-  return metric[d_mm] ?? 1.25 * d_mm;
+  if (inch !== undefined) return (MIN_EDGE_J34_IN[String(inch)] ?? 1.25 * inch) * MM_PER_IN;
+  return MIN_EDGE_J34M_MM[d_mm] ?? 1.25 * d_mm;
 }
 
 /** Maximum edge distance: 12 t of the part, not above 6 in (150 mm). AISC 360-16 J3.5. */
@@ -69,18 +71,35 @@ function sideEdgeWorst(u: UnitText, plate: PlatePiece, h: Hole, e: number, maxLi
   return { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the side edge: ${u.len(e)} vs 12 t = 12 × ${u.len(plate.spec.thickness_mm)}, ≤ ${inch ? "6 in" : "150 mm"} → ${u.len(maxLimit)}` };
 }
 
-/** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
-export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
-  const u = unitText(scenario);
+const MIN_SPACING_CITATION = fixedCl("J3.3");
+
+/**
+ * One walk over the hole pairs for J3.3: the governing pair against 2⅔ d, and the least centre
+ * distance of all pairs (for the 3 d preference). A pair is measured only when it may be nearer than
+ * the governing one so far; a pair farther than that one cannot be the least either.
+ */
+function measureSpacing(joint: Joint, u: UnitText): { worst: Worst | null; least_mm: number } {
   const limit = minSpacing_mm(joint.boltDiameter_mm);
   let worst: Worst | null = null;
+  let least = Infinity;
   forEachHolePair(joint, (plate, a, b) => {
     // The limit is the same for every pair: only a pair nearer than the nearest so far can govern.
     if (worst !== null && fartherThan(a, b, (worst as Worst).value)) return;
     const s = distance(a, b);
+    least = Math.min(least, s);
     if (beatsWorst(worst, s, limit, "min")) worst = spacingWorst(u, plate, a, b, s, limit, joint.boltDiameter_mm);
   });
-  return worstRule("min-spacing", "min-spacing", "Minimum spacing", cl("J3.3"), "s ≥ 2⅔ d", "min", worst);
+  return { worst, least_mm: least };
+}
+
+/** The rule of the governing pair. AISC 360-16 J3.3. */
+function minSpacingOf(worst: Worst | null): RuleCheck[] {
+  return worstRule("min-spacing", "min-spacing", "Minimum spacing", MIN_SPACING_CITATION, "s ≥ 2⅔ d", "min", worst);
+}
+
+/** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
+export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
+  return minSpacingOf(measureSpacing(joint, unitText(scenario)).worst);
 }
 
 /**
@@ -88,15 +107,70 @@ export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
  * AISC 360-16 J3.3 ("a distance of 3d is preferred").
  */
 export function preferredSpacingWarning(joint: Joint, scenario: Scenario): Warning | null {
-  const d = joint.boltDiameter_mm;
-  let least = Infinity;
-  forEachHolePair(joint, (_plate, a, b) => {
-    if (!fartherThan(a, b, least)) least = Math.min(least, distance(a, b));
-  });
-  if (!(least < 3 * d - 1e-9)) return null;
+  return preferredSpacingOf(joint, unitText(scenario), measureSpacing(joint, unitText(scenario)).least_mm);
+}
+
+/** The minimum spacing rule and the 3 d warning of J3.3 from one walk over the hole pairs. */
+export function spacingRuleAndWarning(joint: Joint, scenario: Scenario): { rules: RuleCheck[]; warning: Warning | null } {
   const u = unitText(scenario);
+  const m = measureSpacing(joint, u);
+  return { rules: minSpacingOf(m.worst), warning: preferredSpacingOf(joint, u, m.least_mm) };
+}
+
+/** The 3 d warning for the least centre distance (AISC 360-16 J3.3). */
+function preferredSpacingOf(joint: Joint, u: UnitText, least: number): Warning | null {
+  const d = joint.boltDiameter_mm;
+  if (!(least < 3 * d - 1e-9)) return null;
   return { id: "spacing-below-3d", message: `least bolt spacing ${u.len(least)} is below the preferred 3 d = ${u.len(3 * d)} (AISC 360-16 J3.3; the minimum 2⅔ d is checked)` };
 }
+
+/** Whether two plates connect to the same bolt groups, in the same order. */
+function sameConnections(a: PlatePiece, b: PlatePiece): boolean {
+  if (a.connections.length !== b.connections.length) return false;
+  for (let i = 0; i < a.connections.length; i++) if (a.connections[i]!.group !== b.connections[i]!.group) return false;
+  return true;
+}
+
+/** The gap between adjacent gauge lines i−1 and i of a group against a limit (J3.5 applied across). */
+function gaugeGapWorst(u: UnitText, plate: PlatePiece, lines: readonly Line[], i: number, g: number, limit: number): Worst {
+  return { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(lines[i - 1]!.at_mm)} and ${u.len(lines[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` };
+}
+
+/**
+ * The thinner part two holes both pass through (pairThickness), which depends only on the holes' bolt
+ * groups: worked out once per pair of groups of one joint, within one rule.
+ */
+class GroupPairThickness {
+  readonly #joint: Joint;
+  /** By index of a's group × group count + index of b's group; NaN until measured. */
+  readonly #t_mm: number[] = [];
+  constructor(joint: Joint) {
+    this.#joint = joint;
+    const n = joint.groups.length;
+    for (let k = 0; k < n * n; k++) this.#t_mm.push(NaN);
+  }
+  of(a: Hole, b: Hole): number {
+    const key = this.#groupIndex(a.group) * this.#joint.groups.length + this.#groupIndex(b.group);
+    let t = this.#t_mm[key]!;
+    if (Number.isNaN(t)) this.#t_mm[key] = t = pairThickness(this.#joint, a, b);
+    return t;
+  }
+  #groupIndex(group: Hole["group"]): number {
+    const groups = this.#joint.groups;
+    for (let i = 0; i < groups.length; i++) if (groups[i]!.id === group) return i;
+    throw new RangeError(`hole of bolt group ${group}, which the joint does not have`);
+  }
+}
+
+/** J3.5(a) (painted, or not subject to corrosion) and J3.5(b) (weathering steel exposed to corrosion), with their formulas by bolt unit. */
+const MAX_SPACING_TEXTS = {
+  painted: { citation: fixedCl("J3.5(a)"), inch: "s ≤ min(24 t, 12 in)", metric: "s ≤ min(24 t, 305 mm)" },
+  corrosion: {
+    citation: fixedCl("J3.5(b)"),
+    inch: "s ≤ min(14 t, 7 in) (unpainted weathering steel exposed to corrosion)",
+    metric: "s ≤ min(14 t, 180 mm) (unpainted weathering steel exposed to corrosion)",
+  },
+} as const;
 
 /** Maximum spacing along gauge lines and across between adjacent gauge lines. AISC 360-16 J3.5. */
 export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
@@ -106,19 +180,17 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
   let along: Worst | null = null;
   let across: Worst | null = null;
   const plates = holePlates(joint);
-  const groupLines = joint.groups.map((g) => gaugeLines(g.holes));
+  const groupLines = mapped(joint.groups, (g) => gaugeLines(g.holes));
+  const thinner = new GroupPairThickness(joint);
   const plateLines: Line[][] = [];
   for (let k = 0; k < plates.length; k++) {
     const plate = plates[k]!;
-    // A plate joined to one group has that group's lines; one joined to the groups of an earlier plate, its lines.
-    const earlier = plates.findIndex((p, m) => m < k && p.connections.length === plate.connections.length && p.connections.every((c, i) => c.group === plate.connections[i]!.group));
-    const lines = earlier >= 0 ? plateLines[earlier]! : plate.connections.length === 1 ? groupLines[joint.groups.findIndex((g) => g.id === plate.connections[0]!.group)]! : gaugeLines(platesHoles(joint, plate));
-    plateLines.push(lines);
-    for (const line of lines) {
-      for (let k = 1; k < line.holes.length; k++) {
-        const a = line.holes[k - 1]!;
-        const b = line.holes[k]!;
-        const limit = maxSpacing_mm(pairThickness(joint, a, b), inch, corrosion);
+    plateLines.push(gaugeLinesOfPlate(joint, plates, plateLines, groupLines, k));
+    for (const line of plateLines[k]!) {
+      for (let n = 1; n < line.holes.length; n++) {
+        const a = line.holes[n - 1]!;
+        const b = line.holes[n]!;
+        const limit = maxSpacing_mm(thinner.of(a, b), inch, corrosion);
         const s = b.x_mm - a.x_mm;
         if (beatsWorst(along, s, limit, "max")) along = pairWorst(u, plate, a, b, "", s, limit);
       }
@@ -127,23 +199,45 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
       if (!connects(plate, joint.groups[gi]!.id)) continue;
       const gl = groupLines[gi]!;
       for (let i = 1; i < gl.length; i++) {
-        const a = gl[i - 1]!.holes[0]!;
-        const b = gl[i]!.holes[0]!;
-        const limit = maxSpacing_mm(pairThickness(joint, a, b), inch, corrosion);
+        const limit = maxSpacing_mm(thinner.of(gl[i - 1]!.holes[0]!, gl[i]!.holes[0]!), inch, corrosion);
         const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
-        if (beatsWorst(across, g, limit, "max")) across = { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(gl[i - 1]!.at_mm)} and ${u.len(gl[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` };
+        if (beatsWorst(across, g, limit, "max")) across = gaugeGapWorst(u, plate, gl, i, g, limit);
       }
     }
   }
-  const cap = corrosion ? (inch ? "7 in" : "180 mm") : inch ? "12 in" : "305 mm";
-  const formula = `s ≤ min(${corrosion ? "14" : "24"} t, ${cap})${corrosion ? " (unpainted weathering steel exposed to corrosion)" : ""}`;
-  const item = corrosion ? "J3.5(b)" : "J3.5(a)";
-  return [
-    ...worstRule("max-pitch", "max-pitch", "Maximum spacing along the force", cl(item), formula, "max", along),
-    // J3.5 limits the longitudinal spacing; its limit is applied across the force too (the reading that refuses more).
-    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force (J3.5's longitudinal limit, also applied across)", cl(item), formula, "max", across),
-  ];
+  const texts = corrosion ? MAX_SPACING_TEXTS.corrosion : MAX_SPACING_TEXTS.painted;
+  const formula = inch ? texts.inch : texts.metric;
+  const out = worstRule("max-pitch", "max-pitch", "Maximum spacing along the force", texts.citation, formula, "max", along);
+  // J3.5 limits the longitudinal spacing; its limit is applied across the force too (the reading that refuses more).
+  if (across) out.push(...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force (J3.5's longitudinal limit, also applied across)", texts.citation, formula, "max", across));
+  return out;
 }
+
+/**
+ * The gauge lines of plates[k]'s holes: a plate joined to one group has that group's lines; one joined
+ * to the groups of an earlier plate, that plate's lines (`plateLines`, one per earlier plate).
+ */
+function gaugeLinesOfPlate(joint: Joint, plates: readonly PlatePiece[], plateLines: readonly Line[][], groupLines: readonly Line[][], k: number): Line[] {
+  const plate = plates[k]!;
+  for (let m = 0; m < k; m++) if (sameConnections(plates[m]!, plate)) return plateLines[m]!;
+  if (plate.connections.length === 1) {
+    const group = plate.connections[0]!.group;
+    for (let gi = 0; gi < joint.groups.length; gi++) if (joint.groups[gi]!.id === group) return groupLines[gi]!;
+    throw new RangeError(`plate ${plate.id} connects to bolt group ${group}, which the joint does not have`);
+  }
+  return gaugeLines(platesHoles(joint, plate));
+}
+
+/** The maximum edge distance at a plate end, hole h's distance e, against 12 t ≤ 6 in (150 mm) (J3.5). */
+function endEdgeWorst(u: UnitText, plate: PlatePiece, h: Hole, e: number, maxLimit: number): Worst {
+  return { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(maxLimit)}` };
+}
+
+/** J3.4 with Table J3.4 (inch bolts) or J3.4M (metric), and J3.5 for the maximum. */
+const EDGE_TEXTS = {
+  inch: { min: fixedCl("J3.4", { table: "Table J3.4" }), minFormula: "e ≥ Table J3.4 value", max: fixedCl("J3.5"), maxFormula: "e ≤ min(12 t, 6 in)" },
+  metric: { min: fixedCl("J3.4", { table: "Table J3.4M" }), minFormula: "e ≥ Table J3.4M value", max: fixedCl("J3.5"), maxFormula: "e ≤ min(12 t, 150 mm)" },
+} as const;
 
 /**
  * Minimum end and edge distances (Table J3.4 / J3.4M, standard holes) and the maximum edge distance
@@ -151,20 +245,21 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
  */
 export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[] {
   const u = unitText(scenario);
-  const d = joint.boltDiameter_mm;
-  const minLimit = minEdge_mm(d);
+  const inch = isInch(joint);
+  const minLimit = minEdge_mm(joint.boltDiameter_mm);
   let minEnd: Worst | null = null;
   let minEdge: Worst | null = null;
   let maxEdge: Worst | null = null;
-  for (const plate of holePlates(joint)) {
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
     const holes = platesHoles(joint, plate);
     if (holes.length === 0) continue;
     const half = plate.spec.width_mm / 2;
-    const maxLimit = maxEdge_mm(plate.spec.thickness_mm, isInch(joint));
+    const maxLimit = maxEdge_mm(plate.spec.thickness_mm, inch);
     for (const h of holes) {
       const e = half - Math.abs(h.y_mm);
       if (beatsWorst(minEdge, e, minLimit, "min")) minEdge = pairWorst(u, plate, h, null, "", e, minLimit);
-      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = sideEdgeWorst(u, plate, h, e, maxLimit, isInch(joint));
+      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = sideEdgeWorst(u, plate, h, e, maxLimit, inch);
     }
     for (const c of plate.connections) {
       let nearest: Hole | null = null;
@@ -177,19 +272,20 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
           nearestE = e;
         }
       }
-      if (nearest === null) continue;
-      const h = nearest;
-      const e = nearestE;
-      if (beatsWorst(maxEdge, e, maxLimit, "max")) maxEdge = { value: e, limit: maxLimit, where: plate.label, detail: () => `hole ${h.id} to the plate end: ${u.len(e)} vs ${u.len(maxLimit)}` };
+      if (nearest !== null && beatsWorst(maxEdge, nearestE, maxLimit, "max")) maxEdge = endEdgeWorst(u, plate, nearest, nearestE, maxLimit);
     }
   }
-  const table = isInch(joint) ? "Table J3.4" : "Table J3.4M";
-  return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("J3.4", { table }), `e ≥ ${table} value`, "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("J3.4", { table }), `e ≥ ${table} value`, "min", minEdge),
-    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", cl("J3.5"), `e ≤ min(12 t, ${isInch(joint) ? "6 in" : "150 mm"})`, "max", maxEdge),
-  ];
+  const texts = inch ? EDGE_TEXTS.inch : EDGE_TEXTS.metric;
+  const out = worstRule("min-end-distance", "min-end-distance", "Minimum end distance", texts.min, texts.minFormula, "min", minEnd);
+  if (minEdge) out.push(...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", texts.min, texts.minFormula, "min", minEdge));
+  if (maxEdge) out.push(...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", texts.max, texts.maxFormula, "max", maxEdge));
+  return out;
 }
+
+/** J5.2 and its limit on undeveloped fillers, by bolt unit. */
+const FILLER_CITATION = fixedCl("J5.2", { also: ["J5.2(b) for developed fillers"] });
+const FILLER_FORMULA_INCH = "t filler ≤ 3/4 in unless developed (the older text of J5.2; refuses more than 360-16 as recalled)";
+const FILLER_FORMULA_METRIC = "t filler ≤ 19 mm unless developed (the older text of J5.2; refuses more than 360-16 as recalled)";
 
 /**
  * Undeveloped fillers not over ¾ in (19 mm). The project's reading of J5.2 (AISC 360-16): fillers over
@@ -207,7 +303,8 @@ export function fillerRule(joint: Joint, scenario: CheckableScenario): RuleCheck
     if (g.packing_mm <= 0) continue;
     if (beatsWorst(worst, g.packing_mm, limit, "max")) worst = { value: g.packing_mm, limit, where: joint.spliceType === "lap" ? "bolts" : `bolts, side ${g.id}`, detail: () => `filler ${u.len(g.packing_mm)} vs ${u.len(limit)} (undeveloped)` };
   }
-  return worstRule("filler-thickness", "filler-thickness", "Undeveloped filler thickness (the project's limit)", cl("J5.2", { also: ["J5.2(b) for developed fillers"] }), `t filler ≤ ${isInch(joint) ? "3/4 in" : "19 mm"} unless developed (the older text of J5.2; refuses more than 360-16 as recalled)`, "max", worst);
+  if (!worst) return [];
+  return worstRule("filler-thickness", "filler-thickness", "Undeveloped filler thickness (the project's limit)", FILLER_CITATION, isInch(joint) ? FILLER_FORMULA_INCH : FILLER_FORMULA_METRIC, "max", worst);
 }
 
 /** The bolt group's centroid on the plate axis (every check assumes a concentric group). */

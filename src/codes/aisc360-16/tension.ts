@@ -27,13 +27,27 @@ export interface BlockShearResult {
   phiRn_N: number;
 }
 
+/** Block shear rupture, φ·(0.60·Fu·Anv + Ubs·Fu·Ant) (N). AISC 360-16 J4.3, Eq. J4-5 (first term); φ = 0.75. */
+function blockShearRupture_N(Anv: number, Ant: number, Fu_MPa: number, Ubs: number): number {
+  return PHI.blockShear * (0.6 * Fu_MPa * Anv + Ubs * Fu_MPa * Ant);
+}
+
+/** Block shear with shear yielding, φ·(0.60·Fy·Agv + Ubs·Fu·Ant) (N). AISC 360-16 J4.3, Eq. J4-5 (the limit); φ = 0.75. */
+function blockShearYield_N(Agv: number, Ant: number, Fy_MPa: number, Fu_MPa: number, Ubs: number): number {
+  return PHI.blockShear * (0.6 * Fy_MPa * Agv + Ubs * Fu_MPa * Ant);
+}
+
 /**
  * Design block shear strength φRn = φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant) (N).
  * AISC 360-16 J4.3, Eq. J4-5; φ = 0.75; Ubs = 1 (uniform tension stress).
  */
 export function phiRnBlockShear(Agv: number, Anv: number, Ant: number, Fy_MPa: number, Fu_MPa: number, Ubs = 1): BlockShearResult {
-  const tension = Ubs * Fu_MPa * Ant;
-  const rupture = PHI.blockShear * (0.6 * Fu_MPa * Anv + tension);
-  const yieldN = PHI.blockShear * (0.6 * Fy_MPa * Agv + tension);
+  const rupture = blockShearRupture_N(Anv, Ant, Fu_MPa, Ubs);
+  const yieldN = blockShearYield_N(Agv, Ant, Fy_MPa, Fu_MPa, Ubs);
   return { rupture_N: rupture, yield_N: yieldN, phiRn_N: Math.min(rupture, yieldN) };
+}
+
+/** φRn of Eq. J4-5 alone, the same figure as phiRnBlockShear(...).phiRn_N (for comparing many shapes). AISC 360-16 J4.3. */
+export function phiRnBlockShear_N(Agv: number, Anv: number, Ant: number, Fy_MPa: number, Fu_MPa: number, Ubs = 1): number {
+  return Math.min(blockShearRupture_N(Anv, Ant, Fu_MPa, Ubs), blockShearYield_N(Agv, Ant, Fy_MPa, Fu_MPa, Ubs));
 }
