@@ -23,8 +23,8 @@ import {
   boltShearCheck,
   grossYieldCheck,
   groupOf,
+  JointBearings,
   netSectionCheck,
-  singleLapOneLine,
   slipCheck,
   smallHoleConditionCheck,
   type Ec3Group,
@@ -97,7 +97,7 @@ function warningsOf(joint: Joint, s: Ec3Settings, groups: Ec3Group[]): Warning[]
     const label = groupLabel(joint, g.group);
     if (g.beta_Lf < 1 && s.category !== "C") warnings.push({ id: "long-joint", message: `${label}: long joint, Lj = ${f(g.Lj_mm)} mm > 15d: βLf = ${f(g.beta_Lf, 3)} (3.8)${g.beta_Lf <= 0.75 + 1e-9 ? " — at its floor of 0.75" : ""}` });
     if (g.beta_p < 1 && s.category !== "C") warnings.push({ id: "packing", message: `${label}: packing ${f(g.group.packing_mm)} mm > d/3: βp = ${f(g.beta_p, 3)} applied (3.6.1(12))` });
-    if (singleLapOneLine(g.group, g.holes)) warnings.push({ id: "single-lap-one-line", message: `${label}: one transverse line of bolts in single shear — washers under both the head and the nut, Fb,Rd ≤ 1.5·fu·d·t/γM2 (3.6.1(10))` });
+    if (g.oneLineLap) warnings.push({ id: "single-lap-one-line", message: `${label}: one transverse line of bolts in single shear — washers under both the head and the nut, Fb,Rd ≤ 1.5·fu·d·t/γM2 (3.6.1(10))` });
   }
   if (joint.spliceType === "lap" || joint.spliceType === "butt-single-cover") {
     warnings.push({
@@ -126,6 +126,12 @@ function conventionsOf(scenario: CheckableScenario, s: Ec3Settings, smallHoles: 
       : "not exposed to corrosion: Table 3.3 sets no maximum spacing, end or edge distance for tension members (note 1)",
     "holes drilled; each bolt of a group carries an equal share (3.7)",
   ];
+}
+
+/** The group of the given id (every connection's group is one of the joint's). */
+function groupFor(groups: readonly Ec3Group[], id: Ec3Group["group"]["id"]): Ec3Group {
+  for (const g of groups) if (g.group.id === id) return g;
+  throw new RangeError(`no bolt group ${id}`);
 }
 
 /** The design code bound to one set of settings. */
@@ -157,15 +163,19 @@ function boundCode(bound: Ec3Settings): DesignCode {
     const s = settingsFor(scenario);
     const checks: CheckResult[] = [];
     const groups = mapped(joint.groups, (g) => groupOf(joint, scenario, s, g));
-    const smallHoles = groups.some((g) => g.inSmallHoles);
+    const bearings = new JointBearings(scenario, s);
+    let smallHoles = false;
     for (const g of groups) {
       if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));
       if (s.category !== "C") checks.push(boltShearCheck(joint, scenario, s, g));
-      if (g.inSmallHoles) checks.push(smallHoleConditionCheck(joint, scenario, s, g));
+      if (g.inSmallHoles) {
+        smallHoles = true;
+        checks.push(smallHoleConditionCheck(joint, scenario, s, g, bearings));
+      }
     }
     const loaded = joint.plates.filter((p) => p.role !== "packing");
     for (const plate of loaded) {
-      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groups.find((g) => g.group.id === c.group)!));
+      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groupFor(groups, c.group), bearings));
     }
     for (const plate of loaded) {
       checks.push(grossYieldCheck(scenario, s, plate));
