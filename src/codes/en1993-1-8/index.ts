@@ -23,7 +23,7 @@ import {
   boltShearCheck,
   grossYieldCheck,
   groupOf,
-  JointBearings,
+  JointMeasures,
   netSectionCheck,
   slipCheck,
   smallHoleConditionCheck,
@@ -137,11 +137,13 @@ function groupFor(groups: readonly Ec3Group[], id: Ec3Group["group"]["id"]): Ec3
 /** The design code bound to one set of settings. */
 function boundCode(bound: Ec3Settings): DesignCode {
   // fy and fu by grade and thickness, looked up once (the search asks for them with every bound).
-  const strengths = new Map<string, ReturnType<typeof plateStrength>>();
+  // By grade, then thickness (no key string built per look-up).
+  const strengths = new Map<string, Map<number, ReturnType<typeof plateStrength>>>();
   const strengthOf = (spec: PlateSpec) => {
-    const key = `${spec.grade}|${spec.thickness_mm}`;
-    let m = strengths.get(key);
-    if (!m) strengths.set(key, (m = plateStrength(spec, bound.steel)));
+    let byThickness = strengths.get(spec.grade);
+    if (!byThickness) strengths.set(spec.grade, (byThickness = new Map()));
+    let m = byThickness.get(spec.thickness_mm);
+    if (!m) byThickness.set(spec.thickness_mm, (m = plateStrength(spec, bound.steel)));
     return m;
   };
   /**
@@ -163,25 +165,25 @@ function boundCode(bound: Ec3Settings): DesignCode {
     const s = settingsFor(scenario);
     const checks: CheckResult[] = [];
     const groups = mapped(joint.groups, (g) => groupOf(joint, scenario, s, g));
-    const bearings = new JointBearings(scenario, s);
+    const measures = new JointMeasures(scenario, s);
     let smallHoles = false;
     for (const g of groups) {
       if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));
       if (s.category !== "C") checks.push(boltShearCheck(joint, scenario, s, g));
       if (g.inSmallHoles) {
         smallHoles = true;
-        checks.push(smallHoleConditionCheck(joint, scenario, s, g, bearings));
+        checks.push(smallHoleConditionCheck(joint, scenario, s, g, measures));
       }
     }
     const loaded = joint.plates.filter((p) => p.role !== "packing");
     for (const plate of loaded) {
-      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groupFor(groups, c.group), bearings));
+      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groupFor(groups, c.group), measures));
     }
     for (const plate of loaded) {
       checks.push(grossYieldCheck(scenario, s, plate));
       checks.push(netSectionCheck(joint, scenario, s, plate));
       for (const c of plate.connections) {
-        const block = blockTearingCheck(joint, scenario, s, plate, c);
+        const block = blockTearingCheck(joint, scenario, s, plate, c, measures);
         if (block) checks.push(block);
       }
     }

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, type BlockShape, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -296,32 +296,74 @@ interface MeasuredBearings {
   each: BoltBearing[];
 }
 
+/** The governing tear-out block of one group in one plate, with what it was measured from. */
+interface MeasuredBlock {
+  holes: readonly Hole[];
+  connection: PlateConnection;
+  width_mm: number;
+  shapes: readonly BlockShape[];
+  thickness_mm: number;
+  fy_MPa: number;
+  fu_MPa: number;
+  forceShare: number;
+  best: GoverningBlock<null> | null;
+}
+
 /**
- * The bearings of one joint check (one call of checkJoint, one joint): each group's Fb,Rd on a plate is
- * measured once and handed again to the next plate with the same numbers — the same group bearing
- * toward the same end in a plate of the same fu, t and width (both covers of a butt splice; the bearing
- * check and the small-hole condition). Made afresh for every check: nothing is kept between calls.
+ * What the checks of one joint check (one call of checkJoint, one joint) measure on its plates, each
+ * measured once and handed again to the next plate with the same numbers: a group's Fb,Rd on a plate
+ * (the same group toward the same end in a plate of the same fu, t and width: both covers of a butt
+ * splice; the bearing check and the small-hole condition), and the governing tear-out block (the same
+ * block shapes in a plate of the same t, fy, fu and force share: both covers, and the two main plates,
+ * whose groups are mirror images). Made afresh for every check: nothing is kept between calls.
  */
-export class JointBearings {
-  readonly #measured: MeasuredBearings[] = [];
+export class JointMeasures {
+  readonly #bearings: MeasuredBearings[] = [];
+  readonly #blocks: MeasuredBlock[] = [];
   constructor(
     private readonly scenario: CheckableScenario,
     private readonly s: Ec3Settings,
   ) {}
 
   /** Fb,Rd of every bolt of group g on the plate, toward the end of `connection`. */
-  of(plate: PlatePiece, connection: PlateConnection, g: Ec3Group): BoltBearing[] {
+  bearingsOf(plate: PlatePiece, connection: PlateConnection, g: Ec3Group): BoltBearing[] {
     const fu = plate.fu_MPa;
     const t = plate.spec.thickness_mm;
     const width = plate.spec.width_mm;
-    for (const m of this.#measured) {
-      const c = m.connection;
-      if (m.g === g && c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd && m.fu_MPa === fu && m.thickness_mm === t && m.width_mm === width) return m.each;
+    for (const m of this.#bearings) {
+      if (m.g === g && sameEnd(m.connection, connection) && m.fu_MPa === fu && m.thickness_mm === t && m.width_mm === width) return m.each;
     }
     const each = boltBearings(g.holes, connection, plate, this.scenario, this.s, g.oneLineLap, g.across);
-    this.#measured.push({ g, connection, fu_MPa: fu, thickness_mm: t, width_mm: width, each });
+    this.#bearings.push({ g, connection, fu_MPa: fu, thickness_mm: t, width_mm: width, each });
     return each;
   }
+
+  /**
+   * The block shapes of a group's holes in the plate toward the end of `connection`, and the governing
+   * one by 3.10.2(2), Veff,1,Rd (null: no shape forms).
+   */
+  blockOf(plate: PlatePiece, connection: PlateConnection, holes: readonly Hole[], jointHoles: readonly Hole[]): { shapes: readonly BlockShape[]; best: GoverningBlock<null> | null } {
+    const width = plate.spec.width_mm;
+    const t = plate.spec.thickness_mm;
+    const { fy_MPa: fy, fu_MPa: fu, forceShare } = plate;
+    const samePlate = (m: MeasuredBlock) => m.thickness_mm === t && m.fy_MPa === fy && m.fu_MPa === fu && m.forceShare === forceShare;
+    for (const m of this.#blocks) if (m.holes === holes && sameEnd(m.connection, connection) && m.width_mm === width && samePlate(m)) return m;
+    const shapes = blockShapes(holes, connection, width, jointHoles);
+    let best: GoverningBlock<null> | null | undefined;
+    for (const m of this.#blocks) if (m.shapes === shapes && m.holes.length === holes.length && samePlate(m)) best = m.best;
+    if (best === undefined) {
+      const { gamma_M0, gamma_M2 } = this.s.factors;
+      best = governingBlock(shapes, holes.length, forceShare, this.scenario.options.blockShearLoad, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, fy, fu, gamma_M0, gamma_M2), () => null);
+    }
+    const m: MeasuredBlock = { holes, connection, width_mm: width, shapes, thickness_mm: t, fy_MPa: fy, fu_MPa: fu, forceShare, best };
+    this.#blocks.push(m);
+    return m;
+  }
+}
+
+/** Two connections of one group bearing toward the same plate end. */
+function sameEnd(a: PlateConnection, b: PlateConnection): boolean {
+  return a.group === b.group && a.endX_mm === b.endX_mm && a.towardEnd === b.towardEnd;
 }
 
 function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: number, gM2: number, factor: number): string {
@@ -347,12 +389,12 @@ export function bearingCheck(
   plate: PlatePiece,
   connection: PlateConnection,
   g: Ec3Group,
-  bearings: JointBearings = new JointBearings(scenario, s),
+  measures: JointMeasures = new JointMeasures(scenario, s),
 ): StrengthCheck {
   const { bolts } = scenario;
   const d = bolts.size_mm;
   const oneLine = g.oneLineLap;
-  const each = bearings.of(plate, connection, g);
+  const each = measures.bearingsOf(plate, connection, g);
   const planes = planesCarrying(plate, g.group);
   const Fv = planes * g.FvPlane_N;
   // The least bolt (the first of equal ones) and ΣFb,Rd, in one pass over the bolts.
@@ -403,14 +445,14 @@ export function bearingCheck(
  * bolt by bolt, the reading that refuses more). The check limits no load (load ratio 0): it passes or
  * fails the layout. Demand is the worst bolt's Fb,Rd, resistance its Fv,Rd.
  */
-export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group, bearings: JointBearings = new JointBearings(scenario, s)): StrengthCheck {
+export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group, measures: JointMeasures = new JointMeasures(scenario, s)): StrengthCheck {
   let worst: { bearing: BoltBearing; shear_N: number; plate: PlatePiece } | null = null;
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
     for (const c of plate.connections) {
       if (c.group !== g.group.id) continue;
       const shear = planesCarrying(plate, g.group) * g.FvPlane_N;
-      for (const b of bearings.of(plate, c, g)) {
+      for (const b of measures.bearingsOf(plate, c, g)) {
         if (!worst || b.Fb_N / shear > worst.bearing.Fb_N / worst.shear_N) worst = { bearing: b, shear_N: shear, plate };
       }
     }
@@ -544,13 +586,19 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
  * A block holding k of the group's n bolts carries k/n of the plate's force (options.block_shear_load:
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
-export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+export function blockTearingCheck(
+  joint: Joint,
+  scenario: CheckableScenario,
+  s: Ec3Settings,
+  plate: PlatePiece,
+  connection: PlateConnection,
+  measures: JointMeasures = new JointMeasures(scenario, s),
+): StrengthCheck | null {
   const holes = groupHoles(joint, connection.group);
-  const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
+  const { shapes, best } = measures.blockOf(plate, connection, holes, joint.holes);
   const t = plate.spec.thickness_mm;
   const { gamma_M0, gamma_M2 } = s.factors;
   const load = scenario.options.blockShearLoad;
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2), () => null);
   if (!best) return null;
   const { shape: b, value_N: R, ratio } = best;
   const side = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
