@@ -94,6 +94,7 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
 function warningsOf(joint: Joint, s: Ec3Settings, groups: Ec3Group[]): Warning[] {
   const warnings: Warning[] = [];
   for (const g of groups) {
+    if (g.beta_Lf >= 1 && g.beta_p >= 1 && !g.oneLineLap) continue; // no warning: no label written
     const label = groupLabel(joint, g.group);
     if (g.beta_Lf < 1 && s.category !== "C") warnings.push({ id: "long-joint", message: `${label}: long joint, Lj = ${f(g.Lj_mm)} mm > 15d: βLf = ${f(g.beta_Lf, 3)} (3.8)${g.beta_Lf <= 0.75 + 1e-9 ? " — at its floor of 0.75" : ""}` });
     if (g.beta_p < 1 && s.category !== "C") warnings.push({ id: "packing", message: `${label}: packing ${f(g.group.packing_mm)} mm > d/3: βp = ${f(g.beta_p, 3)} applied (3.6.1(12))` });
@@ -187,7 +188,9 @@ function boundCode(bound: Ec3Settings): DesignCode {
         if (block) checks.push(block);
       }
     }
-    checks.push(...minSpacingRules(joint), ...minEndEdgeRules(joint), ...maxRules(joint, scenario), ...centroidRule(joint));
+    for (const rules of [minSpacingRules(joint), minEndEdgeRules(joint), maxRules(joint, scenario), centroidRule(joint)]) {
+      for (const r of rules) checks.push(r);
+    }
     return codeChecks(checks, warningsOf(joint, s, groups), () => conventionsOf(scenario, s, smallHoles));
   }
 
