@@ -144,12 +144,13 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
   let occupiedPlate: PlatePiece | null = null;
   let occupied: OccupiedCells | null = null;
   forEachHolePair(joint, (plate, a, b, holes) => {
-    const d0 = Math.max(holeWidth(a), holeWidth(b));
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
     if (dy <= LINE_TOLERANCE_MM) {
+      const d0 = Math.max(holeWidth(a), holeWidth(b));
       if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = pairWorst(plate, a, b, false, "p1", dx, 2.2, d0);
     } else if (dx <= LINE_TOLERANCE_MM) {
+      const d0 = Math.max(holeWidth(a), holeWidth(b));
       if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = pairWorst(plate, a, b, false, "p2", dy, 2.4, d0);
     } else {
       // The plate's grid, made at its first pair off the lines (the pairs come plate by plate).
@@ -161,6 +162,7 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
       // govern one of the two stagger rules: its gauge, or its distance L (certainly not when L is beyond
       // the distance that would tie the worst).
       if (occupied!.full) return;
+      const d0 = Math.max(holeWidth(a), holeWidth(b));
       const gaugeMayGovern = beatsWorst(staggerGauge, dy, 1.2 * d0, "min");
       const distanceMayGovern = staggerDistance === null || !fartherThan(a, b, (2.4 * d0 * (staggerDistance as Worst).value) / (staggerDistance as Worst).limit);
       if (!gaugeMayGovern && !distanceMayGovern) return;
