@@ -216,16 +216,22 @@ export interface HolesAcross {
   p2_mm: number[];
 }
 
-/** The neighbours across the force of every hole of a group, in the group's order (Table 3.4, k1). */
+/**
+ * The neighbours across the force of every hole of a group, in the group's order (Table 3.4, k1),
+ * measured against the group's distinct hole ordinates y (holes of equal y add nothing to "is there a
+ * line below/above" or to the least distance to another line).
+ */
 export function holesAcross(holes: readonly Hole[]): HolesAcross {
+  const ys: number[] = [];
+  for (const h of holes) if (!ys.includes(h.y_mm)) ys.push(h.y_mm);
   const across: HolesAcross = { below: [], above: [], p2_mm: [] };
   for (const h of holes) {
     let below = false;
     let above = false;
     let p2 = Infinity;
-    for (const k of holes) {
-      const dy = k.y_mm - h.y_mm;
-      if (k === h || Math.abs(dy) <= LINE_TOLERANCE_MM) continue;
+    for (const y of ys) {
+      const dy = y - h.y_mm;
+      if (Math.abs(dy) <= LINE_TOLERANCE_MM) continue;
       if (dy < 0) below = true;
       else above = true;
       p2 = Math.min(p2, Math.abs(dy));
