@@ -6,7 +6,7 @@
  */
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
-import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
+import type { Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
@@ -50,7 +50,12 @@ function pairWorst(plate: PlatePiece, a: Hole, b: Hole, staggered: boolean, symb
 export function minEndEdgeRules(joint: Joint): RuleCheck[] {
   let minEnd: Worst | null = null;
   let minEdge: Worst | null = null;
-  for (const plate of holePlates(joint)) {
+  const plates = holePlates(joint);
+  for (let k = 0; k < plates.length; k++) {
+    const plate = plates[k]!;
+    // A plate with an earlier plate's width, holes and ends (cover B after cover A) measures the same
+    // distances, and an equal measurement never replaces the worst: nothing of it can govern.
+    if (sameAsEarlier(joint, plates, k)) continue;
     const half = plate.spec.width_mm / 2;
     for (const h of holesOfPlate(joint, plate)) {
       const d0 = holeWidth(h);
@@ -75,6 +80,26 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
     ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", TABLE_3_3, "e1 ≥ 1.2 d0 (slotted: e3 ≥ 1.5 d0)", "min", minEnd),
     ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", TABLE_3_3, "e2 ≥ 1.2 d0 (slotted: e4 ≥ 1.5 d0)", "min", minEdge),
   ];
+}
+
+/** Whether a plate before plates[k] has the same width, the same holes and the same plate ends. */
+function sameAsEarlier(joint: Joint, plates: readonly PlatePiece[], k: number): boolean {
+  const plate = plates[k]!;
+  const holes = holesOfPlate(joint, plate);
+  for (let m = 0; m < k; m++) {
+    const other = plates[m]!;
+    if (other.spec.width_mm === plate.spec.width_mm && holesOfPlate(joint, other) === holes && sameEnds(other.connections, plate.connections)) return true;
+  }
+  return false;
+}
+
+/** Connections of the same groups toward the same plate ends, in the same order. */
+function sameEnds(a: readonly PlateConnection[], b: readonly PlateConnection[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) {
+    if (a[i]!.group !== b[i]!.group || a[i]!.endX_mm !== b[i]!.endX_mm || a[i]!.towardEnd !== b[i]!.towardEnd) return false;
+  }
+  return true;
 }
 
 /**
