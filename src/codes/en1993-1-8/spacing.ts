@@ -55,7 +55,7 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
     const plate = plates[k]!;
     // A plate with an earlier plate's width, holes and ends (cover B after cover A) measures the same
     // distances, and an equal measurement never replaces the worst: nothing of it can govern.
-    if (sameAsEarlier(joint, plates, k)) continue;
+    if (sameAsEarlier(plates, k)) continue;
     const half = plate.spec.width_mm / 2;
     for (const h of holesOfPlate(joint, plate)) {
       const d0 = holeWidth(h);
@@ -82,13 +82,15 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
   ];
 }
 
-/** Whether a plate before plates[k] has the same width, the same holes and the same plate ends. */
-function sameAsEarlier(joint: Joint, plates: readonly PlatePiece[], k: number): boolean {
+/**
+ * Whether a plate before plates[k] has the same width and the same connections (the same groups, so the
+ * same holes, toward the same plate ends).
+ */
+function sameAsEarlier(plates: readonly PlatePiece[], k: number): boolean {
   const plate = plates[k]!;
-  const holes = holesOfPlate(joint, plate);
   for (let m = 0; m < k; m++) {
     const other = plates[m]!;
-    if (other.spec.width_mm === plate.spec.width_mm && holesOfPlate(joint, other) === holes && sameEnds(other.connections, plate.connections)) return true;
+    if (other.spec.width_mm === plate.spec.width_mm && sameEnds(other.connections, plate.connections)) return true;
   }
   return false;
 }
