@@ -80,7 +80,14 @@ export interface GroupResistance {
  * @param shear_N Fv,Rd of one fastener (the shear planes that carry this plate's force), N
  */
 export function groupResistance(bearing_N: readonly number[], shear_N: number): GroupResistance {
-  if (bearing_N.every((b) => shear_N >= b - 1e-9)) return { resistance_N: bearing_N.reduce((a, b) => a + b, 0), rule: "sum" };
-  const least = Math.min(shear_N, ...bearing_N);
+  let sum = 0;
+  let least = shear_N;
+  let shearCoversEvery = true;
+  for (const b of bearing_N) {
+    sum += b;
+    least = Math.min(least, b);
+    if (shear_N < b - 1e-9) shearCoversEvery = false;
+  }
+  if (shearCoversEvery) return { resistance_N: sum, rule: "sum" };
   return { resistance_N: bearing_N.length * least, rule: "least" };
 }

@@ -4,6 +4,9 @@
  */
 import type { PropertyClass } from "../../catalogue/bolts.js";
 
+/** αv with the shear plane through the threads, by property class (Table 3.4). */
+const ALPHA_V_THREADED = Object.freeze({ "4.6": 0.6, "5.6": 0.6, "8.8": 0.6, "10.9": 0.5 } as const satisfies Record<PropertyClass, number>);
+
 /**
  * Factor αv of the shear resistance.
  * EN 1993-1-8, 3.6.1, Table 3.4.
@@ -12,8 +15,7 @@ import type { PropertyClass } from "../../catalogue/bolts.js";
  */
 export function alpha_v(propertyClass: PropertyClass, threadsInPlane: boolean): number {
   if (!threadsInPlane) return 0.6;
-  const threaded = { "4.6": 0.6, "5.6": 0.6, "8.8": 0.6, "10.9": 0.5 } as const satisfies Record<PropertyClass, number>;
-  return threaded[propertyClass];
+  return ALPHA_V_THREADED[propertyClass];
 }
 
 /**

@@ -11,3 +11,12 @@ export function cl(clause: string, extra?: Omit<Citation, "standard" | "clause">
 export function cl11(clause: string, extra?: Omit<Citation, "standard" | "clause">): Citation {
   return extra ? { standard: "EN 1993-1-1", clause, ...extra } : { standard: "EN 1993-1-1", clause };
 }
+
+/**
+ * A citation made once and shared by every result that cites it (a module constant, not one object per
+ * check): frozen, with its list of cross-references, so that no reader can change it for the others.
+ */
+export function fixed(citation: Citation): Citation {
+  if (citation.also) Object.freeze(citation.also);
+  return Object.freeze(citation);
+}

@@ -12,7 +12,7 @@ import type { CompressionChecks } from "../types.js";
 import type { Joint, PlatePiece } from "../../model/joint.js";
 import type { CheckResult, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
-import { cl, cl11 } from "./citation.js";
+import { cl, cl11, fixed } from "./citation.js";
 import { chi, IMPERFECTION, Nb_Rd, Nc_Rd } from "./compression-member.js";
 import type { PartialFactors } from "./settings.js";
 
@@ -24,6 +24,11 @@ import type { PartialFactors } from "./settings.js";
  * plate splice whose butt ends bear (the reading stated in the output).
  */
 export const EN_CONTACT_SPLICE_SHARE = 0.25;
+
+/** The citations of the compression checks, made once and shared by every result (frozen). */
+const GROSS_COMPRESSION_CITATION = fixed(cl11("6.2.4", { equation: "(6.10)", also: ["6.2.4(3) (holes filled by fasteners, from memory)"] }));
+const COVER_STRUT_CITATION = fixed(cl11("6.3.1", { equation: "(6.47)", also: ["6.3.1.2 (6.49), Table 6.1 (curve c)"] }));
+const PLY_BUCKLING_CITATION = fixed(cl("Table 3.3", { also: ["note 2", "EN 1993-1-1 6.3.1 (curve c)"] }));
 
 function spliceShare(scenario: Scenario): { value: number; text: string } {
   if (!scenario.splice.endsInContact) return { value: 1, text: "compression: butt ends not in contact — the bolts and covers carry the whole compression" };
@@ -47,7 +52,7 @@ function grossCompressionCheck(joint: Joint, scenario: CheckableScenario, plate:
     kind: "gross-compression",
     title: "Cross-section in compression",
     component: plate.label,
-    citation: cl11("6.2.4", { equation: "(6.10)", also: ["6.2.4(3) (holes filled by fasteners, from memory)"] }),
+    citation: GROSS_COMPRESSION_CITATION,
     formula: "NEd ≤ Nc,Rd = A·fy/γM0",
     substituted: () =>
       `A = ${filled ? `${f(plate.spec.width_mm)} × ${f(plate.spec.thickness_mm)}` : `${f(plate.spec.width_mm * plate.spec.thickness_mm)} − ${f(a.deducted)} (holes of the fullest line)`} = ${f(a.A_mm2)} mm²;  ` +
@@ -87,7 +92,7 @@ function coverStrutCheck(joint: Joint, scenario: CheckableScenario, plate: Plate
     kind: "strut-buckling",
     title: "Cover plate as a strut across the butt",
     component: plate.label,
-    citation: cl11("6.3.1", { equation: "(6.47)", also: ["6.3.1.2 (6.49), Table 6.1 (curve c)"] }),
+    citation: COVER_STRUT_CITATION,
     formula: "NEd ≤ Nb,Rd = χ·A·fy/γM1;  χ = 1/(Φ + √(Φ² − λ̄²));  λ̄ = (Lcr/i)/(π√(E/fy));  Lcr = 0.65·L",
     substituted: () => bucklingText(b, plate, `L = ${f(L)} mm between the innermost bolt lines, Lcr = ${COVER_STRUT_K} × ${f(L)} = ${f(COVER_STRUT_K * L)} mm`, factors, s),
     limitState: "ULS",
@@ -114,7 +119,7 @@ function plyBucklingCheck(joint: Joint, scenario: CheckableScenario, plate: Plat
     kind: "ply-buckling",
     title: "Local buckling of the ply between fasteners",
     component: plate.label,
-    citation: cl("Table 3.3", { also: ["note 2", "EN 1993-1-1 6.3.1 (curve c)"] }),
+    citation: PLY_BUCKLING_CITATION,
     formula: "p1/t ≥ 9ε: NEd ≤ Nb,Rd with Lcr = 0.6·p1",
     substituted: () => bucklingText(b, plate, `p1/t = ${f(p1)}/${f(t)} = ${f(p1 / t, 2)} ≥ 9ε = ${f(9 * eps, 2)}; Lcr = 0.6 × ${f(p1)} = ${f(0.6 * p1)} mm`, factors, s),
     limitState: "ULS",

@@ -23,8 +23,8 @@ import {
   boltShearCheck,
   grossYieldCheck,
   groupOf,
+  JointMeasures,
   netSectionCheck,
-  singleLapOneLine,
   slipCheck,
   smallHoleConditionCheck,
   type Ec3Group,
@@ -94,10 +94,11 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
 function warningsOf(joint: Joint, s: Ec3Settings, groups: Ec3Group[]): Warning[] {
   const warnings: Warning[] = [];
   for (const g of groups) {
+    if (g.beta_Lf >= 1 && g.beta_p >= 1 && !g.oneLineLap) continue; // no warning: no label written
     const label = groupLabel(joint, g.group);
     if (g.beta_Lf < 1 && s.category !== "C") warnings.push({ id: "long-joint", message: `${label}: long joint, Lj = ${f(g.Lj_mm)} mm > 15d: βLf = ${f(g.beta_Lf, 3)} (3.8)${g.beta_Lf <= 0.75 + 1e-9 ? " — at its floor of 0.75" : ""}` });
     if (g.beta_p < 1 && s.category !== "C") warnings.push({ id: "packing", message: `${label}: packing ${f(g.group.packing_mm)} mm > d/3: βp = ${f(g.beta_p, 3)} applied (3.6.1(12))` });
-    if (singleLapOneLine(g.group, g.holes)) warnings.push({ id: "single-lap-one-line", message: `${label}: one transverse line of bolts in single shear — washers under both the head and the nut, Fb,Rd ≤ 1.5·fu·d·t/γM2 (3.6.1(10))` });
+    if (g.oneLineLap) warnings.push({ id: "single-lap-one-line", message: `${label}: one transverse line of bolts in single shear — washers under both the head and the nut, Fb,Rd ≤ 1.5·fu·d·t/γM2 (3.6.1(10))` });
   }
   if (joint.spliceType === "lap" || joint.spliceType === "butt-single-cover") {
     warnings.push({
@@ -128,14 +129,22 @@ function conventionsOf(scenario: CheckableScenario, s: Ec3Settings, smallHoles: 
   ];
 }
 
+/** The group of the given id (every connection's group is one of the joint's). */
+function groupFor(groups: readonly Ec3Group[], id: Ec3Group["group"]["id"]): Ec3Group {
+  for (const g of groups) if (g.group.id === id) return g;
+  throw new RangeError(`no bolt group ${id}`);
+}
+
 /** The design code bound to one set of settings. */
 function boundCode(bound: Ec3Settings): DesignCode {
   // fy and fu by grade and thickness, looked up once (the search asks for them with every bound).
-  const strengths = new Map<string, ReturnType<typeof plateStrength>>();
+  // By grade, then thickness (no key string built per look-up).
+  const strengths = new Map<string, Map<number, ReturnType<typeof plateStrength>>>();
   const strengthOf = (spec: PlateSpec) => {
-    const key = `${spec.grade}|${spec.thickness_mm}`;
-    let m = strengths.get(key);
-    if (!m) strengths.set(key, (m = plateStrength(spec, bound.steel)));
+    let byThickness = strengths.get(spec.grade);
+    if (!byThickness) strengths.set(spec.grade, (byThickness = new Map()));
+    let m = byThickness.get(spec.thickness_mm);
+    if (!m) byThickness.set(spec.thickness_mm, (m = plateStrength(spec, bound.steel)));
     return m;
   };
   /**
@@ -157,26 +166,32 @@ function boundCode(bound: Ec3Settings): DesignCode {
     const s = settingsFor(scenario);
     const checks: CheckResult[] = [];
     const groups = mapped(joint.groups, (g) => groupOf(joint, scenario, s, g));
-    const smallHoles = groups.some((g) => g.inSmallHoles);
+    const measures = new JointMeasures(scenario, s);
+    let smallHoles = false;
     for (const g of groups) {
       if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));
       if (s.category !== "C") checks.push(boltShearCheck(joint, scenario, s, g));
-      if (g.inSmallHoles) checks.push(smallHoleConditionCheck(joint, scenario, s, g));
+      if (g.inSmallHoles) {
+        smallHoles = true;
+        checks.push(smallHoleConditionCheck(joint, scenario, s, g, measures));
+      }
     }
     const loaded = joint.plates.filter((p) => p.role !== "packing");
     for (const plate of loaded) {
-      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groups.find((g) => g.group.id === c.group)!));
+      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groupFor(groups, c.group), measures));
     }
     if (scope === "bolts") return boltChecksOnly(checks);
     for (const plate of loaded) {
       checks.push(grossYieldCheck(scenario, s, plate));
       checks.push(netSectionCheck(joint, scenario, s, plate));
       for (const c of plate.connections) {
-        const block = blockTearingCheck(joint, scenario, s, plate, c);
+        const block = blockTearingCheck(joint, scenario, s, plate, c, measures);
         if (block) checks.push(block);
       }
     }
-    checks.push(...minSpacingRules(joint), ...minEndEdgeRules(joint), ...maxRules(joint, scenario), ...centroidRule(joint));
+    for (const rules of [minSpacingRules(joint), minEndEdgeRules(joint), maxRules(joint, scenario), centroidRule(joint)]) {
+      for (const r of rules) checks.push(r);
+    }
     return codeChecks(checks, warningsOf(joint, s, groups), () => conventionsOf(scenario, s, smallHoles));
   }
 

@@ -3,20 +3,20 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, type BlockShape, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { forEachTearOut } from "../../geometry/tear-out.js";
 import type { BoltGroupGeometry, Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
-import type { StrengthCheck } from "../../model/results.js";
+import type { Citation, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { strength } from "../check-builders.js";
 import { f, kN } from "../format.js";
 import { groupLabel } from "../is800-2007/joint-checks.js";
 import { alpha_b, alpha_d_end, alpha_d_inner, Fb_Rd, groupResistance, k1_edge, k1_inner, singleLapLimit } from "./bearing.js";
 import { alpha_v, beta_Lf, beta_p, Fv_Rd, smallBoltHoleFactor } from "./bolt-shear.js";
-import { cl, cl11 } from "./citation.js";
+import { cl, cl11, fixed } from "./citation.js";
 import { bearingHoleFactor, holeWidth, ks, normalClearance_mm } from "./holes.js";
 import { boltStrength } from "./materials.js";
 import { Npl_Rd, Nnet_Rd, Nu_Rd, Veff_1_Rd } from "./members.js";
@@ -28,6 +28,56 @@ function alsoOf(refs: Array<string | false>): { also?: string[] } {
   const also = refs.filter((r): r is string => r !== false);
   return also.length > 0 ? { also } : {};
 }
+
+/*
+ * Citations and formulas that do not change from check to check are made once, here, and shared by
+ * every result (frozen: no reader may change them).
+ */
+
+/** Bolt shear, 3.6.1 with Table 3.4 and the reductions that apply: βLf (3.8), βp (3.6.1(12)), × 0.85 (3.6.1(5)). */
+const BOLT_SHEAR_CITATIONS: Citation[] = [];
+for (const longJoint of [false, true]) {
+  for (const packed of [false, true]) {
+    for (const smallHole of [false, true]) {
+      BOLT_SHEAR_CITATIONS.push(
+        fixed(cl("3.6.1", { table: "Table 3.4", ...alsoOf([longJoint && "3.8, Eq. (3.5) (βLf)", packed && "3.6.1(12), Eq. (3.3) (βp)", smallHole && "3.6.1(5) (× 0.85)"]) })),
+      );
+    }
+  }
+}
+
+/** The bolt-shear citation with the reductions that apply (in the order of the loops above). */
+function boltShearCitation(longJoint: boolean, packed: boolean, smallHole: boolean): Citation {
+  return BOLT_SHEAR_CITATIONS[(longJoint ? 4 : 0) + (packed ? 2 : 0) + (smallHole ? 1 : 0)]!;
+}
+
+/** Group bearing, 3.7 with Table 3.4; single lap with one transverse line also 3.6.1(10), Eq. (3.2). */
+const BEARING_CITATION = fixed(cl("3.7", { table: "Table 3.4" }));
+const BEARING_ONE_LINE_CITATION = fixed(cl("3.7", { table: "Table 3.4", ...alsoOf(["3.6.1(10), Eq. (3.2)"]) }));
+const SMALL_HOLES_CITATION = fixed(cl("3.6.1(5)"));
+const SLIP_CITATION = fixed(cl("3.9.1", { table: "Tables 3.6, 3.7", equation: "(3.6), (3.7)" }));
+const GROSS_YIELD_CITATION = fixed(cl11("6.2.3(2)a", { equation: "(6.6)" }));
+const NET_CITATION = fixed(cl11("6.2.3(2)b", { equation: "(6.7)", also: ["6.2.2.2 for Anet"] }));
+const NET_CATEGORY_C_CITATION = fixed(cl11("6.2.3(4)", { equation: "(6.8)", also: ["6.2.2.2 for Anet"] }));
+const BLOCK_CITATION = fixed(cl("3.10.2(2)", { equation: "(3.9)" }));
+
+/** The net-section formula: whole force or load already transferred; Nu,Rd, or Nnet,Rd for Category C. */
+function netFormulaOf(transferred: boolean, catC: boolean): string {
+  return (
+    (transferred ? "F·k/n ≤ " : "F ≤ ") +
+    (catC ? "Nnet,Rd = Anet·fy / γM0" : "Nu,Rd = 0.9·Anet·fu / γM2") +
+    ";  Anet = (b − Σd0 + Σ s²/4p)·t, " +
+    (transferred ? "k = bolts not yet passed; highest demand/resistance over all paths" : "least over all paths")
+  );
+}
+const NET_FORMULA = netFormulaOf(false, false);
+const NET_FORMULA_C = netFormulaOf(false, true);
+const NET_FORMULA_TRANSFERRED = netFormulaOf(true, false);
+const NET_FORMULA_TRANSFERRED_C = netFormulaOf(true, true);
+
+/** Block tearing with the whole plate force, or with k/n of it. */
+const BLOCK_FORMULA_FULL = "F ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0";
+const BLOCK_FORMULA_SHARE = "F·k/n ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0";
 
 /** One bolt group with its shear resistance and the reductions that set it. */
 export interface Ec3Group {
@@ -47,6 +97,10 @@ export interface Ec3Group {
   bolt: BoltMaterial;
   /** Fv,Rd of one bolt in one shear plane with βLf, βp and the small-hole factor, N. */
   FvPlane_N: number;
+  /** A single lap joint with one transverse line of bolts (3.6.1(10)). */
+  oneLineLap: boolean;
+  /** Each hole's neighbours across the force (k1 of Table 3.4), in the group's hole order. */
+  across: HolesAcross;
 }
 
 /** The shear resistance of one group's bolts, from its hole coordinates (3.6.1, 3.8). */
@@ -75,6 +129,8 @@ export function groupOf(joint: Joint, scenario: CheckableScenario, s: Ec3Setting
     A_mm2: A,
     bolt,
     FvPlane_N: Fv_Rd(av, bolt.fub_MPa, A, s.factors.gamma_M2) * bLf * bp * small,
+    oneLineLap: singleLapOneLine(group, holes),
+    across: holesAcross(holes),
   };
 }
 
@@ -100,10 +156,7 @@ export function boltShearCheck(joint: Joint, scenario: CheckableScenario, s: Ec3
     kind: "bolt-shear",
     title: "Bolt shear",
     component: groupLabel(joint, g.group),
-    citation: cl("3.6.1", {
-      table: "Table 3.4",
-      ...alsoOf([g.beta_Lf < 1 && "3.8, Eq. (3.5) (βLf)", g.beta_p < 1 && "3.6.1(12), Eq. (3.3) (βp)", g.smallHole !== 1 && "3.6.1(5) (× 0.85)"]),
-    }),
+    citation: boltShearCitation(g.beta_Lf < 1, g.beta_p < 1, g.smallHole !== 1),
     formula: "T ≤ n·Fv,Rd;  Fv,Rd = planes · αv·fub·A/γM2 · βLf·βp",
     substituted: () =>
       `Fv,Rd = ${planes} × ${g.alpha_v} × ${g.bolt.fub_MPa} × ${f(g.A_mm2)} / ${f(s.factors.gamma_M2, 2)} × ${f(g.beta_Lf, 3)} × ${f(g.beta_p, 3)}` +
@@ -152,13 +205,60 @@ export function singleLapOneLine(g: BoltGroupGeometry, holes: readonly Hole[]): 
 }
 
 /**
+ * Each hole's neighbours across the force within its group, for k1 of Table 3.4: whether a hole of
+ * another gauge line lies below it (smaller y) and above it, and the distance p2 to the nearest other
+ * gauge line. They depend on the group's holes alone, so a group measures them once for every plate.
+ */
+export interface HolesAcross {
+  below: boolean[];
+  above: boolean[];
+  /** Distance to the nearest other gauge line, mm (Infinity: none). */
+  p2_mm: number[];
+}
+
+/**
+ * The neighbours across the force of every hole of a group, in the group's order (Table 3.4, k1),
+ * measured against the group's distinct hole ordinates y (holes of equal y add nothing to "is there a
+ * line below/above" or to the least distance to another line).
+ */
+export function holesAcross(holes: readonly Hole[]): HolesAcross {
+  const ys: number[] = [];
+  for (const h of holes) if (!ys.includes(h.y_mm)) ys.push(h.y_mm);
+  const across: HolesAcross = { below: [], above: [], p2_mm: [] };
+  for (const h of holes) {
+    let below = false;
+    let above = false;
+    let p2 = Infinity;
+    for (const y of ys) {
+      const dy = y - h.y_mm;
+      if (Math.abs(dy) <= LINE_TOLERANCE_MM) continue;
+      if (dy < 0) below = true;
+      else above = true;
+      p2 = Math.min(p2, Math.abs(dy));
+    }
+    across.below.push(below);
+    across.above.push(above);
+    across.p2_mm.push(p2);
+  }
+  return across;
+}
+
+/**
  * Fb,Rd of every bolt of a group on one plate, each from its own coordinates.
  * EN 1993-1-8, Table 3.4: αb from the end distance e1 (end bolts) or the pitch p1 to the bolt ahead in
  * its strip (inner bolts) toward the plate end it bears on; k1 from the edge distance e2 and the
  * distance p2 to the nearest other gauge line (edge bolts: on an outermost gauge line) or from p2 alone
  * (inner bolts); the limit of 3.6.1(10) for single lap joints with one transverse line.
  */
-export function boltBearings(holes: readonly Hole[], connection: PlateConnection, plate: PlatePiece, scenario: CheckableScenario, s: Ec3Settings, oneLineLap: boolean): BoltBearing[] {
+export function boltBearings(
+  holes: readonly Hole[],
+  connection: PlateConnection,
+  plate: PlatePiece,
+  scenario: CheckableScenario,
+  s: Ec3Settings,
+  oneLineLap: boolean,
+  across: HolesAcross = holesAcross(holes),
+): BoltBearing[] {
   const { bolts } = scenario;
   const d = bolts.size_mm;
   const fub = boltStrength(bolts.propertyClass, d).fub_MPa;
@@ -169,21 +269,17 @@ export function boltBearings(holes: readonly Hole[], connection: PlateConnection
   const half = plate.spec.width_mm / 2;
   const cap = oneLineLap ? singleLapLimit(fu, d, t, gM2) : Infinity;
   const out: BoltBearing[] = [];
+  // forEachTearOut visits the holes in their order: the i-th visit is holes[i].
+  let i = 0;
   forEachTearOut(holes, connection, (h, toEnd_mm, toHoleAhead_mm) => {
     const d0 = holeWidth(h);
     const end = toHoleAhead_mm === null;
     const along = end ? toEnd_mm - (h.along_mm - d0) / 2 : toHoleAhead_mm;
     const ad = end ? alpha_d_end(along, d0) : alpha_d_inner(along, d0);
-    let below = false;
-    let above = false;
-    let p2 = Infinity;
-    for (const k of holes) {
-      const dy = k.y_mm - h.y_mm;
-      if (k === h || Math.abs(dy) <= LINE_TOLERANCE_MM) continue;
-      if (dy < 0) below = true;
-      else above = true;
-      p2 = Math.min(p2, Math.abs(dy));
-    }
+    const below = across.below[i]!;
+    const above = across.above[i]!;
+    const p2 = across.p2_mm[i]!;
+    i++;
     const reach = (h.across_mm - d0) / 2;
     const e2 = Math.min(below ? Infinity : half + h.y_mm - reach, above ? Infinity : half - h.y_mm - reach);
     const p2v = Number.isFinite(p2) ? p2 : null;
@@ -194,6 +290,86 @@ export function boltBearings(holes: readonly Hole[], connection: PlateConnection
     out.push({ hole: h, end, along_mm: along, alpha_d: ad, alpha_b: ab, edge, e2_mm: e2, p2_mm: p2v, k1, d0_mm: d0, Fb_N: Math.min(Fb, cap), limited: Fb > cap });
   });
   return out;
+}
+
+/** One group's bearings on one plate, with what they were measured from. */
+interface MeasuredBearings {
+  g: Ec3Group;
+  connection: PlateConnection;
+  fu_MPa: number;
+  thickness_mm: number;
+  width_mm: number;
+  each: BoltBearing[];
+}
+
+/** The governing tear-out block of one group in one plate, with what it was measured from. */
+interface MeasuredBlock {
+  holes: readonly Hole[];
+  connection: PlateConnection;
+  width_mm: number;
+  shapes: readonly BlockShape[];
+  thickness_mm: number;
+  fy_MPa: number;
+  fu_MPa: number;
+  forceShare: number;
+  best: GoverningBlock<null> | null;
+}
+
+/**
+ * What the checks of one joint check (one call of checkJoint, one joint) measure on its plates, each
+ * measured once and handed again to the next plate with the same numbers: a group's Fb,Rd on a plate
+ * (the same group toward the same end in a plate of the same fu, t and width: both covers of a butt
+ * splice; the bearing check and the small-hole condition), and the governing tear-out block (the same
+ * block shapes in a plate of the same t, fy, fu and force share: both covers, and the two main plates,
+ * whose groups are mirror images). Made afresh for every check: nothing is kept between calls.
+ */
+export class JointMeasures {
+  readonly #bearings: MeasuredBearings[] = [];
+  readonly #blocks: MeasuredBlock[] = [];
+  constructor(
+    private readonly scenario: CheckableScenario,
+    private readonly s: Ec3Settings,
+  ) {}
+
+  /** Fb,Rd of every bolt of group g on the plate, toward the end of `connection`. */
+  bearingsOf(plate: PlatePiece, connection: PlateConnection, g: Ec3Group): BoltBearing[] {
+    const fu = plate.fu_MPa;
+    const t = plate.spec.thickness_mm;
+    const width = plate.spec.width_mm;
+    for (const m of this.#bearings) {
+      if (m.g === g && sameEnd(m.connection, connection) && m.fu_MPa === fu && m.thickness_mm === t && m.width_mm === width) return m.each;
+    }
+    const each = boltBearings(g.holes, connection, plate, this.scenario, this.s, g.oneLineLap, g.across);
+    this.#bearings.push({ g, connection, fu_MPa: fu, thickness_mm: t, width_mm: width, each });
+    return each;
+  }
+
+  /**
+   * The block shapes of a group's holes in the plate toward the end of `connection`, and the governing
+   * one by 3.10.2(2), Veff,1,Rd (null: no shape forms).
+   */
+  blockOf(plate: PlatePiece, connection: PlateConnection, holes: readonly Hole[], jointHoles: readonly Hole[]): { shapes: readonly BlockShape[]; best: GoverningBlock<null> | null } {
+    const width = plate.spec.width_mm;
+    const t = plate.spec.thickness_mm;
+    const { fy_MPa: fy, fu_MPa: fu, forceShare } = plate;
+    const samePlate = (m: MeasuredBlock) => m.thickness_mm === t && m.fy_MPa === fy && m.fu_MPa === fu && m.forceShare === forceShare;
+    for (const m of this.#blocks) if (m.holes === holes && sameEnd(m.connection, connection) && m.width_mm === width && samePlate(m)) return m;
+    const shapes = blockShapes(holes, connection, width, jointHoles);
+    let best: GoverningBlock<null> | null | undefined;
+    for (const m of this.#blocks) if (m.shapes === shapes && m.holes.length === holes.length && samePlate(m)) best = m.best;
+    if (best === undefined) {
+      const { gamma_M0, gamma_M2 } = this.s.factors;
+      best = governingBlock(shapes, holes.length, forceShare, this.scenario.options.blockShearLoad, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, fy, fu, gamma_M0, gamma_M2), () => null);
+    }
+    const m: MeasuredBlock = { holes, connection, width_mm: width, shapes, thickness_mm: t, fy_MPa: fy, fu_MPa: fu, forceShare, best };
+    this.#blocks.push(m);
+    return m;
+  }
+}
+
+/** Two connections of one group bearing toward the same plate end. */
+function sameEnd(a: PlateConnection, b: PlateConnection): boolean {
+  return a.group === b.group && a.endX_mm === b.endX_mm && a.towardEnd === b.towardEnd;
 }
 
 function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: number, gM2: number, factor: number): string {
@@ -212,16 +388,31 @@ function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: numb
  * EN 1993-1-8, 3.6.1, Table 3.4 (Fb,Rd per bolt), 3.6.1(10) (single lap, one transverse line) and 3.7
  * (group: ΣFb,Rd, or n × the least resistance where some Fv,Rd < Fb,Rd).
  */
-export function bearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection, g: Ec3Group): StrengthCheck {
+export function bearingCheck(
+  joint: Joint,
+  scenario: CheckableScenario,
+  s: Ec3Settings,
+  plate: PlatePiece,
+  connection: PlateConnection,
+  g: Ec3Group,
+  measures: JointMeasures = new JointMeasures(scenario, s),
+): StrengthCheck {
   const { bolts } = scenario;
   const d = bolts.size_mm;
-  const oneLine = singleLapOneLine(g.group, g.holes);
-  const each = boltBearings(g.holes, connection, plate, scenario, s, oneLine);
+  const oneLine = g.oneLineLap;
+  const each = measures.bearingsOf(plate, connection, g);
   const planes = planesCarrying(plate, g.group);
   const Fv = planes * g.FvPlane_N;
-  const group = groupResistance(each.map((b) => b.Fb_N), Fv);
-  const least = each.reduce((a, b) => (b.Fb_N < a.Fb_N ? b : a));
-  const sum = each.reduce((a, b) => a + b.Fb_N, 0);
+  // The least bolt (the first of equal ones) and ΣFb,Rd, in one pass over the bolts.
+  const Fb: number[] = [];
+  let least = each[0]!;
+  let sum = 0;
+  for (const b of each) {
+    Fb.push(b.Fb_N);
+    if (b.Fb_N < least.Fb_N) least = b;
+    sum += b.Fb_N;
+  }
+  const group = groupResistance(Fb, Fv);
   const T = scenario.load.factoredTension_N;
   const fub = g.bolt.fub_MPa;
   const t = plate.spec.thickness_mm;
@@ -232,7 +423,7 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Se
     kind: "bolt-bearing",
     title: "Bolt bearing (group)",
     component: `${plate.label}${side}`,
-    citation: cl("3.7", { table: "Table 3.4", ...alsoOf([oneLine && "3.6.1(10), Eq. (3.2)"]) }),
+    citation: oneLine ? BEARING_ONE_LINE_CITATION : BEARING_CITATION,
     formula: "F ≤ ΣFb,Rd if every Fv,Rd ≥ Fb,Rd, else n·min(Fv,Rd, Fb,Rd);  Fb,Rd = k1·αb·fu·d·t / γM2",
     substituted: () =>
       `least ${bearingText(least, fub, plate.fu_MPa, d, t, s.factors.gamma_M2, factor)};  ΣFb,Rd over ${each.length} bolts = ${kN(sum)};  ` +
@@ -260,14 +451,14 @@ export function bearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Se
  * bolt by bolt, the reading that refuses more). The check limits no load (load ratio 0): it passes or
  * fails the layout. Demand is the worst bolt's Fb,Rd, resistance its Fv,Rd.
  */
-export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group): StrengthCheck {
+export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, g: Ec3Group, measures: JointMeasures = new JointMeasures(scenario, s)): StrengthCheck {
   let worst: { bearing: BoltBearing; shear_N: number; plate: PlatePiece } | null = null;
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
     for (const c of plate.connections) {
       if (c.group !== g.group.id) continue;
       const shear = planesCarrying(plate, g.group) * g.FvPlane_N;
-      for (const b of boltBearings(g.holes, c, plate, scenario, s, singleLapOneLine(g.group, g.holes))) {
+      for (const b of measures.bearingsOf(plate, c, g)) {
         if (!worst || b.Fb_N / shear > worst.bearing.Fb_N / worst.shear_N) worst = { bearing: b, shear_N: shear, plate };
       }
     }
@@ -280,7 +471,7 @@ export function smallHoleConditionCheck(joint: Joint, scenario: CheckableScenari
     kind: "bolt-bearing",
     title: `M${d} in 2 mm clearance holes: bearing must govern`,
     component: groupLabel(joint, g.group),
-    citation: cl("3.6.1(5)"),
+    citation: SMALL_HOLES_CITATION,
     formula: "every bolt, every plate: Fb,Rd ≤ Fv,Rd (× 0.85) of the planes carrying that plate",
     substituted: () =>
       `worst: bolt ${w.bearing.hole.id} on ${w.plate.label}: Fb,Rd = ${kN(w.bearing.Fb_N, 2)} ${holds ? "≤" : ">"} Fv,Rd = ${kN(w.shear_N, 2)}` +
@@ -318,7 +509,7 @@ export function slipCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Setti
     kind: "slip",
     title: service ? "Slip resistance at service load (Category B)" : "Slip resistance at factored load (Category C)",
     component: groupLabel(joint, g.group),
-    citation: cl("3.9.1", { table: "Tables 3.6, 3.7", equation: "(3.6), (3.7)" }),
+    citation: SLIP_CITATION,
     formula: service ? "F ≤ n·Fs,Rd,ser;  Fs,Rd,ser = ks·n·μ·Fp,C / γM3,ser;  Fp,C = 0.7·fub·As" : "F ≤ n·Fs,Rd;  Fs,Rd = ks·n·μ·Fp,C / γM3;  Fp,C = 0.7·fub·As",
     substituted: () =>
       `Fp,C = 0.7 × ${g.bolt.fub_MPa} × ${f(As)} = ${kN(FpC, 2)};  Fs,Rd = ${k} × ${nf} × ${f(mu, 2)} × ${kN(FpC, 2)} / ${f(gamma, 2)} = ${kN(perBolt, 2)};  ` +
@@ -347,7 +538,7 @@ export function grossYieldCheck(scenario: CheckableScenario, s: Ec3Settings, pla
     kind: "gross-yield",
     title: "Gross-section yield",
     component: plate.label,
-    citation: cl11("6.2.3(2)a", { equation: "(6.6)" }),
+    citation: GROSS_YIELD_CITATION,
     formula: "F ≤ Npl,Rd = A·fy / γM0",
     substituted: () => `Npl,Rd = ${f(b)} × ${f(t)} × ${plate.fy_MPa} / ${f(s.factors.gamma_M0, 2)} = ${kN(R)}` + shareText(plate),
     limitState: "ULS",
@@ -380,12 +571,8 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
     kind: "net-section",
     title: catC ? "Net section (Category C)" : "Net-section rupture",
     component: plate.label,
-    citation: catC ? cl11("6.2.3(4)", { equation: "(6.8)", also: ["6.2.2.2 for Anet"] }) : cl11("6.2.3(2)b", { equation: "(6.7)", also: ["6.2.2.2 for Anet"] }),
-    formula:
-      (transferred ? "F·k/n ≤ " : "F ≤ ") +
-      (catC ? "Nnet,Rd = Anet·fy / γM0" : "Nu,Rd = 0.9·Anet·fu / γM2") +
-      ";  Anet = (b − Σd0 + Σ s²/4p)·t, " +
-      (transferred ? "k = bolts not yet passed; highest demand/resistance over all paths" : "least over all paths"),
+    citation: catC ? NET_CATEGORY_C_CITATION : NET_CITATION,
+    formula: transferred ? (catC ? NET_FORMULA_TRANSFERRED_C : NET_FORMULA_TRANSFERRED) : catC ? NET_FORMULA_C : NET_FORMULA,
     substituted: () =>
       `${transferred ? "governing" : "least"} path ${pathLabel(path)}: Anet = (${f(b)} − ${f(path.holeDeduction_mm)} + ${f(path.staggerAddition_mm)}) × ${f(t)} = ${f(Anet)} mm²;  ` +
       `${resistance()} = ${kN(R)}` +
@@ -405,13 +592,19 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, s: Ec
  * A block holding k of the group's n bolts carries k/n of the plate's force (options.block_shear_load:
  * share), or the whole plate force (full); the check reports the joint tension the block permits.
  */
-export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+export function blockTearingCheck(
+  joint: Joint,
+  scenario: CheckableScenario,
+  s: Ec3Settings,
+  plate: PlatePiece,
+  connection: PlateConnection,
+  measures: JointMeasures = new JointMeasures(scenario, s),
+): StrengthCheck | null {
   const holes = groupHoles(joint, connection.group);
-  const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
+  const { shapes, best } = measures.blockOf(plate, connection, holes, joint.holes);
   const t = plate.spec.thickness_mm;
   const { gamma_M0, gamma_M2 } = s.factors;
   const load = scenario.options.blockShearLoad;
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, plate.fy_MPa, plate.fu_MPa, gamma_M0, gamma_M2), () => null);
   if (!best) return null;
   const { shape: b, value_N: R, ratio } = best;
   const side = joint.spliceType === "lap" ? "" : `, side ${connection.group}`;
@@ -420,8 +613,8 @@ export function blockTearingCheck(joint: Joint, scenario: CheckableScenario, s: 
     kind: "block-shear",
     title: "Block tearing",
     component: `${plate.label}${side}`,
-    citation: cl("3.10.2(2)", { equation: "(3.9)" }),
-    formula: `${load === "full" ? "F" : "F·k/n"} ≤ Veff,1,Rd = fu·Ant/γM2 + (1/√3)·fy·Anv/γM0`,
+    citation: BLOCK_CITATION,
+    formula: load === "full" ? BLOCK_FORMULA_FULL : BLOCK_FORMULA_SHARE,
     substituted: () =>
       `${b.description} (${b.boltsInBlock} of ${holes.length} bolts): Ant = ${f(b.tensionNet_mm)} × ${f(t)} = ${f(b.tensionNet_mm * t)} mm², ` +
       `Anv = ${f(b.shearNet_mm)} × ${f(t)} = ${f(b.shearNet_mm * t)} mm²;  Veff,1,Rd = R = ${plate.fu_MPa} × ${f(b.tensionNet_mm * t)}/${f(gamma_M2, 2)} + ${plate.fy_MPa} × ${f(b.shearNet_mm * t)}/(√3 × ${f(gamma_M0, 2)}) = ${kN(R)};  ` +

@@ -4,17 +4,23 @@
  * corrosive influences (Table 3.3, note 1: for tension members not exposed they are unlimited).
  * d0 is the hole's diameter (a slot's width); t the thinner outer connected part (note 3).
  */
-import { groupHoles } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
-import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
+import type { Hole, Joint, PlateConnection, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
 import { beatsWorst, forEachHolePair, groupCentroidRule, holePlates, keepWorst, outsidePlates, platesHoles, worstRule, type Worst } from "../rule-measures.js";
-import { cl } from "./citation.js";
+import { cl, fixed } from "./citation.js";
 import { holeWidth } from "./holes.js";
 
 const slotted = (h: Hole) => Math.abs(h.across_mm - h.along_mm) > 1e-9;
+
+/** Table 3.3 citations, made once and shared by every result (frozen). */
+const TABLE_3_3 = fixed(cl("3.5", { table: "Table 3.3" }));
+const TABLE_3_3_NOTE_5 = fixed(cl("3.5", { table: "Table 3.3, note 5" }));
+const TABLE_3_3_EXPOSED = fixed(cl("3.5", { table: "Table 3.3, exposed to corrosion" }));
+const CONCENTRIC_GROUP = fixed({ standard: "general", clause: "concentric bolt group, assumed by EN 1993-1-8 3.7, 3.10.2(2) and EN 1993-1-1 6.2.3" });
 
 /** Thickness of the thinner outer connected part of the groups a plate's holes belong to (Table 3.3, note 3). */
 export function outerThickness(joint: Joint, plate: PlatePiece): number {
@@ -44,10 +50,14 @@ function pairWorst(plate: PlatePiece, a: Hole, b: Hole, staggered: boolean, symb
 export function minEndEdgeRules(joint: Joint): RuleCheck[] {
   let minEnd: Worst | null = null;
   let minEdge: Worst | null = null;
-  for (const plate of holePlates(joint)) {
-    const holes = platesHoles(joint, plate);
+  const plates = holePlates(joint);
+  for (let k = 0; k < plates.length; k++) {
+    const plate = plates[k]!;
+    // A plate with an earlier plate's width, holes and ends (cover B after cover A) measures the same
+    // distances, and an equal measurement never replaces the worst: nothing of it can govern.
+    if (sameAsEarlier(plates, k)) continue;
     const half = plate.spec.width_mm / 2;
-    for (const h of holes) {
+    for (const h of holesOfPlate(joint, plate)) {
       const d0 = holeWidth(h);
       const slot = slotted(h);
       const factor = slot ? 1.5 : 1.2;
@@ -67,34 +77,85 @@ export function minEndEdgeRules(joint: Joint): RuleCheck[] {
     }
   }
   return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", cl("3.5", { table: "Table 3.3" }), "e1 ≥ 1.2 d0 (slotted: e3 ≥ 1.5 d0)", "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", cl("3.5", { table: "Table 3.3" }), "e2 ≥ 1.2 d0 (slotted: e4 ≥ 1.5 d0)", "min", minEdge),
+    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", TABLE_3_3, "e1 ≥ 1.2 d0 (slotted: e3 ≥ 1.5 d0)", "min", minEnd),
+    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", TABLE_3_3, "e2 ≥ 1.2 d0 (slotted: e4 ≥ 1.5 d0)", "min", minEdge),
   ];
 }
 
-/** The hole centres of a plate on a grid of the line tolerance: which cells hold a hole. */
-class OccupiedCells {
-  readonly #rows = new Map<number, Set<number>>();
-  constructor(holes: readonly Hole[]) {
-    for (const h of holes) {
-      const x = Math.round(h.x_mm / LINE_TOLERANCE_MM);
-      let row = this.#rows.get(x);
-      if (!row) this.#rows.set(x, (row = new Set()));
-      row.add(Math.round(h.y_mm / LINE_TOLERANCE_MM));
-    }
+/**
+ * Whether a plate before plates[k] has the same width and the same connections (the same groups, so the
+ * same holes, toward the same plate ends).
+ */
+function sameAsEarlier(plates: readonly PlatePiece[], k: number): boolean {
+  const plate = plates[k]!;
+  for (let m = 0; m < k; m++) {
+    const other = plates[m]!;
+    if (other.spec.width_mm === plate.spec.width_mm && sameEnds(other.connections, plate.connections)) return true;
   }
-  has(x_mm: number, y_mm: number): boolean {
-    return this.#rows.get(Math.round(x_mm / LINE_TOLERANCE_MM))?.has(Math.round(y_mm / LINE_TOLERANCE_MM)) ?? false;
+  return false;
+}
+
+/** Connections of the same groups toward the same plate ends, in the same order. */
+function sameEnds(a: readonly PlateConnection[], b: readonly PlateConnection[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) {
+    if (a[i]!.group !== b[i]!.group || a[i]!.endX_mm !== b[i]!.endX_mm || a[i]!.towardEnd !== b[i]!.towardEnd) return false;
   }
+  return true;
 }
 
 /**
- * Two holes staggered against each other: on different gauge lines and transverse lines, with no hole
- * of the plate at the other corners of their rectangle (a grid's diagonal is not a stagger).
- * @param occupied the plate's hole centres
+ * The hole centres of a plate on a grid of the line tolerance: which cells hold a hole. Each hole's
+ * column (rounded x) and row (rounded y) are numbered once, so that asking whether a hole sits at one
+ * hole's x and another's y reads one entry of a table.
  */
-function staggeredPair(occupied: OccupiedCells, a: Hole, b: Hole): boolean {
-  return !occupied.has(a.x_mm, b.y_mm) && !occupied.has(b.x_mm, a.y_mm);
+class OccupiedCells {
+  readonly #holes: readonly Hole[];
+  /** Column and row number of each hole, in the order of the plate's holes. */
+  readonly #column: number[] = [];
+  readonly #row: number[] = [];
+  readonly #columns: number;
+  /** occupied[row × columns + column]: a hole there. */
+  readonly #occupied: boolean[] = [];
+  /** Every cell of the grid holds a hole (a full rectangular grid): no pair is a stagger. */
+  readonly full: boolean;
+  constructor(holes: readonly Hole[]) {
+    this.#holes = holes;
+    const xs: number[] = [];
+    const ys: number[] = [];
+    for (const h of holes) {
+      this.#column.push(numberOf(xs, Math.round(h.x_mm / LINE_TOLERANCE_MM)));
+      this.#row.push(numberOf(ys, Math.round(h.y_mm / LINE_TOLERANCE_MM)));
+    }
+    this.#columns = xs.length;
+    for (let k = 0; k < xs.length * ys.length; k++) this.#occupied.push(false);
+    let cellsHeld = 0;
+    for (let i = 0; i < holes.length; i++) {
+      const cell = this.#row[i]! * this.#columns + this.#column[i]!;
+      if (!this.#occupied[cell]) cellsHeld++;
+      this.#occupied[cell] = true;
+    }
+    this.full = cellsHeld === this.#occupied.length;
+  }
+  /**
+   * Two holes of the plate staggered against each other: on different gauge lines and transverse
+   * lines, with no hole of the plate at the other corners of their rectangle (a grid's diagonal is not
+   * a stagger).
+   */
+  staggered(a: Hole, b: Hole): boolean {
+    if (this.full) return false;
+    const i = this.#holes.indexOf(a);
+    const j = this.#holes.indexOf(b);
+    return !this.#occupied[this.#row[j]! * this.#columns + this.#column[i]!] && !this.#occupied[this.#row[i]! * this.#columns + this.#column[j]!];
+  }
+}
+
+/** The number of a grid line in a list of them, the line added when new. */
+function numberOf(lines: number[], key: number): number {
+  const k = lines.indexOf(key);
+  if (k >= 0) return k;
+  lines.push(key);
+  return lines.length - 1;
 }
 
 /**
@@ -107,35 +168,43 @@ export function minSpacingRules(joint: Joint): RuleCheck[] {
   let gauge: Worst | null = null;
   let staggerGauge: Worst | null = null;
   let staggerDistance: Worst | null = null;
-  const occupiedBy = new Map<PlatePiece, OccupiedCells>();
+  let occupiedPlate: PlatePiece | null = null;
+  let occupied: OccupiedCells | null = null;
   forEachHolePair(joint, (plate, a, b, holes) => {
-    const d0 = Math.max(holeWidth(a), holeWidth(b));
     const dx = Math.abs(a.x_mm - b.x_mm);
     const dy = Math.abs(a.y_mm - b.y_mm);
     if (dy <= LINE_TOLERANCE_MM) {
+      const d0 = Math.max(holeWidth(a), holeWidth(b));
       if (beatsWorst(pitch, dx, 2.2 * d0, "min")) pitch = pairWorst(plate, a, b, false, "p1", dx, 2.2, d0);
     } else if (dx <= LINE_TOLERANCE_MM) {
+      const d0 = Math.max(holeWidth(a), holeWidth(b));
       if (beatsWorst(gauge, dy, 2.4 * d0, "min")) gauge = pairWorst(plate, a, b, false, "p2", dy, 2.4, d0);
     } else {
-      // Whether the pair is a stagger is asked only when it could govern one of the two stagger rules:
-      // its gauge, or its distance L (certainly not when L is beyond the distance that would tie the worst).
+      // The plate's grid, made at its first pair off the lines (the pairs come plate by plate).
+      if (plate !== occupiedPlate) {
+        occupiedPlate = plate;
+        occupied = new OccupiedCells(holes);
+      }
+      // A full grid has no stagger. Otherwise whether the pair is a stagger is asked only when it could
+      // govern one of the two stagger rules: its gauge, or its distance L (certainly not when L is beyond
+      // the distance that would tie the worst).
+      if (occupied!.full) return;
+      const d0 = Math.max(holeWidth(a), holeWidth(b));
       const gaugeMayGovern = beatsWorst(staggerGauge, dy, 1.2 * d0, "min");
       const distanceMayGovern = staggerDistance === null || !fartherThan(a, b, (2.4 * d0 * (staggerDistance as Worst).value) / (staggerDistance as Worst).limit);
       if (!gaugeMayGovern && !distanceMayGovern) return;
-      let occupied = occupiedBy.get(plate);
-      if (!occupied) occupiedBy.set(plate, (occupied = new OccupiedCells(holes)));
-      if (!staggeredPair(occupied, a, b)) return;
+      if (!occupied!.staggered(a, b)) return;
       const L = distance(a, b);
       if (beatsWorst(staggerGauge, dy, 1.2 * d0, "min")) staggerGauge = pairWorst(plate, a, b, true, "p2", dy, 1.2, d0);
       if (beatsWorst(staggerDistance, L, 2.4 * d0, "min")) staggerDistance = pairWorst(plate, a, b, true, "L", L, 2.4, d0);
     }
   });
-  const citation = cl("3.5", { table: "Table 3.3" });
+  const citation = TABLE_3_3;
   return [
     ...worstRule("min-pitch", "min-spacing", "Minimum spacing along the force", citation, "p1 ≥ 2.2 d0", "min", pitch),
     ...worstRule("min-gauge", "min-spacing", "Minimum spacing across the force", citation, "p2 ≥ 2.4 d0", "min", gauge),
-    ...worstRule("min-stagger-gauge", "min-spacing", "Minimum line spacing, staggered", cl("3.5", { table: "Table 3.3, note 5" }), "p2 ≥ 1.2 d0 (with L ≥ 2.4 d0)", "min", staggerGauge),
-    ...worstRule("min-stagger-distance", "min-spacing", "Minimum distance between staggered holes", cl("3.5", { table: "Table 3.3, note 5" }), "L ≥ 2.4 d0", "min", staggerDistance),
+    ...worstRule("min-stagger-gauge", "min-spacing", "Minimum line spacing, staggered", TABLE_3_3_NOTE_5, "p2 ≥ 1.2 d0 (with L ≥ 2.4 d0)", "min", staggerGauge),
+    ...worstRule("min-stagger-distance", "min-spacing", "Minimum distance between staggered holes", TABLE_3_3_NOTE_5, "L ≥ 2.4 d0", "min", staggerDistance),
   ];
 }
 
@@ -191,7 +260,7 @@ export function maxRules(joint: Joint, scenario: CheckableScenario): RuleCheck[]
       }
     }
   }
-  const citation = cl("3.5", { table: "Table 3.3, exposed to corrosion" });
+  const citation = TABLE_3_3_EXPOSED;
   return [
     ...worstRule("max-edge-distance", "max-edge-distance", "Maximum end and edge distance (exposed)", citation, "e1, e2 ≤ 4t + 40 mm", "max", edges),
     ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on outer gauge lines (exposed)", citation, "p1,0 ≤ min(14t, 200 mm)", "max", outer),
@@ -202,5 +271,5 @@ export function maxRules(joint: Joint, scenario: CheckableScenario): RuleCheck[]
 
 /** The bolt group on the plate axis: the concentric group every EN 1993-1-8 check here assumes. */
 export function centroidRule(joint: Joint): RuleCheck[] {
-  return groupCentroidRule(joint, { standard: "general", clause: "concentric bolt group, assumed by EN 1993-1-8 3.7, 3.10.2(2) and EN 1993-1-1 6.2.3" });
+  return groupCentroidRule(joint, CONCENTRIC_GROUP);
 }
