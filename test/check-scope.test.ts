@@ -1,9 +1,10 @@
 /**
  * The compression sense reads the bolt-group checks alone from the joint with its bearing directions
- * reversed (DesignCode.checkJoint with scope "bolts", engine/senses.ts). That scope must give exactly the
- * slip, bolt-shear and bearing checks of the full check, in its order, with the same numbers and text,
- * on every generated scenario of the golden record (invented data) in all three codes, as built and
- * with its bearing directions reversed.
+ * reversed (DesignCode.checkJoint with scope "bolts"), and a splice in compression alone reads the
+ * layout's rules alone from the joint as built (scope "layout"; engine/senses.ts). Each scope must give
+ * exactly those checks of the full check, in its order, with the same numbers and text ("layout" also
+ * its warnings and conventions), on every generated scenario of the golden record (invented data) in
+ * all three codes, as built and with its bearing directions reversed.
  */
 import { describe, expect, it } from "vitest";
 import { compressionJoint } from "../src/engine/senses.js";
@@ -15,7 +16,7 @@ import { generatedScenarios } from "./helpers/golden-record.js";
 const BOLT_KINDS = new Set(["slip", "bolt-shear", "bolt-bearing"]);
 const view = (c: CheckResult) => ({ ...c, substituted: c.substituted, notes: c.notes });
 
-describe("checkJoint scope 'bolts' = the bolt-group checks of scope 'all'", () => {
+describe("checkJoint scopes 'bolts' and 'layout' = those checks of scope 'all'", () => {
   const cases = generatedScenarios().flatMap(({ name, yaml }) => {
     try {
       const { scenario, code } = parseScenario(yaml);
@@ -36,6 +37,12 @@ describe("checkJoint scope 'bolts' = the bolt-group checks of scope 'all'", () =
         expect(bolts.checks.length).toBeGreaterThan(0);
         expect(bolts.checks.map(view)).toEqual(all.map(view));
         expect(bolts.warnings).toEqual([]);
+        const full = code.checkJoint(joint, scenario);
+        const layout = code.checkJoint(joint, scenario, "layout");
+        expect(layout.checks.length).toBeGreaterThan(0);
+        expect(layout.checks.map(view)).toEqual(full.checks.filter((c) => c.type === "rule").map(view));
+        expect(layout.warnings).toEqual(full.warnings);
+        expect(layout.conventions).toEqual(full.conventions);
       }
     });
   }

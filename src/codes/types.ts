@@ -120,7 +120,7 @@ export interface CompressionChecks {
 }
 
 /** Which of a code's checks of a joint to make (DesignCode.checkJoint). */
-export type CheckScope = "all" | "bolts";
+export type CheckScope = "all" | "bolts" | "layout";
 
 export interface DesignCode extends GeometryCode {
   id: string;
@@ -132,10 +132,12 @@ export interface DesignCode extends GeometryCode {
   /** Inputs this code cannot check (grade unknown to it, a bolt class not allowed for friction grip...). */
   scopeErrors(scenario: Scenario): ScopeError[];
   /**
-   * Run the checks on the joint's geometry: every check ("all", the default), or the bolt-group checks
+   * Run the checks on the joint's geometry: every check ("all", the default); the bolt-group checks
    * alone ("bolts": slip, bolt shear and bearing, made by the same functions and in the same order as in
    * "all"; no warnings or conventions), which is all the compression sense of the load reads from the
-   * joint with its bearing directions reversed (engine/senses.ts).
+   * joint with its bearing directions reversed; or the layout's rules alone ("layout": the rule checks
+   * of "all" in its order, with its warnings and conventions), which is all a splice in compression alone
+   * reads from the check of the joint as built (engine/senses.ts).
    */
   checkJoint(joint: Joint, scenario: CheckableScenario, scope?: CheckScope): CodeChecks;
   /**

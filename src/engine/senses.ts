@@ -73,7 +73,7 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
   const checks: CheckResult[] = [];
   const warnings: CodeChecks["warnings"] = [];
   // Tension, or (compression only) the rules of the layout, which hold whatever the sense.
-  const base = code.checkJoint(joint, reversal ? scenario : asLoad(scenario, C, scenario.load.serviceCompression_N));
+  const base = reversal ? code.checkJoint(joint, scenario) : code.checkJoint(joint, asLoad(scenario, C, scenario.load.serviceCompression_N), "layout");
   for (const c of base.checks) {
     if (c.type === "rule") checks.push(c);
     else if (reversal) checks.push(labelled(c, "tension", 1, true));

@@ -68,26 +68,13 @@ function pushAll(checks: CheckResult[], results: readonly CheckResult[]): void {
 }
 
 function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
-  const checks: CheckResult[] = [];
   const shears = mapped(joint.groups, (g) => groupShear(joint, scenario, g));
   const slipCritical = scenario.bolts.assembly === "friction-grip";
-  for (const gs of shears) {
-    if (slipCritical) checks.push(slipCheck(joint, scenario, gs));
-    checks.push(boltShearCheck(joint, scenario, gs));
-  }
-  for (const plate of joint.plates) {
-    if (plate.role === "packing") continue;
-    for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shearOf(shears, c.group)));
-  }
-  if (scope === "bolts") return boltChecksOnly(checks);
-  for (const plate of joint.plates) {
-    if (plate.role === "packing") continue;
-    checks.push(grossYieldCheck(scenario, plate));
-    checks.push(netSectionCheck(joint, scenario, plate));
-    for (const c of plate.connections) {
-      const block = blockShearCheck(joint, scenario, plate, c);
-      if (block) checks.push(block);
-    }
+  if (scope === "bolts") return boltChecksOnly(boltGroupChecks(joint, scenario, shears));
+  const checks: CheckResult[] = [];
+  if (scope === "all") {
+    pushAll(checks, boltGroupChecks(joint, scenario, shears));
+    pushAll(checks, plateChecks(joint, scenario));
   }
   // J3.3's minimum spacing and its preferred 3 d come from one walk over the hole pairs.
   const spacing = spacingRuleAndWarning(joint, scenario);
@@ -104,6 +91,36 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
   }
   if (spacing.warning) warnings.push(spacing.warning);
   return codeChecks(checks, warnings, () => conventionsOf(joint, scenario, bolt, slipCritical));
+}
+
+/** The bolt-group checks: slip (slip-critical bolts, J3.8) and bolt shear per group (J3.6); shear, bearing and tearout per plate and group (J3.10). */
+function boltGroupChecks(joint: Joint, scenario: CheckableScenario, shears: readonly GroupShear[]): CheckResult[] {
+  const checks: CheckResult[] = [];
+  const slipCritical = scenario.bolts.assembly === "friction-grip";
+  for (const gs of shears) {
+    if (slipCritical) checks.push(slipCheck(joint, scenario, gs));
+    checks.push(boltShearCheck(joint, scenario, gs));
+  }
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
+    for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shearOf(shears, c.group)));
+  }
+  return checks;
+}
+
+/** The plate checks per loaded plate: gross yield (D2(a), J4.1(a)), net-section rupture (D2(b), J4.1(b)), block shear per group (J4.3). */
+function plateChecks(joint: Joint, scenario: CheckableScenario): CheckResult[] {
+  const checks: CheckResult[] = [];
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
+    checks.push(grossYieldCheck(scenario, plate));
+    checks.push(netSectionCheck(joint, scenario, plate));
+    for (const c of plate.connections) {
+      const block = blockShearCheck(joint, scenario, plate, c);
+      if (block) checks.push(block);
+    }
+  }
+  return checks;
 }
 
 /** The conventions of an AISC 360 check in words (written when an output reads them). */

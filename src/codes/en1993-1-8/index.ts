@@ -7,7 +7,7 @@
 import { BOLT_SIZES_MM, PROPERTY_CLASSES } from "../../catalogue/bolts.js";
 import { mapped } from "../../model/lists.js";
 import { en10025Grade, EN10025_NAMES, EN10025_THICKNESS_RANGE } from "../../catalogue/steels.js";
-import type { Joint } from "../../model/joint.js";
+import type { Joint, PlatePiece } from "../../model/joint.js";
 import type { CheckResult, Warning } from "../../model/results.js";
 import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
 import { unperforatedOnBasis, type UnperforatedTerms } from "../efficiency.js";
@@ -130,6 +130,38 @@ function conventionsOf(scenario: CheckableScenario, s: Ec3Settings, smallHoles: 
 }
 
 /** The group of the given id (every connection's group is one of the joint's). */
+/**
+ * The bolt-group checks: slip (Categories B and C, 3.9.1) and bolt shear (Categories A and B, 3.6.1,
+ * Table 3.4) per group, with the small-hole condition (3.6.1(5)) where it applies; bearing per plate and
+ * group (3.7, Table 3.4).
+ */
+function boltGroupChecks(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, groups: readonly Ec3Group[], loaded: readonly PlatePiece[], measures: JointMeasures): CheckResult[] {
+  const checks: CheckResult[] = [];
+  for (const g of groups) {
+    if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));
+    if (s.category !== "C") checks.push(boltShearCheck(joint, scenario, s, g));
+    if (g.inSmallHoles) checks.push(smallHoleConditionCheck(joint, scenario, s, g, measures));
+  }
+  for (const plate of loaded) {
+    for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groupFor(groups, c.group), measures));
+  }
+  return checks;
+}
+
+/** The plate checks per loaded plate: gross yield and net section (EN 1993-1-1 6.2.3(2), 6.2.3(4) in Category C), block tearing per group (3.10.2(2)). */
+function plateChecks(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, loaded: readonly PlatePiece[], measures: JointMeasures): CheckResult[] {
+  const checks: CheckResult[] = [];
+  for (const plate of loaded) {
+    checks.push(grossYieldCheck(scenario, s, plate));
+    checks.push(netSectionCheck(joint, scenario, s, plate));
+    for (const c of plate.connections) {
+      const block = blockTearingCheck(joint, scenario, s, plate, c, measures);
+      if (block) checks.push(block);
+    }
+  }
+  return checks;
+}
+
 function groupFor(groups: readonly Ec3Group[], id: Ec3Group["group"]["id"]): Ec3Group {
   for (const g of groups) if (g.group.id === id) return g;
   throw new RangeError(`no bolt group ${id}`);
@@ -164,34 +196,19 @@ function boundCode(bound: Ec3Settings): DesignCode {
 
   function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
     const s = settingsFor(scenario);
-    const checks: CheckResult[] = [];
     const groups = mapped(joint.groups, (g) => groupOf(joint, scenario, s, g));
     const measures = new JointMeasures(scenario, s);
-    let smallHoles = false;
-    for (const g of groups) {
-      if (s.category !== "A") checks.push(slipCheck(joint, scenario, s, g));
-      if (s.category !== "C") checks.push(boltShearCheck(joint, scenario, s, g));
-      if (g.inSmallHoles) {
-        smallHoles = true;
-        checks.push(smallHoleConditionCheck(joint, scenario, s, g, measures));
-      }
-    }
     const loaded = joint.plates.filter((p) => p.role !== "packing");
-    for (const plate of loaded) {
-      for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, s, plate, c, groupFor(groups, c.group), measures));
-    }
-    if (scope === "bolts") return boltChecksOnly(checks);
-    for (const plate of loaded) {
-      checks.push(grossYieldCheck(scenario, s, plate));
-      checks.push(netSectionCheck(joint, scenario, s, plate));
-      for (const c of plate.connections) {
-        const block = blockTearingCheck(joint, scenario, s, plate, c, measures);
-        if (block) checks.push(block);
-      }
+    if (scope === "bolts") return boltChecksOnly(boltGroupChecks(joint, scenario, s, groups, loaded, measures));
+    const checks: CheckResult[] = [];
+    if (scope === "all") {
+      for (const c of boltGroupChecks(joint, scenario, s, groups, loaded, measures)) checks.push(c);
+      for (const c of plateChecks(joint, scenario, s, loaded, measures)) checks.push(c);
     }
     for (const rules of [minSpacingRules(joint), minEndEdgeRules(joint), maxRules(joint, scenario), centroidRule(joint)]) {
       for (const r of rules) checks.push(r);
     }
+    const smallHoles = groups.some((g) => g.inSmallHoles);
     return codeChecks(checks, warningsOf(joint, s, groups), () => conventionsOf(scenario, s, smallHoles));
   }
 

@@ -5,7 +5,7 @@ import { ownEntry } from "../../catalogue/lookup.js";
 import { mapped } from "../../model/lists.js";
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
-import type { Joint } from "../../model/joint.js";
+import type { Joint, PlatePiece } from "../../model/joint.js";
 import type { CheckResult, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
 import { unperforatedOnBasis } from "../efficiency.js";
@@ -28,9 +28,10 @@ import {
   netSectionCheck,
   slipCheck,
   TearOuts,
+  type GroupFactors,
 } from "./joint-checks.js";
 import { GRADES, plateStrength } from "./materials.js";
-import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule, spacingLayout } from "./spacing.js";
+import { centroidRule, edgeRules, gripRule, maxSpacingRules, minSpacingRule, spacingLayout, type SpacingLayout } from "./spacing.js";
 import { Tdg, Tdn } from "./tension-member.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
 import { IS800_COMPRESSION } from "./compression-splice.js";
@@ -69,31 +70,14 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
 }
 
 function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {
-  const checks: CheckResult[] = [];
   const gfs = mapped(joint.groups, (g) => groupFactors(joint, g));
-  const friction = scenario.bolts.assembly === "friction-grip";
-  // Friction-grip bolts are checked in bolt shear and bearing at the factored load whatever the slip
-  // design: no clause is relied on to waive them (from memory; the reading that refuses more).
-  for (const gf of gfs) {
-    if (friction) checks.push(slipCheck(joint, scenario, gf));
-    checks.push(boltShearCheck(joint, scenario, gf));
-  }
-  // The plates that carry load (every plate but packing), with their holes, measured once for every
-  // check below (the bolt checks alone need only the plates).
-  const layout = scope === "bolts" ? null : spacingLayout(joint);
-  const loaded = layout ? layout.plates : holePlates(joint);
-  const tearOuts = new TearOuts(joint);
-  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c, tearOuts));
-  if (!layout) return boltChecksOnly(checks);
-  const shapesOf = new BlockShapesOf(joint);
-  for (let k = 0; k < loaded.length; k++) {
-    const plate = loaded[k]!;
-    checks.push(grossYieldCheck(scenario, plate));
-    checks.push(netSectionCheck(joint, scenario, plate, layout.holesOf[k]));
-    for (const c of plate.connections) {
-      const block = blockShearCheck(joint, scenario, plate, c, shapesOf);
-      if (block) checks.push(block);
-    }
+  if (scope === "bolts") return boltChecksOnly(boltGroupChecks(joint, scenario, gfs, holePlates(joint)));
+  // The plates that carry load (every plate but packing), with their holes, measured once for every check below.
+  const layout = spacingLayout(joint);
+  const checks: CheckResult[] = [];
+  if (scope === "all") {
+    pushAll(checks, boltGroupChecks(joint, scenario, gfs, layout.plates));
+    pushAll(checks, plateChecks(joint, scenario, layout));
   }
   pushAll(checks, minSpacingRule(joint));
   pushAll(checks, maxSpacingRules(joint, layout));
@@ -102,6 +86,40 @@ function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope
   pushAll(checks, centroidRule(joint));
 
   return codeChecks(checks, factorWarnings(joint, gfs), () => conventionsOf(scenario));
+}
+
+/**
+ * The bolt-group checks: slip (friction-grip bolts) and bolt shear per group, cl. 10.4.3, 10.3.3; bearing
+ * per plate and group, cl. 10.3.4.
+ */
+function boltGroupChecks(joint: Joint, scenario: CheckableScenario, gfs: readonly GroupFactors[], loaded: readonly PlatePiece[]): CheckResult[] {
+  const checks: CheckResult[] = [];
+  const friction = scenario.bolts.assembly === "friction-grip";
+  // Friction-grip bolts are checked in bolt shear and bearing at the factored load whatever the slip
+  // design: no clause is relied on to waive them (from memory; the reading that refuses more).
+  for (const gf of gfs) {
+    if (friction) checks.push(slipCheck(joint, scenario, gf));
+    checks.push(boltShearCheck(joint, scenario, gf));
+  }
+  const tearOuts = new TearOuts(joint);
+  for (const plate of loaded) for (const c of plate.connections) checks.push(bearingCheck(joint, scenario, plate, c, tearOuts));
+  return checks;
+}
+
+/** The plate checks per loaded plate: gross yield (cl. 6.2), net-section rupture (cl. 6.3.1), block shear per group (cl. 6.4.1). */
+function plateChecks(joint: Joint, scenario: CheckableScenario, layout: SpacingLayout): CheckResult[] {
+  const checks: CheckResult[] = [];
+  const shapesOf = new BlockShapesOf(joint);
+  for (let k = 0; k < layout.plates.length; k++) {
+    const plate = layout.plates[k]!;
+    checks.push(grossYieldCheck(scenario, plate));
+    checks.push(netSectionCheck(joint, scenario, plate, layout.holesOf[k]));
+    for (const c of plate.connections) {
+      const block = blockShearCheck(joint, scenario, plate, c, shapesOf);
+      if (block) checks.push(block);
+    }
+  }
+  return checks;
 }
 
 /** Appends each of `more` to `list` (no spread into arguments). */
