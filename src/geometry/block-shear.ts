@@ -177,13 +177,11 @@ const RECENT_SHAPES = 6;
 
 /** The holes in the local frame of one plate end, flat: u, y, across, along of each hole in turn. */
 function localFrame(holes: readonly Hole[], connection: PlateConnection): number[] {
-  const local: number[] = new Array(4 * holes.length);
+  // Built by push, a packed list of numbers (a list made at its length is holey, slower to read).
+  const local: number[] = [];
   for (let k = 0; k < holes.length; k++) {
     const h = holes[k]!;
-    local[4 * k] = connection.towardEnd * (connection.endX_mm - h.x_mm);
-    local[4 * k + 1] = h.y_mm;
-    local[4 * k + 2] = h.across_mm;
-    local[4 * k + 3] = h.along_mm;
+    local.push(connection.towardEnd * (connection.endX_mm - h.x_mm), h.y_mm, h.across_mm, h.along_mm);
   }
   return local;
 }
