@@ -55,19 +55,20 @@ export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: P
   const required = filter.required ?? 0;
   const masks = required === 0 && !tagOf ? 1 : 4;
   const n = sorted.length;
+  // The filter's functions are all called here, before the walk writes the module's lists.
+  const tags: number[] | null = masks === 1 ? null : [];
+  if (tags) for (const h of sorted) tags.push(tagOf ? tagOf(h) & 3 : 0);
   // best[j * masks + m]: least partial width from the lower edge to hole j having collected tags m.
-  // Scratch lists of this module, written afresh for each path (a search makes thousands of paths).
+  // Lists of this module, written afresh for each path (a search makes thousands of paths).
   const best = bestScratch;
   const previous = previousScratch;
   for (let k = 0; k < n * masks; k++) {
     best[k] = Infinity;
     previous[k] = -1;
   }
-  const tags = tagScratch;
-  for (let j = 0; j < n; j++) tags[j] = masks === 1 || !tagOf ? 0 : tagOf(sorted[j]!) & 3;
   for (let j = 0; j < n; j++) {
     const hj = sorted[j]!;
-    const tj = tags[j]!;
+    const tj = tags ? tags[j]! : 0;
     const fromEdge = hj.y_mm + half - hj.across_mm;
     if (fromEdge < best[j * masks + tj]!) best[j * masks + tj] = fromEdge;
     for (let i = 0; i < j; i++) {
@@ -114,7 +115,6 @@ const NO_FILTER: PathFilter = Object.freeze({});
  */
 const bestScratch: number[] = [];
 const previousScratch: number[] = [];
-const tagScratch: number[] = [];
 
 /** Net width of a given path (holes in order of rising y). */
 export function describePath(path: readonly Hole[], width_mm: number): NetPath {
