@@ -27,18 +27,20 @@ function compressionPitchWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, t
 export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => { limit_mm: number; text: () => string }): Worst | null {
   let worst: Worst | null = null;
   const thinner = new PairThickness(joint);
-  let linesFrom: readonly Hole[] | null = null;
-  let lines: Line[] = [];
+  const measuredHoles: (readonly Hole[])[] = [];
+  const measuredLines: Line[][] = [];
   let limitT = NaN;
   let limit = { limit_mm: NaN, text: NO_TEXT };
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
     const holes = platesHoles(joint, plate);
-    if (holes !== linesFrom) {
-      lines = gaugeLines(holes);
-      linesFrom = holes;
+    let m = measuredHoles.indexOf(holes);
+    if (m < 0) {
+      m = measuredHoles.length;
+      measuredHoles.push(holes);
+      measuredLines.push(gaugeLines(holes));
     }
-    for (const line of lines) {
+    for (const line of measuredLines[m]!) {
       for (let k = 1; k < line.holes.length; k++) {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
