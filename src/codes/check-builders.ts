@@ -32,20 +32,34 @@ class StrengthResult extends LazyText implements StrengthCheck {
   loadRatio: number;
   utilisation: number;
   pass: boolean;
-  constructor(p: StrengthInput) {
-    super(p.substituted, p.notes ?? NO_NOTES);
-    this.id = p.id;
-    this.kind = p.kind;
-    this.title = p.title;
-    this.component = p.component;
-    this.citation = p.citation;
-    this.formula = p.formula;
-    this.limitState = p.limitState;
-    if (p.sense !== undefined) this.sense = p.sense;
-    this.demand_N = p.demand_N;
-    this.resistance_N = p.resistance_N;
-    this.loadRatio = p.loadRatio;
-    this.utilisation = utilisation(p.demand_N, p.resistance_N);
+  constructor(
+    id: string,
+    kind: StrengthCheck["kind"],
+    title: string,
+    component: string,
+    citation: Citation,
+    formula: string,
+    limitState: StrengthCheck["limitState"],
+    sense: "tension" | "compression" | undefined,
+    demand_N: number,
+    resistance_N: number,
+    loadRatio: number,
+    substituted: () => string,
+    notes: () => string[],
+  ) {
+    super(substituted, notes);
+    this.id = id;
+    this.kind = kind;
+    this.title = title;
+    this.component = component;
+    this.citation = citation;
+    this.formula = formula;
+    this.limitState = limitState;
+    if (sense !== undefined) this.sense = sense;
+    this.demand_N = demand_N;
+    this.resistance_N = resistance_N;
+    this.loadRatio = loadRatio;
+    this.utilisation = utilisation(demand_N, resistance_N);
     this.pass = this.utilisation <= 1 + 1e-9;
   }
 }
@@ -65,20 +79,33 @@ class RuleResult extends LazyText implements RuleCheck {
   declare sense?: "tension" | "compression";
   utilisation: number;
   pass: boolean;
-  constructor(r: RuleInput) {
-    super(r.substituted, r.notes ?? NO_NOTES);
-    this.id = r.id;
-    this.kind = r.kind;
-    this.title = r.title;
-    this.component = r.component;
-    this.citation = r.citation;
-    this.formula = r.formula;
-    this.value_mm = r.value_mm;
-    this.limit_mm = r.limit_mm;
-    this.bound = r.bound;
-    if (r.sense !== undefined) this.sense = r.sense;
-    this.utilisation = r.bound === "max" ? r.value_mm / r.limit_mm : r.value_mm > 0 ? r.limit_mm / r.value_mm : Infinity;
-    this.pass = r.bound === "max" ? r.value_mm <= r.limit_mm + 1e-9 : r.value_mm >= r.limit_mm - 1e-9;
+  constructor(
+    id: string,
+    kind: RuleCheck["kind"],
+    title: string,
+    component: string,
+    citation: Citation,
+    formula: string,
+    value_mm: number,
+    limit_mm: number,
+    bound: RuleCheck["bound"],
+    sense: "tension" | "compression" | undefined,
+    substituted: () => string,
+    notes: () => string[],
+  ) {
+    super(substituted, notes);
+    this.id = id;
+    this.kind = kind;
+    this.title = title;
+    this.component = component;
+    this.citation = citation;
+    this.formula = formula;
+    this.value_mm = value_mm;
+    this.limit_mm = limit_mm;
+    this.bound = bound;
+    if (sense !== undefined) this.sense = sense;
+    this.utilisation = bound === "max" ? value_mm / limit_mm : value_mm > 0 ? limit_mm / value_mm : Infinity;
+    this.pass = bound === "max" ? value_mm <= limit_mm + 1e-9 : value_mm >= limit_mm - 1e-9;
   }
 }
 
@@ -86,13 +113,23 @@ class RuleResult extends LazyText implements RuleCheck {
  * A strength check result. The substituted-values text and the notes are written only when read, from
  * the same numbers.
  */
-export function strength(partial: StrengthInput): StrengthCheck {
-  return new StrengthResult(partial);
+export function strength(p: StrengthInput): StrengthCheck {
+  return new StrengthResult(p.id, p.kind, p.title, p.component, p.citation, p.formula, p.limitState, p.sense, p.demand_N, p.resistance_N, p.loadRatio, p.substituted, p.notes ?? NO_NOTES);
 }
 
 /** A rule check result: a measured length against a limit, with the bound saying which way it binds. */
 export function rule(r: RuleInput): RuleCheck {
-  return new RuleResult(r);
+  return new RuleResult(r.id, r.kind, r.title, r.component, r.citation, r.formula, r.value_mm, r.limit_mm, r.bound, r.sense, r.substituted, r.notes ?? NO_NOTES);
+}
+
+/**
+ * A check's result for one sense of the load (engine/senses.ts): a new result of the same shape with
+ * another id, title and sense, a strength check's load ratio multiplied by `scale`, the same demand,
+ * resistance, measured value and limit, and its text and notes from the given closures.
+ */
+export function relabelled(c: CheckResult, id: string, title: string, sense: "tension" | "compression", scale: number, substituted: () => string, notes: () => string[]): CheckResult {
+  if (c.type === "strength") return new StrengthResult(id, c.kind, title, c.component, c.citation, c.formula, c.limitState, sense, c.demand_N, c.resistance_N, c.loadRatio * scale, substituted, notes);
+  return new RuleResult(id, c.kind, title, c.component, c.citation, c.formula, c.value_mm, c.limit_mm, c.bound, sense, substituted, notes);
 }
 
 /** A code's checks of one joint, with the statements of its conventions written on first read. */

@@ -4,10 +4,10 @@
  * force each plate carries in compression.
  */
 import { groupHoles } from "../geometry/joint-builder.js";
-import { gaugeLines, transverseLines } from "../geometry/lines.js";
-import type { Hole, Joint, PlatePiece } from "../model/joint.js";
+import { gaugeLines, transverseLines, type Line } from "../geometry/lines.js";
+import type { GroupId, Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
-import { beatsWorst, holePlates, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
+import { beatsWorst, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
 
 /** Effective length factor of a cover plate strut held by bolts at both ends: fixed-fixed, 0.65 (common practice). */
 export const COVER_STRUT_K = 0.65;
@@ -20,22 +20,62 @@ function compressionPitchWorst(plate: PlatePiece, a: Hole, b: Hole, s: number, t
 /**
  * The worst pitch along the force against a limit that depends on the thinner plate of the pair.
  * Pairs are consecutive holes of one gauge line in one plate (across the butt too, on the covers).
+ * Within one call, plates with the same hole list (both covers of a butt splice) read one set of gauge
+ * lines, the thinner plate is found once per pair of groups, and `limitOf` is asked once per thickness
+ * (it is a function of t alone).
  */
 export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => { limit_mm: number; text: () => string }): Worst | null {
   let worst: Worst | null = null;
-  for (const plate of holePlates(joint)) {
-    for (const line of gaugeLines(platesHoles(joint, plate))) {
+  const thinner = new PairThickness(joint);
+  const measuredHoles: (readonly Hole[])[] = [];
+  const measuredLines: Line[][] = [];
+  let limitT = NaN;
+  let limit = { limit_mm: NaN, text: NO_TEXT };
+  for (const plate of joint.plates) {
+    if (plate.role === "packing") continue;
+    const holes = platesHoles(joint, plate);
+    let m = measuredHoles.indexOf(holes);
+    if (m < 0) {
+      m = measuredHoles.length;
+      measuredHoles.push(holes);
+      measuredLines.push(gaugeLines(holes));
+    }
+    for (const line of measuredLines[m]!) {
       for (let k = 1; k < line.holes.length; k++) {
         const a = line.holes[k - 1]!;
         const b = line.holes[k]!;
         const s = b.x_mm - a.x_mm;
-        const t = pairThickness(joint, a, b);
-        const { limit_mm, text } = limitOf(t);
-        if (beatsWorst(worst, s, limit_mm, "max")) worst = compressionPitchWorst(plate, a, b, s, t, limit_mm, text);
+        const t = thinner.of(a, b);
+        if (t !== limitT) {
+          limit = limitOf(t);
+          limitT = t;
+        }
+        if (beatsWorst(worst, s, limit.limit_mm, "max")) worst = compressionPitchWorst(plate, a, b, s, t, limit.limit_mm, limit.text);
       }
     }
   }
   return worst;
+}
+
+const NO_TEXT = (): string => "";
+
+/**
+ * pairThickness of one joint, measured once per pair of groups: it reads only the holes' groups (the
+ * thinner plate that both groups' holes pass through).
+ */
+class PairThickness {
+  readonly #groupA: GroupId[] = [];
+  readonly #groupB: GroupId[] = [];
+  readonly #thickness: number[] = [];
+  constructor(private readonly joint: Joint) {}
+  of(a: Hole, b: Hole): number {
+    for (let k = 0; k < this.#thickness.length; k++) if (this.#groupA[k] === a.group && this.#groupB[k] === b.group) return this.#thickness[k]!;
+    const t = pairThickness(this.joint, a, b);
+    this.#groupA.push(a.group);
+    this.#groupB.push(b.group);
+    this.#thickness.push(t);
+    return t;
+  }
 }
 
 /** The largest pitch along the force between consecutive holes of one group in a plate, mm (0: one line). */
@@ -56,9 +96,11 @@ export function largestPitch_mm(joint: Joint, plate: PlatePiece): number {
  * B (2 × end distance at the butt + gap for patterns mirrored about the butt), mm.
  */
 export function coverStrutLength_mm(joint: Joint): number {
-  const a = groupHoles(joint, "A").map((h) => h.x_mm);
-  const b = groupHoles(joint, "B").map((h) => h.x_mm);
-  return Math.min(...b) - Math.max(...a);
+  let innermostA = -Infinity;
+  for (const h of groupHoles(joint, "A")) innermostA = Math.max(innermostA, h.x_mm);
+  let innermostB = Infinity;
+  for (const h of groupHoles(joint, "B")) innermostB = Math.min(innermostB, h.x_mm);
+  return innermostB - innermostA;
 }
 
 /**

@@ -10,7 +10,7 @@ import type { Joint, PlateConnection, PlatePiece } from "../model/joint.js";
 import { withConnections, withPlates } from "../geometry/joint-builder.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
 import type { CheckResult } from "../model/results.js";
-import { codeChecks, rule, strength } from "../codes/check-builders.js";
+import { codeChecks, relabelled } from "../codes/check-builders.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
 /** Kinds of the code's own checks that apply in compression too, with the bearing directions reversed. */
@@ -52,12 +52,7 @@ function labelled(c: CheckResult, sense: LoadSense, scale: number, reversal: boo
   // The code's bolt checks name the force they were given T; in compression it is the compression the splice carries.
   const substituted = sense === "compression" ? () => c.substituted.replace(/× T\b/g, `× ${loadSymbol}`) : () => c.substituted;
   const notes = () => c.notes;
-  const { kind, component, citation, formula } = c;
-  if (c.type === "strength") {
-    const { limitState, demand_N, resistance_N } = c;
-    return strength({ id, kind, title, component, citation, formula, limitState, sense, demand_N, resistance_N, loadRatio: c.loadRatio * scale, substituted, notes });
-  }
-  return rule({ id, kind, title, component, citation, formula, sense, value_mm: c.value_mm, limit_mm: c.limit_mm, bound: c.bound, substituted, notes });
+  return relabelled(c, id, title, sense, scale, substituted, notes);
 }
 
 /** Every check of every sense of the scenario's load. */

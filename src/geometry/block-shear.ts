@@ -18,7 +18,6 @@
  */
 import type { Hole, PlateConnection } from "../model/joint.js";
 import { LINE_TOLERANCE_MM } from "./lines.js";
-import { mapped } from "../model/lists.js";
 
 export interface BlockShape {
   description: string;
@@ -33,27 +32,29 @@ export interface BlockShape {
 
 const near = (a: number, b: number) => Math.abs(a - b) <= LINE_TOLERANCE_MM;
 
-interface LocalHole {
-  u: number;
-  y: number;
-  across: number;
-  along: number;
-}
-
 /** Weight of a hole on a plane from p0 to p1 (coordinate t along the plane): 1 inside, ½ at an end, 0 off. */
 function weight(t: number, p0: number, p1: number): number {
   if (near(t, p0) || near(t, p1)) return 0.5;
   return t > p0 && t < p1 ? 1 : 0;
 }
 
-/**
- * Deduction of the holes on a shear plane along gauge line y from u = 0 to u = uLast (net length =
- * uLast − deduction). A hole at u = 0 cannot exist (end distance > 0), so the ½ weight applies only
- * at uLast.
+/*
+ * The holes of one plate end are read from the flat frame (see localFrame): hole k has u = frame[4k],
+ * y = frame[4k + 1], width across = frame[4k + 2] and along = frame[4k + 3]. Its gauge line is
+ * lineOf[k]. Holes off a plane add nothing to its deduction, so only the holes on it are summed, in the
+ * group's order.
  */
-function shearDeduction(holes: readonly LocalHole[], y: number, uLast: number): number {
+
+/**
+ * Deduction of the holes of gauge line `line` (at y) on its shear plane from u = 0 to u = uLast (net
+ * length = uLast − deduction). A hole at u = 0 cannot exist (end distance > 0), so the ½ weight applies
+ * only at uLast.
+ */
+function shearDeduction(frame: readonly number[], lineOf: readonly number[], line: number, y: number, uLast: number): number {
   let deduction = 0;
-  for (const h of holes) if (near(h.y, y)) deduction += weight(h.u, 0, uLast) * h.along;
+  for (let k = 0; k < lineOf.length; k++) {
+    if (lineOf[k] === line && near(frame[4 * k + 1]!, y)) deduction += weight(frame[4 * k]!, 0, uLast) * frame[4 * k + 3]!;
+  }
   return deduction;
 }
 
@@ -61,9 +62,9 @@ function shearDeduction(holes: readonly LocalHole[], y: number, uLast: number): 
  * Deduction of the holes on a tension plane across the force at u = uLast, from y0 to y1 (y0 < y1;
  * either may be a plate edge): net length = (y1 − y0) − deduction.
  */
-function tensionDeduction(holes: readonly LocalHole[], uLast: number, y0: number, y1: number): number {
+function tensionDeduction(frame: readonly number[], uLast: number, y0: number, y1: number): number {
   let deduction = 0;
-  for (const h of holes) if (near(h.u, uLast)) deduction += weight(h.y, y0, y1) * h.across;
+  for (let k = 0; k < frame.length; k += 4) if (near(frame[k]!, uLast)) deduction += weight(frame[k + 1]!, y0, y1) * frame[k + 2]!;
   return deduction;
 }
 
@@ -102,55 +103,62 @@ class Block implements BlockShape {
   }
 }
 
-/** The holes of one gauge line (in the group's order) and the farthest of them from the plate end. */
-interface GaugeLineOfBlock {
-  y: number;
-  holes: LocalHole[];
-  maxU: number;
-}
-
-/** Gauge lines of the local holes, sorted by y (holes within the line tolerance share a line). */
-function blockGaugeLines(local: readonly LocalHole[]): GaugeLineOfBlock[] {
-  const ys = mapped(local, (h) => h.y);
-  // Insertion sort: a group has tens of holes.
-  for (let i = 1; i < ys.length; i++) {
-    const y = ys[i]!;
-    let j = i - 1;
-    while (j >= 0 && ys[j]! > y) {
-      ys[j + 1] = ys[j]!;
-      j--;
+/**
+ * The gauge lines of a frame, sorted by y (holes within the line tolerance share a line, at the least
+ * y of them): each line's y, its bolts and its farthest hole from the plate end; and the line of each
+ * hole (`lineOf`, in the group's order).
+ */
+class BlockGaugeLines {
+  readonly y: number[] = [];
+  readonly bolts: number[] = [];
+  readonly maxU: number[] = [];
+  readonly lineOf: number[] = [];
+  constructor(frame: readonly number[]) {
+    const ys: number[] = [];
+    for (let k = 1; k < frame.length; k += 4) ys.push(frame[k]!);
+    // Insertion sort: a group has tens of holes.
+    for (let i = 1; i < ys.length; i++) {
+      const y = ys[i]!;
+      let j = i - 1;
+      while (j >= 0 && ys[j]! > y) {
+        ys[j + 1] = ys[j]!;
+        j--;
+      }
+      ys[j + 1] = y;
     }
-    ys[j + 1] = y;
+    for (const y of ys) {
+      if (this.y.length === 0 || !near(this.y[this.y.length - 1]!, y)) {
+        this.y.push(y);
+        this.bolts.push(0);
+        this.maxU.push(-Infinity);
+      }
+    }
+    for (let k = 0; k < frame.length; k += 4) {
+      const hy = frame[k + 1]!;
+      let line = 0;
+      while (line < this.y.length && !(hy >= this.y[line]! - LINE_TOLERANCE_MM && hy <= this.y[line]! + LINE_TOLERANCE_MM)) line++;
+      if (line >= this.y.length) throw new RangeError("a hole lies on no gauge line");
+      this.lineOf.push(line);
+      this.bolts[line]!++;
+      this.maxU[line] = Math.max(this.maxU[line]!, frame[k]!);
+    }
   }
-  const lines: GaugeLineOfBlock[] = [];
-  for (const y of ys) if (lines.length === 0 || !near(lines[lines.length - 1]!.y, y)) lines.push({ y, holes: [], maxU: -Infinity });
-  for (const h of local) {
-    let k = 0;
-    while (!(h.y >= lines[k]!.y - LINE_TOLERANCE_MM && h.y <= lines[k]!.y + LINE_TOLERANCE_MM)) k++;
-    const line = lines[k]!;
-    line.holes.push(h);
-    line.maxU = Math.max(line.maxU, h.u);
+  /** Bolts on gauge lines lo … hi. */
+  boltsOn(lo: number, hi: number): number {
+    let bolts = 0;
+    for (let k = lo; k <= hi; k++) bolts += this.bolts[k]!;
+    return bolts;
   }
-  return lines;
-}
-
-/** Bolts on gauge lines lo … hi. */
-function boltsOn(lines: readonly GaugeLineOfBlock[], lo: number, hi: number): number {
-  let bolts = 0;
-  for (let k = lo; k <= hi; k++) bolts += lines[k]!.holes.length;
-  return bolts;
-}
-
-/** The farthest hole of gauge lines lo … hi from the plate end: where the block's tension plane lies. */
-function lastU(lines: readonly GaugeLineOfBlock[], lo: number, hi: number): number {
-  let uLast = -Infinity;
-  for (let k = lo; k <= hi; k++) uLast = Math.max(uLast, lines[k]!.maxU);
-  return uLast;
-}
-
-/** Net length of the shear plane along a gauge line from u = 0 to u = uLast (only that line's holes lie on it). */
-function shearNetOn(line: GaugeLineOfBlock, uLast: number): number {
-  return uLast - shearDeduction(line.holes, line.y, uLast);
+  /** The farthest hole of gauge lines lo … hi from the plate end: where the block's tension plane lies. */
+  lastU(lo: number, hi: number): number {
+    let uLast = -Infinity;
+    for (let k = lo; k <= hi; k++) uLast = Math.max(uLast, this.maxU[k]!);
+    return uLast;
+  }
+  /** Net length of the shear plane along gauge line `line` from u = 0 to u = uLast (only that line's holes lie on it). */
+  shearNetOn(frame: readonly number[], line: number, uLast: number): number {
+    return uLast - shearDeduction(frame, this.lineOf, line, this.y[line]!, uLast);
+  }
 }
 
 /** One measured set of block shapes and what it was measured from. */
@@ -169,13 +177,11 @@ const RECENT_SHAPES = 6;
 
 /** The holes in the local frame of one plate end, flat: u, y, across, along of each hole in turn. */
 function localFrame(holes: readonly Hole[], connection: PlateConnection): number[] {
-  const local: number[] = new Array(4 * holes.length);
+  // Built by push, a packed list of numbers (a list made at its length is holey, slower to read).
+  const local: number[] = [];
   for (let k = 0; k < holes.length; k++) {
     const h = holes[k]!;
-    local[4 * k] = connection.towardEnd * (connection.endX_mm - h.x_mm);
-    local[4 * k + 1] = h.y_mm;
-    local[4 * k + 2] = h.across_mm;
-    local[4 * k + 3] = h.along_mm;
+    local.push(connection.towardEnd * (connection.endX_mm - h.x_mm), h.y_mm, h.across_mm, h.along_mm);
   }
   return local;
 }
@@ -209,10 +215,9 @@ export function blockShapes(holes: readonly Hole[], connection: PlateConnection,
 }
 
 function measureBlockShapes(frame: readonly number[], width_mm: number): BlockShape[] {
-  const local: LocalHole[] = [];
-  for (let k = 0; k < frame.length; k += 4) local.push({ u: frame[k]!, y: frame[k + 1]!, across: frame[k + 2]!, along: frame[k + 3]! });
-  const lines = blockGaugeLines(local);
-  const G = lines.length;
+  const lines = new BlockGaugeLines(frame);
+  const ys = lines.y;
+  const G = ys.length;
   const half = width_mm / 2;
   const shapes: BlockShape[] = [];
   // Plane lengths are numbers, not objects: a search measures thousands of shapes. Gross shear planes
@@ -221,10 +226,10 @@ function measureBlockShapes(frame: readonly number[], width_mm: number): BlockSh
   // Central blocks between gauge lines a < b.
   for (let a = 0; a < G; a++) {
     for (let b = a + 1; b < G; b++) {
-      const uLast = lastU(lines, a, b);
-      const tension = lines[b]!.y - lines[a]!.y;
-      const tensionNet = tension - tensionDeduction(local, uLast, lines[a]!.y, lines[b]!.y);
-      shapes.push(new Block("central", a, b, G, uLast + uLast, shearNetOn(lines[a]!, uLast) + shearNetOn(lines[b]!, uLast), tension, tensionNet, boltsOn(lines, a, b)));
+      const uLast = lines.lastU(a, b);
+      const tension = ys[b]! - ys[a]!;
+      const tensionNet = tension - tensionDeduction(frame, uLast, ys[a]!, ys[b]!);
+      shapes.push(new Block("central", a, b, G, uLast + uLast, lines.shearNetOn(frame, a, uLast) + lines.shearNetOn(frame, b, uLast), tension, tensionNet, lines.boltsOn(a, b)));
     }
   }
 
@@ -232,13 +237,13 @@ function measureBlockShapes(frame: readonly number[], width_mm: number): BlockSh
   for (let a = 0; a < G; a++) {
     const m = G - 1 - a;
     if (a >= m) break;
-    const uLast = Math.max(lastU(lines, 0, a), lastU(lines, m, G - 1));
-    const low = lines[a]!.y - -half;
-    const high = half - lines[m]!.y;
-    const lowNet = low - tensionDeduction(local, uLast, -half, lines[a]!.y);
-    const highNet = high - tensionDeduction(local, uLast, lines[m]!.y, half);
-    const bolts = boltsOn(lines, 0, a) + boltsOn(lines, m, G - 1);
-    shapes.push(new Block("edge-strips", a, m, G, uLast + uLast, shearNetOn(lines[a]!, uLast) + shearNetOn(lines[m]!, uLast), low + high, lowNet + highNet, bolts));
+    const uLast = Math.max(lines.lastU(0, a), lines.lastU(m, G - 1));
+    const low = ys[a]! - -half;
+    const high = half - ys[m]!;
+    const lowNet = low - tensionDeduction(frame, uLast, -half, ys[a]!);
+    const highNet = high - tensionDeduction(frame, uLast, ys[m]!, half);
+    const bolts = lines.boltsOn(0, a) + lines.boltsOn(m, G - 1);
+    shapes.push(new Block("edge-strips", a, m, G, uLast + uLast, lines.shearNetOn(frame, a, uLast) + lines.shearNetOn(frame, m, uLast), low + high, lowNet + highNet, bolts));
   }
 
   // One edge strip, bounded by one side edge: lines 0..a with its shear plane on line a and its tension
@@ -246,13 +251,13 @@ function measureBlockShapes(frame: readonly number[], width_mm: number): BlockSh
   // one-sided block: the shear plane along one outer line, the tension plane from it across every line
   // to the far edge (for a single gauge line, the shear plane along it and the tension plane to one edge).
   for (let a = 0; a < G; a++) {
-    const y = lines[a]!.y;
-    const lowerU = lastU(lines, 0, a);
+    const y = ys[a]!;
+    const lowerU = lines.lastU(0, a);
     const lower = y - -half;
-    shapes.push(new Block("lower-strip", a, a, G, lowerU, shearNetOn(lines[a]!, lowerU), lower, lower - tensionDeduction(local, lowerU, -half, y), boltsOn(lines, 0, a)));
-    const upperU = lastU(lines, a, G - 1);
+    shapes.push(new Block("lower-strip", a, a, G, lowerU, lines.shearNetOn(frame, a, lowerU), lower, lower - tensionDeduction(frame, lowerU, -half, y), lines.boltsOn(0, a)));
+    const upperU = lines.lastU(a, G - 1);
     const upper = half - y;
-    shapes.push(new Block("upper-strip", a, a, G, upperU, shearNetOn(lines[a]!, upperU), upper, upper - tensionDeduction(local, upperU, y, half), boltsOn(lines, a, G - 1)));
+    shapes.push(new Block("upper-strip", a, a, G, upperU, lines.shearNetOn(frame, a, upperU), upper, upper - tensionDeduction(frame, upperU, y, half), lines.boltsOn(a, G - 1)));
   }
   return shapes;
 }

@@ -31,7 +31,8 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
   const butt = splice.type !== "lap";
   const local = patternHoles(layout, loadedEndDistance(layout, butt));
   const farEnd = layout.endDistance_mm;
-  const xMaxLocal = Math.max(...local.map((h) => h.x_mm));
+  let xMaxLocal = -Infinity;
+  for (const h of local) xMaxLocal = Math.max(xMaxLocal, h.x_mm);
   const patternText = describePattern(layout, local.length);
 
   const piece = (
@@ -49,7 +50,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
   };
 
   const makeHole = (group: Hole["group"], index: number, x: number, y: number): Hole => ({
-    id: `${group}${index + 1}`,
+    id: holeId(group, index),
     group,
     x_mm: x,
     y_mm: y,
@@ -68,7 +69,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     ];
     const group: BoltGroupGeometry = {
       id: "J",
-      holeIds: holes.map((h) => h.id),
+      holeIds: mapped(holes, (h) => h.id),
       holes,
       shearPlanes: 1,
       stack: ["mainA", "mainB"],
@@ -132,7 +133,8 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     );
   }
 
-  const coverThickness = coverSpecs.reduce((a, c) => a + c.thickness_mm, 0);
+  let coverThickness = 0;
+  for (const c of coverSpecs) coverThickness += c.thickness_mm;
   const groupFor = (id: "A" | "B", holes: Hole[]): BoltGroupGeometry => {
     const pack = packedSide === id ? packing : 0;
     const mainId: PlateId = id === "A" ? "mainA" : "mainB";
@@ -142,7 +144,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     if (doubleCover) stackIds.push("coverB");
     return {
       id,
-      holeIds: holes.map((h) => h.id),
+      holeIds: mapped(holes, (h) => h.id),
       holes,
       shearPlanes: doubleCover ? 2 : 1,
       stack: stackIds,
@@ -153,6 +155,18 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
 
   return jointOf(splice.type, bolts.size_mm, pieces, [...holesA, ...holesB], [groupFor("A", holesA), groupFor("B", holesB)], splice.buttGap_mm, 2 * halfCover, patternText);
 }
+
+/**
+ * The name of a hole: its group and its place in the group, from 1 ("A1", "B12"), each written once
+ * per process (the same words for every joint).
+ */
+function holeId(group: GroupId, index: number): string {
+  const names = HOLE_NAMES[group];
+  for (let k = names.length; k <= index; k++) names.push(`${group}${k + 1}`);
+  return names[index]!;
+}
+
+const HOLE_NAMES: Record<GroupId, string[]> = { J: [], A: [], B: [] };
 
 /** A joint, its fields written in one order (one shape for every joint, built here or with other plates). */
 function jointOf(spliceType: Joint["spliceType"], boltDiameter_mm: number, plates: PlatePiece[], holes: Hole[], groups: BoltGroupGeometry[], buttGap_mm: number, spliceLength_mm: number, patternText: string): Joint {

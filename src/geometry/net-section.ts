@@ -10,7 +10,7 @@
  * by dynamic programming over every pair of holes — no list of "likely" paths.
  */
 import type { Hole, PlateConnection, PlatePiece } from "../model/joint.js";
-import { LINE_TOLERANCE_MM, sortedHoles } from "./lines.js";
+import { LINE_TOLERANCE_MM, sortedByYThenX } from "./lines.js";
 
 export interface NetPath {
   /** Holes on the path, from the lower edge (y = −b/2) to the upper. */
@@ -47,28 +47,28 @@ export interface PathFilter {
  */
 export function leastNetPath(holes: readonly Hole[], width_mm: number): NetPath;
 export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: PathFilter): NetPath | null;
-export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: PathFilter = {}): NetPath | null {
+export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: PathFilter = NO_FILTER): NetPath | null {
   const half = width_mm / 2;
   const allowed = filter.allowed;
-  const sorted = sortedHoles(allowed ? holes.filter(allowed) : holes, (a, b) => a.y_mm - b.y_mm || a.x_mm - b.x_mm);
-  const tagOf = filter.tag ?? (() => 0);
+  const sorted = sortedByYThenX(allowed ? holes.filter(allowed) : holes);
+  const tagOf = filter.tag;
   const required = filter.required ?? 0;
-  const masks = required === 0 && !filter.tag ? 1 : 4;
+  const masks = required === 0 && !tagOf ? 1 : 4;
   const n = sorted.length;
+  // The filter's functions are all called here, before the walk writes the module's lists.
+  const tags: number[] | null = masks === 1 ? null : [];
+  if (tags) for (const h of sorted) tags.push(tagOf ? tagOf(h) & 3 : 0);
   // best[j * masks + m]: least partial width from the lower edge to hole j having collected tags m.
-  // Plain arrays, not typed ones: a typed array of more than 64 bytes gets a backing store outside the
-  // heap, which costs more to make and free than this whole walk (a search makes thousands).
-  const best: number[] = [];
-  const previous: number[] = [];
+  // Lists of this module, written afresh for each path (a search makes thousands of paths).
+  const best = bestScratch;
+  const previous = previousScratch;
   for (let k = 0; k < n * masks; k++) {
-    best.push(Infinity);
-    previous.push(-1);
+    best[k] = Infinity;
+    previous[k] = -1;
   }
-  const tags: number[] = [];
-  for (const h of sorted) tags.push(masks === 1 ? 0 : tagOf(h) & 3);
   for (let j = 0; j < n; j++) {
     const hj = sorted[j]!;
-    const tj = tags[j]!;
+    const tj = tags ? tags[j]! : 0;
     const fromEdge = hj.y_mm + half - hj.across_mm;
     if (fromEdge < best[j * masks + tj]!) best[j * masks + tj] = fromEdge;
     for (let i = 0; i < j; i++) {
@@ -99,27 +99,44 @@ export function leastNetPath(holes: readonly Hole[], width_mm: number, filter: P
     }
   }
   if (bestWidth === Infinity) return null;
+  // The path's holes, from the upper end back to the lower edge, then turned to rising y.
   const path: Hole[] = [];
-  for (let k = last; k >= 0; k = previous[k]!) path.unshift(sorted[Math.floor(k / masks)]!);
-  return describePath(path, width_mm);
+  for (let k = last; k >= 0; k = previous[k]!) path.push(sorted[Math.floor(k / masks)]!);
+  path.reverse();
+  return netPathOf(path, width_mm);
 }
+
+/** No limits on the paths searched. */
+const NO_FILTER: PathFilter = Object.freeze({});
+
+/*
+ * Plain arrays, not typed ones: a typed array of more than 64 bytes gets a backing store outside the
+ * heap. Kept by this module and overwritten by each leastNetPath (never read before written there).
+ */
+const bestScratch: number[] = [];
+const previousScratch: number[] = [];
 
 /** Net width of a given path (holes in order of rising y). */
 export function describePath(path: readonly Hole[], width_mm: number): NetPath {
+  return netPathOf([...path], width_mm);
+}
+
+/** Net width of a path (holes in order of rising y), keeping the list it is given. */
+function netPathOf(path: Hole[], width_mm: number): NetPath {
   let deduction = 0;
   let stagger = 0;
   for (let k = 0; k < path.length; k++) {
     const h = path[k]!;
     deduction += h.across_mm;
-    const prev = path[k - 1];
-    if (prev) {
+    if (k > 0) {
+      const prev = path[k - 1]!;
       const g = h.y_mm - prev.y_mm;
       const s = h.x_mm - prev.x_mm;
       stagger += (s * s) / (4 * g);
     }
   }
   return {
-    holes: [...path],
+    holes: path,
     netWidth_mm: width_mm - deduction + stagger,
     grossWidth_mm: width_mm,
     holeDeduction_mm: deduction,
