@@ -151,6 +151,11 @@ function conventionsOf(scenario: CheckableScenario): string[] {
 }
 
 const MINIMUM_DESIGN_ACTION_CITATION = fixedCl("10.7");
+const MINIMUM_DESIGN_ACTION_FORMULA = "0.3·Td ≤ Td,joint;  Td = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) of the main plate without holes";
+/** The condition's note (the same words every call; a fresh list each time it is read). */
+const minimumDesignActionNotes = (): string[] => [
+  "a condition on the joint: it sets no load; the connection of a tension member is designed for at least 0.3 × the member's design capacity in tension (cl. 10.7, from memory: read as a design action, the reading that refuses more)",
+];
 
 /**
  * Minimum design action on fastenings: the connection of a tension member is designed for at least
@@ -162,7 +167,8 @@ const MINIMUM_DESIGN_ACTION_CITATION = fixedCl("10.7");
  */
 function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: number): StrengthCheck | null {
   if (!(scenario.load.factoredTension_N > 0)) return null;
-  const member_N = Math.min(unperforated(scenario.plates.mainA), unperforated(scenario.plates.mainB));
+  const { mainA, mainB } = scenario.plates;
+  const member_N = mainA === mainB ? unperforated(mainA) : Math.min(unperforated(mainA), unperforated(mainB));
   const minimum_N = 0.3 * member_N;
   const holds = minimum_N <= jointTension_N * (1 + 1e-9);
   // Under reversal every tension check is labelled with its sense (engine/senses.ts).
@@ -174,15 +180,13 @@ function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: n
     ...(reversal ? { sense: "tension" as const } : {}),
     component: "joint",
     citation: MINIMUM_DESIGN_ACTION_CITATION,
-    formula: "0.3·Td ≤ Td,joint;  Td = min(Ag·fy/γm0, 0.9·Ag·fu/γm1) of the main plate without holes",
+    formula: MINIMUM_DESIGN_ACTION_FORMULA,
     substituted: () => `0.3 × ${kN(member_N)} = ${kN(minimum_N)} ${holds ? "≤" : ">"} ${kN(jointTension_N)}, the joint's design strength in tension`,
     limitState: "ULS",
     demand_N: minimum_N,
     resistance_N: jointTension_N,
     loadRatio: 0,
-    notes: () => [
-      "a condition on the joint: it sets no load; the connection of a tension member is designed for at least 0.3 × the member's design capacity in tension (cl. 10.7, from memory: read as a design action, the reading that refuses more)",
-    ],
+    notes: minimumDesignActionNotes,
   });
 }
 
@@ -195,24 +199,47 @@ function unperforated(spec: PlateSpec): number {
 
 /**
  * Design tension strength of the unperforated plate on an efficiency basis: cl. 6.2 gross yield
- * Ag·fy/γm0, cl. 6.3.1 rupture with An = Ag, 0.9·Ag·fu/γm1, or the lesser of the two.
+ * Ag·fy/γm0, cl. 6.3.1 rupture with An = Ag, 0.9·Ag·fu/γm1, or the lesser of the two. The number is
+ * worked out here; the definition in words (unperforatedOnBasis) only when an output reads it.
  */
 function unperforatedStrength(spec: PlateSpec, basis: EfficiencyBasis = "lesser"): { value_N: number; definition: string } {
   const m = plateStrength(spec);
   const Ag = spec.width_mm * spec.thickness_mm;
-  const { gamma_m0, gamma_m1 } = PARTIAL_FACTORS;
-  return unperforatedOnBasis(
-    {
-      yield_N: Tdg(Ag, m.fy_MPa),
-      rupture_N: Tdn(Ag, m.fu_MPa),
+  const yield_N = Tdg(Ag, m.fy_MPa);
+  const rupture_N = Tdn(Ag, m.fu_MPa);
+  const value_N = basis === "yield" ? yield_N : basis === "rupture" ? rupture_N : Math.min(yield_N, rupture_N);
+  return new UnperforatedPlate(value_N, basis, Ag, m.fy_MPa, m.fu_MPa, yield_N, rupture_N);
+}
+
+/** The unperforated strength with its definition written on first read (the value is unperforatedOnBasis's: yield, rupture or the lesser). */
+class UnperforatedPlate {
+  #definition: string | undefined;
+  constructor(
+    readonly value_N: number,
+    private readonly basis: EfficiencyBasis,
+    private readonly Ag_mm2: number,
+    private readonly fy_MPa: number,
+    private readonly fu_MPa: number,
+    private readonly yield_N: number,
+    private readonly rupture_N: number,
+  ) {}
+  get definition(): string {
+    if (this.#definition === undefined) this.#definition = this.written();
+    return this.#definition;
+  }
+  private written(): string {
+    const { Ag_mm2: Ag, fy_MPa: fy, fu_MPa: fu } = this;
+    const { gamma_m0, gamma_m1 } = PARTIAL_FACTORS;
+    const terms = {
+      yield_N: this.yield_N,
+      rupture_N: this.rupture_N,
       yieldSymbols: "Ag·fy/γm0",
-      yieldNumbers: () => `${f(Ag)} × ${m.fy_MPa}/${gamma_m0}`,
+      yieldNumbers: () => `${f(Ag)} × ${fy}/${gamma_m0}`,
       ruptureSymbols: "0.9·Ag·fu/γm1",
-      ruptureNumbers: () => `0.9 × ${f(Ag)} × ${m.fu_MPa}/${gamma_m1}`,
-    },
-    basis,
-    (n) => kN(n),
-  );
+      ruptureNumbers: () => `0.9 × ${f(Ag)} × ${fu}/${gamma_m1}`,
+    };
+    return unperforatedOnBasis(terms, this.basis, (n) => kN(n)).definition;
+  }
 }
 
 export const IS800_2007: DesignCode = {

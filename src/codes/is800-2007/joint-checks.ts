@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -20,7 +20,7 @@ import { fixedCl } from "./citation.js";
 import { PARTIAL_FACTORS } from "./factors.js";
 import { bearingHoleFactor, holeFactorKh } from "./holes.js";
 import { F0, Vdsf } from "./slip.js";
-import { Tdb, Tdb1_N, Tdb2_N, Tdg, Tdn } from "./tension-member.js";
+import { Tdb, Tdb1_N, Tdb2_N, Tdg, Tdn, type BlockShearResult } from "./tension-member.js";
 
 /** The citations of the checks below, made once (frozen; results share them). */
 const BEARING_CITATION = fixedCl("10.3.4");
@@ -323,13 +323,28 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
+/** One governing block worked out for a set of shapes, with everything it was worked out from. */
+interface GoverningAsked {
+  shapes: readonly BlockShape[];
+  bolts: number;
+  t_mm: number;
+  fy_MPa: number;
+  fu_MPa: number;
+  share: number;
+  load: BlockShearLoad;
+  best: GoverningBlock<BlockShearResult> | null;
+}
+
 /**
  * The block shapes of one check's joint (blockShapes), each asked once and handed to every plate of the
- * same width that one group bears on toward the same end (both cover plates of a butt splice). Made
+ * same width that one group bears on toward the same end (both cover plates of a butt splice); and the
+ * governing block of a set of shapes, worked out once for every plate with the same shapes, bolts, t,
+ * fy, fu, share and load (both covers of a butt splice alike; the mirror-image main plates). Made
  * afresh for each call (never kept between calls).
  */
 export class BlockShapesOf {
   readonly #asked: { connection: PlateConnection; width_mm: number; shapes: readonly BlockShape[] }[] = [];
+  readonly #governing: GoverningAsked[] = [];
   constructor(private readonly joint: Joint) {}
   of(connection: PlateConnection, width_mm: number): readonly BlockShape[] {
     for (const m of this.#asked) {
@@ -340,6 +355,22 @@ export class BlockShapesOf {
     this.#asked.push({ connection, width_mm, shapes });
     return shapes;
   }
+  /** The governing block of `shapes` in a plate of thickness t (governingBlock with cl. 6.4.1's Tdb). */
+  governing(shapes: readonly BlockShape[], bolts: number, t_mm: number, fy_MPa: number, fu_MPa: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
+    for (const m of this.#governing) {
+      if (m.shapes === shapes && m.bolts === bolts && m.t_mm === t_mm && m.fy_MPa === fy_MPa && m.fu_MPa === fu_MPa && m.share === share && m.load === load) return m.best;
+    }
+    const best = governingTdb(shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load);
+    this.#governing.push({ shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load, best });
+    return best;
+  }
+}
+
+/** The governing block by cl. 6.4.1: every shape's Tdb as a number (no object per shape); the two terms of the governing one for its text. */
+function governingTdb(shapes: readonly BlockShape[], bolts: number, t: number, fy: number, fu: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
+  const value = (shape: BlockShape) => Math.min(Tdb1_N(shape.shearGross_mm * t, shape.tensionNet_mm * t, fy, fu), Tdb2_N(shape.shearNet_mm * t, shape.tensionGross_mm * t, fy, fu));
+  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, fy, fu);
+  return governingBlock(shapes, bolts, share, load, value, resistance);
 }
 
 /**
@@ -353,11 +384,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
   const shapes = shapesOf.of(connection, plate.spec.width_mm);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const { fy_MPa: fy, fu_MPa: fu } = plate;
-  // Every shape's Tdb as a number (no object per shape); the two terms of the governing one for its text.
-  const value = (shape: BlockShape) => Math.min(Tdb1_N(shape.shearGross_mm * t, shape.tensionNet_mm * t, fy, fu), Tdb2_N(shape.shearNet_mm * t, shape.tensionGross_mm * t, fy, fu));
-  const resistance = (shape: BlockShape) => Tdb(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionGross_mm * t, shape.tensionNet_mm * t, fy, fu);
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, value, resistance);
+  const best = shapesOf.governing(shapes, holes.length, t, plate.fy_MPa, plate.fu_MPa, plate.forceShare, load);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;
@@ -368,7 +395,7 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     title: "Block shear",
     component: `${plate.label}${sideText}`,
     citation: BLOCK_SHEAR_CITATION,
-    formula: `${load === "full" ? "F" : "F·k/n"} ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)`,
+    formula: load === "full" ? BLOCK_SHEAR_FORMULA_FULL : BLOCK_SHEAR_FORMULA_SHARE,
     substituted: () =>
       `${s.description} (${s.boltsInBlock} of ${holes.length} bolts): Avg = ${f(s.shearGross_mm)} × ${f(t)} = ${f(s.shearGross_mm * t)}, ` +
       `Avn = ${f(s.shearNet_mm)} × ${f(t)} = ${f(s.shearNet_mm * t)}, Atg = ${f(s.tensionGross_mm)} × ${f(t)} = ${f(s.tensionGross_mm * t)}, ` +
@@ -381,6 +408,9 @@ export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate
     notes: () => [`governing of ${shapes.length} block shapes`],
   });
 }
+
+const BLOCK_SHEAR_FORMULA_FULL = "F ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)";
+const BLOCK_SHEAR_FORMULA_SHARE = "F·k/n ≤ Tdb = min(Avg·fy/(√3 γm0) + 0.9·Atn·fu/γm1,  0.9·Avn·fu/(√3 γm1) + Atg·fy/γm0)";
 
 /** Warnings about the joint's reductions (long joint, packing, eccentric single-shear splices). */
 export function factorWarnings(joint: Joint, gfs: GroupFactors[]): Warning[] {
