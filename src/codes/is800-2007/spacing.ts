@@ -4,7 +4,7 @@
  */
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { mapped } from "../../model/lists.js";
-import { distance, fartherThan, gaugeLines, transverseLines, type Line } from "../../geometry/lines.js";
+import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM, sortedByXThenY, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
@@ -31,23 +31,42 @@ const CENTROID_CITATION = Object.freeze({ standard: "general", clause: "concentr
  * Whether a plate's fasteners are staggered at equal intervals (cl. 10.2.3.4): consecutive transverse
  * lines share no gauge line and are equally spaced. Returns the gauge (least distance between adjacent
  * gauge lines) too. `gauge`: the gauge lines of these holes, when the caller has them already.
+ * The transverse lines are those of transverseLines (holes within the line tolerance of a line's first
+ * x, in order of x then y), read as runs of one sorted list: a full grid answers at its first two lines.
  */
 export function staggerOf(holes: readonly Hole[], gauge: readonly Line[] = gaugeLines(holes)): { staggered: boolean; gauge_mm: number } {
   let gauge_mm = Infinity;
   for (let i = 1; i < gauge.length; i++) gauge_mm = Math.min(gauge_mm, gauge[i]!.at_mm - gauge[i - 1]!.at_mm);
-  const transverse = transverseLines(holes);
-  if (transverse.length < 2) return { staggered: false, gauge_mm };
-  const spacing = transverse[1]!.at_mm - transverse[0]!.at_mm;
-  for (let i = 1; i < transverse.length; i++) {
-    if (sharesGaugeLine(transverse[i - 1]!, transverse[i]!)) return { staggered: false, gauge_mm };
-    if (Math.abs(transverse[i]!.at_mm - transverse[i - 1]!.at_mm - spacing) > 1e-6) return { staggered: false, gauge_mm };
+  const sorted = sortedByXThenY(holes);
+  const n = sorted.length;
+  // Line a is sorted[a0 .. a1), the next line b is sorted[a1 .. b1).
+  let a0 = 0;
+  let a1 = transverseLineEnd(sorted, 0);
+  if (a1 >= n) return { staggered: false, gauge_mm };
+  let b1 = transverseLineEnd(sorted, a1);
+  const spacing = sorted[a1]!.x_mm - sorted[0]!.x_mm;
+  for (;;) {
+    if (sharesGaugeLine(sorted, a0, a1, b1)) return { staggered: false, gauge_mm };
+    if (Math.abs(sorted[a1]!.x_mm - sorted[a0]!.x_mm - spacing) > 1e-6) return { staggered: false, gauge_mm };
+    if (b1 >= n) return { staggered: true, gauge_mm };
+    a0 = a1;
+    a1 = b1;
+    b1 = transverseLineEnd(sorted, a1);
   }
-  return { staggered: true, gauge_mm };
 }
 
-/** Whether two transverse lines have a hole at the same y (the same gauge line). */
-function sharesGaugeLine(a: Line, b: Line): boolean {
-  for (const h of b.holes) for (const k of a.holes) if (h.y_mm === k.y_mm) return true;
+/** End (exclusive) of the transverse line that starts at sorted[start]: the holes within the line tolerance of its x. */
+function transverseLineEnd(sorted: readonly Hole[], start: number): number {
+  if (start >= sorted.length) return start;
+  const x = sorted[start]!.x_mm;
+  let end = start + 1;
+  while (end < sorted.length && Math.abs(sorted[end]!.x_mm - x) <= LINE_TOLERANCE_MM) end++;
+  return end;
+}
+
+/** Whether two consecutive transverse lines, sorted[a0 .. a1) and sorted[a1 .. b1), have a hole at the same y (the same gauge line). */
+function sharesGaugeLine(sorted: readonly Hole[], a0: number, a1: number, b1: number): boolean {
+  for (let i = a1; i < b1; i++) for (let j = a0; j < a1; j++) if (sorted[i]!.y_mm === sorted[j]!.y_mm) return true;
   return false;
 }
 
@@ -86,6 +105,11 @@ export function spacingLayout(joint: Joint): SpacingLayout {
   // pairThickness reads only the holes' groups: one hole of each group stands for all of them.
   for (const gi of joint.groups) for (const gj of joint.groups) groupPairThickness.push(gi.holes[0] && gj.holes[0] ? pairThickness(joint, gi.holes[0], gj.holes[0]) : Infinity);
   return { plates, outside: outsidePlates(joint), holesOf, groups, groupPairThickness };
+}
+
+/** Appends the rules of `more` (none or one, from worstRule) to `rules`, without a spread into a new list. */
+function appendRules(rules: RuleCheck[], more: readonly RuleCheck[]): void {
+  for (let i = 0; i < more.length; i++) rules.push(more[i]!);
 }
 
 /** Index of a bolt group in joint.groups. */
@@ -161,11 +185,10 @@ export function maxSpacingRules(joint: Joint, layout: SpacingLayout = spacingLay
       pitchRules(joint, layout, plate, lines[index]!.holes, relax, !repeat, edge && isOutside, seen, worst);
     }
   }
-  return [
-    ...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", MAX_SPACING_CITATION, "g ≤ min(32 t, 300 mm)", "max", worst.across),
-    ...worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", worst.pitchRelaxed ? MAX_PITCH_RELAXED_CITATION : MAX_PITCH_CITATION, "p ≤ min(16 t, 200 mm)", "max", worst.pitch),
-    ...worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", worst.edgeLineRelaxed ? EDGE_LINE_RELAXED_CITATION : EDGE_LINE_CITATION, "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine),
-  ];
+  const rules = worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", MAX_SPACING_CITATION, "g ≤ min(32 t, 300 mm)", "max", worst.across);
+  appendRules(rules, worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", worst.pitchRelaxed ? MAX_PITCH_RELAXED_CITATION : MAX_PITCH_CITATION, "p ≤ min(16 t, 200 mm)", "max", worst.pitch));
+  appendRules(rules, worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", worst.edgeLineRelaxed ? EDGE_LINE_RELAXED_CITATION : EDGE_LINE_CITATION, "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine));
+  return rules;
 }
 
 
@@ -284,6 +307,23 @@ function maxDistanceWorst(plate: PlatePiece, what: string, e: number, maxLimit: 
   return { value: e, limit: maxLimit, where: plate.label, detail: () => `${what}: ${f(e)} mm vs ${maxEdgeText(exposed, outerT, eps)} = ${f(maxLimit)} mm` };
 }
 
+/** Index of an earlier plate (of layout.plates, before k) with plate k's holes, width, edge factor, outer thickness and fy: −1 none. */
+function sameSidesEarlier(layout: SpacingLayout, k: number, factor: number, outerT: number): number {
+  const plate = layout.plates[k]!;
+  for (let m = 0; m < k; m++) {
+    const p = layout.plates[m]!;
+    if (layout.holesOf[m] !== layout.holesOf[k] || p.spec.width_mm !== plate.spec.width_mm || p.fy_MPa !== plate.fy_MPa) continue;
+    if (minDistanceFactor(p) === factor && outerThickness(layout.outside, p) === outerT) return m;
+  }
+  return -1;
+}
+
+/** Whether a plate bears with connection c's group toward the same plate end as c. */
+function bearsSameEnd(plate: PlatePiece, c: PlatePiece["connections"][number]): boolean {
+  for (const e of plate.connections) if (e.group === c.group && e.endX_mm === c.endX_mm && e.towardEnd === c.towardEnd) return true;
+  return false;
+}
+
 /**
  * Minimum end and edge distances: 1.5 d0 (rolled, machine flame cut, sawn, planed edges) or 1.7 d0
  * (sheared or hand flame cut). IS 800:2007, cl. 10.2.4.2, with d0 from Table 19.
@@ -304,21 +344,28 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario, layout: Spa
     const outerT = outerThickness(outside, plate);
     const eps = epsilon(plate.fy_MPa);
     const maxLimit = scenario.options.exposedToCorrosion ? 40 + 4 * outerT : 12 * outerT * eps;
-    let yMin = Infinity;
-    let yMax = -Infinity;
-    for (const h of holes) {
-      const edge = half - Math.abs(h.y_mm);
-      const limit = factor * h.across_mm;
-      if (beatsWorst(minEdge, edge, limit, "min")) minEdge = minDistanceWorst(plate, h, "", edge, factor, h.across_mm, limit);
-      yMin = Math.min(yMin, h.y_mm);
-      yMax = Math.max(yMax, h.y_mm);
-    }
     const exposed = scenario.options.exposedToCorrosion;
-    const lower = half + yMin;
-    if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "lower edge to nearest gauge line", lower, maxLimit, exposed, outerT, eps);
-    const upper = half - yMax;
-    if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "upper edge to nearest gauge line", upper, maxLimit, exposed, outerT, eps);
+    // An earlier plate with the same holes, width, edges, outer t and fy (cover B after cover A; the
+    // second plate of a lap) measured the same side distances, and the same end distances toward each
+    // end both bear on: equal measurements never replace the worst (beatsWorst), so they are not made again.
+    const earlier = sameSidesEarlier(layout, k, factor, outerT);
+    if (earlier < 0) {
+      let yMin = Infinity;
+      let yMax = -Infinity;
+      for (const h of holes) {
+        const edge = half - Math.abs(h.y_mm);
+        const limit = factor * h.across_mm;
+        if (beatsWorst(minEdge, edge, limit, "min")) minEdge = minDistanceWorst(plate, h, "", edge, factor, h.across_mm, limit);
+        yMin = Math.min(yMin, h.y_mm);
+        yMax = Math.max(yMax, h.y_mm);
+      }
+      const lower = half + yMin;
+      if (beatsWorst(maxEdge, lower, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "lower edge to nearest gauge line", lower, maxLimit, exposed, outerT, eps);
+      const upper = half - yMax;
+      if (beatsWorst(maxEdge, upper, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "upper edge to nearest gauge line", upper, maxLimit, exposed, outerT, eps);
+    }
     for (const c of plate.connections) {
+      if (earlier >= 0 && bearsSameEnd(layout.plates[earlier]!, c)) continue;
       let nearest = Infinity;
       for (const h of groupHoles(joint, c.group)) {
         const u = c.towardEnd * (c.endX_mm - h.x_mm);
@@ -329,11 +376,10 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario, layout: Spa
       if (beatsWorst(maxEdge, nearest, maxLimit, "max")) maxEdge = maxDistanceWorst(plate, "plate end to nearest transverse line", nearest, maxLimit, exposed, outerT, eps);
     }
   }
-  return [
-    ...worstRule("min-end-distance", "min-end-distance", "Minimum end distance", MIN_DISTANCE_CITATION, "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd),
-    ...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", MIN_DISTANCE_CITATION, "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge),
-    ...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", MAX_EDGE_CITATION, scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge),
-  ];
+  const rules = worstRule("min-end-distance", "min-end-distance", "Minimum end distance", MIN_DISTANCE_CITATION, "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd);
+  appendRules(rules, worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", MIN_DISTANCE_CITATION, "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge));
+  appendRules(rules, worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", MAX_EDGE_CITATION, scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge));
+  return rules;
 }
 
 /** A group's grip against 8 d (cl. 10.3.3.2). */
