@@ -40,6 +40,13 @@ class Unperforated {
   }
 }
 
+/** The unperforated strength's value on a basis: gross yield, rupture, or the lesser (the code's own lesser where it defines one). */
+export function valueOnBasis(terms: Pick<UnperforatedTerms, "yield_N" | "rupture_N" | "lesser">, basis: EfficiencyBasis): number {
+  if (basis === "yield") return terms.yield_N;
+  if (basis === "rupture") return terms.rupture_N;
+  return terms.lesser ? terms.lesser.value_N : Math.min(terms.yield_N, terms.rupture_N);
+}
+
 /**
  * The unperforated strength on a basis, with the definition every output prints beside efficiency
  * (the words are written only when read; the value never depends on them).
@@ -47,10 +54,10 @@ class Unperforated {
  */
 export function unperforatedOnBasis(terms: UnperforatedTerms, basis: EfficiencyBasis, force: (n: number) => string): { value_N: number; definition: string } {
   const head = () => `efficiency = joint design strength / design tension strength of the unperforated thinner main plate, basis: ${BASIS_WORDS[basis]} (options.efficiency_basis: ${basis}) = `;
-  if (basis === "yield") return new Unperforated(terms.yield_N, () => `${head()}${terms.yieldSymbols} = ${terms.yieldNumbers()} = ${force(terms.yield_N)}`);
-  if (basis === "rupture") return new Unperforated(terms.rupture_N, () => `${head()}${terms.ruptureSymbols} = ${terms.ruptureNumbers()} = ${force(terms.rupture_N)}`);
+  const value = valueOnBasis(terms, basis);
+  if (basis === "yield") return new Unperforated(value, () => `${head()}${terms.yieldSymbols} = ${terms.yieldNumbers()} = ${force(value)}`);
+  if (basis === "rupture") return new Unperforated(value, () => `${head()}${terms.ruptureSymbols} = ${terms.ruptureNumbers()} = ${force(value)}`);
   const lesser = terms.lesser;
-  if (lesser) return new Unperforated(lesser.value_N, () => `${head()}${lesser.text()} = ${force(lesser.value_N)}`);
-  const value = Math.min(terms.yield_N, terms.rupture_N);
+  if (lesser) return new Unperforated(value, () => `${head()}${lesser.text()} = ${force(value)}`);
   return new Unperforated(value, () => `${head()}min(${terms.yieldSymbols}, ${terms.ruptureSymbols}) = min(${terms.yieldNumbers()}, ${terms.ruptureNumbers()}) = ${force(value)}`);
 }

@@ -8,7 +8,7 @@ import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint, PlatePiece } from "../../model/joint.js";
 import type { CheckResult, StrengthCheck } from "../../model/results.js";
 import type { CheckableScenario, EfficiencyBasis, PlateSpec, Scenario } from "../../model/scenario.js";
-import { unperforatedOnBasis } from "../efficiency.js";
+import { unperforatedOnBasis, valueOnBasis } from "../efficiency.js";
 import { blockShearConvention } from "../../geometry/block-shear.js";
 import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js";
 import { boltChecksOnly, codeChecks, strength } from "../check-builders.js";
@@ -207,11 +207,11 @@ function unperforatedStrength(spec: PlateSpec, basis: EfficiencyBasis = "lesser"
   const Ag = spec.width_mm * spec.thickness_mm;
   const yield_N = Tdg(Ag, m.fy_MPa);
   const rupture_N = Tdn(Ag, m.fu_MPa);
-  const value_N = basis === "yield" ? yield_N : basis === "rupture" ? rupture_N : Math.min(yield_N, rupture_N);
+  const value_N = valueOnBasis({ yield_N, rupture_N }, basis);
   return new UnperforatedPlate(value_N, basis, Ag, m.fy_MPa, m.fu_MPa, yield_N, rupture_N);
 }
 
-/** The unperforated strength with its definition written on first read (the value is unperforatedOnBasis's: yield, rupture or the lesser). */
+/** The unperforated strength with its definition written on first read (its value from valueOnBasis, as unperforatedOnBasis takes it). */
 class UnperforatedPlate {
   #definition: string | undefined;
   constructor(
