@@ -70,33 +70,8 @@ export function sortedByXThenY(holes: readonly Hole[]): Hole[] {
   return out;
 }
 
-/**
- * The hole lists whose gauge lines were measured last, each with its holes as they were (the same
- * hole objects in the same order) and its lines: the layout rules and the compression pitch of one
- * check ask with the same lists of its joint. Answered only for the very same holes, so a new joint
- * (new holes) is always measured; the lines are shared, so only read.
- */
-const recentGaugeLines: Array<{ holes: readonly Hole[]; lines: Line[] }> = [];
-const RECENT_GAUGE_LINES = 6;
-
-/** Whether a list holds exactly the given holes, in order. */
-function sameHoles(a: readonly Hole[], b: readonly Hole[]): boolean {
-  if (a.length !== b.length) return false;
-  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
-  return true;
-}
-
-/** Gauge lines (holes of equal y), sorted by y; each line's holes sorted by x (shared: only read). */
+/** Gauge lines (holes of equal y), sorted by y; each line's holes sorted by x. */
 export function gaugeLines(holes: readonly Hole[]): Line[] {
-  for (const m of recentGaugeLines) if (sameHoles(m.holes, holes)) return m.lines;
-  const lines = measureGaugeLines(holes);
-  recentGaugeLines.push({ holes: holes.slice(), lines });
-  if (recentGaugeLines.length > RECENT_GAUGE_LINES) recentGaugeLines.shift();
-  return lines;
-}
-
-/** Gauge lines of the holes, measured. */
-function measureGaugeLines(holes: readonly Hole[]): Line[] {
   const sorted = sortedByYThenX(holes);
   const lines: Line[] = [];
   let last: Line | undefined;
