@@ -4,7 +4,7 @@
 import type { CodeChecks, DesignCode } from "../codes/types.js";
 import { buildJoint } from "../geometry/joint-builder.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
-import { checksBySense } from "./senses.js";
+import { checksOfSenses } from "./senses.js";
 import type { Joint } from "../model/joint.js";
 import type { CheckReport, CheckResult, Warning } from "../model/results.js";
 import type { CheckableScenario } from "../model/scenario.js";
@@ -32,8 +32,10 @@ function thinnerPlateStrength(scenario: CheckableScenario, code: DesignCode): { 
 
 /** Check a joint already built (the search builds joints itself and calls this). */
 export function checkJoint(joint: Joint, scenario: CheckableScenario, code: DesignCode): CheckReport {
-  const bySenseChecks = checksBySense(joint, scenario, code);
+  const senses = loadSenses(scenario.load);
+  const bySenseChecks = checksOfSenses(joint, scenario, code, senses);
   const checks = bySenseChecks.checks;
+  let pass = true;
   let jointStrength = Infinity;
   let governing = "";
   // The least capacity (resistance / load ratio) of the ULS checks of each sense with a load ratio.
@@ -42,6 +44,7 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
   let maxUtilisation = 0;
   for (const c of checks) {
     maxUtilisation = Math.max(maxUtilisation, c.utilisation);
+    if (!c.pass) pass = false;
     if (c.type !== "strength" || c.limitState !== "ULS") continue;
     const capacity = c.resistance_N / c.loadRatio;
     if (capacity < jointStrength - 1e-9) {
@@ -53,7 +56,6 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
     else leastCompression = Math.min(leastCompression, capacity);
   }
   const plain = thinnerPlateStrength(scenario, code);
-  const senses = loadSenses(scenario.load);
   const ref = referenceLoad_N(scenario.load);
   const bySense: { tension?: number; compression?: number } = {};
   for (const sense of senses) bySense[sense] = (sense === "tension" ? leastTension : leastCompression) * (factoredOf(scenario.load, sense) / ref);
@@ -63,8 +65,9 @@ export function checkJoint(joint: Joint, scenario: CheckableScenario, code: Desi
   if (minimum) {
     checks.push(minimum);
     maxUtilisation = Math.max(maxUtilisation, minimum.utilisation);
+    if (!minimum.pass) pass = false;
   }
-  return new JointReport(code, bySenseChecks, jointStrength, governing, senses, bySense, plain, maxUtilisation);
+  return new JointReport(code, bySenseChecks, jointStrength, governing, senses, bySense, plain, maxUtilisation, pass);
 }
 
 /**
@@ -78,7 +81,6 @@ class JointReport implements CheckReport {
   readonly codeTitle: string;
   readonly efficiency: number;
   readonly unperforatedStrength_N: number;
-  readonly pass: boolean;
   readonly checks: CheckResult[];
   readonly warnings: Warning[];
   readonly #plain: { value_N: number; definition: string };
@@ -92,6 +94,8 @@ class JointReport implements CheckReport {
     readonly strengthBySense: { tension?: number; compression?: number },
     plain: { value_N: number; definition: string },
     readonly maxUtilisation: number,
+    /** Whether every check passes (worked out in the walk over the checks). */
+    readonly pass: boolean,
   ) {
     this.code = code.id;
     this.codeTitle = code.title;
@@ -99,7 +103,6 @@ class JointReport implements CheckReport {
     this.warnings = codeChecks.warnings;
     this.efficiency = jointStrength_N / plain.value_N;
     this.unperforatedStrength_N = plain.value_N;
-    this.pass = this.checks.every((c) => c.pass);
     this.#plain = plain;
     this.#codeChecks = codeChecks;
   }

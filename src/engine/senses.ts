@@ -13,9 +13,6 @@ import type { CheckResult } from "../model/results.js";
 import { codeChecks, relabelled } from "../codes/check-builders.js";
 import type { CheckableScenario } from "../model/scenario.js";
 
-/** Kinds of the code's own checks that apply in compression too, with the bearing directions reversed. */
-const BOLT_KINDS = new Set<CheckResult["kind"]>(["bolt-shear", "bolt-bearing", "slip"]);
-
 /**
  * The direction each plate bears in compression. A main plate pushes toward the butt, so its bolts bear
  * on the metal behind them, where the plate continues: no end, the end distance is unbounded and only
@@ -26,20 +23,53 @@ const BOLT_KINDS = new Set<CheckResult["kind"]>(["bolt-shear", "bolt-bearing", "
  * ahead), and a shorter clear distance than the hole ahead under AISC 360-16 (the reading that refuses more).
  */
 export function compressionJoint(joint: Joint): Joint {
+  const spans = otherGroupSpans(joint);
   const flip = (plate: PlatePiece, c: PlateConnection): PlateConnection => {
     const toward = (-c.towardEnd) as 1 | -1;
     if (plate.role !== "cover") return { group: c.group, endX_mm: toward * Infinity, towardEnd: toward };
-    const other = joint.holes.filter((h) => h.group !== c.group);
-    const d0 = Math.max(...other.map((h) => h.along_mm));
-    const nearest = toward > 0 ? Math.min(...other.map((h) => h.x_mm)) : Math.max(...other.map((h) => h.x_mm));
-    return { group: c.group, endX_mm: nearest - toward * 0.75 * d0, towardEnd: toward };
+    const other = spans[groupIndex(joint, c.group)]!;
+    const nearest = toward > 0 ? other.minX_mm : other.maxX_mm;
+    return { group: c.group, endX_mm: nearest - toward * 0.75 * other.d0_mm, towardEnd: toward };
   };
   return withPlates(joint, mapped(joint.plates, (p) => withConnections(p, mapped(p.connections, (c) => flip(p, c)))));
 }
 
+/** What a cover's bolts of one group bear toward in compression: the holes of the other groups. */
+interface OtherGroupSpan {
+  /** The largest hole length along the force of the other groups' holes, mm. */
+  d0_mm: number;
+  /** The least and greatest x of the other groups' holes, mm (±Infinity when there are none). */
+  minX_mm: number;
+  maxX_mm: number;
+}
+
+/** Per bolt group of the joint (in its order), the span of every hole of the other groups, in one walk each. */
+function otherGroupSpans(joint: Joint): OtherGroupSpan[] {
+  return mapped(joint.groups, (g) => {
+    // The max and min of no holes are −Infinity and ±Infinity, as Math.max() and Math.min() of nothing.
+    let d0 = -Infinity;
+    let minX = Infinity;
+    let maxX = -Infinity;
+    for (const h of joint.holes) {
+      if (h.group === g.id) continue;
+      d0 = Math.max(d0, h.along_mm);
+      minX = Math.min(minX, h.x_mm);
+      maxX = Math.max(maxX, h.x_mm);
+    }
+    return { d0_mm: d0, minX_mm: minX, maxX_mm: maxX };
+  });
+}
+
+/** The place of a bolt group in the joint's group list. */
+function groupIndex(joint: Joint, group: PlateConnection["group"]): number {
+  for (let k = 0; k < joint.groups.length; k++) if (joint.groups[k]!.id === group) return k;
+  throw new RangeError(`no bolt group ${group} in the joint`);
+}
+
 /** The scenario with the given force standing for the tension of the code's checks. */
 function asLoad(scenario: CheckableScenario, factored_N: number, service_N: number | undefined): CheckableScenario {
-  return { ...scenario, load: { factoredTension_N: factored_N, ...(service_N !== undefined ? { serviceTension_N: service_N } : {}) } };
+  const load = service_N !== undefined ? { factoredTension_N: factored_N, serviceTension_N: service_N } : { factoredTension_N: factored_N };
+  return { ...scenario, load };
 }
 
 /**
@@ -57,10 +87,19 @@ function labelled(c: CheckResult, sense: LoadSense, scale: number, reversal: boo
 
 /** Every check of every sense of the scenario's load. */
 export function checksBySense(joint: Joint, scenario: CheckableScenario, code: DesignCode): CodeChecks {
-  const senses = loadSenses(scenario.load);
+  return checksOfSenses(joint, scenario, code, loadSenses(scenario.load));
+}
+
+/** Whether a check is of a kind of the code's own checks that apply in compression too, with the bearing directions reversed: bolt shear, bearing, slip. */
+function isBoltKind(kind: CheckResult["kind"]): boolean {
+  return kind === "bolt-shear" || kind === "bolt-bearing" || kind === "slip";
+}
+
+/** Every check of the given senses of the scenario's load (loadSenses of it, worked out by the caller). */
+export function checksOfSenses(joint: Joint, scenario: CheckableScenario, code: DesignCode, senses: readonly LoadSense[]): CodeChecks {
+  if (senses.indexOf("compression") < 0) return code.checkJoint(joint, scenario);
   const ref = referenceLoad_N(scenario.load);
   const C = factoredOf(scenario.load, "compression");
-  if (!senses.includes("compression")) return code.checkJoint(joint, scenario);
   const reversal = senses.length === 2;
   const comp = code.compression;
   if (!comp) throw new RangeError(`${code.id} has no compression checks`);
@@ -68,18 +107,21 @@ export function checksBySense(joint: Joint, scenario: CheckableScenario, code: D
   const checks: CheckResult[] = [];
   const warnings: CodeChecks["warnings"] = [];
   // Tension, or (compression only) the rules of the layout, which hold whatever the sense.
-  const base = reversal ? code.checkJoint(joint, scenario) : code.checkJoint(joint, asLoad(scenario, C, scenario.load.serviceCompression_N), "layout");
+  const serviceC = scenario.load.serviceCompression_N;
+  const compressionAlone = reversal ? null : asLoad(scenario, C, serviceC);
+  const base = compressionAlone ? code.checkJoint(joint, compressionAlone, "layout") : code.checkJoint(joint, scenario);
   for (const c of base.checks) {
     if (c.type === "rule") checks.push(c);
     else if (reversal) checks.push(labelled(c, "tension", 1, true));
   }
-  warnings.push(...base.warnings);
+  for (const w of base.warnings) warnings.push(w);
   // Compression: the bolt checks with the bearing directions reversed, at the force the splice carries.
   const carried = share.value * C;
-  const serviceC = scenario.load.serviceCompression_N;
-  const flipped = code.checkJoint(compressionJoint(joint), asLoad(scenario, carried, serviceC === undefined ? undefined : share.value * serviceC), "bolts");
+  // The whole compression carried (no contact share): the scenario of the layout rules has that load already.
+  const carriedLoad = compressionAlone && share.value === 1 ? compressionAlone : asLoad(scenario, carried, serviceC === undefined ? undefined : share.value * serviceC);
+  const flipped = code.checkJoint(compressionJoint(joint), carriedLoad, "bolts");
   const symbol = share.value === 1 ? "C" : `${share.value} C`;
-  for (const c of flipped.checks) if (c.type === "strength" && BOLT_KINDS.has(c.kind)) checks.push(labelled(c, "compression", carried / ref, reversal, symbol));
+  for (const c of flipped.checks) if (c.type === "strength" && isBoltKind(c.kind)) checks.push(labelled(c, "compression", carried / ref, reversal, symbol));
   const own = comp.checks(joint, scenario, share.value);
   for (const c of own.checks) checks.push(labelled(c, "compression", c.type === "strength" ? C / ref : 1, reversal));
   // The conventions in words, written when an output reads them.

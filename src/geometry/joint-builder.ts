@@ -12,7 +12,7 @@
 import type { CheckableScenario, HoleType, PlateSpec, SlotDirection } from "../model/scenario.js";
 import { mapped } from "../model/lists.js";
 import type { BoltGroupGeometry, GroupId, Hole, Joint, PlateId, PlatePiece } from "../model/joint.js";
-import { describePattern, loadedEndDistance, patternHoles } from "./patterns.js";
+import { describePattern, loadedEndDistance, patternHoles, type LocalHole } from "./patterns.js";
 
 export interface HoleDimensions {
   across_mm: number;
@@ -49,18 +49,9 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     return platePiece(id, role, label, spec, m.fy_MPa, m.fu_MPa, m.note, extent.x0_mm, extent.x1_mm, extent.continues, forceShare, connections, stackIndex);
   };
 
-  const makeHole = (group: Hole["group"], index: number, x: number, y: number): Hole => ({
-    id: holeId(group, index),
-    group,
-    x_mm: x,
-    y_mm: y,
-    across_mm: holeDims.across_mm,
-    along_mm: holeDims.along_mm,
-  });
-
   if (!butt) {
     const L = xMaxLocal + farEnd;
-    const holes = mapped(local, (h, i) => makeHole("J", i, h.x_mm, h.y_mm));
+    const holes = groupHolesAt(local, "J", 0, 1, holeDims);
     const pieces: PlatePiece[] = [
       piece("mainA", "main", "main plate A", plates.mainA, { x0_mm: 0, x1_mm: L, continues: "left" }, 1,
         [{ group: "J", endX_mm: L, towardEnd: 1 }], 0),
@@ -69,7 +60,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     ];
     const group: BoltGroupGeometry = {
       id: "J",
-      holeIds: mapped(holes, (h) => h.id),
+      holeIds: holeIdsOf(holes),
       holes,
       shearPlanes: 1,
       stack: ["mainA", "mainB"],
@@ -81,8 +72,8 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
 
   const halfGap = splice.buttGap_mm / 2;
   const halfCover = halfGap + xMaxLocal + farEnd;
-  const holesB = mapped(local, (h, i) => makeHole("B", i, halfGap + h.x_mm, h.y_mm));
-  const holesA = mapped(local, (h, i) => makeHole("A", i, -(halfGap + h.x_mm), h.y_mm));
+  const holesB = groupHolesAt(local, "B", halfGap, 1, holeDims);
+  const holesA = groupHolesAt(local, "A", halfGap, -1, holeDims);
   const doubleCover = splice.type === "butt-double-cover";
   const coverSpecs = plates.covers;
   const coverArea = mapped(coverSpecs, (c) => c.width_mm * c.thickness_mm);
@@ -144,7 +135,7 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
     if (doubleCover) stackIds.push("coverB");
     return {
       id,
-      holeIds: mapped(holes, (h) => h.id),
+      holeIds: holeIdsOf(holes),
       holes,
       shearPlanes: doubleCover ? 2 : 1,
       stack: stackIds,
@@ -154,6 +145,27 @@ export function buildJoint(scenario: CheckableScenario, code: GeometryCode): Joi
   };
 
   return jointOf(splice.type, bolts.size_mm, pieces, [...holesA, ...holesB], [groupFor("A", holesA), groupFor("B", holesB)], splice.buttGap_mm, 2 * halfCover, patternText);
+}
+
+/**
+ * The holes of one group from the pattern's local centres: x = side·(offset + x_local) (side +1 for
+ * group B and a lap's group, −1 for the mirror-image group A), y as in the pattern; each hole's fields
+ * written in one order (one shape for every hole).
+ */
+function groupHolesAt(local: readonly LocalHole[], group: GroupId, offset_mm: number, side: 1 | -1, dims: HoleDimensions): Hole[] {
+  const holes: Hole[] = [];
+  for (let i = 0; i < local.length; i++) {
+    const h = local[i]!;
+    holes.push({ id: holeId(group, i), group, x_mm: side > 0 ? offset_mm + h.x_mm : -(offset_mm + h.x_mm), y_mm: h.y_mm, across_mm: dims.across_mm, along_mm: dims.along_mm });
+  }
+  return holes;
+}
+
+/** The names of the holes, in their order. */
+function holeIdsOf(holes: readonly Hole[]): string[] {
+  const ids: string[] = [];
+  for (const h of holes) ids.push(h.id);
+  return ids;
 }
 
 /**

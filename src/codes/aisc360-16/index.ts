@@ -17,7 +17,7 @@ import type { CheckScope, CodeChecks, DesignCode, ScopeError } from "../types.js
 import { boltChecksOnly, codeChecks } from "../check-builders.js";
 import { unitText, type UnitText } from "./display.js";
 import { holeDimensions } from "./holes.js";
-import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearingCheck, groupShear, netSectionCheck, slipCheck, type GroupShear } from "./joint-checks.js";
+import { aiscBolt, blockShearCheck, boltShearCheck, grossYieldCheck, groupBearingCheck, GoverningBlocks, groupShear, GroupStrengths, netSectionCheck, slipCheck, type GroupShear } from "./joint-checks.js";
 import { astmGradeOf, GRADES, plateStrength, Tb_N } from "./materials.js";
 import { phiPnRupture, phiPnYield } from "./tension.js";
 import { searchLimits, strengthBound } from "./search-bounds.js";
@@ -101,9 +101,10 @@ function boltGroupChecks(joint: Joint, scenario: CheckableScenario, shears: read
     if (slipCritical) checks.push(slipCheck(joint, scenario, gs));
     checks.push(boltShearCheck(joint, scenario, gs));
   }
+  const sums = new GroupStrengths();
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
-    for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shearOf(shears, c.group)));
+    for (const c of plate.connections) checks.push(groupBearingCheck(joint, scenario, plate, c, shearOf(shears, c.group), sums));
   }
   return checks;
 }
@@ -111,12 +112,13 @@ function boltGroupChecks(joint: Joint, scenario: CheckableScenario, shears: read
 /** The plate checks per loaded plate: gross yield (D2(a), J4.1(a)), net-section rupture (D2(b), J4.1(b)), block shear per group (J4.3). */
 function plateChecks(joint: Joint, scenario: CheckableScenario): CheckResult[] {
   const checks: CheckResult[] = [];
+  const blocks = new GoverningBlocks();
   for (const plate of joint.plates) {
     if (plate.role === "packing") continue;
     checks.push(grossYieldCheck(scenario, plate));
     checks.push(netSectionCheck(joint, scenario, plate));
     for (const c of plate.connections) {
-      const block = blockShearCheck(joint, scenario, plate, c);
+      const block = blockShearCheck(joint, scenario, plate, c, blocks);
       if (block) checks.push(block);
     }
   }

@@ -4,7 +4,7 @@
  */
 import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
 import { mapped } from "../../model/lists.js";
-import { blockLoadText, blockShapes, governingBlock, type BlockShape } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -22,7 +22,7 @@ import { unitText, type UnitText } from "./display.js";
 import { netAllowance_mm } from "./holes.js";
 import { astmGradeOf, boltGroupOf, Tb_N, type BoltGroup } from "./materials.js";
 import { hf, phiRnSlip, phiSlip } from "./slip.js";
-import { phiPnRupture, phiPnYield, phiRnBlockShear, phiRnBlockShear_N, spliceEffectiveArea } from "./tension.js";
+import { phiPnRupture, phiPnYield, phiRnBlockShear, phiRnBlockShear_N, spliceEffectiveArea, type BlockShearResult } from "./tension.js";
 
 /** What the checks need to know about the bolt, from the scenario. */
 export interface AiscBolt {
@@ -182,7 +182,7 @@ const BEARING_NOTES_CONSIDERED = (): string[] => ["deformation at the bolt hole 
 const BEARING_NOTES_NOT_CONSIDERED = (): string[] => ["deformation at the bolt hole at service load is not a design consideration: bearing J3.10(a)(1)(ii), tearout J3.10(a)(2)(ii)"];
 
 /** What one plate's bolts of a group resist in J3.6 and J3.10(a): the strengths per bolt, N. */
-interface PlateBolts {
+export interface PlateBolts {
   holes: readonly Hole[];
   connection: PlateConnection;
   ct: number;
@@ -215,6 +215,27 @@ function groupStrength_N(b: PlateBolts): number {
   return total;
 }
 
+/**
+ * The group strengths Σ min(shear, bearing, tearout) of one check of a joint, each worked out once: a
+ * plate whose bolts have the same holes, plate end, t, Fu and strengths per bolt as an earlier plate's
+ * (both covers of a butt splice, for each group) has the same sum. Made afresh by every check call.
+ */
+export class GroupStrengths {
+  readonly #measured: Array<{ bolts: PlateBolts; total_N: number }> = [];
+  /** groupStrength_N of the plate's bolts, N (AISC 360-16 J3.6, J3.10(a)). */
+  of(b: PlateBolts): number {
+    for (const m of this.#measured) if (samePlateBolts(m.bolts, b)) return m.total_N;
+    const total_N = groupStrength_N(b);
+    this.#measured.push({ bolts: b, total_N });
+    return total_N;
+  }
+}
+
+/** Whether two plates' bolts have every number their group strength is worked out from. */
+function samePlateBolts(a: PlateBolts, b: PlateBolts): boolean {
+  return a.holes === b.holes && a.connection.towardEnd === b.connection.towardEnd && a.connection.endX_mm === b.connection.endX_mm && a.ct === b.ct && a.t_mm === b.t_mm && a.Fu_MPa === b.Fu_MPa && a.shear_N === b.shear_N && a.bearing_N === b.bearing_N;
+}
+
 /** The bolts grouped by what governs each, in words: "4 × 98.2 kN (bolt shear) + 2 × … (tearout, …)". */
 function tallyText(b: PlateBolts, u: UnitText): string {
   const tally = new Map<string, { count: number; each: number; text: string }>();
@@ -233,7 +254,7 @@ function tallyText(b: PlateBolts, u: UnitText): string {
  * AISC 360-16 J3.6 (shear per bolt, the planes through which this plate is loaded), J3.10(a) (bearing
  * φ·cb·d·t·Fu and tearout φ·ct·lc·t·Fu, lc the clear distance to the plate end or the hole ahead).
  */
-export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, gs: GroupShear): StrengthCheck {
+export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, gs: GroupShear, sums: GroupStrengths = new GroupStrengths()): StrengthCheck {
   const { bolts, options } = scenario;
   const bolt = aiscBolt(bolts);
   const u = unitText(scenario);
@@ -247,7 +268,7 @@ export function groupBearingCheck(joint: Joint, scenario: CheckableScenario, pla
   const shear = gs.perPlane_N * planes;
   const bearing = phiRnBearing(cb, bolt.d_mm, t, Fu);
   const plateBolts: PlateBolts = { holes: gs.holes, connection, ct, t_mm: t, Fu_MPa: Fu, shear_N: shear, bearing_N: bearing };
-  const total = groupStrength_N(plateBolts);
+  const total = sums.of(plateBolts);
   return strength({
     id: `bearing:${plate.id}:${connection.group}`,
     kind: "bolt-bearing",
@@ -393,6 +414,32 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
+/**
+ * The governing blocks of one check of a joint, each worked out once: a plate with the same block
+ * shapes (the same array from blockShapes), bolt count, t, Fy, Fu, share and block load as an earlier
+ * plate (both covers of a butt splice, for each group) has the same governing block, only read. Made
+ * afresh by every check call.
+ */
+export class GoverningBlocks {
+  readonly #measured: Array<{ shapes: readonly BlockShape[]; bolts: number; t_mm: number; Fy_MPa: number; Fu_MPa: number; share: number; load: BlockShearLoad; best: GoverningBlock<BlockShearResult> | null }> = [];
+  /** The governing block of the shapes in a plate of thickness t, by φRn of AISC 360-16 J4.3, Eq. J4-5. */
+  of(shapes: readonly BlockShape[], bolts: number, t_mm: number, Fy_MPa: number, Fu_MPa: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
+    for (const m of this.#measured) {
+      if (m.shapes === shapes && m.bolts === bolts && m.t_mm === t_mm && m.Fy_MPa === Fy_MPa && m.Fu_MPa === Fu_MPa && m.share === share && m.load === load) return m.best;
+    }
+    const best = governingAiscBlock(shapes, bolts, t_mm, Fy_MPa, Fu_MPa, share, load);
+    this.#measured.push({ shapes, bolts, t_mm, Fy_MPa, Fu_MPa, share, load, best });
+    return best;
+  }
+}
+
+/** The governing block of the shapes: every shape compared by its φRn alone, the rupture and yield terms worked out for the governing one (J4.3, Eq. J4-5). */
+function governingAiscBlock(shapes: readonly BlockShape[], bolts: number, t: number, Fy: number, Fu: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
+  const phiRn = (shape: BlockShape) => phiRnBlockShear_N(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, Fy, Fu);
+  const terms = (shape: BlockShape) => phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, Fy, Fu);
+  return governingBlock(shapes, bolts, share, load, phiRn, terms);
+}
+
 /** Block shear, J4.3, Eq. J4-5; the block's demand F (whole plate force) or F·k/n (its bolts' share). */
 const BLOCK_SHEAR_CITATION = fixedCl("J4.3", { equation: "J4-5" });
 const BLOCK_FORMULA_FULL = "F ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.60·Fy·Agv + Ubs·Fu·Ant), φ = 0.75, Ubs = 1";
@@ -404,17 +451,13 @@ const BLOCK_FORMULA_SHARE = "F·k/n ≤ φ·min(0.60·Fu·Anv + Ubs·Fu·Ant, 0.
  * force (full); the check reports the joint tension the block permits. AISC 360-16 J4.3, Eq. J4-5
  * (Ubs = 1; net areas with the B4.3b allowance).
  */
-export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection): StrengthCheck | null {
+export function blockShearCheck(joint: Joint, scenario: CheckableScenario, plate: PlatePiece, connection: PlateConnection, blocks: GoverningBlocks = new GoverningBlocks()): StrengthCheck | null {
   const u = unitText(scenario);
   const holes = netHolesOf(joint, groupHoles(joint, connection.group));
   const shapes = blockShapes(holes, connection, plate.spec.width_mm, joint.holes);
   const t = plate.spec.thickness_mm;
   const load = scenario.options.blockShearLoad;
-  const { fy_MPa: Fy, fu_MPa: Fu } = plate;
-  // Every shape is compared by its φRn alone; the rupture and yield terms are worked out for the governing one.
-  const phiRn = (shape: BlockShape) => phiRnBlockShear_N(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, Fy, Fu);
-  const terms = (shape: BlockShape) => phiRnBlockShear(shape.shearGross_mm * t, shape.shearNet_mm * t, shape.tensionNet_mm * t, Fy, Fu);
-  const best = governingBlock(shapes, holes.length, plate.forceShare, load, phiRn, terms);
+  const best = blocks.of(shapes, holes.length, t, plate.fy_MPa, plate.fu_MPa, plate.forceShare, load);
   if (!best) return null;
   const s = best.shape;
   const r = best.detail;

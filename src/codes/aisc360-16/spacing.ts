@@ -124,6 +124,12 @@ function preferredSpacingOf(joint: Joint, u: UnitText, least: number): Warning |
   return { id: "spacing-below-3d", message: `least bolt spacing ${u.len(least)} is below the preferred 3 d = ${u.len(3 * d)} (AISC 360-16 J3.3; the minimum 2⅔ d is checked)` };
 }
 
+/** Whether a plate before plates[k] connects to the same bolt groups, in the same order. */
+function repeatsEarlierPlate(plates: readonly PlatePiece[], k: number): boolean {
+  for (let m = 0; m < k; m++) if (sameConnections(plates[m]!, plates[k]!)) return true;
+  return false;
+}
+
 /** Whether two plates connect to the same bolt groups, in the same order. */
 function sameConnections(a: PlatePiece, b: PlatePiece): boolean {
   if (a.connections.length !== b.connections.length) return false;
@@ -183,9 +189,13 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
   const groupLines = mapped(joint.groups, (g) => gaugeLines(g.holes));
   const thinner = new GroupPairThickness(joint);
   const plateLines: Line[][] = [];
+  const acrossWalked = mapped(joint.groups, () => false);
   for (let k = 0; k < plates.length; k++) {
     const plate = plates[k]!;
     plateLines.push(gaugeLinesOfPlate(joint, plates, plateLines, groupLines, k));
+    // A plate with an earlier plate's groups (cover B after cover A) has its lines and pair thicknesses:
+    // its equal spacings never replace the worst (a worse one must be worse by more than the tolerance).
+    if (repeatsEarlierPlate(plates, k)) continue;
     for (const line of plateLines[k]!) {
       for (let n = 1; n < line.holes.length; n++) {
         const a = line.holes[n - 1]!;
@@ -196,7 +206,9 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
       }
     }
     for (let gi = 0; gi < joint.groups.length; gi++) {
-      if (!connects(plate, joint.groups[gi]!.id)) continue;
+      // A group's gaps (and their limits, from its groups alone) are walked with the first plate joined to it.
+      if (acrossWalked[gi] || !connects(plate, joint.groups[gi]!.id)) continue;
+      acrossWalked[gi] = true;
       const gl = groupLines[gi]!;
       for (let i = 1; i < gl.length; i++) {
         const limit = maxSpacing_mm(thinner.of(gl[i - 1]!.holes[0]!, gl[i]!.holes[0]!), inch, corrosion);
