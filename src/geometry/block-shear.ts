@@ -312,6 +312,28 @@ export function governingBlock<D>(
   return { shape, ratio: bestRatio, value_N: bestValue, permits_N: bestPermits, detail: detailOf(shape) };
 }
 
+/** A code's governing block of a set of shapes in a plate of thickness t with strengths fy, fu (governingBlock with its resistance). */
+export type GoverningOf<D> = (shapes: readonly BlockShape[], bolts: number, t_mm: number, fy_MPa: number, fu_MPa: number, share: number, load: BlockShearLoad) => GoverningBlock<D> | null;
+
+/**
+ * The governing blocks of one check call, each worked out once: a plate with the same block shapes (the
+ * same array from blockShapes), bolt count, t, fy, fu, share and block load as an earlier plate of the
+ * call (both covers of a butt splice; the mirror-image main plates) has the same governing block, only
+ * read. Made afresh for every check call, never kept between calls.
+ */
+export class GoverningBlocksOfCall<D> {
+  readonly #measured: Array<{ shapes: readonly BlockShape[]; bolts: number; t_mm: number; fy_MPa: number; fu_MPa: number; share: number; load: BlockShearLoad; best: GoverningBlock<D> | null }> = [];
+  constructor(private readonly governingOf: GoverningOf<D>) {}
+  of(shapes: readonly BlockShape[], bolts: number, t_mm: number, fy_MPa: number, fu_MPa: number, share: number, load: BlockShearLoad): GoverningBlock<D> | null {
+    for (const m of this.#measured) {
+      if (m.shapes === shapes && m.bolts === bolts && m.t_mm === t_mm && m.fy_MPa === fy_MPa && m.fu_MPa === fu_MPa && m.share === share && m.load === load) return m.best;
+    }
+    const best = this.governingOf(shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load);
+    this.#measured.push({ shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load, best });
+    return best;
+  }
+}
+
 /** The block's share of the load and the joint tension it permits, in words (every code's block text). */
 export function blockLoadText(b: GoverningBlock<unknown>, bolts: number, share: number, load: BlockShearLoad, kN: (n: number) => string): string {
   const k = b.shape.boltsInBlock;

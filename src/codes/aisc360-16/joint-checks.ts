@@ -4,7 +4,7 @@
  */
 import { inchBoltSize, inchSizeText, shankArea_mm2 } from "../../catalogue/bolts.js";
 import { mapped } from "../../model/lists.js";
-import { blockLoadText, blockShapes, governingBlock, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, GoverningBlocksOfCall, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -414,22 +414,10 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
-/**
- * The governing blocks of one check of a joint, each worked out once: a plate with the same block
- * shapes (the same array from blockShapes), bolt count, t, Fy, Fu, share and block load as an earlier
- * plate (both covers of a butt splice, for each group) has the same governing block, only read. Made
- * afresh by every check call.
- */
-export class GoverningBlocks {
-  readonly #measured: Array<{ shapes: readonly BlockShape[]; bolts: number; t_mm: number; Fy_MPa: number; Fu_MPa: number; share: number; load: BlockShearLoad; best: GoverningBlock<BlockShearResult> | null }> = [];
-  /** The governing block of the shapes in a plate of thickness t, by φRn of AISC 360-16 J4.3, Eq. J4-5. */
-  of(shapes: readonly BlockShape[], bolts: number, t_mm: number, Fy_MPa: number, Fu_MPa: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
-    for (const m of this.#measured) {
-      if (m.shapes === shapes && m.bolts === bolts && m.t_mm === t_mm && m.Fy_MPa === Fy_MPa && m.Fu_MPa === Fu_MPa && m.share === share && m.load === load) return m.best;
-    }
-    const best = governingAiscBlock(shapes, bolts, t_mm, Fy_MPa, Fu_MPa, share, load);
-    this.#measured.push({ shapes, bolts, t_mm, Fy_MPa, Fu_MPa, share, load, best });
-    return best;
+/** The governing blocks of one check call by J4.3 (GoverningBlocksOfCall): made afresh by every check call. */
+export class GoverningBlocks extends GoverningBlocksOfCall<BlockShearResult> {
+  constructor() {
+    super(governingAiscBlock);
   }
 }
 

@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, GoverningBlocksOfCall, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -324,17 +324,6 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
 }
 
 /** One governing block worked out for a set of shapes, with everything it was worked out from. */
-interface GoverningAsked {
-  shapes: readonly BlockShape[];
-  bolts: number;
-  t_mm: number;
-  fy_MPa: number;
-  fu_MPa: number;
-  share: number;
-  load: BlockShearLoad;
-  best: GoverningBlock<BlockShearResult> | null;
-}
-
 /**
  * The block shapes of one check's joint (blockShapes), each asked once and handed to every plate of the
  * same width that one group bears on toward the same end (both cover plates of a butt splice); and the
@@ -344,7 +333,7 @@ interface GoverningAsked {
  */
 export class BlockShapesOf {
   readonly #asked: { connection: PlateConnection; width_mm: number; shapes: readonly BlockShape[] }[] = [];
-  readonly #governing: GoverningAsked[] = [];
+  readonly #governing = new GoverningBlocksOfCall(governingTdb);
   constructor(private readonly joint: Joint) {}
   of(connection: PlateConnection, width_mm: number): readonly BlockShape[] {
     for (const m of this.#asked) {
@@ -355,15 +344,11 @@ export class BlockShapesOf {
     this.#asked.push({ connection, width_mm, shapes });
     return shapes;
   }
-  /** The governing block of `shapes` in a plate of thickness t (governingBlock with cl. 6.4.1's Tdb). */
+  /** The governing block of `shapes` in a plate of thickness t (governingBlock with cl. 6.4.1's Tdb), once per call for the same figures. */
   governing(shapes: readonly BlockShape[], bolts: number, t_mm: number, fy_MPa: number, fu_MPa: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
-    for (const m of this.#governing) {
-      if (m.shapes === shapes && m.bolts === bolts && m.t_mm === t_mm && m.fy_MPa === fy_MPa && m.fu_MPa === fu_MPa && m.share === share && m.load === load) return m.best;
-    }
-    const best = governingTdb(shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load);
-    this.#governing.push({ shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load, best });
-    return best;
+    return this.#governing.of(shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load);
   }
+
 }
 
 /** The governing block by cl. 6.4.1: every shape's Tdb as a number (no object per shape); the two terms of the governing one for its text. */
