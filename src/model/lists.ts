@@ -13,3 +13,8 @@ export function mapped<T, U>(xs: readonly T[], f: (x: T, index: number) => U): U
   for (let i = 0; i < xs.length; i++) out.push(f(xs[i]!, i));
   return out;
 }
+
+/** Appends each of `more` to `list`, in order (no spread into the arguments of push). */
+export function pushAll<T>(list: T[], more: readonly T[]): void {
+  for (let i = 0; i < more.length; i++) list.push(more[i]!);
+}

@@ -14,6 +14,15 @@ export interface Citation {
   also?: string[];
 }
 
+/**
+ * A citation made once and shared by every result that cites it (a module constant, not one object per
+ * check): frozen, its cross-references too, so that no reader can change it for the others.
+ */
+export function frozenCitation(citation: Citation): Readonly<Citation> {
+  if (citation.also) Object.freeze(citation.also);
+  return Object.freeze(citation);
+}
+
 export type CheckKind =
   | "bolt-shear"
   | "bolt-bearing"

@@ -4,7 +4,7 @@
  * plates A36 and A572 Grade 50; ASTM F3125 A325 / A490 and A307 bolts.
  */
 import { INCH_BOLT_SIZES_IN, inchBoltSize } from "../../catalogue/bolts.js";
-import { mapped } from "../../model/lists.js";
+import { mapped, pushAll } from "../../model/lists.js";
 import { MM_PER_IN } from "./factors.js";
 import { astmPlateGrade } from "../../catalogue/steels.js";
 import type { Joint } from "../../model/joint.js";
@@ -60,11 +60,6 @@ function scopeErrors(scenario: Scenario): ScopeError[] {
 function shearOf(shears: readonly GroupShear[], group: GroupShear["group"]["id"]): GroupShear {
   for (const s of shears) if (s.group.id === group) return s;
   throw new RangeError(`no bolt group ${group} in the joint`);
-}
-
-/** Appends a rule's results (none or one) to the checks. */
-function pushAll(checks: CheckResult[], results: readonly CheckResult[]): void {
-  for (const r of results) checks.push(r);
 }
 
 function checkJoint(joint: Joint, scenario: CheckableScenario, scope: CheckScope = "all"): CodeChecks {

@@ -1,4 +1,4 @@
-import type { Citation } from "../../model/results.js";
+import { frozenCitation, type Citation } from "../../model/results.js";
 
 export const STANDARD = "EN 1993-1-8";
 
@@ -12,11 +12,5 @@ export function cl11(clause: string, extra?: Omit<Citation, "standard" | "clause
   return extra ? { standard: "EN 1993-1-1", clause, ...extra } : { standard: "EN 1993-1-1", clause };
 }
 
-/**
- * A citation made once and shared by every result that cites it (a module constant, not one object per
- * check): frozen, with its list of cross-references, so that no reader can change it for the others.
- */
-export function fixed(citation: Citation): Citation {
-  if (citation.also) Object.freeze(citation.also);
-  return Object.freeze(citation);
-}
+/** A citation made once and shared by every result that cites it (frozenCitation). */
+export const fixed = frozenCitation;

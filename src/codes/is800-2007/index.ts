@@ -2,7 +2,7 @@
  * IS 800:2007 (limit state method) as a design-code module.
  */
 import { ownEntry } from "../../catalogue/lookup.js";
-import { mapped } from "../../model/lists.js";
+import { mapped, pushAll } from "../../model/lists.js";
 import { isPropertyClass } from "../../catalogue/bolts.js";
 import { IS2062_GRADES } from "../../catalogue/steels.js";
 import type { Joint, PlatePiece } from "../../model/joint.js";
@@ -120,11 +120,6 @@ function plateChecks(joint: Joint, scenario: CheckableScenario, layout: SpacingL
     }
   }
   return checks;
-}
-
-/** Appends each of `more` to `list` (no spread into arguments). */
-function pushAll<T>(list: T[], more: readonly T[]): void {
-  for (let i = 0; i < more.length; i++) list.push(more[i]!);
 }
 
 /** The conventions of an IS 800 check in words (written when an output reads them). */
