@@ -2,16 +2,12 @@
  * What spacing, end and edge rules of any design code measure on a joint: the plates a hole passes,
  * the outside plates of a bolt stack, and the governing (worst) measurement of a rule.
  */
-import { groupHoles, holesOfPlate } from "../geometry/joint-builder.js";
+import { connects, groupHoles, holesOfPlate } from "../geometry/joint-builder.js";
 import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { Citation, RuleCheck } from "../model/results.js";
 import { rule } from "./check-builders.js";
 
-/** Whether a plate takes load from a bolt group (its holes pass through the plate). */
-export function connects(plate: PlatePiece, group: Hole["group"]): boolean {
-  for (const c of plate.connections) if (c.group === group) return true;
-  return false;
-}
+export { connects } from "../geometry/joint-builder.js";
 
 /** Plates (not packing) through which a hole passes. */
 export function platesThrough(joint: Joint, hole: Hole): PlatePiece[] {

@@ -85,11 +85,6 @@ function labelled(c: CheckResult, sense: LoadSense, scale: number, reversal: boo
   return relabelled(c, id, title, sense, scale, substituted, notes);
 }
 
-/** Every check of every sense of the scenario's load. */
-export function checksBySense(joint: Joint, scenario: CheckableScenario, code: DesignCode): CodeChecks {
-  return checksOfSenses(joint, scenario, code, loadSenses(scenario.load));
-}
-
 /** Whether a check is of a kind of the code's own checks that apply in compression too, with the bearing directions reversed: bolt shear, bearing, slip. */
 function isBoltKind(kind: CheckResult["kind"]): boolean {
   return kind === "bolt-shear" || kind === "bolt-bearing" || kind === "slip";

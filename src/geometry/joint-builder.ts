@@ -181,7 +181,7 @@ function holeId(group: GroupId, index: number): string {
 const HOLE_NAMES: Record<GroupId, string[]> = { J: [], A: [], B: [] };
 
 /** A joint, its fields written in one order (one shape for every joint, built here or with other plates). */
-function jointOf(spliceType: Joint["spliceType"], boltDiameter_mm: number, plates: PlatePiece[], holes: Hole[], groups: BoltGroupGeometry[], buttGap_mm: number, spliceLength_mm: number, patternText: string): Joint {
+function jointOf(spliceType: Joint["spliceType"], boltDiameter_mm: number, plates: PlatePiece[], holes: readonly Hole[], groups: BoltGroupGeometry[], buttGap_mm: number, spliceLength_mm: number, patternText: string): Joint {
   return { spliceType, boltDiameter_mm, plates, holes, groups, buttGap_mm, spliceLength_mm, patternText };
 }
 
@@ -227,12 +227,12 @@ export function holesOfPlate(joint: Joint, plate: PlatePiece): readonly Hole[] {
   if (plate.connections.length === 1) return groupHoles(joint, plate.connections[0]!.group);
   // A plate joined to every group (the covers of a butt splice) has the joint's own hole list, one
   // array for both covers, so measurements made from it can be shared (net-section.ts, netPathFor).
-  if (joint.groups.every((g) => joinsGroup(plate, g.id))) return joint.holes;
-  return joint.holes.filter((h) => joinsGroup(plate, h.group));
+  if (joint.groups.every((g) => connects(plate, g.id))) return joint.holes;
+  return joint.holes.filter((h) => connects(plate, h.group));
 }
 
-/** Whether a plate takes load from a bolt group. */
-function joinsGroup(plate: PlatePiece, group: GroupId): boolean {
+/** Whether a plate takes load from a bolt group (its holes pass through the plate). */
+export function connects(plate: PlatePiece, group: GroupId): boolean {
   for (const c of plate.connections) if (c.group === group) return true;
   return false;
 }

@@ -20,26 +20,9 @@ export interface Line {
  */
 
 /**
- * The holes sorted by a comparison, stable (equal holes keep their order), by insertion: a joint has
- * tens of holes, where insertion beats the general sort.
- */
-export function sortedHoles(holes: readonly Hole[], before: (a: Hole, b: Hole) => number): Hole[] {
-  const out = holes.slice();
-  for (let i = 1; i < out.length; i++) {
-    const h = out[i]!;
-    let j = i - 1;
-    while (j >= 0 && before(out[j]!, h) > 0) {
-      out[j + 1] = out[j]!;
-      j--;
-    }
-    out[j + 1] = h;
-  }
-  return out;
-}
-
-/**
- * The holes sorted by y, then x (stable): sortedHoles with the comparison a.y − b.y || a.x − b.x
- * written in place, so that the hottest sort of the rules and the net path calls no function per step.
+ * The holes sorted by y, then x, stable (equal holes keep their order), by insertion (a joint has tens
+ * of holes, where insertion beats the general sort), with the comparison a.y − b.y || a.x − b.x written
+ * in place, so that the hottest sort of the rules and the net path calls no function per step.
  */
 export function sortedByYThenX(holes: readonly Hole[]): Hole[] {
   const out = holes.slice();
@@ -55,7 +38,7 @@ export function sortedByYThenX(holes: readonly Hole[]): Hole[] {
   return out;
 }
 
-/** The holes sorted by x, then y (stable): sortedHoles with a.x − b.x || a.y − b.y written in place. */
+/** The holes sorted by x, then y, stable, by insertion: a.x − b.x || a.y − b.y written in place. */
 export function sortedByXThenY(holes: readonly Hole[]): Hole[] {
   const out = holes.slice();
   for (let i = 1; i < out.length; i++) {

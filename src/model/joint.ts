@@ -69,7 +69,8 @@ export interface Joint {
   spliceType: SpliceType;
   boltDiameter_mm: number;
   plates: PlatePiece[];
-  holes: Hole[];
+  /** Every hole, group by group (the joint builder's own list: measurements are keyed on it, so read only). */
+  holes: readonly Hole[];
   groups: BoltGroupGeometry[];
   /** Butt splices: gap between the main plate ends, mm. */
   buttGap_mm: number;

@@ -2,16 +2,16 @@
  * Check results: data, never text printed by the core.
  */
 
-/** A structured citation. Never free text. */
+/** A structured citation, never free text: shared by the results that cite it, so read only. */
 export interface Citation {
-  standard: string;
-  clause: string;
+  readonly standard: string;
+  readonly clause: string;
   /** "Table 3.4", as the standard names it. */
-  table?: string;
+  readonly table?: string;
   /** The equation number as the standard prints it: "(6.6)" (EN), "J3-1" (AISC). */
-  equation?: string;
+  readonly equation?: string;
   /** Other clauses the check applies alongside ("3.8, Eq. (3.5)"). */
-  also?: string[];
+  readonly also?: readonly string[];
 }
 
 /**

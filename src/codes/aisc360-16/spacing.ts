@@ -12,7 +12,7 @@ import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, p
 import { fixedCl } from "./citation.js";
 import { unitText, type UnitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
-import { mapped } from "../../model/lists.js";
+import { mapped, pushAll } from "../../model/lists.js";
 
 /** Minimum spacing between centres of standard, oversized or slotted holes, 2⅔ d (3 d preferred). AISC 360-16 J3.3. */
 export function minSpacing_mm(d_mm: number): number {
@@ -97,20 +97,11 @@ function minSpacingOf(worst: Worst | null): RuleCheck[] {
   return worstRule("min-spacing", "min-spacing", "Minimum spacing", MIN_SPACING_CITATION, "s ≥ 2⅔ d", "min", worst);
 }
 
-/** Minimum spacing between fastener centres, 2⅔ d. AISC 360-16 J3.3. */
-export function minSpacingRule(joint: Joint, scenario: Scenario): RuleCheck[] {
-  return minSpacingOf(measureSpacing(joint, unitText(scenario)).worst);
-}
-
 /**
- * The preferred spacing of 3 d: a warning (not a failed check) when the least centre distance is below it.
- * AISC 360-16 J3.3 ("a distance of 3d is preferred").
+ * Minimum spacing between fastener centres, 2⅔ d, and the preferred 3 d (a warning, not a failed check,
+ * when the least centre distance is below it: "a distance of 3d is preferred"), from one walk over the
+ * hole pairs. AISC 360-16 J3.3.
  */
-export function preferredSpacingWarning(joint: Joint, scenario: Scenario): Warning | null {
-  return preferredSpacingOf(joint, unitText(scenario), measureSpacing(joint, unitText(scenario)).least_mm);
-}
-
-/** The minimum spacing rule and the 3 d warning of J3.3 from one walk over the hole pairs. */
 export function spacingRuleAndWarning(joint: Joint, scenario: Scenario): { rules: RuleCheck[]; warning: Warning | null } {
   const u = unitText(scenario);
   const m = measureSpacing(joint, u);
@@ -221,7 +212,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
   const formula = inch ? texts.inch : texts.metric;
   const out = worstRule("max-pitch", "max-pitch", "Maximum spacing along the force", texts.citation, formula, "max", along);
   // J3.5 limits the longitudinal spacing; its limit is applied across the force too (the reading that refuses more).
-  if (across) out.push(...worstRule("max-spacing", "max-spacing", "Maximum spacing across the force (J3.5's longitudinal limit, also applied across)", texts.citation, formula, "max", across));
+  pushAll(out, worstRule("max-spacing", "max-spacing", "Maximum spacing across the force (J3.5's longitudinal limit, also applied across)", texts.citation, formula, "max", across));
   return out;
 }
 
@@ -289,8 +280,8 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario): RuleCheck[
   }
   const texts = inch ? EDGE_TEXTS.inch : EDGE_TEXTS.metric;
   const out = worstRule("min-end-distance", "min-end-distance", "Minimum end distance", texts.min, texts.minFormula, "min", minEnd);
-  if (minEdge) out.push(...worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", texts.min, texts.minFormula, "min", minEdge));
-  if (maxEdge) out.push(...worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", texts.max, texts.maxFormula, "max", maxEdge));
+  pushAll(out, worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", texts.min, texts.minFormula, "min", minEdge));
+  pushAll(out, worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", texts.max, texts.maxFormula, "max", maxEdge));
   return out;
 }
 

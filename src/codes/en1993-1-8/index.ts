@@ -129,7 +129,6 @@ function conventionsOf(scenario: CheckableScenario, s: Ec3Settings, smallHoles: 
   ];
 }
 
-/** The group of the given id (every connection's group is one of the joint's). */
 /**
  * The bolt-group checks: slip (Categories B and C, 3.9.1) and bolt shear (Categories A and B, 3.6.1,
  * Table 3.4) per group, with the small-hole condition (3.6.1(5)) where it applies; bearing per plate and
@@ -162,6 +161,7 @@ function plateChecks(joint: Joint, scenario: CheckableScenario, s: Ec3Settings, 
   return checks;
 }
 
+/** The group of the given id (every connection's group is one of the joint's). */
 function groupFor(groups: readonly Ec3Group[], id: Ec3Group["group"]["id"]): Ec3Group {
   for (const g of groups) if (g.group.id === id) return g;
   throw new RangeError(`no bolt group ${id}`);

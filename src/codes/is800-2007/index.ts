@@ -187,9 +187,7 @@ function minimumDesignActionCheck(scenario: CheckableScenario, jointTension_N: n
 
 /** The unperforated plate's design tension strength, the lesser of Ag·fy/γm0 and 0.9·Ag·fu/γm1 (cl. 6.2, 6.3.1), as a number. */
 function unperforated(spec: PlateSpec): number {
-  const m = plateStrength(spec);
-  const Ag = spec.width_mm * spec.thickness_mm;
-  return Math.min(Tdg(Ag, m.fy_MPa), Tdn(Ag, m.fu_MPa));
+  return unperforatedStrength(spec).value_N;
 }
 
 /**

@@ -159,11 +159,6 @@ export class TearOuts {
   }
 }
 
-/** kb of one plate for one group, from coordinates; with the e and p that set it. */
-export function bearingFactor(holes: readonly Hole[], connection: PlateConnection, fub_MPa: number, fu_MPa: number) {
-  return bearingFactorOf(tearOutOf(holes, connection), fub_MPa, fu_MPa);
-}
-
 /** kb from a group's tear-out measurements (cl. 10.3.4). */
 function bearingFactorOf(t: TearOut, fub_MPa: number, fu_MPa: number) {
   return { e_mm: t.e_mm, p_mm: t.p_mm, d0_mm: t.d0_mm, kb: kbFactor(t.e_mm, t.p_mm, t.d0_mm, fub_MPa, fu_MPa) };
@@ -323,7 +318,6 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
   });
 }
 
-/** One governing block worked out for a set of shapes, with everything it was worked out from. */
 /**
  * The block shapes of one check's joint (blockShapes), each asked once and handed to every plate of the
  * same width that one group bears on toward the same end (both cover plates of a butt splice); and the

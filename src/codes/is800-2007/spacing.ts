@@ -3,7 +3,7 @@
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
 import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
-import { mapped } from "../../model/lists.js";
+import { mapped, pushAll } from "../../model/lists.js";
 import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM, sortedByXThenY, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
@@ -107,11 +107,6 @@ export function spacingLayout(joint: Joint): SpacingLayout {
   return { plates, outside: outsidePlates(joint), holesOf, groups, groupPairThickness };
 }
 
-/** Appends the rules of `more` (none or one, from worstRule) to `rules`, without a spread into a new list. */
-function appendRules(rules: RuleCheck[], more: readonly RuleCheck[]): void {
-  for (let i = 0; i < more.length; i++) rules.push(more[i]!);
-}
-
 /** Index of a bolt group in joint.groups. */
 function groupIndex(joint: Joint, group: Hole["group"]): number {
   const groups = joint.groups;
@@ -186,8 +181,8 @@ export function maxSpacingRules(joint: Joint, layout: SpacingLayout = spacingLay
     }
   }
   const rules = worstRule("max-spacing", "max-spacing", "Maximum spacing across the force", MAX_SPACING_CITATION, "g ≤ min(32 t, 300 mm)", "max", worst.across);
-  appendRules(rules, worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", worst.pitchRelaxed ? MAX_PITCH_RELAXED_CITATION : MAX_PITCH_CITATION, "p ≤ min(16 t, 200 mm)", "max", worst.pitch));
-  appendRules(rules, worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", worst.edgeLineRelaxed ? EDGE_LINE_RELAXED_CITATION : EDGE_LINE_CITATION, "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine));
+  pushAll(rules, worstRule("max-pitch", "max-pitch", "Maximum pitch along the force (tension member)", worst.pitchRelaxed ? MAX_PITCH_RELAXED_CITATION : MAX_PITCH_CITATION, "p ≤ min(16 t, 200 mm)", "max", worst.pitch));
+  pushAll(rules, worstRule("max-edge-line-pitch", "max-edge-line-pitch", "Maximum pitch on a line next to an edge", worst.edgeLineRelaxed ? EDGE_LINE_RELAXED_CITATION : EDGE_LINE_CITATION, "p ≤ min(100 + 4 t, 200 mm)", "max", worst.edgeLine));
   return rules;
 }
 
@@ -377,8 +372,8 @@ export function edgeRules(joint: Joint, scenario: CheckableScenario, layout: Spa
     }
   }
   const rules = worstRule("min-end-distance", "min-end-distance", "Minimum end distance", MIN_DISTANCE_CITATION, "e1 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEnd);
-  appendRules(rules, worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", MIN_DISTANCE_CITATION, "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge));
-  appendRules(rules, worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", MAX_EDGE_CITATION, scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge));
+  pushAll(rules, worstRule("min-edge-distance", "min-edge-distance", "Minimum edge distance", MIN_DISTANCE_CITATION, "e2 ≥ 1.5 d0 or 1.7 d0 by edge preparation (d0: cl. 10.2.1, Table 19; oversize and slotted holes cl. 17.2.4.3)", "min", minEdge));
+  pushAll(rules, worstRule("max-edge-distance", "max-edge-distance", "Maximum edge and end distance", MAX_EDGE_CITATION, scenario.options.exposedToCorrosion ? "e ≤ 40 + 4 t (exposed to corrosion)" : "e ≤ 12 t ε", "max", maxEdge));
   return rules;
 }
 
