@@ -5,9 +5,9 @@
  */
 import { groupHoles } from "../geometry/joint-builder.js";
 import { gaugeLines, transverseLines, type Line } from "../geometry/lines.js";
-import type { GroupId, Hole, Joint, PlatePiece } from "../model/joint.js";
+import type { Hole, Joint, PlatePiece } from "../model/joint.js";
 import type { CheckableScenario } from "../model/scenario.js";
-import { beatsWorst, pairThickness, platesHoles, type Worst } from "./rule-measures.js";
+import { beatsWorst, PairThickness, platesHoles, type Worst } from "./rule-measures.js";
 
 /** Effective length factor of a cover plate strut held by bolts at both ends: fixed-fixed, 0.65 (common practice). */
 export const COVER_STRUT_K = 0.65;
@@ -58,25 +58,6 @@ export function worstCompressionPitch(joint: Joint, limitOf: (t_mm: number) => {
 }
 
 const NO_TEXT = (): string => "";
-
-/**
- * pairThickness of one joint, measured once per pair of groups: it reads only the holes' groups (the
- * thinner plate that both groups' holes pass through).
- */
-class PairThickness {
-  readonly #groupA: GroupId[] = [];
-  readonly #groupB: GroupId[] = [];
-  readonly #thickness: number[] = [];
-  constructor(private readonly joint: Joint) {}
-  of(a: Hole, b: Hole): number {
-    for (let k = 0; k < this.#thickness.length; k++) if (this.#groupA[k] === a.group && this.#groupB[k] === b.group) return this.#thickness[k]!;
-    const t = pairThickness(this.joint, a, b);
-    this.#groupA.push(a.group);
-    this.#groupB.push(b.group);
-    this.#thickness.push(t);
-    return t;
-  }
-}
 
 /** The largest pitch along the force between consecutive holes of one group in a plate, mm (0: one line). */
 export function largestPitch_mm(joint: Joint, plate: PlatePiece): number {

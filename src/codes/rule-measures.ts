@@ -23,6 +23,25 @@ export function pairThickness(joint: Joint, a: Hole, b: Hole): number {
   return t;
 }
 
+/**
+ * pairThickness of one check call, worked out once per pair of bolt groups: it reads only the two
+ * holes' groups. Made afresh for every call (never kept between calls).
+ */
+export class PairThickness {
+  readonly #groupA: Hole["group"][] = [];
+  readonly #groupB: Hole["group"][] = [];
+  readonly #thickness: number[] = [];
+  constructor(private readonly joint: Joint) {}
+  of(a: Hole, b: Hole): number {
+    for (let k = 0; k < this.#thickness.length; k++) if (this.#groupA[k] === a.group && this.#groupB[k] === b.group) return this.#thickness[k]!;
+    const t = pairThickness(this.joint, a, b);
+    this.#groupA.push(a.group);
+    this.#groupB.push(b.group);
+    this.#thickness.push(t);
+    return t;
+  }
+}
+
 /** Plates at either face of some bolt group's stack (the "outside" or "outer" plates of the codes). */
 export function outsidePlates(joint: Joint): PlatePiece[] {
   const ids: string[] = [];

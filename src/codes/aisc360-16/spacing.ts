@@ -8,7 +8,7 @@ import { distance, fartherThan, gaugeLines, type Line } from "../../geometry/lin
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck, Warning } from "../../model/results.js";
 import type { CheckableScenario, Scenario } from "../../model/scenario.js";
-import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, pairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, connects, forEachHolePair, groupCentroidRule, holePlates, PairThickness, platesHoles, worstRule, type Worst } from "../rule-measures.js";
 import { fixedCl } from "./citation.js";
 import { unitText, type UnitText } from "./display.js";
 import { MM_PER_IN } from "./factors.js";
@@ -133,32 +133,6 @@ function gaugeGapWorst(u: UnitText, plate: PlatePiece, lines: readonly Line[], i
   return { value: g, limit, where: plate.label, detail: () => `gauge lines at y = ${u.len(lines[i - 1]!.at_mm)} and ${u.len(lines[i]!.at_mm)}: ${u.len(g)} vs ${u.len(limit)}` };
 }
 
-/**
- * The thinner part two holes both pass through (pairThickness), which depends only on the holes' bolt
- * groups: worked out once per pair of groups of one joint, within one rule.
- */
-class GroupPairThickness {
-  readonly #joint: Joint;
-  /** By index of a's group × group count + index of b's group; NaN until measured. */
-  readonly #t_mm: number[] = [];
-  constructor(joint: Joint) {
-    this.#joint = joint;
-    const n = joint.groups.length;
-    for (let k = 0; k < n * n; k++) this.#t_mm.push(NaN);
-  }
-  of(a: Hole, b: Hole): number {
-    const key = this.#groupIndex(a.group) * this.#joint.groups.length + this.#groupIndex(b.group);
-    let t = this.#t_mm[key]!;
-    if (Number.isNaN(t)) this.#t_mm[key] = t = pairThickness(this.#joint, a, b);
-    return t;
-  }
-  #groupIndex(group: Hole["group"]): number {
-    const groups = this.#joint.groups;
-    for (let i = 0; i < groups.length; i++) if (groups[i]!.id === group) return i;
-    throw new RangeError(`hole of bolt group ${group}, which the joint does not have`);
-  }
-}
-
 /** J3.5(a) (painted, or not subject to corrosion) and J3.5(b) (weathering steel exposed to corrosion), with their formulas by bolt unit. */
 const MAX_SPACING_TEXTS = {
   painted: { citation: fixedCl("J3.5(a)"), inch: "s ≤ min(24 t, 12 in)", metric: "s ≤ min(24 t, 305 mm)" },
@@ -178,7 +152,7 @@ export function maxSpacingRule(joint: Joint, scenario: CheckableScenario): RuleC
   let across: Worst | null = null;
   const plates = holePlates(joint);
   const groupLines = mapped(joint.groups, (g) => gaugeLines(g.holes));
-  const thinner = new GroupPairThickness(joint);
+  const thinner = new PairThickness(joint);
   const plateLines: Line[][] = [];
   const acrossWalked = mapped(joint.groups, () => false);
   for (let k = 0; k < plates.length; k++) {

@@ -9,7 +9,7 @@ import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
 import { f } from "../format.js";
-import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, pairThickness, worstRule, type Worst } from "../rule-measures.js";
+import { beatsWorst, connects, forEachHolePair, PairSet, groupCentroidRule, holePlates, outsidePlates, PairThickness, worstRule, type Worst } from "../rule-measures.js";
 import { fixedCl } from "./citation.js";
 import { epsilon } from "./materials.js";
 
@@ -89,8 +89,8 @@ export interface SpacingLayout {
   holesOf: (readonly Hole[])[];
   /** Each group's lines, in the order of joint.groups. */
   groups: GroupLines[];
-  /** pairThickness of a hole of group i and one of group j, at i × groups + j. */
-  groupPairThickness: number[];
+  /** The thinner plate two holes both pass through (pairThickness), once per pair of groups. */
+  pairThickness: PairThickness;
 }
 
 /** The joint's spacing layout (see SpacingLayout). */
@@ -101,10 +101,7 @@ export function spacingLayout(joint: Joint): SpacingLayout {
     const lines = gaugeLines(g.holes);
     return { gaugeLines: lines, stagger: staggerOf(g.holes, lines) };
   });
-  const groupPairThickness: number[] = [];
-  // pairThickness reads only the holes' groups: one hole of each group stands for all of them.
-  for (const gi of joint.groups) for (const gj of joint.groups) groupPairThickness.push(gi.holes[0] && gj.holes[0] ? pairThickness(joint, gi.holes[0], gj.holes[0]) : Infinity);
-  return { plates, outside: outsidePlates(joint), holesOf, groups, groupPairThickness };
+  return { plates, outside: outsidePlates(joint), holesOf, groups, pairThickness: new PairThickness(joint) };
 }
 
 /** Index of a bolt group in joint.groups. */
@@ -120,8 +117,8 @@ function linesOfGroup(joint: Joint, layout: SpacingLayout, group: Hole["group"])
 }
 
 /** Thickness of the thinner plate both holes pass through (pairThickness), from the layout. */
-function thinnerPlate(joint: Joint, layout: SpacingLayout, a: Hole, b: Hole): number {
-  return layout.groupPairThickness[groupIndex(joint, a.group) * joint.groups.length + groupIndex(joint, b.group)]!;
+function thinnerPlate(layout: SpacingLayout, a: Hole, b: Hole): number {
+  return layout.pairThickness.of(a, b);
 }
 
 /*
@@ -211,7 +208,7 @@ function acrossRule(joint: Joint, layout: SpacingLayout, plate: PlatePiece, gl: 
   for (let i = 1; i < gl.length; i++) {
     const a = gl[i - 1]!.holes[0]!;
     const b = gl[i]!.holes[0]!;
-    const t = thinnerPlate(joint, layout, a, b);
+    const t = thinnerPlate(layout, a, b);
     const limit = Math.min(32 * t, 300);
     const g = gl[i]!.at_mm - gl[i - 1]!.at_mm;
     if (beatsWorst(worst.across, g, limit, "max")) worst.across = acrossWorst(plate, gl[i - 1]!.at_mm, gl[i]!.at_mm, g, t, limit);
@@ -245,7 +242,7 @@ function pitchRules(joint: Joint, layout: SpacingLayout, plate: PlatePiece, line
     const s = b.x_mm - a.x_mm;
     const r = a.group === b.group ? relax : 1.0; // across the butt the stagger is not at equal intervals
     if (measurePitch && seen.addNew(a, b)) {
-      const t = thinnerPlate(joint, layout, a, b);
+      const t = thinnerPlate(layout, a, b);
       const limit = Math.min(Math.min(16 * t, 200) * r, Math.min(32 * t, 300));
       if (beatsWorst(worst.pitch, s, limit, "max")) {
         worst.pitch = pitchWorst(plate, a, b, s, r, t, limit);
