@@ -7,7 +7,7 @@
 import type { CodeChecks, DesignCode } from "../codes/types.js";
 import { mapped } from "../model/lists.js";
 import type { Joint, PlateConnection, PlatePiece } from "../model/joint.js";
-import { withConnections, withPlates } from "../geometry/joint-builder.js";
+import { groupIndex, withConnections, withPlates } from "../geometry/joint-builder.js";
 import { factoredOf, loadSenses, referenceLoad_N, type LoadSense } from "../model/load.js";
 import type { CheckResult } from "../model/results.js";
 import { codeChecks, relabelled } from "../codes/check-builders.js";
@@ -58,12 +58,6 @@ function otherGroupSpans(joint: Joint): OtherGroupSpan[] {
     }
     return { d0_mm: d0, minX_mm: minX, maxX_mm: maxX };
   });
-}
-
-/** The place of a bolt group in the joint's group list. */
-function groupIndex(joint: Joint, group: PlateConnection["group"]): number {
-  for (let k = 0; k < joint.groups.length; k++) if (joint.groups[k]!.id === group) return k;
-  throw new RangeError(`no bolt group ${group} in the joint`);
 }
 
 /** The scenario with the given force standing for the tension of the code's checks. */

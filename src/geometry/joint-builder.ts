@@ -11,7 +11,7 @@
  */
 import type { CheckableScenario, HoleType, PlateSpec, SlotDirection } from "../model/scenario.js";
 import { mapped } from "../model/lists.js";
-import type { BoltGroupGeometry, GroupId, Hole, Joint, PlateId, PlatePiece } from "../model/joint.js";
+import type { BoltGroupGeometry, GroupId, Hole, Joint, PlateConnection, PlateId, PlatePiece } from "../model/joint.js";
 import { describePattern, loadedEndDistance, patternHoles, type LocalHole } from "./patterns.js";
 
 export interface HoleDimensions {
@@ -241,4 +241,15 @@ export function connects(plate: PlatePiece, group: GroupId): boolean {
 export function groupHoles(joint: Joint, group: GroupId): readonly Hole[] {
   for (const g of joint.groups) if (g.id === group) return g.holes;
   return [];
+}
+
+/** Whether two connections are of one bolt group bearing toward the same plate end. */
+export function sameEnd(a: PlateConnection, b: PlateConnection): boolean {
+  return a.group === b.group && a.endX_mm === b.endX_mm && a.towardEnd === b.towardEnd;
+}
+
+/** The place of a bolt group in the joint's group list. */
+export function groupIndex(joint: Joint, group: GroupId): number {
+  for (let k = 0; k < joint.groups.length; k++) if (joint.groups[k]!.id === group) return k;
+  throw new RangeError(`no bolt group ${group} in the joint`);
 }

@@ -10,6 +10,7 @@
  * by dynamic programming over every pair of holes — no list of "likely" paths.
  */
 import type { Hole, PlateConnection, PlatePiece } from "../model/joint.js";
+import { sameEnd } from "./joint-builder.js";
 import { LINE_TOLERANCE_MM, sortedByYThenX } from "./lines.js";
 
 export interface NetPath {
@@ -192,7 +193,7 @@ const recentPaths: MeasuredPath[] = [];
 const RECENT_PATHS = 4;
 
 const sameEnds = (a: readonly PlateConnection[], b: readonly PlateConnection[]): boolean =>
-  a.length === b.length && a.every((c, i) => c.group === b[i]!.group && c.endX_mm === b[i]!.endX_mm && c.towardEnd === b[i]!.towardEnd);
+  a.length === b.length && a.every((c, i) => sameEnd(c, b[i]!));
 
 /**
  * The net path a check uses: the least path with the whole plate force ("full", the clauses as

@@ -4,7 +4,7 @@
  */
 import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
 import { blockLoadText, blockShapes, governingBlock, type BlockShape, type GoverningBlock } from "../../geometry/block-shear.js";
-import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate, sameEnd } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { forEachTearOut } from "../../geometry/tear-out.js";
@@ -365,11 +365,6 @@ export class JointMeasures {
     this.#blocks.push(m);
     return m;
   }
-}
-
-/** Two connections of one group bearing toward the same plate end. */
-function sameEnd(a: PlateConnection, b: PlateConnection): boolean {
-  return a.group === b.group && a.endX_mm === b.endX_mm && a.towardEnd === b.towardEnd;
 }
 
 function bearingText(b: BoltBearing, fub: number, fu: number, d: number, t: number, gM2: number, factor: number): string {

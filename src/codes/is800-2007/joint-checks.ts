@@ -4,7 +4,7 @@
  */
 import { boltMaterial, boltNetArea_mm2, shankArea_mm2 } from "../../catalogue/bolts.js";
 import { blockLoadText, blockShapes, governingBlock, GoverningBlocksOfCall, type BlockShape, type BlockShearLoad, type GoverningBlock } from "../../geometry/block-shear.js";
-import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, holesOfPlate, sameEnd } from "../../geometry/joint-builder.js";
 import { jointLength_mm } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
 import { forEachTearOut } from "../../geometry/tear-out.js";
@@ -151,7 +151,7 @@ export class TearOuts {
   of(connection: PlateConnection): TearOut {
     for (const m of this.#measured) {
       const c = m.connection;
-      if (c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd) return m.tearOut;
+      if (sameEnd(c, connection)) return m.tearOut;
     }
     const tearOut = tearOutOf(groupHoles(this.joint, connection.group), connection);
     this.#measured.push({ connection, tearOut });
@@ -332,7 +332,7 @@ export class BlockShapesOf {
   of(connection: PlateConnection, width_mm: number): readonly BlockShape[] {
     for (const m of this.#asked) {
       const c = m.connection;
-      if (m.width_mm === width_mm && c.group === connection.group && c.endX_mm === connection.endX_mm && c.towardEnd === connection.towardEnd) return m.shapes;
+      if (m.width_mm === width_mm && sameEnd(c, connection)) return m.shapes;
     }
     const shapes = blockShapes(groupHoles(this.joint, connection.group), connection, width_mm, this.joint.holes);
     this.#asked.push({ connection, width_mm, shapes });

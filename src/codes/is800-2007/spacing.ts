@@ -2,7 +2,7 @@
  * Spacing, end and edge rules of IS 800:2007 cl. 10.2 and the grip limit of cl. 10.3.3.2, as pass/fail
  * checks measured on the hole coordinates. Each result prints the governing value and its limit.
  */
-import { groupHoles, holesOfPlate } from "../../geometry/joint-builder.js";
+import { groupHoles, groupIndex, holesOfPlate, sameEnd } from "../../geometry/joint-builder.js";
 import { mapped, pushAll } from "../../model/lists.js";
 import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM, sortedByXThenY, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
@@ -102,13 +102,6 @@ export function spacingLayout(joint: Joint): SpacingLayout {
     return { gaugeLines: lines, stagger: staggerOf(g.holes, lines) };
   });
   return { plates, outside: outsidePlates(joint), holesOf, groups, pairThickness: new PairThickness(joint) };
-}
-
-/** Index of a bolt group in joint.groups. */
-function groupIndex(joint: Joint, group: Hole["group"]): number {
-  const groups = joint.groups;
-  for (let i = 0; i < groups.length; i++) if (groups[i]!.id === group) return i;
-  return -1;
 }
 
 /** The lines of a group, from the layout. */
@@ -312,7 +305,7 @@ function sameSidesEarlier(layout: SpacingLayout, k: number, factor: number, oute
 
 /** Whether a plate bears with connection c's group toward the same plate end as c. */
 function bearsSameEnd(plate: PlatePiece, c: PlatePiece["connections"][number]): boolean {
-  for (const e of plate.connections) if (e.group === c.group && e.endX_mm === c.endX_mm && e.towardEnd === c.towardEnd) return true;
+  for (const e of plate.connections) if (sameEnd(e, c)) return true;
   return false;
 }
 
