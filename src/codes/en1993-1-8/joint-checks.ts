@@ -3,7 +3,7 @@
  * Each function returns results (data); none prints, none throws for a failed check.
  */
 import { boltNetArea_mm2, shankArea_mm2, type BoltMaterial } from "../../catalogue/bolts.js";
-import { blockLoadText, blockShapes, governingBlock, type BlockShape, type GoverningBlock } from "../../geometry/block-shear.js";
+import { blockLoadText, blockShapes, governingBlock, GoverningBlocksOfCall, type BlockShape, type GoverningBlock } from "../../geometry/block-shear.js";
 import { groupHoles, holesOfPlate, sameEnd } from "../../geometry/joint-builder.js";
 import { jointLength_mm, LINE_TOLERANCE_MM } from "../../geometry/lines.js";
 import { netPathFor, pathLabel } from "../../geometry/net-section.js";
@@ -302,19 +302,6 @@ interface MeasuredBearings {
   each: BoltBearing[];
 }
 
-/** The governing tear-out block of one group in one plate, with what it was measured from. */
-interface MeasuredBlock {
-  holes: readonly Hole[];
-  connection: PlateConnection;
-  width_mm: number;
-  shapes: readonly BlockShape[];
-  thickness_mm: number;
-  fy_MPa: number;
-  fu_MPa: number;
-  forceShare: number;
-  best: GoverningBlock<null> | null;
-}
-
 /**
  * What the checks of one joint check (one call of checkJoint, one joint) measure on its plates, each
  * measured once and handed again to the next plate with the same numbers: a group's Fb,Rd on a plate
@@ -325,11 +312,16 @@ interface MeasuredBlock {
  */
 export class JointMeasures {
   readonly #bearings: MeasuredBearings[] = [];
-  readonly #blocks: MeasuredBlock[] = [];
+  readonly #blocks: GoverningBlocksOfCall<null>;
   constructor(
     private readonly scenario: CheckableScenario,
     private readonly s: Ec3Settings,
-  ) {}
+  ) {
+    const { gamma_M0, gamma_M2 } = s.factors;
+    this.#blocks = new GoverningBlocksOfCall<null>((shapes, bolts, t, fy, fu, share, load) =>
+      governingBlock(shapes, bolts, share, load, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, fy, fu, gamma_M0, gamma_M2), () => null),
+    );
+  }
 
   /** Fb,Rd of every bolt of group g on the plate, toward the end of `connection`. */
   bearingsOf(plate: PlatePiece, connection: PlateConnection, g: Ec3Group): BoltBearing[] {
@@ -346,24 +338,12 @@ export class JointMeasures {
 
   /**
    * The block shapes of a group's holes in the plate toward the end of `connection`, and the governing
-   * one by 3.10.2(2), Veff,1,Rd (null: no shape forms).
+   * one by 3.10.2(2), Veff,1,Rd (null: no shape forms), once per call for the same shapes and figures.
    */
   blockOf(plate: PlatePiece, connection: PlateConnection, holes: readonly Hole[], jointHoles: readonly Hole[]): { shapes: readonly BlockShape[]; best: GoverningBlock<null> | null } {
-    const width = plate.spec.width_mm;
-    const t = plate.spec.thickness_mm;
-    const { fy_MPa: fy, fu_MPa: fu, forceShare } = plate;
-    const samePlate = (m: MeasuredBlock) => m.thickness_mm === t && m.fy_MPa === fy && m.fu_MPa === fu && m.forceShare === forceShare;
-    for (const m of this.#blocks) if (m.holes === holes && sameEnd(m.connection, connection) && m.width_mm === width && samePlate(m)) return m;
-    const shapes = blockShapes(holes, connection, width, jointHoles);
-    let best: GoverningBlock<null> | null | undefined;
-    for (const m of this.#blocks) if (m.shapes === shapes && m.holes.length === holes.length && samePlate(m)) best = m.best;
-    if (best === undefined) {
-      const { gamma_M0, gamma_M2 } = this.s.factors;
-      best = governingBlock(shapes, holes.length, forceShare, this.scenario.options.blockShearLoad, (shape) => Veff_1_Rd(shape.tensionNet_mm * t, shape.shearNet_mm * t, fy, fu, gamma_M0, gamma_M2), () => null);
-    }
-    const m: MeasuredBlock = { holes, connection, width_mm: width, shapes, thickness_mm: t, fy_MPa: fy, fu_MPa: fu, forceShare, best };
-    this.#blocks.push(m);
-    return m;
+    const shapes = blockShapes(holes, connection, plate.spec.width_mm, jointHoles);
+    const best = this.#blocks.of(shapes, holes.length, plate.spec.thickness_mm, plate.fy_MPa, plate.fu_MPa, plate.forceShare, this.scenario.options.blockShearLoad);
+    return { shapes, best };
   }
 }
 
