@@ -319,30 +319,21 @@ export function netSectionCheck(joint: Joint, scenario: CheckableScenario, plate
 }
 
 /**
- * The block shapes of one check's joint (blockShapes), each asked once and handed to every plate of the
- * same width that one group bears on toward the same end (both cover plates of a butt splice); and the
- * governing block of a set of shapes, worked out once for every plate with the same shapes, bolts, t,
- * fy, fu, share and load (both covers of a butt splice alike; the mirror-image main plates). Made
- * afresh for each call (never kept between calls).
+ * The block shapes of one check's joint (blockShapes, which hands the same shapes to every plate end
+ * with the same numbers), and the governing block of a set of shapes, worked out once for every plate
+ * with the same shapes, bolts, t, fy, fu, share and load (both covers of a butt splice alike; the
+ * mirror-image main plates). Made afresh for each call (never kept between calls).
  */
 export class BlockShapesOf {
-  readonly #asked: { connection: PlateConnection; width_mm: number; shapes: readonly BlockShape[] }[] = [];
   readonly #governing = new GoverningBlocksOfCall(governingTdb);
   constructor(private readonly joint: Joint) {}
   of(connection: PlateConnection, width_mm: number): readonly BlockShape[] {
-    for (const m of this.#asked) {
-      const c = m.connection;
-      if (m.width_mm === width_mm && sameEnd(c, connection)) return m.shapes;
-    }
-    const shapes = blockShapes(groupHoles(this.joint, connection.group), connection, width_mm, this.joint.holes);
-    this.#asked.push({ connection, width_mm, shapes });
-    return shapes;
+    return blockShapes(groupHoles(this.joint, connection.group), connection, width_mm, this.joint.holes);
   }
   /** The governing block of `shapes` in a plate of thickness t (governingBlock with cl. 6.4.1's Tdb), once per call for the same figures. */
   governing(shapes: readonly BlockShape[], bolts: number, t_mm: number, fy_MPa: number, fu_MPa: number, share: number, load: BlockShearLoad): GoverningBlock<BlockShearResult> | null {
     return this.#governing.of(shapes, bolts, t_mm, fy_MPa, fu_MPa, share, load);
   }
-
 }
 
 /** The governing block by cl. 6.4.1: every shape's Tdb as a number (no object per shape); the two terms of the governing one for its text. */
