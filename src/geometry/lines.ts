@@ -74,17 +74,26 @@ export function gaugeLines(holes: readonly Hole[]): Line[] {
 export function transverseLines(holes: readonly Hole[]): Line[] {
   const sorted = sortedByXThenY(holes);
   const lines: Line[] = [];
-  let last: Line | undefined;
-  for (const h of sorted) {
-    if (last && Math.abs(h.x_mm - last.at_mm) <= LINE_TOLERANCE_MM) last.holes.push(h);
-    else {
-      last = { at_mm: h.x_mm, holes: [h] };
-      lines.push(last);
-    }
+  for (let start = 0; start < sorted.length; ) {
+    const end = transverseLineEnd(sorted, start);
+    lines.push({ at_mm: sorted[start]!.x_mm, holes: sorted.slice(start, end) });
+    start = end;
   }
   // Sorted by x, then y: a line's holes are in y order already unless their x differ within the tolerance.
   for (const line of lines) if (!inOrderOfY(line.holes)) line.holes.sort((a, b) => a.y_mm - b.y_mm);
   return lines;
+}
+
+/**
+ * End (exclusive) of the transverse line that starts at sorted[start] in holes sorted by x: the holes
+ * within the line tolerance of its first hole's x (one definition of a transverse line for every reader).
+ */
+export function transverseLineEnd(sorted: readonly Hole[], start: number): number {
+  if (start >= sorted.length) return start;
+  const x = sorted[start]!.x_mm;
+  let end = start + 1;
+  while (end < sorted.length && Math.abs(sorted[end]!.x_mm - x) <= LINE_TOLERANCE_MM) end++;
+  return end;
 }
 
 /** Whether holes are in ascending x (then the stable sort by x would leave them as they are). */

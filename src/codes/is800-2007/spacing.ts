@@ -4,7 +4,7 @@
  */
 import { groupHoles, groupIndex, holesOfPlate, sameEnd } from "../../geometry/joint-builder.js";
 import { mapped, pushAll } from "../../model/lists.js";
-import { distance, fartherThan, gaugeLines, LINE_TOLERANCE_MM, sortedByXThenY, type Line } from "../../geometry/lines.js";
+import { distance, fartherThan, gaugeLines, sortedByXThenY, transverseLineEnd, type Line } from "../../geometry/lines.js";
 import type { Hole, Joint, PlatePiece } from "../../model/joint.js";
 import type { RuleCheck } from "../../model/results.js";
 import type { CheckableScenario } from "../../model/scenario.js";
@@ -53,15 +53,6 @@ export function staggerOf(holes: readonly Hole[], gauge: readonly Line[] = gauge
     a1 = b1;
     b1 = transverseLineEnd(sorted, a1);
   }
-}
-
-/** End (exclusive) of the transverse line that starts at sorted[start]: the holes within the line tolerance of its x. */
-function transverseLineEnd(sorted: readonly Hole[], start: number): number {
-  if (start >= sorted.length) return start;
-  const x = sorted[start]!.x_mm;
-  let end = start + 1;
-  while (end < sorted.length && Math.abs(sorted[end]!.x_mm - x) <= LINE_TOLERANCE_MM) end++;
-  return end;
 }
 
 /** Whether two consecutive transverse lines, sorted[a0 .. a1) and sorted[a1 .. b1), have a hole at the same y (the same gauge line). */
